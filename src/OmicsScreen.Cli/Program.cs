@@ -1,0 +1,1 @@
+return OmicsScreen.Cli.CommandLine.Run(args);
