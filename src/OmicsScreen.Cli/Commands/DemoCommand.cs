@@ -1,0 +1,45 @@
+using System.CommandLine;
+using OmicsScreen.Cli.Console;
+using OmicsScreen.Data.Demo;
+
+namespace OmicsScreen.Cli.Commands;
+
+/// <summary>
+/// `omicsscreen demo`: writes the invented demo study and runs the main job on it, so a new
+/// user sees the whole tool work on a fresh machine with one command.
+/// </summary>
+public sealed class DemoCommand : Command
+{
+    public Option<string> PanelFolder { get; } = new("--panel-dir")
+    {
+        Description = "Folder for the generated demo panel.",
+        DefaultValueFactory = _ => Path.Combine("panels", "demo"),
+    };
+
+    public Option<string> ReportFolder { get; } = new("--out")
+    {
+        Description = "Folder for the demo's results and report.",
+        DefaultValueFactory = _ => Path.Combine("reports", "demo"),
+    };
+
+    public Option<ulong> Seed { get; } = new("--seed")
+    {
+        Description = "Seed of the simulated study (the same seed gives byte-identical files).",
+        DefaultValueFactory = _ => new DemoStudyOptions().Seed,
+    };
+
+    public Option<bool> PanelOnly { get; } = new("--panel-only")
+    {
+        Description = "Only write the demo panel; do not run the screen on it.",
+    };
+
+    public DemoCommand(CliConsole console) : base("demo", "Write the invented demo panel and run the main job on it.")
+    {
+        Options.Add(PanelFolder);
+        Options.Add(ReportFolder);
+        Options.Add(Seed);
+        Options.Add(PanelOnly);
+        SetAction(parse => CommandRunner.Run(console, () => DemoRun.Execute(console, new DemoRunOptions(
+            parse.GetValue(PanelFolder)!, parse.GetValue(ReportFolder)!, parse.GetValue(Seed), parse.GetValue(PanelOnly)))));
+    }
+}

@@ -1,0 +1,16 @@
+namespace OmicsScreen.Data.Demo;
+
+/// <summary>What the generator planted in one feature.</summary>
+/// <param name="CaseShiftSd">Shift of the case mean on the log2 scale, in units of the feature's SD.</param>
+/// <param name="CohortShiftSd">Shift in the batch-affected cohort, in SD units.</param>
+/// <param name="Module">Correlated module number, or -1 when the feature is on its own.</param>
+public sealed record DemoFeatureTruth(
+    string Feature,
+    DemoFeatureRole Role,
+    double CaseShiftSd,
+    double CohortShiftSd,
+    int Module,
+    double Log2Mean,
+    double Log2Sd,
+    double MissingRate,
+    bool HasDetectionLimit);

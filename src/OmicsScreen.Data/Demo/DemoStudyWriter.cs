@@ -1,0 +1,130 @@
+using System.Globalization;
+using System.Text;
+using OmicsScreen.Data.Output;
+using OmicsScreen.Engine.Panels;
+
+namespace OmicsScreen.Data.Demo;
+
+/// <summary>
+/// Writes the demo study as a user would receive it: a samples-in-rows CSV of abundances, a
+/// tab-separated sample sheet, and beside them the truth table and a README.
+/// </summary>
+public static class DemoStudyWriter
+{
+    public const string PanelFileName = "marrowfen_plasma.csv";
+    public const string SampleSheetFileName = "marrowfen_samples.tsv";
+    public const string TruthFileName = "marrowfen_truth.tsv";
+    public const string ReadmeFileName = "README.md";
+
+    /// <summary>Writes every file atomically and returns their paths.</summary>
+    public static DemoStudyFiles Write(DemoStudy study, string folder)
+    {
+        Directory.CreateDirectory(folder);
+        var files = new DemoStudyFiles(
+            Path.Combine(folder, PanelFileName),
+            Path.Combine(folder, SampleSheetFileName),
+            Path.Combine(folder, TruthFileName),
+            Path.Combine(folder, ReadmeFileName));
+        AtomicFile.WriteText(files.Panel, writer => WritePanel(study.Matrix, writer));
+        AtomicFile.WriteText(files.SampleSheet, writer => WriteSampleSheet(study, writer));
+        AtomicFile.WriteText(files.Truth, writer => WriteTruth(study, writer));
+        AtomicFile.WriteAllText(files.Readme, Readme(study));
+        return files;
+    }
+
+    private static void WritePanel(FeatureMatrix matrix, TextWriter writer)
+    {
+        var line = new StringBuilder(matrix.FeatureCount * 10);
+        line.Append("sample_id");
+        for (int f = 0; f < matrix.FeatureCount; f++) line.Append(',').Append(matrix.FeatureNames[f]);
+        writer.Write(line.Append('\n'));
+        for (int s = 0; s < matrix.SampleCount; s++)
+        {
+            line.Clear().Append(matrix.SampleIds[s]);
+            for (int f = 0; f < matrix.FeatureCount; f++)
+            {
+                line.Append(',');
+                float value = matrix.Value(f, s);
+                switch (matrix.State(f, s))
+                {
+                    case CellState.Missing:
+                        line.Append("NA");
+                        break;
+                    case CellState.BelowDetection:
+                        if (float.IsNaN(value)) line.Append("<LOD");
+                        else line.Append('<').Append(value.ToString("G6", CultureInfo.InvariantCulture));
+                        break;
+                    default:
+                        line.Append(value.ToString("G6", CultureInfo.InvariantCulture));
+                        break;
+                }
+            }
+            writer.Write(line.Append('\n'));
+        }
+    }
+
+    private static void WriteSampleSheet(DemoStudy study, TextWriter writer)
+    {
+        writer.Write($"sample_id\t{DemoStudy.OutcomeColumn}\t{DemoStudy.CentreColumn}\tage_years\tsex\n");
+        for (int s = 0; s < study.Matrix.SampleCount; s++)
+            writer.Write($"{study.Matrix.SampleIds[s]}\t{study.Status[s]}\t{study.Centre[s]}\t{study.AgeYears[s]}\t{study.Sex[s]}\n");
+    }
+
+    private static void WriteTruth(DemoStudy study, TextWriter writer)
+    {
+        writer.Write("feature\trole\tcase_shift_sd\tcentre_shift_sd\tmodule\tlog2_mean\tlog2_sd\tmissing_rate\thas_detection_limit\n");
+        foreach (var t in study.Truth)
+        {
+            writer.Write(string.Create(CultureInfo.InvariantCulture,
+                $"{t.Feature}\t{RoleName(t.Role)}\t{t.CaseShiftSd:0.###}\t{t.CohortShiftSd:0.###}\t{(t.Module >= 0 ? t.Module.ToString(CultureInfo.InvariantCulture) : "")}\t{t.Log2Mean:0.###}\t{t.Log2Sd:0.###}\t{t.MissingRate:0.###}\t{(t.HasDetectionLimit ? "yes" : "no")}\n"));
+        }
+    }
+
+    public static string RoleName(DemoFeatureRole role) => role switch
+    {
+        DemoFeatureRole.Noise => "noise",
+        DemoFeatureRole.Marker => "marker",
+        DemoFeatureRole.ModuleMarker => "module_marker",
+        DemoFeatureRole.CensoredMarker => "censored_marker",
+        DemoFeatureRole.BatchArtefact => "batch_artefact",
+        DemoFeatureRole.BatchShifted => "batch_shifted",
+        _ => throw new ArgumentOutOfRangeException(nameof(role)),
+    };
+
+    private static string Readme(DemoStudy study)
+    {
+        var o = study.Options;
+        int cases = study.Status.Count(s => s == DemoStudy.CaseLabel);
+        var planted = study.Truth.Where(t => t.Role is DemoFeatureRole.Marker or DemoFeatureRole.ModuleMarker or DemoFeatureRole.CensoredMarker)
+            .Select(t => t.Feature).ToArray();
+        var artefact = study.Truth.Where(t => t.Role == DemoFeatureRole.BatchArtefact).Select(t => t.Feature).ToArray();
+        var centres = string.Join(", ", o.Centres.Select(c => $"{c.Centre} ({c.Cases} cases, {c.Controls} controls)"));
+        return string.Create(CultureInfo.InvariantCulture, $"""
+            # Demo panel: the Marrowfen plasma study (invented)
+
+            Everything here is simulated by `omicsscreen demo` (seed {o.Seed}). Marrowfen syndrome is a
+            fictional condition; the centres, analytes (`AN0001` ...) and samples (`mf-n001` ...) are
+            invented and match no real accession, assay or person.
+
+            - `{PanelFileName}`: {study.Matrix.SampleCount} samples in rows x {study.Matrix.FeatureCount} analytes, linear abundances.
+              `NA` is a missing cell; `<LOD` and `<value` are below the detection limit (the limit kept when given).
+            - `{SampleSheetFileName}`: sample sheet with `{DemoStudy.OutcomeColumn}` ({cases} {DemoStudy.CaseLabel}, {study.Matrix.SampleCount - cases} {DemoStudy.ControlLabel}),
+              `{DemoStudy.CentreColumn}`: {centres}; plus `age_years` and `sex`, which carry no signal.
+            - `{TruthFileName}`: what was planted in every analyte, so a screen can be scored.
+
+            ## What was planted
+            - {planted.Length} true markers: six acting alone (shifts of 0.6 to 1.2 SD on the log2 scale),
+              a correlated module of six that rises together and one of four that falls together, and one
+              low-abundance marker that is below detection in many controls: {string.Join(", ", planted)}.
+            - One batch artefact, {string.Join(", ", artefact)}: shifted by 2 SD in the `{study.BatchAffectedCentre}` centre only and
+              unrelated to the outcome within every centre. Because `{study.BatchAffectedCentre}` recruited more cases, it looks
+              associated with the outcome when the centres are pooled.
+            - About 10% of the other analytes shifted by 0.4 SD in `{study.BatchAffectedCentre}` (a processing-batch effect),
+              {o.ModuleCount - 2} correlated modules of noise analytes, {o.CellMissingRate:P1} of cells missing at random, and
+              a few analytes with 20-40% missing.
+
+            Abundance model: log2 value = mean + SD x (sqrt(loading) x module factor + sqrt(1 - loading) x noise)
+            + planted shifts; linear value = 2^(log2 value), written with six significant digits.
+            """);
+    }
+}

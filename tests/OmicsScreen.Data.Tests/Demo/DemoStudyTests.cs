@@ -1,0 +1,92 @@
+using OmicsScreen.Data.Demo;
+using OmicsScreen.Engine.Panels;
+
+namespace OmicsScreen.Data.Tests.Demo;
+
+public sealed class DemoStudyTests : IDisposable
+{
+    private readonly string _root = Path.Combine(Path.GetTempPath(), "omicsscreen-demo-" + Guid.NewGuid().ToString("N"));
+
+    public void Dispose()
+    {
+        if (Directory.Exists(_root)) Directory.Delete(_root, recursive: true);
+    }
+
+    [Fact]
+    public void The_same_seed_writes_byte_identical_files()
+    {
+        var first = DemoStudyWriter.Write(DemoStudyGenerator.Generate(new DemoStudyOptions { Seed = 7 }), Path.Combine(_root, "a"));
+        var second = DemoStudyWriter.Write(DemoStudyGenerator.Generate(new DemoStudyOptions { Seed = 7 }), Path.Combine(_root, "b"));
+
+        Assert.Equal(File.ReadAllBytes(first.Panel), File.ReadAllBytes(second.Panel));
+        Assert.Equal(File.ReadAllBytes(first.SampleSheet), File.ReadAllBytes(second.SampleSheet));
+        Assert.Equal(File.ReadAllBytes(first.Truth), File.ReadAllBytes(second.Truth));
+        Assert.Equal(File.ReadAllBytes(first.Readme), File.ReadAllBytes(second.Readme));
+        Assert.Empty(Directory.GetFiles(Path.Combine(_root, "a"), "*.partial"));
+    }
+
+    [Fact]
+    public void A_different_seed_gives_a_different_panel()
+    {
+        var first = DemoStudyWriter.Write(DemoStudyGenerator.Generate(new DemoStudyOptions { Seed = 7 }), Path.Combine(_root, "a"));
+        var second = DemoStudyWriter.Write(DemoStudyGenerator.Generate(new DemoStudyOptions { Seed = 8 }), Path.Combine(_root, "b"));
+        Assert.NotEqual(File.ReadAllBytes(first.Panel), File.ReadAllBytes(second.Panel));
+    }
+
+    [Fact]
+    public void The_study_has_the_promised_design()
+    {
+        var study = DemoStudyGenerator.Generate(new DemoStudyOptions());
+
+        Assert.Equal(360, study.Matrix.SampleCount);
+        Assert.Equal(2000, study.Matrix.FeatureCount);
+        Assert.Equal(113, study.Status.Count(s => s == DemoStudy.CaseLabel));
+        Assert.Equal(247, study.Status.Count(s => s == DemoStudy.ControlLabel));
+        Assert.Equal(3, study.Centre.Distinct().Count());
+        Assert.Equal(6, study.Truth.Count(t => t.Role == DemoFeatureRole.Marker));
+        Assert.Equal(10, study.Truth.Count(t => t.Role == DemoFeatureRole.ModuleMarker));
+        Assert.Single(study.Truth, t => t.Role == DemoFeatureRole.CensoredMarker);
+        Assert.Single(study.Truth, t => t.Role == DemoFeatureRole.BatchArtefact);
+        Assert.Equal(study.Matrix.SampleCount, study.Matrix.SampleIds.Distinct().Count());
+        Assert.All(study.Matrix.SampleIds, id => Assert.StartsWith("mf-", id));
+    }
+
+    [Fact]
+    public void The_censored_marker_is_below_detection_mostly_in_controls()
+    {
+        var study = DemoStudyGenerator.Generate(new DemoStudyOptions());
+        int feature = study.Truth.ToList().FindIndex(t => t.Role == DemoFeatureRole.CensoredMarker);
+        int censoredControls = 0, censoredCases = 0;
+        for (int s = 0; s < study.Matrix.SampleCount; s++)
+        {
+            if (study.Matrix.State(feature, s) != CellState.BelowDetection) continue;
+            if (study.Status[s] == DemoStudy.CaseLabel) censoredCases++; else censoredControls++;
+        }
+        double controlRate = censoredControls / 247.0, caseRate = censoredCases / 113.0;
+        // Planted: limit 0.25 SD below the control mean, cases shifted up 1.1 SD, so about 40% of
+        // controls and about 8% of cases fall below it (normal tail areas).
+        Assert.InRange(controlRate, 0.28, 0.52);
+        Assert.InRange(caseRate, 0.0, 0.18);
+    }
+
+    [Fact]
+    public void The_batch_artefact_differs_between_centres_but_not_within_them()
+    {
+        var study = DemoStudyGenerator.Generate(new DemoStudyOptions());
+        int feature = study.Truth.ToList().FindIndex(t => t.Role == DemoFeatureRole.BatchArtefact);
+        double MeanLog2(Func<int, bool> pick)
+        {
+            double sum = 0; int count = 0;
+            for (int s = 0; s < study.Matrix.SampleCount; s++)
+                if (pick(s) && study.Matrix.State(feature, s) == CellState.Measured) { sum += Math.Log2(study.Matrix.Value(feature, s)); count++; }
+            return sum / count;
+        }
+        double sd = study.Truth[feature].Log2Sd;
+        string affected = study.BatchAffectedCentre;
+        double betweenCentres = MeanLog2(s => study.Centre[s] == affected) - MeanLog2(s => study.Centre[s] != affected);
+        double withinAffected = MeanLog2(s => study.Centre[s] == affected && study.Status[s] == DemoStudy.CaseLabel)
+            - MeanLog2(s => study.Centre[s] == affected && study.Status[s] == DemoStudy.ControlLabel);
+        Assert.InRange(betweenCentres / sd, 1.6, 2.4);
+        Assert.InRange(withinAffected / sd, -0.5, 0.5);
+    }
+}
