@@ -23,7 +23,8 @@ public static class BenjaminiHochberg
         for (int k = m; k >= 1; k--)
         {
             int index = order[k - 1];
-            running = Math.Min(running, pValues[index] * m / k);
+            // m / k first: it is exactly 1 at k = m, so a q-value can never round below its p-value.
+            running = Math.Min(running, pValues[index] * ((double)m / k));
             qValues[index] = running;
         }
     }
