@@ -11,17 +11,22 @@ namespace OmicsScreen.Screening.Univariate;
 /// assay's limit, so they form one tie below every measured value of the feature (the limits of
 /// different samples are not compared). Missing cells, and measured cells holding NaN, are left out.
 /// Buffers are sized once for the largest scope and reused for every feature.
+/// Each usable cell is packed into one 64-bit sort key: the float's bits mapped to an unsigned
+/// integer in the same order (sign bit flipped for positives, all bits flipped for negatives)
+/// in the high half, the class code in the low half. Sorting one primitive array is about twice as
+/// fast as sorting keys with a parallel item array, and equal values stay adjacent (ordered by
+/// class, which no statistic depends on).
 /// </remarks>
 internal sealed class FeatureRankWorkspace
 {
-    private readonly double[] _keys;
-    private readonly int[] _classes;
+    private const ulong ValueMask = 0xFFFF_FFFF_0000_0000UL;
+
+    private readonly ulong[] _packed;
     private readonly int[] _classCounts;
 
     public FeatureRankWorkspace(int maxSampleCount, int classCount)
     {
-        _keys = new double[maxSampleCount];
-        _classes = new int[maxSampleCount];
+        _packed = new ulong[maxSampleCount];
         _classCounts = new int[classCount];
     }
 
@@ -42,30 +47,30 @@ internal sealed class FeatureRankWorkspace
         foreach (int sample in scopeSamples)
         {
             var state = hasStates ? states[sample] : CellState.Measured;
-            double key;
+            float value;
             if (state == CellState.BelowDetection)
             {
-                key = double.NegativeInfinity;
+                value = float.NegativeInfinity;
                 censored++;
             }
             else
             {
-                key = column[sample];
-                if (state == CellState.Missing || double.IsNaN(key))
+                value = column[sample];
+                if (state == CellState.Missing || float.IsNaN(value))
                 {
                     missing++;
                     continue;
                 }
             }
-            _keys[usable] = key;
-            _classes[usable] = sampleClasses[sample];
-            _classCounts[sampleClasses[sample]]++;
+            int classCode = sampleClasses[sample];
+            _packed[usable] = ((ulong)OrderedBits(value) << 32) | (uint)classCode;
+            _classCounts[classCode]++;
             usable++;
         }
         UsableCount = usable;
         MissingCount = missing;
         BelowDetectionCount = censored;
-        _keys.AsSpan(0, usable).Sort(_classes.AsSpan(0, usable));
+        _packed.AsSpan(0, usable).Sort();
 
         double tieTerm = 0;
         for (int start = 0; start < usable;)
@@ -106,10 +111,10 @@ internal sealed class FeatureRankWorkspace
             int end = RunEnd(start);
             int classInRun = 0;
             for (int k = start; k < end; k++)
-                if (_classes[k] == contrastClass) classInRun++;
+                if ((int)(uint)_packed[k] == contrastClass) classInRun++;
             int restInRun = end - start - classInRun;
             double midrank = (start + 1 + end) * 0.5;
-            double value = _keys[start];
+            double value = ValueOf(_packed[start]);
             if (classInRun > 0)
             {
                 rankSum += classInRun * midrank;
@@ -135,9 +140,26 @@ internal sealed class FeatureRankWorkspace
     private int RunEnd(int start)
     {
         int end = start + 1;
-        double value = _keys[start];
-        while (end < UsableCount && _keys[end] == value) end++;
+        ulong value = _packed[start] & ValueMask;
+        while (end < UsableCount && (_packed[end] & ValueMask) == value) end++;
         return end;
+    }
+
+    /// <summary>
+    /// Maps a non-NaN float to an unsigned integer with the same order (IEEE 754 total order of
+    /// the bit patterns once the sign is handled); -0 is folded onto +0 so equal values tie.
+    /// </summary>
+    private static uint OrderedBits(float value)
+    {
+        uint bits = BitConverter.SingleToUInt32Bits(value == 0 ? 0f : value);
+        return (bits & 0x8000_0000u) != 0 ? ~bits : bits | 0x8000_0000u;
+    }
+
+    private static double ValueOf(ulong packed)
+    {
+        uint ordered = (uint)(packed >> 32);
+        uint bits = (ordered & 0x8000_0000u) != 0 ? ordered & 0x7FFF_FFFFu : ~ordered;
+        return BitConverter.UInt32BitsToSingle(bits);
     }
 
     /// <summary>Picks the middle order statistics of one group as its runs go by in ascending order.</summary>

@@ -123,6 +123,23 @@ public class UnivariateScreenTests
     }
 
     [Fact]
+    public void Negative_zero_subnormal_and_extreme_values_rank_as_their_numeric_order()
+    {
+        // -0 and +0 are equal and must tie; negatives, subnormals and the float extremes must keep
+        // their numeric order, as the doubles given to MannWhitney.Test do.
+        float[] values = [-3.5f, -0.0f, 0.0f, 2f, -1e-30f, float.MaxValue, -float.MaxValue, 1e-45f, -1e-45f, 0.0f, -2f, 7f];
+        int[] classes = [0, 1, 0, 1, 0, 1, 0, 1, 0, 1, 0, 1];
+        var row = UnivariateScreen.Compute(BuildPanel(["f"], [values], ["a", "b"], classes, positiveClass: 0)).Row(0, 0);
+        var inClass = Enumerable.Range(0, values.Length).Where(s => classes[s] == 0).Select(s => (double)values[s]).ToArray();
+        var rest = Enumerable.Range(0, values.Length).Where(s => classes[s] == 1).Select(s => (double)values[s]).ToArray();
+        var expected = MannWhitney.Test(inClass, rest);
+        Assert.Equal(expected.U, row.U);
+        Assert.Equal(expected.PValue, row.PValue, 14);
+        Assert.Equal(Quantile.MedianOfSorted(inClass.Order().ToArray()), row.ClassMedian);
+        Assert.Equal(Quantile.MedianOfSorted(rest.Order().ToArray()), row.RestMedian);
+    }
+
+    [Fact]
     public void Wdbc_table_matches_the_scipy_reference_statistics()
     {
         // Source: reference/wdbc/feature_stats.csv (scipy.stats.mannwhitneyu, numpy median, BH).
