@@ -10,15 +10,12 @@ public class MannWhitneyTests
     {
         // Source: reference/wdbc/feature_stats.csv, scipy.stats.mannwhitneyu(malignant, benign,
         // alternative="two-sided", method="asymptotic") and roc_auc_score (see its README).
-        var data = WdbcData.Instance;
-        for (int f = 0; f < data.FeatureNames.Length; f++)
+        foreach (var (name, expected, malignant, benign) in WdbcData.Instance.FeaturesByClass())
         {
-            var expected = data.FeatureStats[data.FeatureNames[f]];
-            var (malignant, benign) = data.Split(f);
             var result = MannWhitney.Test(malignant, benign);
-            Tolerance.Relative(expected["mw_u_malignant"], result.U, 1e-9, data.FeatureNames[f] + " U");
-            Tolerance.Relative(expected["auc_malignant"], result.Auc, 1e-9, data.FeatureNames[f] + " AUC");
-            Tolerance.Relative(expected["mw_p"], result.PValue, 1e-6, data.FeatureNames[f] + " p");
+            Tolerance.Relative(expected["mw_u_malignant"], result.U, 1e-9, name + " U");
+            Tolerance.Relative(expected["auc_malignant"], result.Auc, 1e-9, name + " AUC");
+            Tolerance.Relative(expected["mw_p"], result.PValue, 1e-6, name + " p");
         }
     }
 

@@ -10,15 +10,12 @@ public class WelchTestTests
     {
         // Source: reference/wdbc/feature_stats.csv, scipy.stats.ttest_ind(equal_var=False) and the
         // Welch-Satterthwaite df written out in make_reference.py.
-        var data = WdbcData.Instance;
-        for (int f = 0; f < data.FeatureNames.Length; f++)
+        foreach (var (name, expected, malignant, benign) in WdbcData.Instance.FeaturesByClass())
         {
-            var expected = data.FeatureStats[data.FeatureNames[f]];
-            var (malignant, benign) = data.Split(f);
             var result = WelchTest.Test(malignant, benign);
-            Tolerance.Relative(expected["welch_t"], result.T, 1e-9, data.FeatureNames[f] + " t");
-            Tolerance.Relative(expected["welch_df"], result.DegreesOfFreedom, 1e-9, data.FeatureNames[f] + " df");
-            Tolerance.Relative(expected["welch_p"], result.PValue, 1e-6, data.FeatureNames[f] + " p");
+            Tolerance.Relative(expected["welch_t"], result.T, 1e-9, name + " t");
+            Tolerance.Relative(expected["welch_df"], result.DegreesOfFreedom, 1e-9, name + " df");
+            Tolerance.Relative(expected["welch_p"], result.PValue, 1e-6, name + " p");
         }
     }
 

@@ -28,6 +28,16 @@ internal sealed class WdbcData
     /// <summary>feature_stats.csv: feature name -> column name -> value.</summary>
     public Dictionary<string, Dictionary<string, double>> FeatureStats { get; }
 
+    /// <summary>Every feature with its reference row and its values split by diagnosis.</summary>
+    public IEnumerable<(string Name, Dictionary<string, double> Expected, double[] Malignant, double[] Benign)> FeaturesByClass()
+    {
+        for (int f = 0; f < FeatureNames.Length; f++)
+        {
+            var (malignant, benign) = Split(f);
+            yield return (FeatureNames[f], FeatureStats[FeatureNames[f]], malignant, benign);
+        }
+    }
+
     public (double[] Malignant, double[] Benign) Split(int feature)
     {
         var malignant = new List<double>();
