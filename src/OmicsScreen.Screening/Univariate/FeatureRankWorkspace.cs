@@ -13,9 +13,9 @@ namespace OmicsScreen.Screening.Univariate;
 /// Buffers are sized once for the largest scope and reused for every feature.
 /// Each usable cell is packed into one 64-bit sort key: the float's bits mapped to an unsigned
 /// integer in the same order (sign bit flipped for positives, all bits flipped for negatives)
-/// in the high half, the class code in the low half. Sorting one primitive array is about twice as
-/// fast as sorting keys with a parallel item array, and equal values stay adjacent (ordered by
-/// class, which no statistic depends on).
+/// in the high half, the class code in the low half. One primitive array sorts without moving a
+/// parallel item array, and equal values stay adjacent (ordered by class, which no statistic
+/// depends on). A measured cell holding negative infinity would tie with the censored cells.
 /// </remarks>
 internal sealed class FeatureRankWorkspace
 {
