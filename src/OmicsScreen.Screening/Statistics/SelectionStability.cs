@@ -11,6 +11,7 @@ namespace OmicsScreen.Screening.Statistics;
 /// Phi = 1 - (1/d) sum_f s_f^2 / ((k-bar/d)(1 - k-bar/d)), s_f^2 = M/(M - 1) p_f (1 - p_f) (paper, Definition 4).
 /// Its variance (paper, Theorem 9 and its estimator) is Var = 4/M^2 sum_r (phi_r - phi-bar)^2 with
 /// phi_r = [ (1/d) sum_f Z_rf p_f - k_r k-bar / d^2 + (Phi/2)(2 k_r k-bar / d^2 - k_r/d - k-bar/d + 1) ] / ((k-bar/d)(1 - k-bar/d)).
+/// This is algebraically the same as the authors' Fleiss-kappa form of the estimator.
 /// Stability is undefined (NaN) when every repeat selects nothing or everything, or with one repeat.
 /// </remarks>
 public static class SelectionStability

@@ -31,7 +31,8 @@ public class SelectionStabilityTests
     [Fact]
     public void Nogueira_variance_of_a_small_matrix_matches_the_estimator_worked_by_hand()
     {
-        // The variance estimator of the same paper (Theorem 9; formula recalled from memory):
+        // The variance estimator of the same paper (Theorem 9; formula recalled from memory, and
+        // checked against the authors' kappa-form code in the next test):
         // phi_r = [ (1/d) sum_f Z_rf p_f - k_r k-bar/d^2 + (Phi/2)(2 k_r k-bar/d^2 - k_r/d - k-bar/d + 1) ] / (1/4).
         // Every k_r = 2: k_r k-bar / d^2 = 1/4 and the Phi term is (1/6)(1/2 - 1/2 - 1/2 + 1) = 1/12.
         // Row sums (1/d) sum Z p: 5/12, 1/3, 5/12 -> phi = 4 (5/12 - 1/4 + 1/12) = 1, 2/3, 1.
@@ -41,6 +42,48 @@ public class SelectionStabilityTests
         double halfWidth = 1.959963984540054 * Math.Sqrt(8.0 / 243);
         Assert.Equal(1.0 / 3 - halfWidth, estimate.Interval.Lower, 12);
         Assert.Equal(1.0 / 3 + halfWidth, estimate.Interval.Upper, 12);
+    }
+
+    [Fact]
+    public void Variance_equals_the_authors_agreement_kappa_form_on_random_matrices()
+    {
+        // The authors' published code for the paper (github.com/nogueirs/JMLR2018,
+        // Matlab/getStabilityVariance.m) writes the estimator as Fleiss' kappa:
+        // pi = k-bar/d, pe = 1 - 2 pi (1 - pi), pa = 1 - (2/d) M/(M-1) sum_f p_f (1 - p_f),
+        // Phi = (pa - pe) / (1 - pe); per repeat pa_r = 1 - k_r/d - pi + (2/d) sum_f Z_rf p_f,
+        // pe_r = (1 - Phi)(pi k_r/d + (1 - pi)(1 - k_r/d)), g_r = (pa_r - pe_r) / (1 - pe),
+        // Var = 4/M^2 sum_r (g_r - g-bar)^2. Recomputed here independently of the product code.
+        var random = new Random(17);
+        for (int trial = 0; trial < 20; trial++)
+        {
+            int repeats = random.Next(2, 30), features = random.Next(2, 40);
+            var z = new bool[repeats * features];
+            for (int i = 0; i < z.Length; i++) z[i] = random.Next(4) == 0;
+            if (!z.Contains(true)) z[0] = true;
+            double m = repeats, d = features;
+            var p = new double[features];
+            var k = new double[repeats];
+            for (int r = 0; r < repeats; r++)
+                for (int f = 0; f < features; f++)
+                    if (z[r * features + f]) { p[f] += 1 / m; k[r] += 1; }
+            double pi = k.Average() / d, pe = 1 - 2 * pi * (1 - pi);
+            double pa = 1 - 2 / d * m / (m - 1) * p.Sum(v => v * (1 - v));
+            double phi = (pa - pe) / (1 - pe);
+            var g = new double[repeats];
+            for (int r = 0; r < repeats; r++)
+            {
+                double agreement = 0;
+                for (int f = 0; f < features; f++) if (z[r * features + f]) agreement += p[f];
+                double paR = 1 - k[r] / d - pi + 2 / d * agreement;
+                double peR = (1 - phi) * (pi * k[r] / d + (1 - pi) * (1 - k[r] / d));
+                g[r] = (paR - peR) / (1 - pe);
+            }
+            double variance = 4 / (m * m) * g.Sum(v => (v - g.Average()) * (v - g.Average()));
+
+            var estimate = SelectionStability.Nogueira(z, features);
+            Assert.Equal(phi, estimate.Stability, 12);
+            Assert.Equal(variance, estimate.Variance, 12);
+        }
     }
 
     [Fact]
