@@ -1,0 +1,125 @@
+#!/usr/bin/python3
+"""Reference values for the OmicsScreen statistics toolkit, from scipy and statsmodels.
+
+Run with Debian 12's python3 (apt-get install python3-scipy python3-statsmodels):
+    /usr/bin/python3 make_stats_reference.py
+Writes stats_reference.json next to this script. Deterministic: every input is
+either written out below or drawn from numpy.random.default_rng with a fixed seed,
+and the drawn inputs are stored in the JSON, so the tests never need Python.
+See README.md for what each block means.
+"""
+import json
+import os
+import platform
+
+import numpy as np
+import scipy
+import scipy.special as sp
+import scipy.stats as st
+import statsmodels
+from statsmodels.stats.meta_analysis import combine_effects
+
+HERE = os.path.dirname(os.path.abspath(__file__))
+
+
+def meta_block(name, source, yi, vi):
+    r = combine_effects(np.asarray(yi, float), np.asarray(vi, float), method_re="dl")
+    df = len(yi) - 1
+    if r.tau2 < 0:
+        # statsmodels 0.13.5 reports the untruncated moment estimate (and I2 below 0) when
+        # Q < df; DerSimonian & Laird (1986) truncate tau2 at 0, which makes the random-effects
+        # fit equal to the fixed-effect fit, and Higgins & Thompson (2002) truncate I2 at 0.
+        return dict(
+            name=name, source=source,
+            estimates=list(map(float, yi)), variances=list(map(float, vi)),
+            fixed_estimate=float(r.mean_effect_fe), fixed_se=float(np.sqrt(r.var_eff_w_fe)),
+            q=float(r.q), df=int(df), q_p=float(st.chi2.sf(r.q, df)),
+            tau2=0.0, i2=0.0, h2=float(r.h2), statsmodels_tau2_untruncated=float(r.tau2),
+            random_estimate=float(r.mean_effect_fe), random_se=float(np.sqrt(r.var_eff_w_fe)),
+            random_ci_lower=float(r.mean_effect_fe - st.norm.ppf(0.975) * np.sqrt(r.var_eff_w_fe)),
+            random_ci_upper=float(r.mean_effect_fe + st.norm.ppf(0.975) * np.sqrt(r.var_eff_w_fe)),
+        )
+    return dict(
+        name=name, source=source,
+        estimates=list(map(float, yi)), variances=list(map(float, vi)),
+        fixed_estimate=float(r.mean_effect_fe), fixed_se=float(np.sqrt(r.var_eff_w_fe)),
+        q=float(r.q), df=int(df), q_p=float(st.chi2.sf(r.q, df)),
+        tau2=float(r.tau2), i2=float(r.i2), h2=float(r.h2),
+        random_estimate=float(r.mean_effect_re), random_se=float(np.sqrt(r.var_eff_w_re)),
+        random_ci_lower=float(r.summary_frame().loc["random effect", "ci_low"]),
+        random_ci_upper=float(r.summary_frame().loc["random effect", "ci_upp"]),
+    )
+
+
+def bcg():
+    """BCG vaccine trials (Colditz et al. 1994, JAMA 271:698), as tabulated in many
+    meta-analysis texts: vaccinated TB+, vaccinated TB-, control TB+, control TB-.
+    Counts typed from memory; the effect is the log risk ratio."""
+    counts = [
+        (4, 119, 11, 128), (6, 300, 29, 274), (3, 228, 11, 209), (62, 13536, 248, 12619),
+        (33, 5036, 47, 5761), (180, 1361, 372, 1079), (8, 2537, 10, 619), (505, 87886, 499, 87892),
+        (29, 7470, 45, 7232), (17, 1699, 65, 1600), (186, 50448, 141, 27197), (5, 2493, 3, 2338),
+        (27, 16886, 29, 17825),
+    ]
+    yi, vi = [], []
+    for a, b, c, d in counts:
+        yi.append(np.log((a / (a + b)) / (c / (c + d))))
+        vi.append(1 / a - 1 / (a + b) + 1 / c - 1 / (c + d))
+    return yi, vi
+
+
+def delong_by_pairs(x1, x0):
+    """DeLong et al. (1988) structural components straight from psi, in numpy."""
+    diff = x1[:, None] - x0[None, :]
+    psi = (diff > 0) + 0.5 * (diff == 0)
+    v10, v01 = psi.mean(axis=1), psi.mean(axis=0)
+    return float(psi.mean()), float(v10.var(ddof=1) / len(x1) + v01.var(ddof=1) / len(x0))
+
+
+def main():
+    rng = np.random.default_rng(20260101)
+    out = dict(versions=dict(python=platform.python_version(), numpy=np.__version__,
+                             scipy=scipy.__version__, statsmodels=statsmodels.__version__))
+
+    # Meta-analysis: DerSimonian-Laird via statsmodels combine_effects(method_re="dl").
+    yi, vi = bcg()
+    metas = [meta_block("bcg_log_risk_ratio", "Colditz et al. 1994 BCG trials (counts from memory)", yi, vi)]
+    metas.append(meta_block("invented_heterogeneous", "invented",
+                            [0.10, 0.30, 0.50, -0.10, 0.80], [0.010, 0.020, 0.050, 0.030, 0.040]))
+    metas.append(meta_block("invented_homogeneous", "invented (Q below df, tau2 truncated at 0)",
+                            [0.20, 0.21, 0.19, 0.205], [0.04, 0.05, 0.03, 0.06]))
+    out["meta_analysis"] = metas
+
+    # DeLong variance on tied integer data, computed independently in numpy.
+    delong = []
+    for n1, n0, levels in [(37, 52, 6), (12, 9, 3), (150, 90, 20)]:
+        x1 = rng.integers(0, levels, n1).astype(float) + 0.7 * rng.integers(0, 2, n1)
+        x0 = rng.integers(0, levels, n0).astype(float)
+        auc, var = delong_by_pairs(x1, x0)
+        delong.append(dict(positive=x1.tolist(), negative=x0.tolist(), auc=auc, variance=var))
+    out["delong"] = delong
+
+    # Far tails. Two-sided normal p = erfc(|z|/sqrt 2); Student t two-sided p = 2 t.sf(|t|, df).
+    out["normal_two_sided"] = [dict(z=z, p=float(sp.erfc(z / np.sqrt(2)))) for z in [0.5, 1.96, 5, 10, 20, 30, 37]]
+    out["student_t_two_sided"] = [dict(t=t, df=df, p=float(2 * st.t.sf(abs(t), df)))
+                                  for t, df in [(2.0, 5.0), (-3.5, 17.3), (25.3, 300.0), (40.0, 1000.0), (12.0, 2.5)]]
+
+    # Mann-Whitney with p far in the tail: perfectly separated samples, one set with ties.
+    mw = []
+    for label, x1, x0 in [
+        ("separated_800", np.arange(800.0) + 1000, np.arange(800.0)),
+        ("separated_ties_700", np.floor(np.arange(700.0) / 3) + 1000, np.floor(np.arange(650.0) / 4)),
+        ("overlapping_ties", rng.integers(0, 8, 60).astype(float), rng.integers(1, 9, 45).astype(float)),
+    ]:
+        r = st.mannwhitneyu(x1, x0, alternative="two-sided", method="asymptotic")
+        mw.append(dict(name=label, positive=x1.tolist(), negative=x0.tolist(),
+                       u=float(r.statistic), p=float(r.pvalue)))
+    out["mann_whitney"] = mw
+
+    with open(os.path.join(HERE, "stats_reference.json"), "w") as f:
+        json.dump(out, f, indent=1)
+        f.write("\n")
+
+
+if __name__ == "__main__":
+    main()
