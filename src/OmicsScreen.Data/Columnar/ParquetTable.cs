@@ -69,7 +69,7 @@ internal sealed class ParquetTable : IColumnarTable
     {
         var field = _fields[column];
         var texts = new string?[RowCount];
-        if (field.ClrType == typeof(string))
+        if (IsText(field))
         {
             for (int g = 0; g < _reader.RowGroupCount; g++)
                 Guard(() => Group(g).ReadAsync(field, texts.AsMemory(_rowGroupStarts[g], GroupRows(g))).AsTask());
@@ -90,7 +90,7 @@ internal sealed class ParquetTable : IColumnarTable
         out CellFailure failure)
     {
         var field = _fields[column];
-        if (field.ClrType == typeof(string))
+        if (IsText(field))
             return ColumnCells.StoreTexts(ReadText(column), 0, values, states, skipRows, out failure);
         var valueArray = new float[RowCount];
         var stateArray = new CellState[RowCount];
@@ -145,6 +145,10 @@ internal sealed class ParquetTable : IColumnarTable
             }
         }
     }
+
+    /// <summary>Parquet.Net 6 reports UTF-8 columns as ReadOnlyMemory&lt;char&gt;; older writers' schemas as string.</summary>
+    private static bool IsText(DataField field) =>
+        field.ClrType == typeof(string) || field.ClrType == typeof(ReadOnlyMemory<char>);
 
     private ParquetRowGroupReader Group(int g) => _reader.RowGroups[g];
 

@@ -147,8 +147,10 @@ internal static class DelimitedMatrixReader
 
     private static string[] ReadHeader(SepReader reader, string path)
     {
-        foreach (var row in reader)
+        // Not foreach: leaving a foreach early would dispose the reader before the data rows.
+        while (reader.MoveNext())
         {
+            var row = reader.Current;
             if (IsBlank(row)) continue;
             var header = new string[row.ColCount];
             for (int c = 0; c < header.Length; c++) header[c] = row[c].Span.Trim().ToString();

@@ -13,9 +13,11 @@ public static class ArrowPanelWriter
 {
     /// <param name="asStream">True for the IPC streaming format, false for the IPC file format.</param>
     /// <param name="batchRows">Rows per record batch; 0 writes one batch.</param>
-    public static void Write(Panel panel, string path, PanelLayout layout, bool asStream = false, int batchRows = 0)
+    /// <param name="includeSampleAttributes">False writes the measurements only, for use with a sample sheet.</param>
+    public static void Write(Panel panel, string path, PanelLayout layout, bool asStream = false, int batchRows = 0,
+        bool includeSampleAttributes = true)
     {
-        var columns = PanelTableShape.Columns(panel, layout);
+        var columns = PanelTableShape.Columns(panel, layout, includeSampleAttributes);
         var schemaBuilder = new Schema.Builder();
         foreach (var column in columns)
             schemaBuilder.Field(f => f.Name(column.Name)

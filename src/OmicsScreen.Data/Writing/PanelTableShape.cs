@@ -18,14 +18,15 @@ internal static class PanelTableShape
     public const string SampleIdColumn = "sample_id";
     public const string FeatureColumn = "feature";
 
-    public static List<OutputColumn> Columns(Panel panel, PanelLayout layout)
+    /// <param name="includeSampleAttributes">False writes the measurements only (the attributes then go in a sample sheet).</param>
+    public static List<OutputColumn> Columns(Panel panel, PanelLayout layout, bool includeSampleAttributes = true)
     {
-        var attributes = Attributes(panel);
+        var attributes = includeSampleAttributes ? Attributes(panel) : [];
         return layout == PanelLayout.SamplesInRows ? SamplesInRows(panel, attributes) : FeaturesInRows(panel, attributes);
     }
 
     /// <summary>Outcome, cohort, subject and the extra columns, as text in sample order.</summary>
-    private static List<(string Name, string[] Values)> Attributes(Panel panel)
+    public static List<(string Name, string[] Values)> Attributes(Panel panel)
     {
         var list = new List<(string, string[])> { (panel.Outcome.ColumnName, Labels(panel.Outcome)) };
         if (panel.Cohort is { } cohort) list.Add((cohort.ColumnName, Labels(cohort)));

@@ -13,12 +13,15 @@ namespace OmicsScreen.Data.Writing;
 public static class ParquetPanelWriter
 {
     /// <param name="rowGroupRows">Rows per row group; 0 writes one row group.</param>
-    public static void Write(Panel panel, string path, PanelLayout layout, int rowGroupRows = 0) =>
-        WriteAsync(panel, path, layout, rowGroupRows).GetAwaiter().GetResult();
+    /// <param name="includeSampleAttributes">False writes the measurements only, for use with a sample sheet.</param>
+    public static void Write(Panel panel, string path, PanelLayout layout, int rowGroupRows = 0,
+        bool includeSampleAttributes = true) =>
+        WriteAsync(panel, path, layout, rowGroupRows, includeSampleAttributes).GetAwaiter().GetResult();
 
-    private static async Task WriteAsync(Panel panel, string path, PanelLayout layout, int rowGroupRows)
+    private static async Task WriteAsync(Panel panel, string path, PanelLayout layout, int rowGroupRows,
+        bool includeSampleAttributes)
     {
-        var columns = PanelTableShape.Columns(panel, layout);
+        var columns = PanelTableShape.Columns(panel, layout, includeSampleAttributes);
         var fields = new DataField[columns.Count];
         for (int c = 0; c < fields.Length; c++)
             fields[c] = columns[c].Numbers is not null ? new DataField<float?>(columns[c].Name) : new DataField<string>(columns[c].Name);
