@@ -102,10 +102,14 @@ internal sealed class PanelAssembler
         string hint = "";
         foreach (var column in available)
             if (string.Equals(column, name, StringComparison.OrdinalIgnoreCase)) hint = $" Did you mean '{column}'?";
-        if (IsFeatureOrSample(name))
-            hint += _options.Layout == PanelLayout.SamplesInRows
-                ? " It is a feature or sample name here, so the file may be oriented the other way: try the layout FeaturesInRows."
-                : " It is a feature or sample name here, so the file may be oriented the other way: try the layout SamplesInRows.";
+        foreach (var feature in _raw.Matrix.FeatureNames)
+            if (string.Equals(feature, name, StringComparison.OrdinalIgnoreCase))
+                hint += $" The matrix has a feature column '{feature}'; if it holds the {role}, name it exactly (names are case-sensitive).";
+        foreach (var sample in _raw.Matrix.SampleIds)
+            if (string.Equals(sample, name, StringComparison.OrdinalIgnoreCase))
+                hint += _options.Layout == PanelLayout.SamplesInRows
+                    ? " It is a row label here, so the file may be oriented the other way: try the layout FeaturesInRows."
+                    : " It is a column name here, so the file may be oriented the other way: try the layout SamplesInRows.";
         string columns = available.Count == 0 ? "no text columns" : $"the columns {Display.List(available, 12)}";
         var path = _sheet?.Path ?? _raw.Source.Path;
         return ThrowMissing(path, name, role, where, columns, hint);
@@ -116,15 +120,6 @@ internal sealed class PanelAssembler
         throw PanelInputException.At(path, null, name,
             $"the {role} column '{Display.Name(name)}' is not in {where}, which have {columns}.",
             $"Name one of the available columns as the {role} column.{hint}");
-
-    private bool IsFeatureOrSample(string name)
-    {
-        foreach (var feature in _raw.Matrix.FeatureNames)
-            if (string.Equals(feature, name, StringComparison.OrdinalIgnoreCase)) return true;
-        foreach (var sample in _raw.Matrix.SampleIds)
-            if (string.Equals(sample, name, StringComparison.OrdinalIgnoreCase)) return true;
-        return false;
-    }
 
     private ClassOutcome BuildOutcome(SampleAttribute column)
     {
