@@ -25,14 +25,27 @@ public static class PanelLoader
         if (!File.Exists(options.MatrixPath))
             throw PanelInputException.At(options.MatrixPath, null, null, "does not exist.", "Check the matrix path.");
         var format = MatrixFormatDetector.Detect(options.MatrixPath);
-        var raw = ReadMatrix(options, format, ct);
+        // Hashing is independent of parsing, so it runs on another core meanwhile.
+        var matrixRecord = Task.Run(() => Record(options.MatrixPath), ct);
+        RawMatrix raw;
+        try
+        {
+            raw = ReadMatrix(options, format, ct);
+        }
+        catch
+        {
+            // The read error is the one to report; observe a hashing failure so it is not rethrown later.
+            _ = matrixRecord.ContinueWith(static t => _ = t.Exception, CancellationToken.None,
+                TaskContinuationOptions.OnlyOnFaulted, TaskScheduler.Default);
+            throw;
+        }
         var sheet = options.SampleSheetPath is { } sheetPath ? SampleSheetReader.Read(sheetPath) : null;
         ct.ThrowIfCancellationRequested();
 
         var findings = new List<InspectionFinding>();
         var (panel, dropped) = PanelAssembler.Assemble(raw, sheet, options, findings);
         var inspection = PanelInspector.Inspect(panel, raw.Source, options.SampleSheetPath, dropped, options, findings);
-        var inputs = new List<InputFileRecord> { Record(options.MatrixPath) };
+        var inputs = new List<InputFileRecord> { matrixRecord.GetAwaiter().GetResult() };
         if (options.SampleSheetPath is { } path) inputs.Add(Record(path));
         return new LoadedPanel(panel, inspection, inputs);
     }

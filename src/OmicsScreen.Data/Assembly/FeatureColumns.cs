@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using OmicsScreen.Data.Text;
 using OmicsScreen.Engine.Panels;
 
@@ -11,32 +12,39 @@ namespace OmicsScreen.Data.Assembly;
 /// <remarks>State arrays are created only for features with an unmeasured cell, as in <see cref="FeatureMatrix"/>.</remarks>
 internal sealed class FeatureColumns
 {
-    private readonly List<float[]> _values;
-    private readonly List<CellState[]?> _states;
+    // Plain arrays, not lists: Store runs once per cell and must inline to two array writes.
+    private float[][] _values;
+    private CellState[]?[] _states;
+    private int _featureCount;
     private int _sampleCapacity;
 
     public FeatureColumns(int featureCount, int sampleCapacity)
     {
         _sampleCapacity = sampleCapacity;
-        _values = new List<float[]>(featureCount);
-        _states = new List<CellState[]?>(featureCount);
+        _values = new float[Math.Max(featureCount, 4)][];
+        _states = new CellState[]?[_values.Length];
         for (int f = 0; f < featureCount; f++) AppendFeature();
     }
 
-    public int FeatureCount => _values.Count;
+    public int FeatureCount => _featureCount;
     public int SampleCapacity => _sampleCapacity;
 
     /// <summary>Adds one feature column of the current capacity and returns its index.</summary>
     public int AppendFeature()
     {
-        _values.Add(new float[_sampleCapacity]);
-        _states.Add(null);
-        return _values.Count - 1;
+        if (_featureCount == _values.Length)
+        {
+            Array.Resize(ref _values, _values.Length * 2);
+            Array.Resize(ref _states, _values.Length);
+        }
+        _values[_featureCount] = new float[_sampleCapacity];
+        return _featureCount++;
     }
 
     public Span<float> Values(int feature) => _values[feature];
 
     /// <summary>Stores one classified cell; returns false for a kind that is an input error.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public bool Store(int feature, int sample, CellKind kind, float value)
     {
         switch (kind)
@@ -44,6 +52,15 @@ internal sealed class FeatureColumns
             case CellKind.Measured:
                 _values[feature][sample] = value;
                 return true;
+            default:
+                return StoreUnmeasured(feature, sample, kind, value);
+        }
+    }
+
+    private bool StoreUnmeasured(int feature, int sample, CellKind kind, float value)
+    {
+        switch (kind)
+        {
             case CellKind.Missing:
                 _values[feature][sample] = float.NaN;
                 StatesOf(feature)[sample] = CellState.Missing;
@@ -77,11 +94,11 @@ internal sealed class FeatureColumns
     }
 
     public FeatureMatrix ToMatrix(IReadOnlyList<string> featureNames, IReadOnlyList<string> sampleIds) =>
-        new(featureNames, sampleIds, _values.ToArray(), _states.ToArray());
+        new(featureNames, sampleIds, _values[.._featureCount], _states[.._featureCount]);
 
     private void Resize(int capacity)
     {
-        for (int f = 0; f < _values.Count; f++)
+        for (int f = 0; f < _featureCount; f++)
         {
             var values = _values[f];
             Array.Resize(ref values, capacity);

@@ -1,4 +1,5 @@
 using System.Globalization;
+using System.Runtime.CompilerServices;
 using csFastFloat;
 using OmicsScreen.Engine.Panels;
 
@@ -16,7 +17,18 @@ namespace OmicsScreen.Data.Text;
 /// </remarks>
 internal static class CellText
 {
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public static CellKind Classify(ReadOnlySpan<char> text, out float value)
+    {
+        // Fast path for the common cell, a bare number: no trimming, no token comparisons.
+        if (!text.IsEmpty && char.IsAsciiDigit(text[^1])
+            && FastFloatParser.TryParseFloat(text, out int consumed, out value, NumberStyles.Float, '.')
+            && consumed == text.Length && float.IsFinite(value))
+            return CellKind.Measured;
+        return ClassifySlow(text, out value);
+    }
+
+    private static CellKind ClassifySlow(ReadOnlySpan<char> text, out float value)
     {
         text = text.Trim(' ');
         value = float.NaN;

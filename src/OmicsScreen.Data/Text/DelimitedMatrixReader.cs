@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using nietras.SeparatedValues;
 using OmicsScreen.Data.Assembly;
 
@@ -29,6 +30,9 @@ internal static class DelimitedMatrixReader
             : ReadFeaturesInRows(reader, source, options, ct);
     }
 
+    // Optimised at first call: a CLI loads once, so tiered compilation would run most of this
+    // loop as unoptimised code before on-stack replacement catches up.
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static RawMatrix ReadSamplesInRows(SepReader reader, MatrixSource source, PanelLoadOptions options,
         CancellationToken ct)
     {
@@ -89,6 +93,7 @@ internal static class DelimitedMatrixReader
             sampleLines.ToArray(), otherColumns);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static RawMatrix ReadFeaturesInRows(SepReader reader, MatrixSource source, PanelLoadOptions options,
         CancellationToken ct)
     {

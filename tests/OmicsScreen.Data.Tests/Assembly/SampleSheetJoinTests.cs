@@ -27,7 +27,7 @@ public sealed class SampleSheetJoinTests : IDisposable
         Assert.Equal([0, 0, 1], panel.Cohort.SampleLevels.ToArray());
         Assert.Equal(["54", "47", "61"], panel.ExtraColumns["age"]);
         Assert.Equal(2, loaded.Inputs.Count);
-        Assert.Equal("tab", loaded.Inspection.Delimiter is "comma" ? "tab" : "wrong");
+        Assert.Equal("comma", loaded.Inspection.Delimiter);
     }
 
     [Fact]
