@@ -1,17 +1,13 @@
 using OmicsScreen.Data.Tests.Support;
 using OmicsScreen.Data.Writing;
+using OmicsScreen.Engine.Panels;
 
 namespace OmicsScreen.Data.Tests;
 
 /// <summary>The same panel in every supported format and orientation loads to identical values, names, labels and cell states.</summary>
 public class CrossFormatTests
 {
-    public static TheoryData<string> Encodings() =>
-    [
-        "csv-samples", "tsv-samples", "semicolon-samples", "csv-bom-crlf-samples", "csv-features", "tsv-features",
-        "parquet-samples", "parquet-features", "parquet-samples-row-groups",
-        "arrow-file-samples", "arrow-stream-samples", "arrow-file-features", "arrow-stream-features-batches",
-    ];
+    public static TheoryData<string> Encodings() => new(Writers.Keys);
 
     [Theory]
     [MemberData(nameof(Encodings))]
@@ -43,60 +39,37 @@ public class CrossFormatTests
         PanelAssert.Identical(expected, loaded.Panel);
     }
 
-    private static (string Path, PanelLayout Layout) WriteAs(Engine.Panels.Panel panel, TempFolder folder, string encoding,
+    private const PanelLayout Samples = PanelLayout.SamplesInRows;
+    private const PanelLayout Features = PanelLayout.FeaturesInRows;
+
+    /// <summary>Per encoding: file name, orientation, and the writer (panel, path, include sample attributes).</summary>
+    private static readonly Dictionary<string, (string File, PanelLayout Layout, Action<Panel, string, bool> Write)> Writers = new()
+    {
+        ["csv-samples"] = ("panel.csv", Samples, (p, f, a) => DelimitedPanelWriter.Write(p, f, Samples, ',', includeSampleAttributes: a)),
+        ["tsv-samples"] = ("panel.tsv", Samples, (p, f, a) => DelimitedPanelWriter.Write(p, f, Samples, '\t', includeSampleAttributes: a)),
+        ["semicolon-samples"] = ("panel.csv", Samples, (p, f, a) => DelimitedPanelWriter.Write(p, f, Samples, ';', includeSampleAttributes: a)),
+        ["csv-bom-crlf-samples"] = ("panel.csv", Samples,
+            (p, f, a) => DelimitedPanelWriter.Write(p, f, Samples, ',', byteOrderMark: true, newline: "\r\n", includeSampleAttributes: a)),
+        ["csv-features"] = ("panel.csv", Features, (p, f, a) => DelimitedPanelWriter.Write(p, f, Features, ',', includeSampleAttributes: a)),
+        ["tsv-features"] = ("panel.tsv", Features, (p, f, a) => DelimitedPanelWriter.Write(p, f, Features, '\t', includeSampleAttributes: a)),
+        ["parquet-samples"] = ("panel.parquet", Samples, (p, f, a) => ParquetPanelWriter.Write(p, f, Samples, includeSampleAttributes: a)),
+        ["parquet-features"] = ("panel.parquet", Features, (p, f, a) => ParquetPanelWriter.Write(p, f, Features, includeSampleAttributes: a)),
+        ["parquet-samples-row-groups"] = ("panel.parquet", Samples,
+            (p, f, a) => ParquetPanelWriter.Write(p, f, Samples, rowGroupRows: 5, includeSampleAttributes: a)),
+        ["arrow-file-samples"] = ("panel.arrow", Samples, (p, f, a) => ArrowPanelWriter.Write(p, f, Samples, includeSampleAttributes: a)),
+        ["arrow-stream-samples"] = ("panel.arrows", Samples,
+            (p, f, a) => ArrowPanelWriter.Write(p, f, Samples, asStream: true, batchRows: 5, includeSampleAttributes: a)),
+        ["arrow-file-features"] = ("panel.arrow", Features, (p, f, a) => ArrowPanelWriter.Write(p, f, Features, includeSampleAttributes: a)),
+        ["arrow-stream-features-batches"] = ("panel.arrows", Features,
+            (p, f, a) => ArrowPanelWriter.Write(p, f, Features, asStream: true, batchRows: 2, includeSampleAttributes: a)),
+    };
+
+    private static (string Path, PanelLayout Layout) WriteAs(Panel panel, TempFolder folder, string encoding,
         bool includeSampleAttributes)
     {
-        var samples = PanelLayout.SamplesInRows;
-        var features = PanelLayout.FeaturesInRows;
-        bool all = includeSampleAttributes;
-        string path;
-        switch (encoding)
-        {
-            case "csv-samples":
-                DelimitedPanelWriter.Write(panel, path = folder.File("panel.csv"), samples, ',', includeSampleAttributes: all);
-                return (path, samples);
-            case "tsv-samples":
-                DelimitedPanelWriter.Write(panel, path = folder.File("panel.tsv"), samples, '\t', includeSampleAttributes: all);
-                return (path, samples);
-            case "semicolon-samples":
-                DelimitedPanelWriter.Write(panel, path = folder.File("panel.csv"), samples, ';', includeSampleAttributes: all);
-                return (path, samples);
-            case "csv-bom-crlf-samples":
-                DelimitedPanelWriter.Write(panel, path = folder.File("panel.csv"), samples, ',', byteOrderMark: true,
-                    newline: "\r\n", includeSampleAttributes: all);
-                return (path, samples);
-            case "csv-features":
-                DelimitedPanelWriter.Write(panel, path = folder.File("panel.csv"), features, ',', includeSampleAttributes: all);
-                return (path, features);
-            case "tsv-features":
-                DelimitedPanelWriter.Write(panel, path = folder.File("panel.tsv"), features, '\t', includeSampleAttributes: all);
-                return (path, features);
-            case "parquet-samples":
-                ParquetPanelWriter.Write(panel, path = folder.File("panel.parquet"), samples, includeSampleAttributes: all);
-                return (path, samples);
-            case "parquet-features":
-                ParquetPanelWriter.Write(panel, path = folder.File("panel.parquet"), features, includeSampleAttributes: all);
-                return (path, features);
-            case "parquet-samples-row-groups":
-                ParquetPanelWriter.Write(panel, path = folder.File("panel.parquet"), samples, rowGroupRows: 5,
-                    includeSampleAttributes: all);
-                return (path, samples);
-            case "arrow-file-samples":
-                ArrowPanelWriter.Write(panel, path = folder.File("panel.arrow"), samples, includeSampleAttributes: all);
-                return (path, samples);
-            case "arrow-stream-samples":
-                ArrowPanelWriter.Write(panel, path = folder.File("panel.arrows"), samples, asStream: true, batchRows: 5,
-                    includeSampleAttributes: all);
-                return (path, samples);
-            case "arrow-file-features":
-                ArrowPanelWriter.Write(panel, path = folder.File("panel.arrow"), features, includeSampleAttributes: all);
-                return (path, features);
-            case "arrow-stream-features-batches":
-                ArrowPanelWriter.Write(panel, path = folder.File("panel.arrows"), features, asStream: true, batchRows: 2,
-                    includeSampleAttributes: all);
-                return (path, features);
-            default:
-                throw new ArgumentOutOfRangeException(nameof(encoding), encoding, null);
-        }
+        var (file, layout, write) = Writers[encoding];
+        string path = folder.File(file);
+        write(panel, path, includeSampleAttributes);
+        return (path, layout);
     }
 }
