@@ -6,40 +6,33 @@ namespace OmicsScreen.Data.Assembly;
 
 /// <summary>
 /// Feature-major value and state arrays filled by a reader, in whatever order its file delivers
-/// cells. Unlike <see cref="FeatureMatrixBuilder"/> it does not need the sample ids in advance:
-/// a streaming reader sizes it from an upper bound on the row count and trims it at the end.
+/// cells. Unlike <see cref="FeatureMatrixBuilder"/> it needs neither the sample ids nor the exact
+/// counts in advance: a streaming reader sizes it from an upper bound on the row count, writes
+/// each row into its own slot, and compacts the slots at the end.
 /// </summary>
-/// <remarks>State arrays are created only for features with an unmeasured cell, as in <see cref="FeatureMatrix"/>.</remarks>
+/// <remarks>
+/// Rows may be stored from several threads at once as long as each thread writes its own sample
+/// (or feature) slot: value and state writes then touch distinct elements, and a state array is
+/// created at most once per feature by compare-and-swap. State arrays exist only for features with
+/// an unmeasured cell, as in <see cref="FeatureMatrix"/>.
+/// </remarks>
 internal sealed class FeatureColumns
 {
-    // Plain arrays, not lists: Store runs once per cell and must inline to two array writes.
-    private float[][] _values;
-    private CellState[]?[] _states;
-    private int _featureCount;
-    private int _sampleCapacity;
+    // Plain arrays, not lists: Store runs once per cell and must inline to one array write.
+    private readonly float[][] _values;
+    private readonly CellState[]?[] _states;
+    private readonly int _sampleCapacity;
 
     public FeatureColumns(int featureCount, int sampleCapacity)
     {
         _sampleCapacity = sampleCapacity;
-        _values = new float[Math.Max(featureCount, 4)][];
-        _states = new CellState[]?[_values.Length];
-        for (int f = 0; f < featureCount; f++) AppendFeature();
+        _values = new float[featureCount][];
+        _states = new CellState[]?[featureCount];
+        for (int f = 0; f < featureCount; f++) _values[f] = new float[sampleCapacity];
     }
 
-    public int FeatureCount => _featureCount;
+    public int FeatureCount => _values.Length;
     public int SampleCapacity => _sampleCapacity;
-
-    /// <summary>Adds one feature column of the current capacity and returns its index.</summary>
-    public int AppendFeature()
-    {
-        if (_featureCount == _values.Length)
-        {
-            Array.Resize(ref _values, _values.Length * 2);
-            Array.Resize(ref _states, _values.Length);
-        }
-        _values[_featureCount] = new float[_sampleCapacity];
-        return _featureCount++;
-    }
 
     public Span<float> Values(int feature) => _values[feature];
 
@@ -47,14 +40,12 @@ internal sealed class FeatureColumns
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public bool Store(int feature, int sample, CellKind kind, float value)
     {
-        switch (kind)
+        if (kind == CellKind.Measured)
         {
-            case CellKind.Measured:
-                _values[feature][sample] = value;
-                return true;
-            default:
-                return StoreUnmeasured(feature, sample, kind, value);
+            _values[feature][sample] = value;
+            return true;
         }
+        return StoreUnmeasured(feature, sample, kind, value);
     }
 
     private bool StoreUnmeasured(int feature, int sample, CellKind kind, float value)
@@ -80,46 +71,45 @@ internal sealed class FeatureColumns
         if (states.ContainsAnyExcept(CellState.Measured)) states.CopyTo(StatesOf(feature));
     }
 
-    /// <summary>Doubles the capacity of every column; for the rare file whose row bound was too low.</summary>
-    public void Grow()
+    /// <summary>
+    /// The matrix of the given sample slots (in order) of the given feature slots; sample slots
+    /// are copied one column at a time, feature slots are picked without copying.
+    /// </summary>
+    public FeatureMatrix ToMatrix(IReadOnlyList<string> featureNames, IReadOnlyList<string> sampleIds,
+        int[]? featureSlots = null, int[]? sampleSlots = null)
     {
-        int capacity = Math.Max(16, _sampleCapacity * 2);
-        Resize(capacity);
-    }
-
-    /// <summary>Cuts every column to the samples actually read; one column is copied at a time.</summary>
-    public void Trim(int sampleCount)
-    {
-        if (sampleCount != _sampleCapacity) Resize(sampleCount);
-    }
-
-    public FeatureMatrix ToMatrix(IReadOnlyList<string> featureNames, IReadOnlyList<string> sampleIds) =>
-        new(featureNames, sampleIds, _values[.._featureCount], _states[.._featureCount]);
-
-    private void Resize(int capacity)
-    {
-        for (int f = 0; f < _featureCount; f++)
+        int featureCount = featureSlots?.Length ?? _values.Length;
+        var values = new float[featureCount][];
+        var states = new CellState[]?[featureCount];
+        for (int f = 0; f < featureCount; f++)
         {
-            var values = _values[f];
-            Array.Resize(ref values, capacity);
-            _values[f] = values;
-            if (_states[f] is { } states)
-            {
-                Array.Resize(ref states, capacity);
-                _states[f] = states;
-            }
+            int slot = featureSlots?[f] ?? f;
+            values[f] = Pick(_values[slot], sampleSlots, sampleIds.Count);
+            states[f] = _states[slot] is { } slotStates ? Pick(slotStates, sampleSlots, sampleIds.Count) : null;
+            // Release the slot at once so that at most one extra column is alive while compacting.
+            _values[slot] = [];
+            _states[slot] = null;
         }
-        _sampleCapacity = capacity;
+        return new FeatureMatrix(featureNames, sampleIds, values, states);
+    }
+
+    /// <summary>The array itself when the slots are 0..count-1 and fill it; otherwise a gathered copy.</summary>
+    private static T[] Pick<T>(T[] column, int[]? slots, int count)
+    {
+        if (slots is null) return column.Length == count ? column : column[..count];
+        bool identity = column.Length == count;
+        for (int i = 0; identity && i < slots.Length; i++) identity = slots[i] == i;
+        if (identity) return column;
+        var picked = new T[slots.Length];
+        for (int i = 0; i < slots.Length; i++) picked[i] = column[slots[i]];
+        return picked;
     }
 
     private CellState[] StatesOf(int feature)
     {
-        var states = _states[feature];
-        if (states is null)
-        {
-            states = new CellState[_sampleCapacity];
-            _states[feature] = states;
-        }
-        return states;
+        var states = Volatile.Read(ref _states[feature]);
+        if (states is not null) return states;
+        var created = new CellState[_sampleCapacity];
+        return Interlocked.CompareExchange(ref _states[feature], created, null) ?? created;
     }
 }

@@ -5,13 +5,15 @@ using OmicsScreen.Data.Assembly;
 namespace OmicsScreen.Data.Text;
 
 /// <summary>
-/// Streams a CSV/TSV matrix once with Sep, parsing numbers from spans with csFastFloat straight
-/// into feature-major columns, in either orientation.
+/// Streams a CSV/TSV matrix once with Sep, parsing rows on all cores and numbers from spans with
+/// csFastFloat straight into feature-major columns, in either orientation.
 /// </summary>
 /// <remarks>
-/// Samples in rows: the columns are sized from an upper bound on the row count (a count of line
-/// feeds) and trimmed at the end, so the file is never held as text and the matrix is never
-/// transposed. Features in rows: each row becomes one column directly.
+/// The columns are sized from an upper bound on the row count (a count of line breaks); each
+/// non-blank row claims the next free slot with an atomic counter, so workers never share a cell
+/// and the file is never held as text. Results come back in file order (Sep's ordered parallel
+/// enumeration); the reading thread validates them in that order, remembers each row's slot, and
+/// finally gathers the slots into file order, a column at a time.
 /// </remarks>
 internal static class DelimitedMatrixReader
 {
@@ -25,60 +27,52 @@ internal static class DelimitedMatrixReader
             .Reader(o => o with { HasHeader = false, Unescape = true, DisableColCountCheck = true })
             .From(text);
         var source = new MatrixSource(path, MatrixFileFormat.DelimitedText, delimiter, options.Layout);
+        var header = ReadHeader(reader, path);
+        int rowBound = Math.Max(1, LineCounter.UpperBoundOfLines(path) - 1);
+        var slots = new SlotCounter();
         return options.Layout == PanelLayout.SamplesInRows
-            ? ReadSamplesInRows(reader, source, options, ct)
-            : ReadFeaturesInRows(reader, source, options, ct);
+            ? ReadSamplesInRows(reader, header, slots, rowBound, source, options, ct)
+            : ReadFeaturesInRows(reader, header, slots, rowBound, source, options, ct);
     }
 
-    // Optimised at first call: a CLI loads once, so tiered compilation would run most of this
-    // loop as unoptimised code before on-stack replacement catches up.
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static RawMatrix ReadSamplesInRows(SepReader reader, MatrixSource source, PanelLoadOptions options,
-        CancellationToken ct)
+    private static RawMatrix ReadSamplesInRows(SepReader reader, string[] header, SlotCounter slots, int rowBound,
+        MatrixSource source, PanelLoadOptions options, CancellationToken ct)
     {
         string path = source.Path;
-        string[] header = ReadHeader(reader, path);
         var roles = SampleColumnRoles.Resolve(header, options, path, isTableRow: false);
         var attributeNames = options.SampleAttributeNames();
-        int[] featureColumns = roles.FeatureColumns;
-        var columns = new FeatureColumns(featureColumns.Length, Math.Max(1, LineCounter.UpperBoundOfLines(path) - 1));
+        var columns = new FeatureColumns(roles.FeatureColumns.Length, rowBound);
+
         var attributes = new List<string>[roles.AttributeColumns.Length];
         for (int a = 0; a < attributes.Length; a++) attributes[a] = [];
         var sampleIds = new List<string>();
         var sampleLines = new List<long>();
-
-        int sample = 0;
-        foreach (var row in reader)
+        var sampleSlots = new List<int>();
+        var rows = reader.ParallelEnumerate(row => ParseSampleRow(row, header.Length, slots, roles, attributeNames, columns),
+            Environment.ProcessorCount);
+        foreach (var row in rows)
         {
-            if (IsBlank(row)) continue;
-            long line = row.LineNumberFrom;
-            CheckFieldCount(row, header.Length, path, line);
-            if ((sample & (CancellationCheckRows - 1)) == 0) ct.ThrowIfCancellationRequested();
-            if (sample == columns.SampleCapacity) columns.Grow();
-
-            string id = row[roles.IdColumn].Span.Trim().ToString();
-            NameRules.Check(id, "sample id", path, line, header[roles.IdColumn]);
-            if (attributeNames.Contains(id))
-                throw PanelInputException.At(path, line, header[roles.IdColumn],
-                    $"the row label '{Display.Name(id)}' is a sample attribute name, so the file looks like features in rows.",
+            if (row.IsBlank) continue;
+            if ((sampleIds.Count & (CancellationCheckRows - 1)) == 0) ct.ThrowIfCancellationRequested();
+            CheckRow(row, header.Length, path);
+            NameRules.Check(row.Label, "sample id", path, row.Line, header[roles.IdColumn]);
+            if (attributeNames.Contains(row.Label))
+                throw PanelInputException.At(path, row.Line, header[roles.IdColumn],
+                    $"the row label '{Display.Name(row.Label)}' is a sample attribute name, so the file looks like features in rows.",
                     "Load it with the layout FeaturesInRows.");
-            for (int a = 0; a < attributes.Length; a++)
-                attributes[a].Add(row[roles.AttributeColumns[a]].Span.Trim().ToString());
-
-            // Invariant: features 0..f-1 of this sample are stored; the row's cells are only spans.
-            for (int f = 0; f < featureColumns.Length; f++)
+            if (row.FailedIndex >= 0)
             {
-                var cell = row[featureColumns[f]].Span;
-                var kind = CellText.Classify(cell, out float value);
-                if (!columns.Store(f, sample, kind, value))
-                    throw CellErrors.NotAMeasurement(path, line, roles.FeatureNames[f], roles.FeatureNames[f], cell, kind);
+                string feature = roles.FeatureNames[row.FailedIndex];
+                throw CellErrors.NotAMeasurement(path, row.Line, feature, feature, row.FailedText, row.FailedKind);
             }
-            sampleIds.Add(id);
-            sampleLines.Add(line);
-            sample++;
+            for (int a = 0; a < attributes.Length; a++) attributes[a].Add(row.Texts![a]);
+            sampleIds.Add(row.Label);
+            sampleLines.Add(row.Line);
+            sampleSlots.Add(row.Slot);
         }
-        if (sample == 0) throw HeaderOnly(path);
-        columns.Trim(sample);
+        if (sampleIds.Count == 0) throw HeaderOnly(path);
+        NameRules.CheckUnique(sampleIds, "sample id", path,
+            "Make sample ids unique (technical replicates need their own ids; name their subject in a subject column).");
 
         var annotations = new Dictionary<string, string[]>(StringComparer.Ordinal);
         var otherColumns = new List<string> { header[roles.IdColumn] };
@@ -87,18 +81,52 @@ internal static class DelimitedMatrixReader
             annotations[header[roles.AttributeColumns[a]]] = attributes[a].ToArray();
             otherColumns.Add(header[roles.AttributeColumns[a]]);
         }
-        NameRules.CheckUnique(sampleIds, "sample id", path,
-            "Make sample ids unique (technical replicates need their own ids; name their subject in a subject column).");
-        return new RawMatrix(source, columns.ToMatrix(roles.FeatureNames, sampleIds), annotations,
-            sampleLines.ToArray(), otherColumns);
+        var matrix = columns.ToMatrix(roles.FeatureNames, sampleIds, sampleSlots: sampleSlots.ToArray());
+        return new RawMatrix(source, matrix, annotations, sampleLines.ToArray(), otherColumns);
     }
 
+    /// <summary>Runs on a worker: stores one sample's cells in its slot, stopping at the first bad cell.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static RawMatrix ReadFeaturesInRows(SepReader reader, MatrixSource source, PanelLoadOptions options,
-        CancellationToken ct)
+    private static ParsedRow ParseSampleRow(SepReader.Row row, int fieldCount, SlotCounter slots, SampleColumnRoles roles,
+        HashSet<string> attributeNames, FeatureColumns columns)
+    {
+        if (IsBlank(row)) return new ParsedRow { IsBlank = true };
+        int slot = slots.Next();
+        var parsed = new ParsedRow
+        {
+            Line = FirstLine(row),
+            FieldCount = row.ColCount,
+            Slot = slot,
+            BeyondCapacity = slot >= columns.SampleCapacity,
+        };
+        if (row.ColCount != fieldCount || parsed.BeyondCapacity) return parsed;
+        parsed.Label = row[roles.IdColumn].Span.Trim().ToString();
+        var texts = new string[roles.AttributeColumns.Length];
+        for (int a = 0; a < texts.Length; a++) texts[a] = row[roles.AttributeColumns[a]].Span.Trim().ToString();
+        parsed.Texts = texts;
+        if (attributeNames.Contains(parsed.Label)) return parsed;
+
+        int[] featureColumns = roles.FeatureColumns;
+        // Invariant: features 0..f-1 of this sample are stored; the row's cells are only spans.
+        for (int f = 0; f < featureColumns.Length; f++)
+        {
+            var cell = row[featureColumns[f]].Span;
+            var kind = CellText.Classify(cell, out float value);
+            if (!columns.Store(f, slot, kind, value))
+            {
+                parsed.FailedIndex = f;
+                parsed.FailedText = cell.ToString();
+                parsed.FailedKind = kind;
+                break;
+            }
+        }
+        return parsed;
+    }
+
+    private static RawMatrix ReadFeaturesInRows(SepReader reader, string[] header, SlotCounter slots, int rowBound,
+        MatrixSource source, PanelLoadOptions options, CancellationToken ct)
     {
         string path = source.Path;
-        string[] header = ReadHeader(reader, path);
         if (header.Length < 2)
             throw PanelInputException.At(path, 1, null, "has a single column, so there are no sample columns.",
                 "Check the delimiter, or load the file with the layout SamplesInRows.");
@@ -109,36 +137,31 @@ internal static class DelimitedMatrixReader
             "Make sample ids in the header unique (technical replicates need their own ids).");
 
         var attributeNames = options.SampleAttributeNames();
-        var columns = new FeatureColumns(0, sampleIds.Length);
+        var columns = new FeatureColumns(rowBound, sampleIds.Length);
         var featureNames = new List<string>();
+        var featureSlots = new List<int>();
         var annotations = new Dictionary<string, string[]>(StringComparer.Ordinal);
         int rowCount = 0;
-        foreach (var row in reader)
+        var rows = reader.ParallelEnumerate(row => ParseFeatureRow(row, header.Length, slots, attributeNames, columns),
+            Environment.ProcessorCount);
+        foreach (var row in rows)
         {
-            if (IsBlank(row)) continue;
-            long line = row.LineNumberFrom;
-            CheckFieldCount(row, header.Length, path, line);
+            if (row.IsBlank) continue;
             if ((rowCount++ & (CancellationCheckRows - 1)) == 0) ct.ThrowIfCancellationRequested();
-            string label = row[0].Span.Trim().ToString();
-            NameRules.Check(label, "feature name", path, line, header[0]);
-            if (attributeNames.Contains(label))
+            CheckRow(row, header.Length, path);
+            NameRules.Check(row.Label, "feature name", path, row.Line, header[0]);
+            if (row.Texts is { } values)
             {
-                var values = new string[sampleIds.Length];
-                for (int s = 0; s < values.Length; s++) values[s] = row[s + 1].Span.Trim().ToString();
-                if (!annotations.TryAdd(label, values))
-                    throw PanelInputException.At(path, line, header[0],
-                        $"the sample attribute row '{Display.Name(label)}' occurs twice.", "Keep one row per sample attribute.");
+                if (!annotations.TryAdd(row.Label, values))
+                    throw PanelInputException.At(path, row.Line, header[0],
+                        $"the sample attribute row '{Display.Name(row.Label)}' occurs twice.", "Keep one row per sample attribute.");
                 continue;
             }
-            int feature = columns.AppendFeature();
-            featureNames.Add(label);
-            for (int s = 0; s < sampleIds.Length; s++)
-            {
-                var cell = row[s + 1].Span;
-                var kind = CellText.Classify(cell, out float value);
-                if (!columns.Store(feature, s, kind, value))
-                    throw CellErrors.NotAMeasurement(path, line, sampleIds[s], label, cell, kind);
-            }
+            if (row.FailedIndex >= 0)
+                throw CellErrors.NotAMeasurement(path, row.Line, sampleIds[row.FailedIndex], row.Label, row.FailedText,
+                    row.FailedKind);
+            featureNames.Add(row.Label);
+            featureSlots.Add(row.Slot);
         }
         if (rowCount == 0) throw HeaderOnly(path);
         if (featureNames.Count == 0)
@@ -146,9 +169,56 @@ internal static class DelimitedMatrixReader
                 "Add the measurement rows, or check the layout.");
         NameRules.CheckUnique(featureNames, "feature name", path,
             "Make feature names unique (for example add the assay or isoform to the name) and load again.");
-        return new RawMatrix(source, columns.ToMatrix(featureNames, sampleIds), annotations,
-            new long[sampleIds.Length], [header[0]]);
+        var matrix = columns.ToMatrix(featureNames, sampleIds, featureSlots: featureSlots.ToArray());
+        return new RawMatrix(source, matrix, annotations, new long[sampleIds.Length], [header[0]]);
     }
+
+    /// <summary>Runs on a worker: stores one feature's cells in its column slot, or keeps an attribute row as text.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static ParsedRow ParseFeatureRow(SepReader.Row row, int fieldCount, SlotCounter slots, HashSet<string> attributeNames,
+        FeatureColumns columns)
+    {
+        if (IsBlank(row)) return new ParsedRow { IsBlank = true };
+        int slot = slots.Next();
+        var parsed = new ParsedRow
+        {
+            Line = FirstLine(row),
+            FieldCount = row.ColCount,
+            Slot = slot,
+            BeyondCapacity = slot >= columns.FeatureCount,
+        };
+        if (row.ColCount != fieldCount || parsed.BeyondCapacity) return parsed;
+        parsed.Label = row[0].Span.Trim().ToString();
+        int sampleCount = fieldCount - 1;
+        if (attributeNames.Contains(parsed.Label))
+        {
+            var texts = new string[sampleCount];
+            for (int s = 0; s < texts.Length; s++) texts[s] = row[s + 1].Span.Trim().ToString();
+            parsed.Texts = texts;
+            return parsed;
+        }
+        for (int s = 0; s < sampleCount; s++)
+        {
+            var cell = row[s + 1].Span;
+            var kind = CellText.Classify(cell, out float value);
+            if (!columns.Store(slot, s, kind, value))
+            {
+                parsed.FailedIndex = s;
+                parsed.FailedText = cell.ToString();
+                parsed.FailedKind = kind;
+                break;
+            }
+        }
+        return parsed;
+    }
+
+    /// <summary>
+    /// The 1-based line a row starts on. Under parallel enumeration Sep 0.17 reports a wrong
+    /// start line for the first row of each batch, but the end line is always right; a quoted
+    /// field may hold line breaks, which are counted back.
+    /// </summary>
+    private static long FirstLine(SepReader.Row row) =>
+        row.LineNumberToExcl - 1 - row.Span.Count('\n');
 
     private static string[] ReadHeader(SepReader reader, string path)
     {
@@ -165,17 +235,29 @@ internal static class DelimitedMatrixReader
             "Export the matrix again; a matrix file needs a header row and at least one data row.");
     }
 
+    /// <summary>Hands out row slots to parsing workers, each exactly once.</summary>
+    private sealed class SlotCounter
+    {
+        private int _next = -1;
+
+        public int Next() => Interlocked.Increment(ref _next);
+    }
+
     private static PanelInputException HeaderOnly(string path) =>
         PanelInputException.At(path, null, null, "has a header row but no data rows.",
             "Export the matrix again with its data; check that the export did not stop early.");
 
     private static bool IsBlank(SepReader.Row row) => row.ColCount == 1 && row[0].Span.Trim().IsEmpty;
 
-    private static void CheckFieldCount(SepReader.Row row, int expected, string path, long line)
+    private static void CheckRow(ParsedRow row, int expected, string path)
     {
-        if (row.ColCount != expected)
-            throw PanelInputException.At(path, line, null,
-                FormattableString.Invariant($"the row has {row.ColCount} fields but the header has {expected}."),
+        if (row.FieldCount != expected)
+            throw PanelInputException.At(path, row.Line, null,
+                FormattableString.Invariant($"the row has {row.FieldCount} fields but the header has {expected}."),
                 "Fix the row (a stray delimiter, or an unquoted text field containing one); every row needs one field per header column.");
+        if (row.BeyondCapacity)
+            throw PanelInputException.At(path, row.Line, null,
+                "has more rows than line breaks, which only a damaged or unusually encoded file can have.",
+                "Save the file again as UTF-8 text with LF or CRLF line endings.");
     }
 }

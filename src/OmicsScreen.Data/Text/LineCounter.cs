@@ -13,10 +13,10 @@ internal static class LineCounter
         {
             var span = buffer.AsSpan(0, read);
             lineFeeds += span.Count((byte)'\n');
-            if (lineFeeds == 0) carriageReturns += span.Count((byte)'\r');
+            carriageReturns += span.Count((byte)'\r');
         }
-        // Files ending lines with a bare CR (old Mac exports) have no LF at all.
-        long lines = (lineFeeds > 0 ? lineFeeds : carriageReturns) + 1;
+        // Every line ends in LF, CRLF or (old Mac exports) a bare CR, so the larger count bounds the rows.
+        long lines = Math.Max(lineFeeds, carriageReturns) + 1;
         return (int)Math.Min(lines, Array.MaxLength);
     }
 }
