@@ -22,8 +22,10 @@ public sealed record PanelLoadOptions
     public string? PositiveClass { get; init; }
 
     /// <summary>
-    /// The sample id column of the matrix (samples in rows) and of the sample sheet; the first
-    /// column of a file when not given or when the file has no column of that name.
+    /// The sample id column of a samples-in-rows matrix (which must have it) and of the sample
+    /// sheet (its first column when it has no column of that name). Default: the first column.
+    /// With features in rows the sample ids are the header of the matrix and this names only the
+    /// sheet's id column.
     /// </summary>
     public string? SampleIdColumn { get; init; }
 

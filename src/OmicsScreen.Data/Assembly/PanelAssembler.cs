@@ -129,7 +129,8 @@ internal sealed class PanelAssembler
             if (labels[i].Length == 0)
                 throw PanelInputException.At(column.FilePath, Line(column, i), column.Name,
                     $"sample '{Display.Name(_raw.Matrix.SampleIds[_join.KeptSamples[i]])}' has no outcome value.",
-                    "Fill in its class, or remove the sample from the matrix and the sample sheet.");
+                    "Fill in its class, or remove the sample from the matrix and the sample sheet.",
+                    isTableRow: IsTableRow(column));
         }
         var names = labels.Distinct(StringComparer.Ordinal).Order(StringComparer.Ordinal).ToArray();
         var byCaseless = new Dictionary<string, string>(StringComparer.OrdinalIgnoreCase);
@@ -167,6 +168,10 @@ internal sealed class PanelAssembler
                 FormattableString.Invariant($"{empty} samples have an empty '{column.Name}' value; they form one group named ''. Fill the values in if they belong to known groups.")));
         return SampleGrouping.FromLabels(column.Name, column.Values);
     }
+
+    /// <summary>Positions in Parquet and Arrow matrices are table rows, not text lines.</summary>
+    private bool IsTableRow(SampleAttribute column) =>
+        column.FilePath == _raw.Source.Path && _raw.Source.Format != MatrixFileFormat.DelimitedText;
 
     private static long? Line(SampleAttribute column, int sample) =>
         column.Lines[sample] > 0 ? column.Lines[sample] : null;

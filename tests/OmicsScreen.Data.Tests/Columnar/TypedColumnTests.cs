@@ -100,4 +100,24 @@ public sealed class TypedColumnTests : IDisposable
         Assert.Contains("big.arrow, row 3, column 'd'", error.Message);
         Assert.Contains("beyond the float32 range", error.Message);
     }
+
+    [Fact]
+    public async Task Parquet_sample_without_outcome_names_the_table_row()
+    {
+        var id = new DataField<string>("id");
+        var group = new DataField<string>("group");
+        var value = new DataField<float>("a");
+        var path = _folder.File("nogroup.parquet");
+        await using (var stream = File.Create(path))
+        await using (var writer = await ParquetWriter.CreateAsync(new ParquetSchema(id, group, value), stream))
+        using (var rowGroup = writer.CreateRowGroup())
+        {
+            await rowGroup.WriteAsync(id, ["s1", "s2"]);
+            await rowGroup.WriteAsync(group, ["x", null!]);
+            await rowGroup.WriteAsync<float>(value, new float[] { 1, 2 }.AsMemory());
+        }
+        var error = Assert.Throws<PanelInputException>(() => PanelLoader.Load(Options(path)));
+        Assert.Contains("nogroup.parquet, row 2, column 'group'", error.Message);
+        Assert.Contains("sample 's2' has no outcome value", error.Message);
+    }
 }

@@ -63,4 +63,13 @@ public sealed class ParallelParsingTests : IDisposable
         var error = Assert.Throws<PanelInputException>(() => PanelLoader.Load(Options(path)));
         Assert.Equal(702, error.Line);
     }
+
+    [Fact]
+    public void A_cancelled_load_stops_with_operation_cancelled()
+    {
+        var path = WritePanel("cancel.csv");
+        using var cancellation = new CancellationTokenSource();
+        cancellation.Cancel();
+        Assert.ThrowsAny<OperationCanceledException>(() => PanelLoader.Load(Options(path), cancellation.Token));
+    }
 }
