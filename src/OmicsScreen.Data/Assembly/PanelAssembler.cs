@@ -126,9 +126,10 @@ internal sealed class PanelAssembler
         var labels = column.Values;
         for (int i = 0; i < labels.Length; i++)
         {
-            if (labels[i].Length == 0)
+            // The missing-value tokens of feature cells (empty, NA, NaN, N/A, null) never name a class.
+            if (CellText.Classify(labels[i], out _) == CellKind.Missing)
                 throw PanelInputException.At(column.FilePath, Line(column, i), column.Name,
-                    $"sample '{Display.Name(_raw.Matrix.SampleIds[_join.KeptSamples[i]])}' has no outcome value.",
+                    $"sample '{Display.Name(_raw.Matrix.SampleIds[_join.KeptSamples[i]])}' has no outcome value ('{Display.Name(labels[i])}').",
                     "Fill in its class, or remove the sample from the matrix and the sample sheet.",
                     isTableRow: IsTableRow(column));
         }

@@ -98,4 +98,16 @@ public sealed class SampleSheetJoinTests : IDisposable
         Assert.Contains("sheet.tsv, line 3, column 'group'", error.Message);
         Assert.Contains("sample 's2' has no outcome value", error.Message);
     }
+
+    [Theory]
+    [InlineData("NA")]
+    [InlineData("n/a")]
+    [InlineData("null")]
+    public void Missing_value_token_as_outcome_is_not_a_class(string token)
+    {
+        var error = Assert.Throws<PanelInputException>(() =>
+            PanelLoader.Load(Options("id,a\ns1,1\ns2,2\ns3,3\n", $"id\tgroup\ns1\tx\ns2\ty\ns3\t{token}\n")));
+        Assert.Contains("sheet.tsv, line 4, column 'group'", error.Message);
+        Assert.Contains($"sample 's3' has no outcome value ('{token}')", error.Message);
+    }
 }
