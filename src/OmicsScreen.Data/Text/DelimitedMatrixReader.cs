@@ -90,16 +90,9 @@ internal static class DelimitedMatrixReader
     private static ParsedRow ParseSampleRow(SepReader.Row row, int fieldCount, SlotCounter slots, SampleColumnRoles roles,
         HashSet<string> attributeNames, FeatureColumns columns)
     {
-        if (IsBlank(row)) return new ParsedRow { IsBlank = true };
-        int slot = slots.Next();
-        var parsed = new ParsedRow
-        {
-            Line = FirstLine(row),
-            FieldCount = row.ColCount,
-            Slot = slot,
-            BeyondCapacity = slot >= columns.SampleCapacity,
-        };
-        if (row.ColCount != fieldCount || parsed.BeyondCapacity) return parsed;
+        var parsed = Start(row, slots, columns.SampleCapacity);
+        if (!parsed.CanHoldCells(fieldCount)) return parsed;
+        int slot = parsed.Slot;
         parsed.Label = row[roles.IdColumn].Span.Trim().ToString();
         var texts = new string[roles.AttributeColumns.Length];
         for (int a = 0; a < texts.Length; a++) texts[a] = row[roles.AttributeColumns[a]].Span.Trim().ToString();
@@ -114,9 +107,7 @@ internal static class DelimitedMatrixReader
             var kind = CellText.Classify(cell, out float value);
             if (!columns.Store(f, slot, kind, value))
             {
-                parsed.FailedIndex = f;
-                parsed.FailedText = cell.ToString();
-                parsed.FailedKind = kind;
+                parsed.Fail(f, cell, kind);
                 break;
             }
         }
@@ -178,16 +169,9 @@ internal static class DelimitedMatrixReader
     private static ParsedRow ParseFeatureRow(SepReader.Row row, int fieldCount, SlotCounter slots, HashSet<string> attributeNames,
         FeatureColumns columns)
     {
-        if (IsBlank(row)) return new ParsedRow { IsBlank = true };
-        int slot = slots.Next();
-        var parsed = new ParsedRow
-        {
-            Line = FirstLine(row),
-            FieldCount = row.ColCount,
-            Slot = slot,
-            BeyondCapacity = slot >= columns.FeatureCount,
-        };
-        if (row.ColCount != fieldCount || parsed.BeyondCapacity) return parsed;
+        var parsed = Start(row, slots, columns.FeatureCount);
+        if (!parsed.CanHoldCells(fieldCount)) return parsed;
+        int slot = parsed.Slot;
         parsed.Label = row[0].Span.Trim().ToString();
         int sampleCount = fieldCount - 1;
         if (attributeNames.Contains(parsed.Label))
@@ -203,13 +187,19 @@ internal static class DelimitedMatrixReader
             var kind = CellText.Classify(cell, out float value);
             if (!columns.Store(slot, s, kind, value))
             {
-                parsed.FailedIndex = s;
-                parsed.FailedText = cell.ToString();
-                parsed.FailedKind = kind;
+                parsed.Fail(s, cell, kind);
                 break;
             }
         }
         return parsed;
+    }
+
+    /// <summary>Claims the next slot for a non-blank row and records where the row is.</summary>
+    private static ParsedRow Start(SepReader.Row row, SlotCounter slots, int slotCapacity)
+    {
+        if (IsBlank(row)) return new ParsedRow { IsBlank = true };
+        int slot = slots.Next();
+        return new ParsedRow { Line = FirstLine(row), FieldCount = row.ColCount, Slot = slot, BeyondCapacity = slot >= slotCapacity };
     }
 
     /// <summary>

@@ -27,4 +27,15 @@ internal sealed class ParsedRow
     public int FailedIndex { get; set; } = -1;
     public string FailedText { get; set; } = "";
     public CellKind FailedKind { get; set; }
+
+    /// <summary>True when the row is not blank, has one field per header column and has a slot.</summary>
+    public bool CanHoldCells(int fieldCount) => !IsBlank && FieldCount == fieldCount && !BeyondCapacity;
+
+    /// <summary>Records the first cell that is not a measurement.</summary>
+    public void Fail(int index, ReadOnlySpan<char> text, CellKind kind)
+    {
+        FailedIndex = index;
+        FailedText = text.ToString();
+        FailedKind = kind;
+    }
 }
