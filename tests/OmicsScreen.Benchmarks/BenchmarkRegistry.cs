@@ -8,6 +8,18 @@ public static class BenchmarkRegistry
     private static List<(string, IBenchmarkCase)> Build()
     {
         var cases = new List<(string, IBenchmarkCase)>();
+        AddLoadCases(cases);
         return cases;
+    }
+
+    private static void AddLoadCases(List<(string, IBenchmarkCase)> cases)
+    {
+        cases.Add(("load", new LoadPanelCase(200, 20_000, Data.MatrixFileFormat.DelimitedText)));
+        cases.Add(("load", new LoadPanelCase(5000, 1000, Data.MatrixFileFormat.DelimitedText)));
+        cases.Add(("load", new LoadPanelCase(200, 20_000, Data.MatrixFileFormat.Parquet)));
+        cases.Add(("load", new LoadPanelCase(200, 20_000, Data.MatrixFileFormat.ArrowFile)));
+        cases.Add(("load", new LoadPanelCase(200, 20_000, Data.MatrixFileFormat.ArrowStream)));
+        cases.Add(("load", new LoadPanelCase(200, 20_000, Data.MatrixFileFormat.Parquet, Data.PanelLayout.FeaturesInRows)));
+        cases.Add(("load", new LoadPanelCase(200, 20_000, Data.MatrixFileFormat.ArrowFile, Data.PanelLayout.FeaturesInRows)));
     }
 }

@@ -1,0 +1,8 @@
+namespace OmicsScreen.Data.Assembly;
+
+/// <summary>The file a matrix came from and how it was encoded.</summary>
+/// <param name="Path">The matrix file.</param>
+/// <param name="Format">The detected format.</param>
+/// <param name="Delimiter">The field delimiter of a text file, null for Parquet and Arrow.</param>
+/// <param name="Layout">The orientation read.</param>
+internal sealed record MatrixSource(string Path, MatrixFileFormat Format, char? Delimiter, PanelLayout Layout);

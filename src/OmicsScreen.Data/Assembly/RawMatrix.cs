@@ -1,0 +1,32 @@
+using OmicsScreen.Engine.Panels;
+
+namespace OmicsScreen.Data.Assembly;
+
+/// <summary>
+/// What a matrix reader found: the measurements, the sample attributes stored in the same file,
+/// and how the file was written. Sample order is file order; nothing is joined yet.
+/// </summary>
+internal sealed class RawMatrix
+{
+    public RawMatrix(MatrixSource source, FeatureMatrix matrix, IReadOnlyDictionary<string, string[]> annotations,
+        long[] sampleLines, IReadOnlyList<string> otherColumns)
+    {
+        Source = source;
+        Matrix = matrix;
+        Annotations = annotations;
+        SampleLines = sampleLines;
+        OtherColumns = otherColumns;
+    }
+
+    public MatrixSource Source { get; }
+    public FeatureMatrix Matrix { get; }
+
+    /// <summary>Annotation columns (or, for features in rows, annotation rows) as text, in sample order.</summary>
+    public IReadOnlyDictionary<string, string[]> Annotations { get; }
+
+    /// <summary>Line (text) or row (table) each sample came from, for messages; 0 when a sample is a column.</summary>
+    public long[] SampleLines { get; }
+
+    /// <summary>The id and annotation column names, for "columns available" in messages.</summary>
+    public IReadOnlyList<string> OtherColumns { get; }
+}

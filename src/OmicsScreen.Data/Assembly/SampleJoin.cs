@@ -1,0 +1,92 @@
+using OmicsScreen.Data.Inspection;
+using OmicsScreen.Data.Text;
+
+namespace OmicsScreen.Data.Assembly;
+
+/// <summary>
+/// Matches matrix samples to sample-sheet rows by id. The panel keeps matrix order; the sheet
+/// may list samples in any order.
+/// </summary>
+internal sealed class SampleJoin
+{
+    private SampleJoin(int[] keptSamples, int[] sheetRows, string[] droppedSamples)
+    {
+        KeptSamples = keptSamples;
+        SheetRows = sheetRows;
+        DroppedSamples = droppedSamples;
+    }
+
+    /// <summary>Matrix sample indices kept, in matrix order.</summary>
+    public int[] KeptSamples { get; }
+
+    /// <summary>For each kept sample, its sheet row (or -1 without a sheet).</summary>
+    public int[] SheetRows { get; }
+
+    /// <summary>Ids found in only one of the two files and dropped (matrix ones first).</summary>
+    public string[] DroppedSamples { get; }
+
+    public static SampleJoin WithoutSheet(int sampleCount)
+    {
+        var kept = new int[sampleCount];
+        var rows = new int[sampleCount];
+        for (int s = 0; s < sampleCount; s++)
+        {
+            kept[s] = s;
+            rows[s] = -1;
+        }
+        return new SampleJoin(kept, rows, []);
+    }
+
+    public static SampleJoin Match(IReadOnlyList<string> matrixIds, string matrixPath, SampleSheet sheet,
+        PanelLoadOptions options, List<InspectionFinding> findings)
+    {
+        int idColumn = options.SampleIdColumn is { } name && sheet.IndexOf(name) >= 0 ? sheet.IndexOf(name) : 0;
+        var sheetIds = sheet.Columns[idColumn];
+        var rowOfId = new Dictionary<string, int>(sheetIds.Length, StringComparer.Ordinal);
+        for (int r = 0; r < sheetIds.Length; r++)
+        {
+            NameRules.Check(sheetIds[r], "sample id", sheet.Path, sheet.Lines[r], sheet.ColumnNames[idColumn]);
+            if (!rowOfId.TryAdd(sheetIds[r], r))
+                throw PanelInputException.At(sheet.Path, sheet.Lines[r], sheet.ColumnNames[idColumn],
+                    $"the sample id '{Display.Name(sheetIds[r])}' occurs more than once in the sample sheet.",
+                    "Keep one sample-sheet row per sample.");
+        }
+
+        var kept = new List<int>(matrixIds.Count);
+        var rows = new List<int>(matrixIds.Count);
+        var matrixOnly = new List<string>();
+        var inMatrix = new HashSet<string>(matrixIds, StringComparer.Ordinal);
+        for (int s = 0; s < matrixIds.Count; s++)
+        {
+            if (rowOfId.TryGetValue(matrixIds[s], out int row))
+            {
+                kept.Add(s);
+                rows.Add(row);
+            }
+            else matrixOnly.Add(matrixIds[s]);
+        }
+        var sheetOnly = new List<string>();
+        foreach (var id in sheetIds)
+            if (!inMatrix.Contains(id)) sheetOnly.Add(id);
+
+        string sheetName = Path.GetFileName(sheet.Path);
+        string matrixName = Path.GetFileName(matrixPath);
+        if (kept.Count == 0)
+            throw PanelInputException.At(sheet.Path, null, sheet.ColumnNames[idColumn],
+                $"no sample id matches the matrix {matrixName}: the sheet has {Display.List(sheetIds)}; the matrix has {Display.List(matrixIds)}.",
+                "Check that the sample id column is the right one (set the sample id column), and that ids are spelt the same way in both files.");
+        if (matrixOnly.Count == 0 && sheetOnly.Count == 0)
+            return new SampleJoin(kept.ToArray(), rows.ToArray(), []);
+
+        string unmatched = Unmatched(matrixOnly, matrixName, sheetName) + Unmatched(sheetOnly, sheetName, matrixName);
+        if (!options.DropUnmatchedSamples)
+            throw PanelInputException.At(sheet.Path, null, sheet.ColumnNames[idColumn], $"samples do not match:{unmatched}",
+                "Fix the ids, or allow dropping unmatched samples (DropUnmatchedSamples) to continue without them.");
+        findings.Add(new InspectionFinding(FindingSeverity.Warning, "unmatched-samples-dropped",
+            $"{matrixOnly.Count + sheetOnly.Count} samples were dropped because they are in only one file:{unmatched}"));
+        return new SampleJoin(kept.ToArray(), rows.ToArray(), [.. matrixOnly, .. sheetOnly]);
+    }
+
+    private static string Unmatched(List<string> ids, string inFile, string notInFile) =>
+        ids.Count == 0 ? "" : FormattableString.Invariant($" {ids.Count} in {inFile} but not in {notInFile} ({Display.List(ids)}).");
+}

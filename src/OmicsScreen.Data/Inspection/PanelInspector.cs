@@ -1,0 +1,208 @@
+using System.Globalization;
+using OmicsScreen.Data.Assembly;
+using OmicsScreen.Engine.Panels;
+
+namespace OmicsScreen.Data.Inspection;
+
+/// <summary>Summarises a loaded panel and raises the findings a user should see before screening.</summary>
+internal static class PanelInspector
+{
+    private const int WorstFeaturesShown = 5;
+    /// <summary>Below this many samples a class gives unstable importances (common practice: at least 10 per class).</summary>
+    private const int SmallClassSamples = 10;
+    /// <summary>Features missing in more than this fraction of samples are flagged.</summary>
+    private const double HighMissingFraction = 0.5;
+    /// <summary>Samples-to-features ratio (and minimum samples) beyond which the orientation looks swapped.</summary>
+    private const int OrientationRatio = 20;
+    private const int OrientationMinimumSamples = 1000;
+
+    public static PanelInspection Inspect(Panel panel, MatrixSource source, string? sampleSheetPath,
+        IReadOnlyList<string> droppedSamples, PanelLoadOptions options, List<InspectionFinding> findings)
+    {
+        var matrix = panel.Matrix;
+        var scan = ScanFeatures(matrix);
+        var outcome = panel.Outcome;
+        var classes = new LevelCount[outcome.ClassCount];
+        for (int c = 0; c < classes.Length; c++) classes[c] = new LevelCount(outcome.ClassNames[c], outcome.ClassCounts[c]);
+
+        AddClassFindings(outcome, options, findings);
+        AddFeatureFindings(matrix, scan, findings);
+        AddOrientationFinding(matrix, options.Layout, findings);
+
+        long cellCount = (long)matrix.SampleCount * matrix.FeatureCount;
+        return new PanelInspection
+        {
+            MatrixPath = source.Path,
+            FileFormat = source.Format,
+            Delimiter = source.Delimiter is { } d ? Text.DelimiterDetector.Describe(d) : null,
+            Layout = source.Layout,
+            SampleSheetPath = sampleSheetPath,
+            SampleCount = matrix.SampleCount,
+            FeatureCount = matrix.FeatureCount,
+            OutcomeColumn = outcome.ColumnName,
+            Classes = classes,
+            PositiveClass = outcome.ClassNames[outcome.PositiveClass],
+            CohortColumn = panel.Cohort?.ColumnName,
+            Cohorts = panel.Cohort is { } cohort ? Levels(cohort) : [],
+            ClassesByCohort = panel.Cohort is { } grouping ? CrossTable(outcome, grouping) : [],
+            SubjectColumn = panel.Subject?.ColumnName,
+            SubjectCount = panel.Subject?.LevelCount ?? 0,
+            MissingFraction = cellCount == 0 ? 0 : (double)scan.MissingCells / cellCount,
+            MostMissingFeatures = WorstByMissingness(matrix, scan.MissingPerFeature),
+            BelowDetectionCellCount = scan.BelowDetectionCells,
+            BelowDetectionFeatureCount = scan.BelowDetectionFeatures,
+            ConstantFeatures = scan.Constant,
+            AllMissingFeatures = scan.AllMissing,
+            DroppedSamples = droppedSamples,
+            Findings = findings.ToArray(),
+        };
+    }
+
+    private sealed record FeatureScan(int[] MissingPerFeature, long MissingCells, long BelowDetectionCells,
+        int BelowDetectionFeatures, List<string> Constant, List<string> AllMissing);
+
+    private static FeatureScan ScanFeatures(FeatureMatrix matrix)
+    {
+        var missingPerFeature = new int[matrix.FeatureCount];
+        long missingCells = 0, belowCells = 0;
+        int belowFeatures = 0;
+        var constant = new List<string>();
+        var allMissing = new List<string>();
+        for (int f = 0; f < matrix.FeatureCount; f++)
+        {
+            var values = matrix.Column(f);
+            var states = matrix.States(f);
+            int missing = 0, below = 0;
+            // Invariant: (firstState, firstValue) is the first non-missing cell seen; varies
+            // becomes true once any later non-missing cell differs from it.
+            bool seen = false, varies = false;
+            var firstState = CellState.Measured;
+            float firstValue = 0;
+            for (int s = 0; s < values.Length; s++)
+            {
+                var state = states.IsEmpty ? CellState.Measured : states[s];
+                if (state == CellState.Missing) { missing++; continue; }
+                if (state == CellState.BelowDetection) below++;
+                if (!seen)
+                {
+                    seen = true;
+                    firstState = state;
+                    firstValue = values[s];
+                }
+                else if (!varies && (state != firstState || !SameValue(values[s], firstValue))) varies = true;
+            }
+            missingPerFeature[f] = missing;
+            missingCells += missing;
+            belowCells += below;
+            if (below > 0) belowFeatures++;
+            if (!seen) allMissing.Add(matrix.FeatureNames[f]);
+            else if (!varies) constant.Add(matrix.FeatureNames[f]);
+        }
+        return new FeatureScan(missingPerFeature, missingCells, belowCells, belowFeatures, constant, allMissing);
+    }
+
+    private static bool SameValue(float a, float b) => a == b || (float.IsNaN(a) && float.IsNaN(b));
+
+    private static void AddClassFindings(ClassOutcome outcome, PanelLoadOptions options, List<InspectionFinding> findings)
+    {
+        string column = outcome.ColumnName;
+        if (outcome.ClassCount < 2)
+        {
+            findings.Add(new InspectionFinding(FindingSeverity.Error, "single-class", Invariant(
+                $"The outcome '{column}' has a single class '{outcome.ClassNames[0]}' ({outcome.SampleCount} samples); a screen needs at least two classes. Check that the outcome column is the right one and that no class was dropped by the sample-sheet join.")));
+            return;
+        }
+        for (int c = 0; c < outcome.ClassCount; c++)
+        {
+            int count = outcome.ClassCounts[c];
+            string name = outcome.ClassNames[c];
+            if (count == 1)
+                findings.Add(new InspectionFinding(FindingSeverity.Error, "class-with-one-sample", Invariant(
+                    $"The class '{name}' of '{column}' has a single sample, which can be neither trained on nor validated. Merge it into another class or remove that sample.")));
+            else if (count < SmallClassSamples)
+                findings.Add(new InspectionFinding(FindingSeverity.Warning, "small-class", Invariant(
+                    $"The class '{name}' of '{column}' has only {count} samples; importances will vary a lot between repeats. Consider merging classes or adding samples.")));
+        }
+        if (options.PositiveClass is null)
+            findings.Add(new InspectionFinding(FindingSeverity.Note, "positive-class-default",
+                $"The positive class is '{outcome.ClassNames[outcome.PositiveClass]}', the smallest class; name another positive class to change it."));
+    }
+
+    private static void AddFeatureFindings(FeatureMatrix matrix, FeatureScan scan, List<InspectionFinding> findings)
+    {
+        int uninformative = scan.Constant.Count + scan.AllMissing.Count;
+        if (uninformative == matrix.FeatureCount)
+        {
+            findings.Add(new InspectionFinding(FindingSeverity.Error, "all-features-constant", Invariant(
+                $"All {matrix.FeatureCount} features are constant or entirely missing, so there is nothing to screen. Check that this is the right file and that values were not lost in the export (for example text turned into one value).")));
+            return;
+        }
+        if (scan.Constant.Count > 0)
+            findings.Add(new InspectionFinding(FindingSeverity.Warning, "constant-features", Invariant(
+                $"{scan.Constant.Count} features hold a single value in every sample ({Display.List(scan.Constant)}); they cannot separate classes and will never be selected. Remove them or check their export.")));
+        if (scan.AllMissing.Count > 0)
+            findings.Add(new InspectionFinding(FindingSeverity.Warning, "all-missing-features", Invariant(
+                $"{scan.AllMissing.Count} features are missing in every sample ({Display.List(scan.AllMissing)}). Remove them or check their export.")));
+        var high = new List<string>();
+        for (int f = 0; f < matrix.FeatureCount; f++)
+        {
+            int missing = scan.MissingPerFeature[f];
+            if (missing < matrix.SampleCount && missing > HighMissingFraction * matrix.SampleCount) high.Add(matrix.FeatureNames[f]);
+        }
+        if (high.Count > 0)
+            findings.Add(new InspectionFinding(FindingSeverity.Warning, "high-missingness", Invariant(
+                $"{high.Count} features are missing in more than half of the samples ({Display.List(high)}); their importances rest on few samples. Consider a missingness filter before screening.")));
+        if (scan.BelowDetectionCells > 0)
+            findings.Add(new InspectionFinding(FindingSeverity.Note, "below-detection", Invariant(
+                $"{scan.BelowDetectionCells} cells in {scan.BelowDetectionFeatures} features are below the detection limit; they are kept as censored values, not as missing.")));
+    }
+
+    private static void AddOrientationFinding(FeatureMatrix matrix, PanelLayout layout, List<InspectionFinding> findings)
+    {
+        if (matrix.SampleCount < OrientationMinimumSamples || matrix.SampleCount < OrientationRatio * matrix.FeatureCount) return;
+        string rows = layout == PanelLayout.SamplesInRows ? "rows" : "columns";
+        string other = layout == PanelLayout.SamplesInRows ? nameof(PanelLayout.FeaturesInRows) : nameof(PanelLayout.SamplesInRows);
+        findings.Add(new InspectionFinding(FindingSeverity.Warning, "orientation-suspect", Invariant(
+            $"The panel has {matrix.SampleCount} samples but only {matrix.FeatureCount} features; omics panels usually have more features than samples. If the file's {rows} are features, load it with the layout {other}.")));
+    }
+
+    private static LevelCount[] Levels(SampleGrouping grouping)
+    {
+        var counts = new int[grouping.LevelCount];
+        foreach (int level in grouping.SampleLevels) counts[level]++;
+        var levels = new LevelCount[counts.Length];
+        for (int l = 0; l < levels.Length; l++) levels[l] = new LevelCount(grouping.LevelNames[l], counts[l]);
+        return levels;
+    }
+
+    private static ClassCohortCount[] CrossTable(ClassOutcome outcome, SampleGrouping cohort)
+    {
+        var counts = new int[outcome.ClassCount, cohort.LevelCount];
+        var classes = outcome.SampleClasses;
+        var levels = cohort.SampleLevels;
+        for (int s = 0; s < classes.Length; s++) counts[classes[s], levels[s]]++;
+        var table = new ClassCohortCount[outcome.ClassCount * cohort.LevelCount];
+        int i = 0;
+        for (int c = 0; c < outcome.ClassCount; c++)
+            for (int l = 0; l < cohort.LevelCount; l++)
+                table[i++] = new ClassCohortCount(outcome.ClassNames[c], cohort.LevelNames[l], counts[c, l]);
+        return table;
+    }
+
+    private static FeatureFraction[] WorstByMissingness(FeatureMatrix matrix, int[] missingPerFeature)
+    {
+        var order = new List<int>();
+        for (int f = 0; f < missingPerFeature.Length; f++)
+            if (missingPerFeature[f] > 0) order.Add(f);
+        order.Sort((a, b) => missingPerFeature[a] != missingPerFeature[b]
+            ? missingPerFeature[b].CompareTo(missingPerFeature[a])
+            : string.CompareOrdinal(matrix.FeatureNames[a], matrix.FeatureNames[b]));
+        int shown = Math.Min(WorstFeaturesShown, order.Count);
+        var worst = new FeatureFraction[shown];
+        for (int i = 0; i < shown; i++)
+            worst[i] = new FeatureFraction(matrix.FeatureNames[order[i]], (double)missingPerFeature[order[i]] / matrix.SampleCount);
+        return worst;
+    }
+
+    private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
+}

@@ -1,0 +1,33 @@
+using System.Text;
+using OmicsScreen.Data.Inspection;
+using OmicsScreen.Engine.Panels;
+
+namespace OmicsScreen.Data;
+
+/// <summary>A panel as loaded, what the loader found in it, and the exact input files it came from.</summary>
+public sealed class LoadedPanel
+{
+    public LoadedPanel(Panel panel, PanelInspection inspection, IReadOnlyList<InputFileRecord> inputs)
+    {
+        Panel = panel;
+        Inspection = inspection;
+        Inputs = inputs;
+    }
+
+    public Panel Panel { get; }
+    public PanelInspection Inspection { get; }
+    public IReadOnlyList<InputFileRecord> Inputs { get; }
+
+    /// <summary>
+    /// Throws a <see cref="PanelInputException"/> carrying every Error finding (a single class, a
+    /// class with one sample, all features constant) when the panel cannot be screened.
+    /// </summary>
+    public LoadedPanel EnsureScreenable()
+    {
+        if (Inspection.CanScreen) return this;
+        var message = new StringBuilder(Path.GetFileName(Inspection.MatrixPath)).Append(": the panel cannot be screened:");
+        foreach (var finding in Inspection.Findings)
+            if (finding.Severity == FindingSeverity.Error) message.Append(' ').Append(finding.Message);
+        throw new PanelInputException(message.ToString(), Inspection.MatrixPath, column: Inspection.OutcomeColumn);
+    }
+}

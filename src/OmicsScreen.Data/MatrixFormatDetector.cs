@@ -1,0 +1,54 @@
+namespace OmicsScreen.Data;
+
+/// <summary>
+/// Tells the format of a matrix file from its first bytes; the extension only sharpens the error
+/// when the two disagree.
+/// </summary>
+/// <remarks>
+/// Magic numbers: Parquet files start (and end) with "PAR1"; Arrow IPC files start with
+/// "ARROW1"; an Arrow IPC stream starts with the 0xFFFFFFFF continuation marker of its first
+/// message (Apache Arrow columnar format specification, "IPC Streaming Format").
+/// </remarks>
+public static class MatrixFormatDetector
+{
+    private static readonly string[] ParquetExtensions = [".parquet", ".pq"];
+    private static readonly string[] ArrowExtensions = [".arrow", ".arrows", ".feather", ".ipc"];
+
+    public static MatrixFileFormat Detect(string path)
+    {
+        Span<byte> head = stackalloc byte[4096];
+        int length;
+        try
+        {
+            using var stream = File.OpenRead(path);
+            length = stream.ReadAtLeast(head, head.Length, throwOnEndOfStream: false);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            throw PanelInputException.At(path, null, null, $"cannot be opened ({e.Message}).",
+                "Check the path and that the file is readable.", e);
+        }
+        head = head[..length];
+        if (length == 0)
+            throw PanelInputException.At(path, null, null, "is empty (0 bytes).",
+                "Export the matrix again; a matrix file needs a header row and at least one sample.");
+        if (head.StartsWith("PAR1"u8)) return MatrixFileFormat.Parquet;
+        if (head.StartsWith("ARROW1"u8)) return MatrixFileFormat.ArrowFile;
+        if (head.StartsWith((ReadOnlySpan<byte>)[0xFF, 0xFF, 0xFF, 0xFF])) return MatrixFileFormat.ArrowStream;
+
+        string extension = Path.GetExtension(path).ToLowerInvariant();
+        if (ParquetExtensions.Contains(extension))
+            throw PanelInputException.At(path, null, null,
+                "is named as a Parquet file but does not start with the Parquet marker PAR1; it is damaged or not Parquet.",
+                "Write the file again with a Parquet writer, or give the matrix as CSV/TSV.");
+        if (ArrowExtensions.Contains(extension))
+            throw PanelInputException.At(path, null, null,
+                "is named as an Arrow file but starts with neither ARROW1 (IPC file) nor the IPC stream marker; it is damaged or not Arrow.",
+                "Write the file again with an Arrow IPC writer, or give the matrix as CSV/TSV.");
+        if (head.Contains((byte)0))
+            throw PanelInputException.At(path, null, null,
+                "is in an unknown binary format (it is not text, Parquet or Arrow IPC).",
+                "Give the matrix as CSV, TSV, Parquet or Arrow IPC; Excel workbooks must be saved as CSV first.");
+        return MatrixFileFormat.DelimitedText;
+    }
+}

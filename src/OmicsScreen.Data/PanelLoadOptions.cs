@@ -1,0 +1,47 @@
+namespace OmicsScreen.Data;
+
+/// <summary>Where a panel comes from and which columns say what.</summary>
+public sealed record PanelLoadOptions
+{
+    /// <summary>The measurement matrix: CSV, TSV, Parquet or Arrow IPC (file or stream).</summary>
+    public required string MatrixPath { get; init; }
+
+    public PanelLayout Layout { get; init; } = PanelLayout.SamplesInRows;
+
+    /// <summary>Optional CSV/TSV sample sheet joined to the matrix on sample id.</summary>
+    public string? SampleSheetPath { get; init; }
+
+    /// <summary>The outcome column, in the sample sheet or as an annotation column of the matrix file.</summary>
+    public required string OutcomeColumn { get; init; }
+
+    public string? CohortColumn { get; init; }
+
+    public string? SubjectColumn { get; init; }
+
+    /// <summary>The class scored as positive; defaults to the smallest class.</summary>
+    public string? PositiveClass { get; init; }
+
+    /// <summary>
+    /// The sample id column of a samples-in-rows matrix (which must have it) and of the sample
+    /// sheet (its first column when it has no column of that name). Default: the first column.
+    /// With features in rows the sample ids are the header of the matrix and this names only the
+    /// sheet's id column.
+    /// </summary>
+    public string? SampleIdColumn { get; init; }
+
+    /// <summary>Other non-numeric columns of the matrix file, kept as text sample attributes.</summary>
+    public IReadOnlyList<string> AnnotationColumns { get; init; } = [];
+
+    /// <summary>Drop samples found in only one of matrix and sample sheet, with a warning, instead of stopping.</summary>
+    public bool DropUnmatchedSamples { get; init; }
+
+    /// <summary>The columns that describe samples rather than measure them: outcome, cohort, subject and annotations.</summary>
+    internal HashSet<string> SampleAttributeNames()
+    {
+        var names = new HashSet<string>(StringComparer.Ordinal) { OutcomeColumn };
+        if (CohortColumn is not null) names.Add(CohortColumn);
+        if (SubjectColumn is not null) names.Add(SubjectColumn);
+        foreach (var name in AnnotationColumns) names.Add(name);
+        return names;
+    }
+}

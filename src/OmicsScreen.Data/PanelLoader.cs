@@ -1,0 +1,74 @@
+using System.Security.Cryptography;
+using OmicsScreen.Data.Assembly;
+using OmicsScreen.Data.Columnar;
+using OmicsScreen.Data.Inspection;
+using OmicsScreen.Data.Text;
+
+namespace OmicsScreen.Data;
+
+/// <summary>
+/// Loads a panel from a matrix file (CSV, TSV, Parquet, Arrow IPC file or stream; format from
+/// its first bytes) and an optional sample sheet: read, join, build outcome and groupings,
+/// inspect.
+/// </summary>
+/// <remarks>
+/// Structural problems that prevent building a panel throw <see cref="PanelInputException"/>.
+/// Problems a user should see together (constant features, heavy missingness, tiny classes)
+/// become findings of the inspection; <see cref="LoadedPanel.EnsureScreenable"/> turns its
+/// Error findings into an exception.
+/// </remarks>
+public static class PanelLoader
+{
+    public static LoadedPanel Load(PanelLoadOptions options, CancellationToken ct = default)
+    {
+        ArgumentNullException.ThrowIfNull(options);
+        if (!File.Exists(options.MatrixPath))
+            throw PanelInputException.At(options.MatrixPath, null, null, "does not exist.", "Check the matrix path.");
+        var format = MatrixFormatDetector.Detect(options.MatrixPath);
+        // Hashing is independent of parsing, so it runs on another core meanwhile.
+        var matrixRecord = Task.Run(() => Record(options.MatrixPath), ct);
+        RawMatrix raw;
+        try
+        {
+            raw = ReadMatrix(options, format, ct);
+        }
+        catch
+        {
+            // The read error is the one to report; observe a hashing failure so it is not rethrown later.
+            _ = matrixRecord.ContinueWith(static t => _ = t.Exception, CancellationToken.None,
+                TaskContinuationOptions.OnlyOnFaulted, TaskScheduler.Default);
+            throw;
+        }
+        var sheet = options.SampleSheetPath is { } sheetPath ? SampleSheetReader.Read(sheetPath) : null;
+        ct.ThrowIfCancellationRequested();
+
+        var findings = new List<InspectionFinding>();
+        var (panel, dropped) = PanelAssembler.Assemble(raw, sheet, options, findings);
+        var inspection = PanelInspector.Inspect(panel, raw.Source, options.SampleSheetPath, dropped, options, findings);
+        var inputs = new List<InputFileRecord> { matrixRecord.GetAwaiter().GetResult() };
+        if (options.SampleSheetPath is { } path) inputs.Add(Record(path));
+        return new LoadedPanel(panel, inspection, inputs);
+    }
+
+    private static RawMatrix ReadMatrix(PanelLoadOptions options, MatrixFileFormat format, CancellationToken ct)
+    {
+        switch (format)
+        {
+            case MatrixFileFormat.DelimitedText:
+                return DelimitedMatrixReader.Read(options.MatrixPath, options, ct);
+            case MatrixFileFormat.Parquet:
+                using (var table = ParquetTable.Open(options.MatrixPath))
+                    return ColumnarMatrixReader.Read(table, options, ct);
+            default:
+                using (var table = ArrowTable.Open(options.MatrixPath, format, ct))
+                    return ColumnarMatrixReader.Read(table, options, ct);
+        }
+    }
+
+    private static InputFileRecord Record(string path)
+    {
+        using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1 << 16, FileOptions.SequentialScan);
+        var hash = SHA256.HashData(stream);
+        return new InputFileRecord(path, stream.Length, Convert.ToHexStringLower(hash));
+    }
+}

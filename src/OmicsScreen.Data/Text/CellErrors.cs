@@ -1,0 +1,23 @@
+namespace OmicsScreen.Data.Text;
+
+/// <summary>The error for a feature cell that is not a measurement, worded the same for every format.</summary>
+internal static class CellErrors
+{
+    public static PanelInputException NotAMeasurement(string filePath, long line, string column, string feature,
+        ReadOnlySpan<char> text, CellKind kind, bool isTableRow = false)
+    {
+        string shown = Display.Name(text);
+        string where = column == feature ? "" : $" (feature '{Display.Name(feature)}')";
+        if (kind == CellKind.Infinite)
+            return PanelInputException.At(filePath, line, column,
+                $"found '{shown}'{where}, an infinite value or a number beyond the float32 range (about ±3.4e38).",
+                "Infinity is not a measurement: put the measured value, NA when it is missing, or a below-detection token such as <LOD.",
+                isTableRow: isTableRow);
+        string fix = "Correct the cell. If this column describes samples rather than measuring them, name it as an annotation column (or as the outcome, cohort or subject column).";
+        if (text.Contains(',') && !text.Contains('.'))
+            fix = "Write decimals with a point (1.5, not 1,5) and load again.";
+        return PanelInputException.At(filePath, line, column,
+            $"found '{shown}'{where}, which is not a number, a missing-value token (empty, NA, NaN, N/A, null) or a below-detection token (<LOD, <LLOQ, <LOQ, <0.05, BLQ, BLOD).",
+            fix, isTableRow: isTableRow);
+    }
+}

@@ -1,0 +1,253 @@
+using System.Runtime.CompilerServices;
+using nietras.SeparatedValues;
+using OmicsScreen.Data.Assembly;
+
+namespace OmicsScreen.Data.Text;
+
+/// <summary>
+/// Streams a CSV/TSV matrix once with Sep, parsing rows on all cores and numbers from spans with
+/// csFastFloat straight into feature-major columns, in either orientation.
+/// </summary>
+/// <remarks>
+/// The columns are sized from an upper bound on the row count (a count of line breaks); each
+/// non-blank row claims the next free slot with an atomic counter, so workers never share a cell
+/// and the file is never held as text. Results come back in file order (Sep's ordered parallel
+/// enumeration); the reading thread validates them in that order, remembers each row's slot, and
+/// finally gathers the slots into file order, a column at a time.
+/// </remarks>
+internal static class DelimitedMatrixReader
+{
+    private const int CancellationCheckRows = 64;
+
+    public static RawMatrix Read(string path, PanelLoadOptions options, CancellationToken ct)
+    {
+        char delimiter = DelimiterDetector.Detect(path);
+        using var text = DelimiterDetector.OpenText(path);
+        using var reader = Sep.New(delimiter)
+            .Reader(o => o with { HasHeader = false, Unescape = true, DisableColCountCheck = true })
+            .From(text);
+        var source = new MatrixSource(path, MatrixFileFormat.DelimitedText, delimiter, options.Layout);
+        var header = ReadHeader(reader, path);
+        int rowBound = Math.Max(1, LineCounter.UpperBoundOfLines(path) - 1);
+        var slots = new SlotCounter();
+        return options.Layout == PanelLayout.SamplesInRows
+            ? ReadSamplesInRows(reader, header, slots, rowBound, source, options, ct)
+            : ReadFeaturesInRows(reader, header, slots, rowBound, source, options, ct);
+    }
+
+    private static RawMatrix ReadSamplesInRows(SepReader reader, string[] header, SlotCounter slots, int rowBound,
+        MatrixSource source, PanelLoadOptions options, CancellationToken ct)
+    {
+        string path = source.Path;
+        var roles = SampleColumnRoles.Resolve(header, options, path, isTableRow: false);
+        var attributeNames = options.SampleAttributeNames();
+        var columns = new FeatureColumns(roles.FeatureColumns.Length, rowBound);
+
+        var attributes = new List<string>[roles.AttributeColumns.Length];
+        for (int a = 0; a < attributes.Length; a++) attributes[a] = [];
+        var sampleIds = new List<string>();
+        var sampleLines = new List<long>();
+        var sampleSlots = new List<int>();
+        var rows = reader.ParallelEnumerate(row => ParseSampleRow(row, header.Length, slots, roles, attributeNames, columns),
+            Environment.ProcessorCount);
+        foreach (var row in rows)
+        {
+            if (row.IsBlank) continue;
+            if ((sampleIds.Count & (CancellationCheckRows - 1)) == 0) ct.ThrowIfCancellationRequested();
+            CheckRow(row, header.Length, path);
+            NameRules.Check(row.Label, "sample id", path, row.Line, header[roles.IdColumn]);
+            if (attributeNames.Contains(row.Label))
+                throw PanelInputException.At(path, row.Line, header[roles.IdColumn],
+                    $"the row label '{Display.Name(row.Label)}' is a sample attribute name, so the file looks like features in rows.",
+                    "Load it with the layout FeaturesInRows.");
+            if (row.FailedIndex >= 0)
+            {
+                string feature = roles.FeatureNames[row.FailedIndex];
+                throw CellErrors.NotAMeasurement(path, row.Line, feature, feature, row.FailedText, row.FailedKind);
+            }
+            for (int a = 0; a < attributes.Length; a++) attributes[a].Add(row.Texts![a]);
+            sampleIds.Add(row.Label);
+            sampleLines.Add(row.Line);
+            sampleSlots.Add(row.Slot);
+        }
+        if (sampleIds.Count == 0) throw HeaderOnly(path);
+        NameRules.CheckUnique(sampleIds, "sample id", path,
+            "Make sample ids unique (technical replicates need their own ids; name their subject in a subject column).");
+
+        var annotations = new Dictionary<string, string[]>(StringComparer.Ordinal);
+        var otherColumns = new List<string> { header[roles.IdColumn] };
+        for (int a = 0; a < attributes.Length; a++)
+        {
+            annotations[header[roles.AttributeColumns[a]]] = attributes[a].ToArray();
+            otherColumns.Add(header[roles.AttributeColumns[a]]);
+        }
+        var matrix = columns.ToMatrix(roles.FeatureNames, sampleIds, sampleSlots: sampleSlots.ToArray());
+        return new RawMatrix(source, matrix, annotations, sampleLines.ToArray(), otherColumns);
+    }
+
+    /// <summary>Runs on a worker: stores one sample's cells in its slot, stopping at the first bad cell.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static ParsedRow ParseSampleRow(SepReader.Row row, int fieldCount, SlotCounter slots, SampleColumnRoles roles,
+        HashSet<string> attributeNames, FeatureColumns columns)
+    {
+        var parsed = Start(row, slots, columns.SampleCapacity);
+        if (!parsed.CanHoldCells(fieldCount)) return parsed;
+        int slot = parsed.Slot;
+        parsed.Label = row[roles.IdColumn].Span.Trim().ToString();
+        var texts = new string[roles.AttributeColumns.Length];
+        for (int a = 0; a < texts.Length; a++) texts[a] = row[roles.AttributeColumns[a]].Span.Trim().ToString();
+        parsed.Texts = texts;
+        if (attributeNames.Contains(parsed.Label)) return parsed;
+
+        int[] featureColumns = roles.FeatureColumns;
+        // Invariant: features 0..f-1 of this sample are stored; the row's cells are only spans.
+        for (int f = 0; f < featureColumns.Length; f++)
+        {
+            var cell = row[featureColumns[f]].Span;
+            var kind = CellText.Classify(cell, out float value);
+            if (!columns.Store(f, slot, kind, value))
+            {
+                parsed.Fail(f, cell, kind);
+                break;
+            }
+        }
+        return parsed;
+    }
+
+    private static RawMatrix ReadFeaturesInRows(SepReader reader, string[] header, SlotCounter slots, int rowBound,
+        MatrixSource source, PanelLoadOptions options, CancellationToken ct)
+    {
+        string path = source.Path;
+        if (header.Length < 2)
+            throw PanelInputException.At(path, 1, null, "has a single column, so there are no sample columns.",
+                "Check the delimiter, or load the file with the layout SamplesInRows.");
+        var sampleIds = header[1..];
+        for (int s = 0; s < sampleIds.Length; s++)
+            NameRules.Check(sampleIds[s], "sample id", path, 1, FormattableString.Invariant($"#{s + 2}"));
+        NameRules.CheckUnique(sampleIds, "sample id", path,
+            "Make sample ids in the header unique (technical replicates need their own ids).");
+
+        var attributeNames = options.SampleAttributeNames();
+        var columns = new FeatureColumns(rowBound, sampleIds.Length);
+        var featureNames = new List<string>();
+        var featureSlots = new List<int>();
+        var annotations = new Dictionary<string, string[]>(StringComparer.Ordinal);
+        int rowCount = 0;
+        var rows = reader.ParallelEnumerate(row => ParseFeatureRow(row, header.Length, slots, attributeNames, columns),
+            Environment.ProcessorCount);
+        foreach (var row in rows)
+        {
+            if (row.IsBlank) continue;
+            if ((rowCount++ & (CancellationCheckRows - 1)) == 0) ct.ThrowIfCancellationRequested();
+            CheckRow(row, header.Length, path);
+            NameRules.Check(row.Label, "feature name", path, row.Line, header[0]);
+            if (row.Texts is { } values)
+            {
+                if (!annotations.TryAdd(row.Label, values))
+                    throw PanelInputException.At(path, row.Line, header[0],
+                        $"the sample attribute row '{Display.Name(row.Label)}' occurs twice.", "Keep one row per sample attribute.");
+                continue;
+            }
+            if (row.FailedIndex >= 0)
+                throw CellErrors.NotAMeasurement(path, row.Line, sampleIds[row.FailedIndex], row.Label, row.FailedText,
+                    row.FailedKind);
+            featureNames.Add(row.Label);
+            featureSlots.Add(row.Slot);
+        }
+        if (rowCount == 0) throw HeaderOnly(path);
+        if (featureNames.Count == 0)
+            throw PanelInputException.At(path, null, null, "has only sample attribute rows and no feature rows.",
+                "Add the measurement rows, or check the layout.");
+        NameRules.CheckUnique(featureNames, "feature name", path,
+            "Make feature names unique (for example add the assay or isoform to the name) and load again.");
+        var matrix = columns.ToMatrix(featureNames, sampleIds, featureSlots: featureSlots.ToArray());
+        return new RawMatrix(source, matrix, annotations, new long[sampleIds.Length], [header[0]]);
+    }
+
+    /// <summary>Runs on a worker: stores one feature's cells in its column slot, or keeps an attribute row as text.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static ParsedRow ParseFeatureRow(SepReader.Row row, int fieldCount, SlotCounter slots, HashSet<string> attributeNames,
+        FeatureColumns columns)
+    {
+        var parsed = Start(row, slots, columns.FeatureCount);
+        if (!parsed.CanHoldCells(fieldCount)) return parsed;
+        int slot = parsed.Slot;
+        parsed.Label = row[0].Span.Trim().ToString();
+        int sampleCount = fieldCount - 1;
+        if (attributeNames.Contains(parsed.Label))
+        {
+            var texts = new string[sampleCount];
+            for (int s = 0; s < texts.Length; s++) texts[s] = row[s + 1].Span.Trim().ToString();
+            parsed.Texts = texts;
+            return parsed;
+        }
+        for (int s = 0; s < sampleCount; s++)
+        {
+            var cell = row[s + 1].Span;
+            var kind = CellText.Classify(cell, out float value);
+            if (!columns.Store(slot, s, kind, value))
+            {
+                parsed.Fail(s, cell, kind);
+                break;
+            }
+        }
+        return parsed;
+    }
+
+    /// <summary>Claims the next slot for a non-blank row and records where the row is.</summary>
+    private static ParsedRow Start(SepReader.Row row, SlotCounter slots, int slotCapacity)
+    {
+        if (IsBlank(row)) return new ParsedRow { IsBlank = true };
+        int slot = slots.Next();
+        return new ParsedRow { Line = FirstLine(row), FieldCount = row.ColCount, Slot = slot, BeyondCapacity = slot >= slotCapacity };
+    }
+
+    /// <summary>
+    /// The 1-based line a row starts on. Under parallel enumeration Sep 0.17 reports a wrong
+    /// start line for the first row of each batch, but the end line is always right; a quoted
+    /// field may hold line breaks, which are counted back.
+    /// </summary>
+    private static long FirstLine(SepReader.Row row) =>
+        row.LineNumberToExcl - 1 - row.Span.Count('\n');
+
+    private static string[] ReadHeader(SepReader reader, string path)
+    {
+        // Not foreach: leaving a foreach early would dispose the reader before the data rows.
+        while (reader.MoveNext())
+        {
+            var row = reader.Current;
+            if (IsBlank(row)) continue;
+            var header = new string[row.ColCount];
+            for (int c = 0; c < header.Length; c++) header[c] = row[c].Span.Trim().ToString();
+            return header;
+        }
+        throw PanelInputException.At(path, null, null, "holds no text rows (it is blank).",
+            "Export the matrix again; a matrix file needs a header row and at least one data row.");
+    }
+
+    /// <summary>Hands out row slots to parsing workers, each exactly once.</summary>
+    private sealed class SlotCounter
+    {
+        private int _next = -1;
+
+        public int Next() => Interlocked.Increment(ref _next);
+    }
+
+    private static PanelInputException HeaderOnly(string path) =>
+        PanelInputException.At(path, null, null, "has a header row but no data rows.",
+            "Export the matrix again with its data; check that the export did not stop early.");
+
+    private static bool IsBlank(SepReader.Row row) => row.ColCount == 1 && row[0].Span.Trim().IsEmpty;
+
+    private static void CheckRow(ParsedRow row, int expected, string path)
+    {
+        if (row.FieldCount != expected)
+            throw PanelInputException.At(path, row.Line, null,
+                FormattableString.Invariant($"the row has {row.FieldCount} fields but the header has {expected}."),
+                "Fix the row (a stray delimiter, or an unquoted text field containing one); every row needs one field per header column.");
+        if (row.BeyondCapacity)
+            throw PanelInputException.At(path, row.Line, null,
+                "has more rows than line breaks, which only a damaged or unusually encoded file can have.",
+                "Save the file again as UTF-8 text with LF or CRLF line endings.");
+    }
+}

@@ -1,0 +1,55 @@
+using nietras.SeparatedValues;
+
+namespace OmicsScreen.Data.Text;
+
+/// <summary>Reads a CSV/TSV sample sheet as text, every value trimmed, with the same delimiter rules as matrices.</summary>
+/// <remarks>
+/// Every column stays text: sample ids such as "007" must not become numbers, and the outcome
+/// may be coded 0/1. A general data-frame loader would infer column types, so Sep is used here too.
+/// </remarks>
+internal static class SampleSheetReader
+{
+    public static SampleSheet Read(string path)
+    {
+        if (!File.Exists(path))
+            throw PanelInputException.At(path, null, null, "does not exist.", "Check the sample sheet path.");
+        if (new FileInfo(path).Length == 0)
+            throw PanelInputException.At(path, null, null, "is empty (0 bytes).",
+                "Give a sample sheet with a header row (sample id, outcome, ...) and one row per sample.");
+        char delimiter = DelimiterDetector.Detect(path);
+        using var text = DelimiterDetector.OpenText(path);
+        using var reader = Sep.New(delimiter)
+            .Reader(o => o with { HasHeader = false, Unescape = true, DisableColCountCheck = true })
+            .From(text);
+        string[]? header = null;
+        List<string>[] columns = [];
+        var lines = new List<long>();
+        foreach (var row in reader)
+        {
+            if (row.ColCount == 1 && row[0].Span.Trim().IsEmpty) continue;
+            if (header is null)
+            {
+                header = new string[row.ColCount];
+                for (int c = 0; c < header.Length; c++) header[c] = row[c].Span.Trim().ToString();
+                columns = new List<string>[header.Length];
+                for (int c = 0; c < columns.Length; c++) columns[c] = [];
+                continue;
+            }
+            if (row.ColCount != header.Length)
+                throw PanelInputException.At(path, row.LineNumberFrom, null,
+                    FormattableString.Invariant($"the row has {row.ColCount} fields but the header has {header.Length}."),
+                    "Fix the row (a stray delimiter, or an unquoted text field containing one); every row needs one field per header column.");
+            for (int c = 0; c < header.Length; c++) columns[c].Add(row[c].Span.Trim().ToString());
+            lines.Add(row.LineNumberFrom);
+        }
+        if (header is null)
+            throw PanelInputException.At(path, null, null, "holds no text rows (it is blank).",
+                "Give a sample sheet with a header row and one row per sample.");
+        if (lines.Count == 0)
+            throw PanelInputException.At(path, null, null, "has a header row but no sample rows.",
+                "Add one row per sample to the sample sheet.");
+        var arrays = new string[columns.Length][];
+        for (int c = 0; c < arrays.Length; c++) arrays[c] = columns[c].ToArray();
+        return new SampleSheet(path, delimiter, header, arrays, lines.ToArray());
+    }
+}

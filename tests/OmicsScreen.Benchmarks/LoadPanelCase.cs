@@ -1,0 +1,132 @@
+using System.Diagnostics;
+using System.Globalization;
+using System.Text;
+using OmicsScreen.Data;
+using OmicsScreen.Data.Writing;
+
+namespace OmicsScreen.Benchmarks;
+
+/// <summary>
+/// Loads a synthetic samples-in-rows panel (sample id, outcome, then features) from CSV, Parquet
+/// or Arrow IPC through <see cref="PanelLoader"/>, the path the CLI takes. The files are
+/// generated once, deterministically, and cached in the work folder.
+/// </summary>
+public sealed class LoadPanelCase : IBenchmarkCase
+{
+    private readonly int _sampleCount;
+    private readonly int _featureCount;
+    private readonly MatrixFileFormat _format;
+    private readonly PanelLayout _layout;
+
+    /// <param name="layout">The orientation of the Parquet/Arrow copy; the CSV always has samples in rows.</param>
+    public LoadPanelCase(int sampleCount, int featureCount, MatrixFileFormat format,
+        PanelLayout layout = PanelLayout.SamplesInRows)
+    {
+        _sampleCount = sampleCount;
+        _featureCount = featureCount;
+        _format = format;
+        _layout = layout;
+    }
+
+    public string Name => $"load-{FormatWord}{(_layout == PanelLayout.FeaturesInRows ? "-features" : "")}-{_sampleCount}x{_featureCount}";
+
+    private string Suffix => _layout == PanelLayout.FeaturesInRows ? "-features" : "";
+
+    private string FormatWord => _format switch
+    {
+        MatrixFileFormat.DelimitedText => "csv",
+        MatrixFileFormat.Parquet => "parquet",
+        MatrixFileFormat.ArrowFile => "arrow",
+        _ => "arrow-stream",
+    };
+
+    private string CsvPath(string work) => Path.Combine(work, $"panel-{_sampleCount}x{_featureCount}.csv");
+
+    private string FilePath(string work) => _format switch
+    {
+        MatrixFileFormat.DelimitedText => CsvPath(work),
+        MatrixFileFormat.Parquet => Path.Combine(work, $"panel-{_sampleCount}x{_featureCount}{Suffix}.parquet"),
+        MatrixFileFormat.ArrowFile => Path.Combine(work, $"panel-{_sampleCount}x{_featureCount}{Suffix}.arrow"),
+        _ => Path.Combine(work, $"panel-{_sampleCount}x{_featureCount}{Suffix}.arrows"),
+    };
+
+    private static PanelLoadOptions Options(string path, PanelLayout layout = PanelLayout.SamplesInRows) =>
+        new() { MatrixPath = path, OutcomeColumn = "group", Layout = layout };
+
+    public void Prepare(string workDirectory)
+    {
+        string csv = CsvPath(workDirectory);
+        if (!File.Exists(csv)) WriteCsv(csv);
+        string path = FilePath(workDirectory);
+        if (File.Exists(path)) return;
+        var panel = PanelLoader.Load(Options(csv)).Panel;
+        // Features in rows are written without the outcome row, so that sample columns stay numeric;
+        // the loader then needs a sample sheet, written beside the file.
+        bool withAttributes = _layout == PanelLayout.SamplesInRows;
+        if (!withAttributes) WriteSheet(panel, SheetPath(workDirectory));
+        if (_format == MatrixFileFormat.Parquet)
+            ParquetPanelWriter.Write(panel, path, _layout, includeSampleAttributes: withAttributes);
+        else
+            ArrowPanelWriter.Write(panel, path, _layout, asStream: _format == MatrixFileFormat.ArrowStream,
+                includeSampleAttributes: withAttributes);
+    }
+
+    private string SheetPath(string work) => Path.Combine(work, $"sheet-{_sampleCount}.csv");
+
+    private static void WriteSheet(Engine.Panels.Panel panel, string path)
+    {
+        var text = new StringBuilder("sample_id,group\n");
+        for (int s = 0; s < panel.SampleCount; s++)
+            text.Append(panel.Matrix.SampleIds[s]).Append(',')
+                .Append(panel.Outcome.ClassNames[panel.Outcome.SampleClasses[s]]).Append('\n');
+        File.WriteAllText(path, text.ToString());
+    }
+
+    /// <summary>Log-normal-like intensities with 7 significant digits and 1% missing cells; fixed seed.</summary>
+    private void WriteCsv(string path)
+    {
+        var random = new Random(12345);
+        string temporary = path + ".tmp";
+        using (var writer = new StreamWriter(temporary, false, new UTF8Encoding(false), 1 << 20))
+        {
+            var line = new StringBuilder("sample_id,group");
+            for (int f = 0; f < _featureCount; f++) line.Append(CultureInfo.InvariantCulture, $",F{f + 1:00000}");
+            writer.WriteLine(line);
+            for (int s = 0; s < _sampleCount; s++)
+            {
+                line.Clear().Append(CultureInfo.InvariantCulture, $"S{s + 1:00000},{(s % 2 == 0 ? "case" : "control")}");
+                for (int f = 0; f < _featureCount; f++)
+                {
+                    line.Append(',');
+                    if (random.Next(100) == 0) line.Append("NA");
+                    else line.Append(Math.Exp(random.NextDouble() * 8 - 2).ToString("G7", CultureInfo.InvariantCulture));
+                }
+                writer.WriteLine(line);
+            }
+        }
+        File.Move(temporary, path, overwrite: true);
+    }
+
+    public IReadOnlyList<string> Run(string workDirectory)
+    {
+        string path = FilePath(workDirectory);
+        var options = Options(path, _layout);
+        if (_layout == PanelLayout.FeaturesInRows) options = options with { SampleSheetPath = SheetPath(workDirectory) };
+        var processorStart = Process.GetCurrentProcess().TotalProcessorTime;
+        var watch = Stopwatch.StartNew();
+        var loaded = PanelLoader.Load(options);
+        watch.Stop();
+        double processorSeconds = (Process.GetCurrentProcess().TotalProcessorTime - processorStart).TotalSeconds;
+        double megabytes = new FileInfo(path).Length / 1048576.0;
+        double matrixMegabytes = 4.0 * loaded.Panel.SampleCount * loaded.Panel.FeatureCount / 1048576.0;
+        return
+        [
+            string.Create(CultureInfo.InvariantCulture, $"file_mb={megabytes:F1}"),
+            string.Create(CultureInfo.InvariantCulture, $"mb_per_s={megabytes / watch.Elapsed.TotalSeconds:F0}"),
+            // On a shared machine wall time swings with load; processor time does not.
+            string.Create(CultureInfo.InvariantCulture, $"cpu_s={processorSeconds:F3}"),
+            string.Create(CultureInfo.InvariantCulture, $"matrix_mb={matrixMegabytes:F1}"),
+            string.Create(CultureInfo.InvariantCulture, $"missing={loaded.Inspection.MissingFraction:F4}"),
+        ];
+    }
+}
