@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using OmicsScreen.Engine.Panels;
 
 namespace OmicsScreen.Engine.Binning;
@@ -52,6 +53,7 @@ public sealed class BinMapper
     }
 
     /// <summary>Finds one feature's bins and writes its codes; sortScratch holds at least one value per sample.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal FeatureBins BinFeature(ReadOnlySpan<float> values, ReadOnlySpan<CellState> states, Span<byte> codes, Span<float> sortScratch)
     {
         int measuredCount = 0;

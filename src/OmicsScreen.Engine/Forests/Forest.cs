@@ -38,6 +38,9 @@ public sealed class Forest
 
     public TreeOutOfBag OutOfBag(int index) => _outOfBag[index];
 
+    /// <summary>The trees in order.</summary>
+    public IEnumerable<DecisionTree> Enumerate() => _trees;
+
     /// <summary>Joins batches of trees of one forest, which must cover consecutive tree ranges.</summary>
     public static Forest Combine(IReadOnlyList<Forest> batches)
     {

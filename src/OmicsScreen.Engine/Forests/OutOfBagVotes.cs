@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using OmicsScreen.Engine.Metrics;
 using OmicsScreen.Engine.Panels;
 
@@ -19,6 +20,7 @@ public sealed class OutOfBagVotes
     private readonly double[] _errorCurve;
     private readonly double[] _perClassError;
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public OutOfBagVotes(Forest forest, ClassOutcome outcome)
     {
         ArgumentNullException.ThrowIfNull(forest);

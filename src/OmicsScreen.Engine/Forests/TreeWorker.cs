@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Randomness;
 using OmicsScreen.Engine.Sampling;
@@ -15,6 +16,7 @@ internal sealed class TreeWorker(int sampleCount, int maxRows, int featureCount,
     private readonly double[] _rowWeights = new double[maxRows];
     private readonly TreeBuilder _builder = new(Math.Max(1, maxRows), featureCount, maxCodeCount, classCount);
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public (DecisionTree, TreeOutOfBag) GrowTree(BinnedMatrix matrix, int[] classes, double[]? sampleWeights,
         SamplingPlan plan, ForestOptions options, int tree)
     {

@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using OmicsScreen.Engine.Randomness;
 
 namespace OmicsScreen.Engine.Sampling;
@@ -78,6 +79,7 @@ internal sealed class SamplingPlan
     }
 
     /// <summary>Bootstrap draws drawCount rows with replacement; subsampling draws fraction x drawCount without.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private void DrawRows(int[] rows, int drawCount, ref Xoshiro256StarStar generator, Span<int> counts, Span<int> scratch)
     {
         if (_options.Drawing == SampleDrawing.Bootstrap)
@@ -97,6 +99,7 @@ internal sealed class SamplingPlan
         }
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private void DrawGroups(ref Xoshiro256StarStar generator, Span<int> counts, Span<int> scratch)
     {
         int groupCount = _groupStarts.Length - 1;

@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Panels;
 
@@ -109,6 +110,7 @@ public sealed class DecisionTree
     }
 
     /// <summary>The leaf a sample of a binned matrix reaches.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public int LeafOf(BinnedMatrix matrix, int sample)
     {
         int node = 0;
@@ -124,6 +126,7 @@ public sealed class DecisionTree
     /// The leaf a sample reaches when its code of one feature is replaced, without copying
     /// anything: what permutation importance needs to score a permuted feature.
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public int LeafOf(BinnedMatrix matrix, int sample, int replacedFeature, byte replacementCode)
     {
         int node = 0;
@@ -137,6 +140,7 @@ public sealed class DecisionTree
     }
 
     /// <summary>The leaf a sample of a raw matrix (same features as the training panel) reaches.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public int LeafOf(FeatureMatrix matrix, int sample)
     {
         int node = 0;

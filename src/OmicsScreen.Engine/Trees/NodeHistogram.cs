@@ -1,49 +1,55 @@
+using System.Runtime.CompilerServices;
+
 namespace OmicsScreen.Engine.Trees;
 
 /// <summary>
-/// The class weights and row counts of one node's samples for one feature, compacted to the
-/// value bins that hold any sample (in code order) plus the missing and below-detection groups.
-/// Per-thread scratch sized once for the largest code count; reused by every node of every tree.
+/// The class weights and row counts of one node's samples for one feature, by code, with the
+/// list of value codes that hold any sample (in increasing order). Per-thread scratch sized
+/// once for the largest code count; reused by every node of every tree.
 /// </summary>
 /// <remarks>
-/// Each entry is <see cref="Stride"/> doubles: the weight of each class, then the row count.
-/// Two ways to fill it give the same entries: a full histogram over all codes (cost rows + codes)
-/// for large nodes, and sorting packed (code, position) keys (cost rows·log rows) for small nodes,
-/// where clearing and scanning hundreds of empty bins would dominate.
+/// Each code's entry is <see cref="Stride"/> doubles at code·Stride: the weight of each class,
+/// then the row count. Two ways to fill it give the same entries for every listed code and for
+/// the missing and below-detection codes: a full histogram over all codes (cost rows + codes)
+/// for large nodes, and sorting packed (code, position) keys (cost rows·log rows) for small
+/// nodes, where clearing and scanning hundreds of empty bins would dominate. Entries of unlisted
+/// value codes are stale and never read.
 /// </remarks>
 internal sealed class NodeHistogram
 {
-    private readonly double[] _full;
-    private readonly double[] _values;
+    private readonly double[] _entries;
     private readonly byte[] _valueCodes;
-    private readonly double[] _missing;
-    private readonly double[] _belowDetection;
     private readonly uint[] _sortKeys;
 
     public NodeHistogram(int classCount, int maxCodeCount, int maxRows)
     {
         ClassCount = classCount;
         Stride = classCount + 1;
-        _full = new double[maxCodeCount * Stride];
-        _values = new double[maxCodeCount * Stride];
+        _entries = new double[maxCodeCount * Stride];
         _valueCodes = new byte[maxCodeCount];
-        _missing = new double[Stride];
-        _belowDetection = new double[Stride];
         _sortKeys = new uint[maxRows];
     }
 
     public int ClassCount { get; }
     public int Stride { get; }
 
-    /// <summary>Number of non-empty value bins.</summary>
+    /// <summary>Number of value codes holding any sample.</summary>
     public int ValueEntryCount { get; private set; }
 
-    public ReadOnlySpan<double> ValueEntry(int entry) => _values.AsSpan(entry * Stride, Stride);
-    public byte ValueCode(int entry) => _valueCodes[entry];
-    public ReadOnlySpan<double> Missing => _missing;
-    public ReadOnlySpan<double> BelowDetection => _belowDetection;
-    public double MissingRows => _missing[ClassCount];
-    public double BelowDetectionRows => _belowDetection[ClassCount];
+    /// <summary>The missing code of the feature last filled (= its value bin count).</summary>
+    public int MissingCode { get; private set; }
+
+    /// <summary>Every code's entry, code-major; read only listed codes and the two unmeasured codes.</summary>
+    public ReadOnlySpan<double> Entries => _entries;
+
+    /// <summary>The non-empty value codes in increasing order.</summary>
+    public ReadOnlySpan<byte> ValueCodes => _valueCodes.AsSpan(0, ValueEntryCount);
+
+    public ReadOnlySpan<double> Entry(int code) => _entries.AsSpan(code * Stride, Stride);
+    public ReadOnlySpan<double> Missing => Entry(MissingCode);
+    public ReadOnlySpan<double> BelowDetection => Entry(MissingCode + 1);
+    public double MissingRows => _entries[MissingCode * Stride + ClassCount];
+    public double BelowDetectionRows => _entries[(MissingCode + 1) * Stride + ClassCount];
 
     /// <summary>True when all the node's samples share one code, so no split on this feature exists.</summary>
     public bool IsConstant =>
@@ -60,47 +66,46 @@ internal sealed class NodeHistogram
         else FillByHistogram(codes, rows, rowClasses, rowWeights, valueBinCount);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal void FillByHistogram(ReadOnlySpan<byte> codes, ReadOnlySpan<int> rows, ReadOnlySpan<int> rowClasses,
         ReadOnlySpan<double> rowWeights, int valueBinCount)
     {
         int stride = Stride;
         int classCount = ClassCount;
-        var full = _full.AsSpan(0, (valueBinCount + 2) * stride);
-        full.Clear();
+        MissingCode = valueBinCount;
+        var entries = _entries.AsSpan(0, (valueBinCount + 2) * stride);
+        entries.Clear();
         for (int i = 0; i < rows.Length; i++)
         {
             int at = codes[rows[i]] * stride;
-            full[at + rowClasses[i]] += rowWeights[i];
-            full[at + classCount] += 1;
+            entries[at + rowClasses[i]] += rowWeights[i];
+            entries[at + classCount] += 1;
         }
-        int entries = 0;
+        int listed = 0;
+        var valueCodes = _valueCodes.AsSpan();
         for (int code = 0; code < valueBinCount; code++)
-        {
-            int at = code * stride;
-            if (full[at + classCount] == 0) continue;
-            full.Slice(at, stride).CopyTo(_values.AsSpan(entries * stride, stride));
-            _valueCodes[entries++] = (byte)code;
-        }
-        ValueEntryCount = entries;
-        full.Slice(valueBinCount * stride, stride).CopyTo(_missing);
-        full.Slice((valueBinCount + 1) * stride, stride).CopyTo(_belowDetection);
+            if (entries[code * stride + classCount] != 0) valueCodes[listed++] = (byte)code;
+        ValueEntryCount = listed;
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal void FillBySorting(ReadOnlySpan<byte> codes, ReadOnlySpan<int> rows, ReadOnlySpan<int> rowClasses,
         ReadOnlySpan<double> rowWeights, int valueBinCount)
     {
         int stride = Stride;
         int classCount = ClassCount;
+        MissingCode = valueBinCount;
         var keys = _sortKeys.AsSpan(0, rows.Length);
         // Key = code in the top byte, position in the node below it (positions < 2^24), so the
         // sort groups equal codes and keeps the result independent of the sort's stability.
         for (int i = 0; i < rows.Length; i++) keys[i] = ((uint)codes[rows[i]] << 24) | (uint)i;
         keys.Sort();
-        Array.Clear(_missing);
-        Array.Clear(_belowDetection);
-        int entries = 0;
+        var entries = _entries.AsSpan();
+        entries.Slice(valueBinCount * stride, 2 * stride).Clear();
+        var valueCodes = _valueCodes.AsSpan();
+        int listed = 0;
         int previousCode = -1;
-        Span<double> target = default;
+        int at = 0;
         foreach (uint key in keys)
         {
             int code = (int)(key >> 24);
@@ -108,17 +113,16 @@ internal sealed class NodeHistogram
             if (code != previousCode)
             {
                 previousCode = code;
+                at = code * stride;
                 if (code < valueBinCount)
                 {
-                    target = _values.AsSpan(entries * stride, stride);
-                    target.Clear();
-                    _valueCodes[entries++] = (byte)code;
+                    entries.Slice(at, stride).Clear();
+                    valueCodes[listed++] = (byte)code;
                 }
-                else target = code == valueBinCount ? _missing : _belowDetection;
             }
-            target[rowClasses[position]] += rowWeights[position];
-            target[classCount] += 1;
+            entries[at + rowClasses[position]] += rowWeights[position];
+            entries[at + classCount] += 1;
         }
-        ValueEntryCount = entries;
+        ValueEntryCount = listed;
     }
 }

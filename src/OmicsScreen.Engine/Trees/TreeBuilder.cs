@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Randomness;
 
@@ -49,6 +50,7 @@ internal sealed class TreeBuilder
     /// Grows a tree on the given in-bag rows (distinct), their classes and weights (bootstrap
     /// count times any sample weight), drawing features and breaking leaf ties from generator.
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public DecisionTree Grow(BinnedMatrix matrix, ReadOnlySpan<int> rows, ReadOnlySpan<int> rowClasses,
         ReadOnlySpan<double> rowWeights, TreeOptions options, ref Xoshiro256StarStar generator)
     {
@@ -92,6 +94,7 @@ internal sealed class TreeBuilder
         return _store.ToTree();
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private SplitCandidate FindSplit(BinnedMatrix matrix, int start, int end, ReadOnlySpan<double> totals,
         int featuresPerSplit, int minLeafSize, ref Xoshiro256StarStar generator)
     {
@@ -117,6 +120,7 @@ internal sealed class TreeBuilder
     }
 
     /// <summary>Moves the rows going left to the front of the slice; returns where the right child starts.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private int Partition(ReadOnlySpan<byte> codes, int start, int end, in SplitCandidate split, byte missingCode)
     {
         bool missingLeft = (split.Routing & UnmeasuredRouting.MissingLeft) != 0;
@@ -137,6 +141,7 @@ internal sealed class TreeBuilder
         return low;
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private void SumNode(int start, int end, Span<double> totals)
     {
         totals.Clear();
