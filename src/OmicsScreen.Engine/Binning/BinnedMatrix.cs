@@ -19,6 +19,7 @@ public sealed class BinnedMatrix
     private readonly FeatureBins[] _bins;
     private readonly int[] _sourceFeatures;
     private readonly bool[] _isShadow;
+    private readonly int[] _valueBinCounts;
 
     internal BinnedMatrix(IReadOnlyList<string> featureNames, int sampleCount, byte[][] codes,
         FeatureBins[] bins, int[] sourceFeatures, bool[] isShadow)
@@ -29,6 +30,9 @@ public sealed class BinnedMatrix
         _bins = bins;
         _sourceFeatures = sourceFeatures;
         _isShadow = isShadow;
+        // Kept apart from the bins objects so split search reads one contiguous array, not one object per feature.
+        _valueBinCounts = new int[bins.Length];
+        for (int f = 0; f < bins.Length; f++) _valueBinCounts[f] = bins[f].ValueBinCount;
     }
 
     public int SampleCount { get; }
@@ -39,6 +43,9 @@ public sealed class BinnedMatrix
     public ReadOnlySpan<byte> Codes(int feature) => _codes[feature];
 
     public FeatureBins Bins(int feature) => _bins[feature];
+
+    /// <summary>The number of value bins of a feature; its missing code.</summary>
+    public int ValueBinCount(int feature) => _valueBinCounts[feature];
 
     /// <summary>The feature of the originally binned matrix this column holds (or permutes).</summary>
     public int SourceFeature(int feature) => _sourceFeatures[feature];

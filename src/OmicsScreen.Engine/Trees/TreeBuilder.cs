@@ -33,7 +33,6 @@ internal sealed class TreeBuilder
 
     public TreeBuilder(int maxRows, int featureCount, int maxCodeCount, int classCount)
     {
-        if (maxRows >= 1 << 24) throw new ArgumentException("A tree can hold at most 2^24 - 1 distinct samples.");
         _classCount = classCount;
         _stride = classCount + 1;
         _rows = new int[maxRows];
@@ -41,7 +40,7 @@ internal sealed class TreeBuilder
         _rowWeights = new double[maxRows];
         _featureOrder = new int[featureCount];
         _nodeTotals = new double[_stride];
-        _histogram = new NodeHistogram(classCount, maxCodeCount, maxRows);
+        _histogram = new NodeHistogram(classCount, maxCodeCount);
         _scanner = new SplitScanner(classCount);
         _store = new TreeStore(classCount);
     }
@@ -110,7 +109,7 @@ internal sealed class TreeBuilder
             int pick = drawn + generator.NextInt(order.Length - drawn);
             (order[drawn], order[pick]) = (order[pick], order[drawn]);
             int feature = order[drawn];
-            int valueBins = matrix.Bins(feature).ValueBinCount;
+            int valueBins = matrix.ValueBinCount(feature);
             _histogram.Fill(matrix.Codes(feature), rows, rowClasses, rowWeights, valueBins);
             if (_histogram.IsConstant) continue;
             tried++;
