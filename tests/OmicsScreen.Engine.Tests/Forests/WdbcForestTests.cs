@@ -76,7 +76,7 @@ public class WdbcForestTests(ITestOutputHelper output)
 
     internal static FeatureMatrix RemoveCells(FeatureMatrix matrix, double fraction, ulong seed)
     {
-        var generator = new Randomness.Xoshiro256StarStar(seed);
+        var generator = new Engine.Randomness.Xoshiro256StarStar(seed);
         var builder = new FeatureMatrixBuilder(matrix.FeatureNames, matrix.SampleIds);
         for (int f = 0; f < matrix.FeatureCount; f++)
             for (int s = 0; s < matrix.SampleCount; s++)
