@@ -109,13 +109,7 @@ public class SplitExactnessTests
     [Fact]
     public void Minimum_leaf_size_is_respected_by_the_chosen_split()
     {
-        var (matrix, classes) = RandomData(11, sampleCount: 60, featureCount: 4, classCount: 2, levels: 10, 0.1);
-        var binned = new BinMapper().Bin(matrix);
-        var rows = Enumerable.Range(0, classes.Length).ToArray();
-        var weights = Enumerable.Repeat(1.0, rows.Length).ToArray();
-        var generator = new Xoshiro256StarStar(1);
-        var builder = new TreeBuilder(rows.Length, binned.FeatureCount, binned.MaxCodeCount, 2);
-        var tree = builder.Grow(binned, rows, classes, weights, new TreeOptions { FeaturesPerSplit = 4, MinLeafSize = 7 }, ref generator);
+        var (binned, classes, rows, weights, tree) = GrowUnweighted(11, 60, 4, 2, 10, 0.1, new TreeOptions { FeaturesPerSplit = 4, MinLeafSize = 7 });
         for (int node = 0; node < tree.NodeCount; node++)
             if (tree.IsLeaf(node)) Assert.True(tree.NodeSampleCounts[node] >= 7);
         double best = ReferenceSplitFinder.BestScore(binned, rows, classes, weights, 2, minLeafSize: 7);
@@ -127,13 +121,7 @@ public class SplitExactnessTests
     [Fact]
     public void Leaves_are_pure_when_grown_without_limits()
     {
-        var (matrix, classes) = RandomData(12, sampleCount: 80, featureCount: 6, classCount: 3, levels: 40, 0.05);
-        var binned = new BinMapper().Bin(matrix);
-        var rows = Enumerable.Range(0, classes.Length).ToArray();
-        var weights = Enumerable.Repeat(1.0, rows.Length).ToArray();
-        var generator = new Xoshiro256StarStar(2);
-        var builder = new TreeBuilder(rows.Length, binned.FeatureCount, binned.MaxCodeCount, 3);
-        var tree = builder.Grow(binned, rows, classes, weights, new TreeOptions { FeaturesPerSplit = 2 }, ref generator);
+        var tree = GrowUnweighted(12, 80, 6, 3, 40, 0.05, new TreeOptions { FeaturesPerSplit = 2 }).Tree;
         int impure = 0;
         for (int node = 0; node < tree.NodeCount; node++)
         {
@@ -148,13 +136,20 @@ public class SplitExactnessTests
     [Fact]
     public void Depth_limit_stops_growth()
     {
-        var (matrix, classes) = RandomData(13, sampleCount: 100, featureCount: 5, classCount: 2, levels: 30, 0);
+        var tree = GrowUnweighted(13, 100, 5, 2, 30, 0, new TreeOptions { MaxDepth = 2 }).Tree;
+        Assert.True(tree.NodeCount <= 7);
+    }
+
+    /// <summary>Grows one tree on all rows of random data with unit weights.</summary>
+    private static (BinnedMatrix Binned, int[] Classes, int[] Rows, double[] Weights, DecisionTree Tree) GrowUnweighted(
+        ulong seed, int sampleCount, int featureCount, int classCount, int levels, double unmeasured, TreeOptions options)
+    {
+        var (matrix, classes) = RandomData(seed, sampleCount, featureCount, classCount, levels, unmeasured);
         var binned = new BinMapper().Bin(matrix);
         var rows = Enumerable.Range(0, classes.Length).ToArray();
         var weights = Enumerable.Repeat(1.0, rows.Length).ToArray();
-        var generator = new Xoshiro256StarStar(3);
-        var builder = new TreeBuilder(rows.Length, binned.FeatureCount, binned.MaxCodeCount, 2);
-        var tree = builder.Grow(binned, rows, classes, weights, new TreeOptions { MaxDepth = 2 }, ref generator);
-        Assert.True(tree.NodeCount <= 7);
+        var generator = new Xoshiro256StarStar(seed);
+        var builder = new TreeBuilder(rows.Length, binned.FeatureCount, binned.MaxCodeCount, classCount);
+        return (binned, classes, rows, weights, builder.Grow(binned, rows, classes, weights, options, ref generator));
     }
 }
