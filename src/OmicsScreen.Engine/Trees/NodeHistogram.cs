@@ -96,7 +96,11 @@ internal sealed class NodeHistogram
     {
         int stride = Stride;
         var previous = _valueCodes.AsSpan(0, ValueEntryCount);
-        for (int j = 0; j < previous.Length; j++) entries.Slice(previous[j] * stride, stride).Clear();
+        for (int j = 0; j < previous.Length; j++)
+        {
+            int at = previous[j] * stride;
+            for (int k = 0; k < stride; k++) entries[at + k] = 0;
+        }
         entries.Slice(MissingCode * stride, 2 * stride).Clear();
         ValueEntryCount = 0;
     }

@@ -102,13 +102,18 @@ internal sealed class TreeBuilder
         var rowClasses = _rowClasses.AsSpan(start, end - start);
         var rowWeights = _rowWeights.AsSpan(start, end - start);
         var order = _featureOrder.AsSpan();
+        // Partial Fisher-Yates: order[0..drawn) are this node's draws without replacement, in draw
+        // order. The first k are drawn up front so the next feature's codes can be prefetched while
+        // this one is searched; one more is drawn per constant feature met, so the draws (and the
+        // generator's state) are exactly those of drawing one feature at a time.
+        int drawn = 0;
+        for (int planned = Math.Min(featuresPerSplit, order.Length); drawn < planned; drawn++) Draw(order, drawn, ref generator);
         int tried = 0;
-        // Partial Fisher-Yates: order[0..drawn) are this node's draws without replacement.
-        for (int drawn = 0; drawn < order.Length && tried < featuresPerSplit; drawn++)
+        for (int next = 0; next < order.Length && tried < featuresPerSplit; next++)
         {
-            int pick = drawn + generator.NextInt(order.Length - drawn);
-            (order[drawn], order[pick]) = (order[pick], order[drawn]);
-            int feature = order[drawn];
+            if (next == drawn) Draw(order, drawn++, ref generator);
+            else if (next + 1 < drawn) matrix.PrefetchCodes(order[next + 1]);
+            int feature = order[next];
             int valueBins = matrix.ValueBinCount(feature);
             _histogram.Fill(matrix.Codes(feature), rows, rowClasses, rowWeights, valueBins);
             if (_histogram.IsConstant) continue;
@@ -116,6 +121,12 @@ internal sealed class TreeBuilder
             _scanner.Scan(_histogram, feature, valueBins, totals, minLeafSize, ref best);
         }
         return best;
+    }
+
+    private static void Draw(Span<int> order, int position, ref Xoshiro256StarStar generator)
+    {
+        int pick = position + generator.NextInt(order.Length - position);
+        (order[position], order[pick]) = (order[pick], order[position]);
     }
 
     /// <summary>Moves the rows going left to the front of the slice; returns where the right child starts.</summary>
