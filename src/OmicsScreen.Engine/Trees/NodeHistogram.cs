@@ -1,5 +1,6 @@
 using System.Numerics;
 using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
 
 namespace OmicsScreen.Engine.Trees;
 
@@ -10,17 +11,17 @@ namespace OmicsScreen.Engine.Trees;
 /// </summary>
 /// <remarks>
 /// Each code's entry is <see cref="Stride"/> doubles at code·Stride: the weight of each class,
-/// then the row count. Filling costs O(rows + distinct codes), not O(codes): a 256-bit presence
-/// mask records which codes were hit, its set bits enumerate the non-empty codes in order, and
-/// only those entries are zeroed again at the next fill. So a node of 3 samples does not pay
-/// for clearing and scanning 256 bins, which is what makes leaves-to-purity trees cheap.
+/// then the row count. Filling costs O(rows + distinct codes), not O(codes): for small nodes a
+/// 256-bit presence mask records which codes were hit and its set bits enumerate the non-empty
+/// codes in order; only those entries are zeroed again at the next fill. So a node of 3 samples
+/// does not pay for clearing and scanning 256 bins, which is what makes leaves-to-purity trees
+/// cheap. Nodes with at least as many rows as codes just scan the codes.
 /// </remarks>
 internal sealed class NodeHistogram
 {
-    private const int MaskWords = 256 / 64;
     private readonly double[] _entries;
     private readonly byte[] _valueCodes;
-    private readonly ulong[] _presence = new ulong[MaskWords];
+    private readonly ulong[] _presence = new ulong[256 / 64];
 
     public NodeHistogram(int classCount, int maxCodeCount)
     {
@@ -56,39 +57,92 @@ internal sealed class NodeHistogram
         ValueEntryCount + (MissingRows > 0 ? 1 : 0) + (BelowDetectionRows > 0 ? 1 : 0) <= 1;
 
     /// <summary>Fills from the codes of the node's rows; rowClasses and rowWeights run parallel to rows.</summary>
+    /// <remarks>
+    /// Rows index the codes, classes index a class, codes index an entry: all are in range by
+    /// construction (rows come from the panel, codes are bytes, the entry array holds 256 codes),
+    /// so the loops use unchecked references; this loop is where a forest spends most of its time.
+    /// </remarks>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public void Fill(ReadOnlySpan<byte> codes, ReadOnlySpan<int> rows, ReadOnlySpan<int> rowClasses,
         ReadOnlySpan<double> rowWeights, int valueBinCount)
     {
-        int stride = Stride;
-        int classCount = ClassCount;
+        if (rowClasses.Length < rows.Length || rowWeights.Length < rows.Length) throw new ArgumentException("Row arrays differ in length.");
         var entries = _entries.AsSpan();
         ClearPrevious(entries);
         MissingCode = valueBinCount;
-        var presence = _presence.AsSpan(0, MaskWords);
+        if (rows.Length >= valueBinCount) FillDense(codes, rows, rowClasses, rowWeights, valueBinCount);
+        else FillSparse(codes, rows, rowClasses, rowWeights, valueBinCount);
+    }
+
+    /// <summary>Many rows per code: accumulate, then list the codes by scanning every value code once.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private void FillDense(ReadOnlySpan<byte> codes, ReadOnlySpan<int> rows, ReadOnlySpan<int> rowClasses,
+        ReadOnlySpan<double> rowWeights, int valueBinCount)
+    {
+        int stride = Stride;
+        int classCount = ClassCount;
+        ref double entry0 = ref MemoryMarshal.GetArrayDataReference(_entries);
+        ref byte code0 = ref MemoryMarshal.GetReference(codes);
+        ref int class0 = ref MemoryMarshal.GetReference(rowClasses);
+        ref double weight0 = ref MemoryMarshal.GetReference(rowWeights);
         for (int i = 0; i < rows.Length; i++)
         {
-            int code = codes[rows[i]];
-            int at = code * stride;
-            entries[at + rowClasses[i]] += rowWeights[i];
-            entries[at + classCount] += 1;
-            presence[code >> 6] |= 1UL << code;
+            ref double entry = ref Unsafe.Add(ref entry0, Unsafe.Add(ref code0, rows[i]) * stride);
+            Unsafe.Add(ref entry, Unsafe.Add(ref class0, i)) += Unsafe.Add(ref weight0, i);
+            Unsafe.Add(ref entry, classCount) += 1;
         }
-        // Set bits in increasing order give the non-empty codes sorted; the mask is left zero.
+        var entries = _entries.AsSpan();
         var valueCodes = _valueCodes.AsSpan();
         int listed = 0;
-        for (int word = 0; word < MaskWords; word++)
+        for (int code = 0; code < valueBinCount; code++)
+            if (entries[code * stride + classCount] != 0) valueCodes[listed++] = (byte)code;
+        ValueEntryCount = listed;
+    }
+
+    /// <summary>
+    /// Few rows per code: a 256-bit presence mask records the codes hit, and its set bits, read
+    /// in order, list them sorted in O(rows + distinct codes) rather than O(codes).
+    /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private void FillSparse(ReadOnlySpan<byte> codes, ReadOnlySpan<int> rows, ReadOnlySpan<int> rowClasses,
+        ReadOnlySpan<double> rowWeights, int valueBinCount)
+    {
+        int stride = Stride;
+        int classCount = ClassCount;
+        ref double entry0 = ref MemoryMarshal.GetArrayDataReference(_entries);
+        ref byte code0 = ref MemoryMarshal.GetReference(codes);
+        ref int class0 = ref MemoryMarshal.GetReference(rowClasses);
+        ref double weight0 = ref MemoryMarshal.GetReference(rowWeights);
+        ref ulong mask0 = ref MemoryMarshal.GetArrayDataReference(_presence);
+        for (int i = 0; i < rows.Length; i++)
         {
-            ulong bits = presence[word];
-            presence[word] = 0;
-            while (bits != 0)
-            {
-                int code = (word << 6) + BitOperations.TrailingZeroCount(bits);
-                bits &= bits - 1;
-                if (code < valueBinCount) valueCodes[listed++] = (byte)code;
-            }
+            int code = Unsafe.Add(ref code0, rows[i]);
+            ref double entry = ref Unsafe.Add(ref entry0, code * stride);
+            Unsafe.Add(ref entry, Unsafe.Add(ref class0, i)) += Unsafe.Add(ref weight0, i);
+            Unsafe.Add(ref entry, classCount) += 1;
+            // Shifts use the low 6 bits of the code; its top 2 bits pick the mask word. No branch.
+            Unsafe.Add(ref mask0, code >> 6) |= 1UL << code;
+        }
+        var valueCodes = _valueCodes.AsSpan();
+        int listed = 0;
+        for (int word = 0; word < _presence.Length; word++)
+        {
+            listed = ListCodes(_presence[word], word << 6, valueBinCount, valueCodes, listed);
+            _presence[word] = 0;
         }
         ValueEntryCount = listed;
+    }
+
+    /// <summary>Appends the value codes of one mask word in increasing order.</summary>
+    private static int ListCodes(ulong bits, int firstCode, int valueBinCount, Span<byte> valueCodes, int listed)
+    {
+        while (bits != 0)
+        {
+            int code = firstCode + BitOperations.TrailingZeroCount(bits);
+            bits &= bits - 1;
+            if (code < valueBinCount) valueCodes[listed++] = (byte)code;
+        }
+        return listed;
     }
 
     /// <summary>Zeroes the entries the previous fill touched: its listed value codes and its two unmeasured codes.</summary>
