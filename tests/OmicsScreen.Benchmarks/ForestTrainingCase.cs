@@ -67,6 +67,7 @@ public sealed class ForestTrainingCase(string name, int sampleCount, int feature
             "train_s=" + string.Join(',', seconds.Select(s => s.ToString("F3", CultureInfo.InvariantCulture))),
             F("trees_per_s", TreeCount / median, "F0"),
             F("oob_error", oobError, "F4"),
+            F("ns_per_visit", median * 1e9 * Environment.ProcessorCount / visits, "F2"),
             F("train_cpu_median_s", cpuMedian, "F3"),
             F("ns_cpu_per_visit", cpuMedian * 1e9 / visits, "F2"),
             F("mean_nodes", forest.Enumerate().Average(t => t.NodeCount), "F1"),

@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using OmicsScreen.Engine.Panels;
 
 namespace OmicsScreen.Engine.Binning;
@@ -52,6 +53,7 @@ public sealed class FeatureBins
     }
 
     /// <summary>The first bin whose upper bound is at least the value (lower-bound binary search).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public int ValueBinOf(float value)
     {
         var bounds = _upperBounds;

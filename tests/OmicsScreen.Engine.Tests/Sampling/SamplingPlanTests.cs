@@ -49,6 +49,8 @@ public class SamplingPlanTests
         var classes = Enumerable.Range(0, 100).Select(s => s < 10 ? 1 : 0).ToArray();
         var all = Enumerable.Range(0, 100).ToArray();
         var counts = Draw(new SamplingOptions { ClassBalanced = true }, all, classes, 2, 100, 1);
+        // Balanced random forest (Chen, Liaw & Breiman 2004): a bootstrap of the minority class
+        // and as many draws, with replacement, from the majority.
         Assert.Equal(10, Enumerable.Range(0, 100).Where(s => classes[s] == 1).Sum(s => counts[s]));
         Assert.Equal(10, Enumerable.Range(0, 100).Where(s => classes[s] == 0).Sum(s => counts[s]));
     }
@@ -77,6 +79,7 @@ public class SamplingPlanTests
         var groups = SampleGrouping.FromLabels("subject", labels);
         var all = Enumerable.Range(0, labels.Count).ToArray();
         var options = new SamplingOptions { Drawing = drawing, Groups = groups };
+        // Grouped resampling (Karpievitch et al. 2009): a subject's replicates share one draw.
         for (ulong t = 0; t < 50; t++)
         {
             var counts = Draw(options, all, new int[labels.Count], 1, labels.Count, t);

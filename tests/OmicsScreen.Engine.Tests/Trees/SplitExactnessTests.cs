@@ -140,6 +140,17 @@ public class SplitExactnessTests
         Assert.True(tree.NodeCount <= 7);
     }
 
+    [Fact]
+    public void Splits_below_the_minimum_impurity_decrease_are_not_made()
+    {
+        var unlimited = GrowUnweighted(14, 120, 5, 2, 30, 0, new TreeOptions()).Tree;
+        double threshold = unlimited.ImpurityDecreases.ToArray().Where(d => d > 0).Order().ElementAt(unlimited.SplitCount / 2);
+        var limited = GrowUnweighted(14, 120, 5, 2, 30, 0, new TreeOptions { MinImpurityDecrease = threshold }).Tree;
+        Assert.True(limited.SplitCount < unlimited.SplitCount);
+        for (int node = 0; node < limited.NodeCount; node++)
+            if (!limited.IsLeaf(node)) Assert.True(limited.ImpurityDecreases[node] >= threshold - 1e-12);
+    }
+
     /// <summary>Grows one tree on all rows of random data with unit weights.</summary>
     private static (BinnedMatrix Binned, int[] Classes, int[] Rows, double[] Weights, DecisionTree Tree) GrowUnweighted(
         ulong seed, int sampleCount, int featureCount, int classCount, int levels, double unmeasured, TreeOptions options)
