@@ -19,6 +19,9 @@ namespace OmicsScreen.Engine.Trees;
 /// </remarks>
 internal sealed class TreeBuilder
 {
+    /// <summary>How many features ahead of the one being searched their codes are prefetched.</summary>
+    private const int PrefetchDistance = 4;
+
     private readonly int _classCount;
     private readonly int _stride;
     private readonly int[] _rows;
@@ -108,11 +111,12 @@ internal sealed class TreeBuilder
         // generator's state) are exactly those of drawing one feature at a time.
         int drawn = 0;
         for (int planned = Math.Min(featuresPerSplit, order.Length); drawn < planned; drawn++) Draw(order, drawn, ref generator);
+        for (int ahead = 0; ahead < PrefetchDistance && ahead < drawn; ahead++) matrix.PrefetchCodes(order[ahead]);
         int tried = 0;
         for (int next = 0; next < order.Length && tried < featuresPerSplit; next++)
         {
             if (next == drawn) Draw(order, drawn++, ref generator);
-            else if (next + 1 < drawn) matrix.PrefetchCodes(order[next + 1]);
+            else if (next + PrefetchDistance < drawn) matrix.PrefetchCodes(order[next + PrefetchDistance]);
             int feature = order[next];
             int valueBins = matrix.ValueBinCount(feature);
             _histogram.Fill(matrix.Codes(feature), rows, rowClasses, rowWeights, valueBins);
