@@ -7,6 +7,13 @@ namespace OmicsScreen.Engine.Forests;
 /// <summary>The one call a command needs: bin a panel, grow a forest, summarise it, timing each stage.</summary>
 public static class ForestGrower
 {
+    /// <summary>Grows on a whole panel; grouped sampling uses the options' groups, not the panel's subjects, so the caller decides.</summary>
+    public static GrownForest Grow(Panel panel, ForestOptions options, BinMapper? binMapper = null)
+    {
+        ArgumentNullException.ThrowIfNull(panel);
+        return Grow(panel.Matrix, panel.Outcome, options, binMapper);
+    }
+
     public static GrownForest Grow(FeatureMatrix matrix, ClassOutcome outcome, ForestOptions options, BinMapper? binMapper = null)
     {
         ArgumentNullException.ThrowIfNull(matrix);
