@@ -67,18 +67,16 @@ internal sealed class NodeHistogram
         ReadOnlySpan<double> rowWeights, int valueBinCount)
     {
         if (rowClasses.Length < rows.Length || rowWeights.Length < rows.Length) throw new ArgumentException("Row arrays differ in length.");
-        var entries = _entries.AsSpan();
-        ClearPrevious(entries);
-        MissingCode = valueBinCount;
         if (rows.Length >= valueBinCount) FillDense(codes, rows, rowClasses, rowWeights, valueBinCount);
         else FillSparse(codes, rows, rowClasses, rowWeights, valueBinCount);
     }
 
     /// <summary>Many rows per code: accumulate, then list the codes by scanning every value code once.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private void FillDense(ReadOnlySpan<byte> codes, ReadOnlySpan<int> rows, ReadOnlySpan<int> rowClasses,
+    internal void FillDense(ReadOnlySpan<byte> codes, ReadOnlySpan<int> rows, ReadOnlySpan<int> rowClasses,
         ReadOnlySpan<double> rowWeights, int valueBinCount)
     {
+        ClearPrevious(valueBinCount);
         int stride = Stride;
         int classCount = ClassCount;
         ref double entry0 = ref MemoryMarshal.GetArrayDataReference(_entries);
@@ -104,9 +102,10 @@ internal sealed class NodeHistogram
     /// in order, list them sorted in O(rows + distinct codes) rather than O(codes).
     /// </summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private void FillSparse(ReadOnlySpan<byte> codes, ReadOnlySpan<int> rows, ReadOnlySpan<int> rowClasses,
+    internal void FillSparse(ReadOnlySpan<byte> codes, ReadOnlySpan<int> rows, ReadOnlySpan<int> rowClasses,
         ReadOnlySpan<double> rowWeights, int valueBinCount)
     {
+        ClearPrevious(valueBinCount);
         int stride = Stride;
         int classCount = ClassCount;
         ref double entry0 = ref MemoryMarshal.GetArrayDataReference(_entries);
@@ -146,8 +145,10 @@ internal sealed class NodeHistogram
     }
 
     /// <summary>Zeroes the entries the previous fill touched: its listed value codes and its two unmeasured codes.</summary>
-    private void ClearPrevious(Span<double> entries)
+    /// <remarks>Then records the missing code of the feature about to be filled.</remarks>
+    private void ClearPrevious(int valueBinCount)
     {
+        var entries = _entries.AsSpan();
         int stride = Stride;
         var previous = _valueCodes.AsSpan(0, ValueEntryCount);
         for (int j = 0; j < previous.Length; j++)
@@ -157,5 +158,6 @@ internal sealed class NodeHistogram
         }
         entries.Slice(MissingCode * stride, 2 * stride).Clear();
         ValueEntryCount = 0;
+        MissingCode = valueBinCount;
     }
 }
