@@ -72,28 +72,17 @@ internal sealed class NodeHistogram
     }
 
     /// <summary>Many rows per code: accumulate, then list the codes by scanning every value code once.</summary>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal void FillDense(ReadOnlySpan<byte> codes, ReadOnlySpan<int> rows, ReadOnlySpan<int> rowClasses,
         ReadOnlySpan<double> rowWeights, int valueBinCount)
     {
         ClearPrevious(valueBinCount);
+        Accumulate(codes, rows, rowClasses, rowWeights, trackPresence: false);
         int stride = Stride;
-        int classCount = ClassCount;
-        ref double entry0 = ref MemoryMarshal.GetArrayDataReference(_entries);
-        ref byte code0 = ref MemoryMarshal.GetReference(codes);
-        ref int class0 = ref MemoryMarshal.GetReference(rowClasses);
-        ref double weight0 = ref MemoryMarshal.GetReference(rowWeights);
-        for (int i = 0; i < rows.Length; i++)
-        {
-            ref double entry = ref Unsafe.Add(ref entry0, Unsafe.Add(ref code0, rows[i]) * stride);
-            Unsafe.Add(ref entry, Unsafe.Add(ref class0, i)) += Unsafe.Add(ref weight0, i);
-            Unsafe.Add(ref entry, classCount) += 1;
-        }
         var entries = _entries.AsSpan();
         var valueCodes = _valueCodes.AsSpan();
         int listed = 0;
         for (int code = 0; code < valueBinCount; code++)
-            if (entries[code * stride + classCount] != 0) valueCodes[listed++] = (byte)code;
+            if (entries[code * stride + ClassCount] != 0) valueCodes[listed++] = (byte)code;
         ValueEntryCount = listed;
     }
 
@@ -101,11 +90,26 @@ internal sealed class NodeHistogram
     /// Few rows per code: a 256-bit presence mask records the codes hit, and its set bits, read
     /// in order, list them sorted in O(rows + distinct codes) rather than O(codes).
     /// </summary>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal void FillSparse(ReadOnlySpan<byte> codes, ReadOnlySpan<int> rows, ReadOnlySpan<int> rowClasses,
         ReadOnlySpan<double> rowWeights, int valueBinCount)
     {
         ClearPrevious(valueBinCount);
+        Accumulate(codes, rows, rowClasses, rowWeights, trackPresence: true);
+        var valueCodes = _valueCodes.AsSpan();
+        int listed = 0;
+        for (int word = 0; word < _presence.Length; word++)
+        {
+            listed = ListCodes(_presence[word], word << 6, valueBinCount, valueCodes, listed);
+            _presence[word] = 0;
+        }
+        ValueEntryCount = listed;
+    }
+
+    /// <summary>Adds each row's weight to its class and one to the row count of its code's entry.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private void Accumulate(ReadOnlySpan<byte> codes, ReadOnlySpan<int> rows, ReadOnlySpan<int> rowClasses,
+        ReadOnlySpan<double> rowWeights, bool trackPresence)
+    {
         int stride = Stride;
         int classCount = ClassCount;
         ref double entry0 = ref MemoryMarshal.GetArrayDataReference(_entries);
@@ -119,17 +123,10 @@ internal sealed class NodeHistogram
             ref double entry = ref Unsafe.Add(ref entry0, code * stride);
             Unsafe.Add(ref entry, Unsafe.Add(ref class0, i)) += Unsafe.Add(ref weight0, i);
             Unsafe.Add(ref entry, classCount) += 1;
-            // Shifts use the low 6 bits of the code; its top 2 bits pick the mask word. No branch.
-            Unsafe.Add(ref mask0, code >> 6) |= 1UL << code;
+            // The shift uses the low 6 bits of the code, its top 2 bits pick the mask word; the
+            // test is the same for every row of a call, so it is always predicted.
+            if (trackPresence) Unsafe.Add(ref mask0, code >> 6) |= 1UL << code;
         }
-        var valueCodes = _valueCodes.AsSpan();
-        int listed = 0;
-        for (int word = 0; word < _presence.Length; word++)
-        {
-            listed = ListCodes(_presence[word], word << 6, valueBinCount, valueCodes, listed);
-            _presence[word] = 0;
-        }
-        ValueEntryCount = listed;
     }
 
     /// <summary>Appends the value codes of one mask word in increasing order.</summary>
