@@ -9,6 +9,9 @@ public static class BenchmarkRegistry
     {
         var cases = new List<(string, IBenchmarkCase)>();
         AddLoadCases(cases);
+        cases.Add(("forest", new ForestTrainingCase("forest-200x20000", 200, 20_000)));
+        cases.Add(("forest", new ForestTrainingCase("forest-1000x2000", 1_000, 2_000)));
+        cases.Add(("forest", new ForestTrainingCase("forest-4000x500", 4_000, 500)));
         return cases;
     }
 

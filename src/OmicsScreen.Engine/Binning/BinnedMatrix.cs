@@ -1,0 +1,166 @@
+using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
+using System.Runtime.Intrinsics.X86;
+using OmicsScreen.Engine.Panels;
+using OmicsScreen.Engine.Randomness;
+
+namespace OmicsScreen.Engine.Binning;
+
+/// <summary>
+/// A panel quantised once: one byte code per cell, feature-major (one contiguous array per
+/// feature), plus each feature's bins in original units. Every seed, repeat and tree reuses it.
+/// </summary>
+/// <remarks>
+/// Columns are shared, never copied, between a matrix and the matrices derived from it
+/// (<see cref="SelectFeatures"/>, <see cref="WithShadowFeatures"/>), so screening can build many
+/// views of one panel cheaply. <see cref="SourceFeature"/> maps each column back to the feature
+/// of the matrix originally binned.
+/// </remarks>
+public sealed class BinnedMatrix
+{
+    private readonly byte[][] _codes;
+    private readonly FeatureBins[] _bins;
+    private readonly int[] _sourceFeatures;
+    private readonly bool[] _isShadow;
+    private readonly int[] _valueBinCounts;
+
+    internal BinnedMatrix(IReadOnlyList<string> featureNames, int sampleCount, byte[][] codes,
+        FeatureBins[] bins, int[] sourceFeatures, bool[] isShadow)
+    {
+        FeatureNames = featureNames;
+        SampleCount = sampleCount;
+        _codes = codes;
+        _bins = bins;
+        _sourceFeatures = sourceFeatures;
+        _isShadow = isShadow;
+        // Kept apart from the bins objects so split search reads one contiguous array, not one object per feature.
+        _valueBinCounts = new int[bins.Length];
+        for (int f = 0; f < bins.Length; f++) _valueBinCounts[f] = bins[f].ValueBinCount;
+    }
+
+    public int SampleCount { get; }
+    public int FeatureCount => _codes.Length;
+    public IReadOnlyList<string> FeatureNames { get; }
+
+    /// <summary>The codes of one feature, one per sample, in sample order.</summary>
+    public ReadOnlySpan<byte> Codes(int feature) => _codes[feature];
+
+    public FeatureBins Bins(int feature) => _bins[feature];
+
+    /// <summary>
+    /// Asks the processor to start loading the first cache lines of a feature's codes. Split search
+    /// on wide panels visits thousands of short columns in random order, so each visit would
+    /// otherwise begin with a cache miss. A hint only: it changes no result.
+    /// </summary>
+    internal unsafe void PrefetchCodes(int feature)
+    {
+        if (!Sse.IsSupported) return;
+        var codes = _codes[feature];
+        // The address may go stale if the collector moves the array; a prefetch of any address is harmless.
+        byte* start = (byte*)Unsafe.AsPointer(ref MemoryMarshal.GetArrayDataReference(codes));
+        int lines = Math.Min(codes.Length, 512) >> 6;
+        for (int line = 0; line <= lines; line++) Sse.Prefetch0(start + (line << 6));
+    }
+
+    /// <summary>The number of value bins of a feature; its missing code.</summary>
+    public int ValueBinCount(int feature) => _valueBinCounts[feature];
+
+    /// <summary>The feature of the originally binned matrix this column holds (or permutes).</summary>
+    public int SourceFeature(int feature) => _sourceFeatures[feature];
+
+    /// <summary>True for a column added by <see cref="WithShadowFeatures"/>.</summary>
+    public bool IsShadow(int feature) => _isShadow[feature];
+
+    /// <summary>The largest code count of any feature; sizes histogram buffers.</summary>
+    public int MaxCodeCount
+    {
+        get
+        {
+            int most = 0;
+            foreach (var bins in _bins) most = Math.Max(most, bins.CodeCount);
+            return most;
+        }
+    }
+
+    /// <summary>A matrix of the given columns, in the given order; codes are shared, not copied.</summary>
+    public BinnedMatrix SelectFeatures(ReadOnlySpan<int> features)
+    {
+        var names = new string[features.Length];
+        var codes = new byte[features.Length][];
+        var bins = new FeatureBins[features.Length];
+        var sources = new int[features.Length];
+        var shadows = new bool[features.Length];
+        for (int i = 0; i < features.Length; i++)
+        {
+            int f = features[i];
+            names[i] = FeatureNames[f];
+            codes[i] = _codes[f];
+            bins[i] = _bins[f];
+            sources[i] = _sourceFeatures[f];
+            shadows[i] = _isShadow[f];
+        }
+        return new BinnedMatrix(names, SampleCount, codes, bins, sources, shadows);
+    }
+
+    /// <summary>
+    /// This matrix followed by one shadow column per listed feature: the feature's codes permuted
+    /// over samples, which keeps its distribution and destroys any link to the outcome. Shadow
+    /// features give a null for importance (Kursa &amp; Rudnicki 2010, J Stat Softw 36(11); the
+    /// corrected impurity importance of Nembrini, König &amp; Wright 2018, Bioinformatics 34(21)).
+    /// </summary>
+    /// <remarks>
+    /// Shadow i is permuted by the generator of (runSeed, repeat, i, Shadow), so the same
+    /// arguments always give the same shadows. Its name is the source name with a "shadow:" prefix.
+    /// </remarks>
+    public BinnedMatrix WithShadowFeatures(ReadOnlySpan<int> sourceFeatures, ulong runSeed, int repeat)
+    {
+        int total = FeatureCount + sourceFeatures.Length;
+        var names = new string[total];
+        var codes = new byte[total][];
+        var bins = new FeatureBins[total];
+        var sources = new int[total];
+        var shadows = new bool[total];
+        for (int f = 0; f < FeatureCount; f++)
+        {
+            names[f] = FeatureNames[f];
+            codes[f] = _codes[f];
+            bins[f] = _bins[f];
+            sources[f] = _sourceFeatures[f];
+            shadows[f] = _isShadow[f];
+        }
+        for (int i = 0; i < sourceFeatures.Length; i++)
+        {
+            int f = sourceFeatures[i];
+            int target = FeatureCount + i;
+            var permuted = (byte[])_codes[f].Clone();
+            var generator = SeedSchedule.Generator(runSeed, repeat, i, SeedPurpose.Shadow);
+            generator.Shuffle(permuted.AsSpan());
+            names[target] = "shadow:" + FeatureNames[f];
+            codes[target] = permuted;
+            bins[target] = _bins[f];
+            sources[target] = _sourceFeatures[f];
+            shadows[target] = true;
+        }
+        return new BinnedMatrix(names, SampleCount, codes, bins, sources, shadows);
+    }
+
+    /// <summary>The codes of new samples measured on the same features, binned with this matrix's bins.</summary>
+    public BinnedMatrix Encode(FeatureMatrix matrix)
+    {
+        ArgumentNullException.ThrowIfNull(matrix);
+        if (matrix.FeatureCount != FeatureCount)
+            throw new ArgumentException("The matrix must have the same features, in the same order.");
+        var codes = new byte[FeatureCount][];
+        for (int f = 0; f < FeatureCount; f++)
+        {
+            var column = matrix.Column(f);
+            var states = matrix.States(f);
+            var bins = _bins[f];
+            var target = new byte[matrix.SampleCount];
+            for (int s = 0; s < target.Length; s++)
+                target[s] = bins.CodeOf(column[s], states.IsEmpty ? CellState.Measured : states[s]);
+            codes[f] = target;
+        }
+        return new BinnedMatrix(FeatureNames, matrix.SampleCount, codes, _bins, _sourceFeatures, _isShadow);
+    }
+}

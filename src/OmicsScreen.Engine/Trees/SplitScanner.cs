@@ -1,0 +1,152 @@
+using System.Runtime.CompilerServices;
+
+namespace OmicsScreen.Engine.Trees;
+
+/// <summary>
+/// Finds the best split of one feature from a filled <see cref="NodeHistogram"/>: every cut
+/// between adjacent non-empty value bins, crossed with every side for the missing and
+/// below-detection groups that the node holds.
+/// </summary>
+/// <remarks>
+/// Binary outcomes, the common case, take a path with the two class weights in locals; any
+/// class count takes the general path. Both visit candidates in the same order and compute the
+/// same score, so they choose the same split.
+/// </remarks>
+internal sealed class SplitScanner
+{
+    private readonly double[] _left;
+
+    public SplitScanner(int classCount) => _left = new double[classCount + 1];
+
+    /// <summary>
+    /// Replaces best when this feature has a split of strictly higher score (so ties keep the
+    /// earlier candidate). nodeTotals holds the node's class weights then its row count.
+    /// </summary>
+    public void Scan(NodeHistogram histogram, int feature, int valueBinCount, ReadOnlySpan<double> nodeTotals,
+        int minLeafSize, ref SplitCandidate best)
+    {
+        bool hasMissing = histogram.MissingRows > 0;
+        bool hasBelow = histogram.BelowDetectionRows > 0;
+        // Combination bit 0: missing goes left; bit 1: below detection goes left. Only groups the
+        // node holds are placed; an absent group follows the larger child (set when recorded).
+        for (int combination = 0; combination < 4; combination++)
+        {
+            bool missingLeft = (combination & 1) != 0;
+            bool belowLeft = (combination & 2) != 0;
+            if ((missingLeft && !hasMissing) || (belowLeft && !hasBelow)) continue;
+            if (histogram.ValueEntryCount == 0)
+            {
+                // Only unmeasured cells here: the one split is missing versus below detection.
+                if (combination == 1 && hasBelow)
+                {
+                    var left = _left.AsSpan();
+                    histogram.Missing.CopyTo(left);
+                    ConsiderGeneral(left, nodeTotals, minLeafSize, feature, (byte)(valueBinCount - 1),
+                        hasMissing, hasBelow, missingLeft, belowLeft, ref best);
+                }
+                continue;
+            }
+            if (histogram.ClassCount == 2) ScanBinary(histogram, feature, nodeTotals, minLeafSize, hasMissing, hasBelow, missingLeft, belowLeft, ref best);
+            else ScanGeneral(histogram, feature, nodeTotals, minLeafSize, hasMissing, hasBelow, missingLeft, belowLeft, ref best);
+        }
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static void ScanBinary(NodeHistogram histogram, int feature, ReadOnlySpan<double> nodeTotals, int minLeafSize,
+        bool hasMissing, bool hasBelow, bool missingLeft, bool belowLeft, ref SplitCandidate best)
+    {
+        var entries = histogram.Entries;
+        var codes = histogram.ValueCodes;
+        double total0 = nodeTotals[0], total1 = nodeTotals[1], totalRows = nodeTotals[2];
+        double left0 = 0, left1 = 0, leftRows = 0;
+        if (missingLeft) Add(histogram.Missing, ref left0, ref left1, ref leftRows);
+        if (belowLeft) Add(histogram.BelowDetection, ref left0, ref left1, ref leftRows);
+        double bestScore = best.Score;
+        // Invariant: after step j, (left0, left1, leftRows) hold the placed groups plus value codes[0..j].
+        for (int j = 0; j < codes.Length; j++)
+        {
+            int at = codes[j] * 3;
+            left0 += entries[at];
+            left1 += entries[at + 1];
+            leftRows += entries[at + 2];
+            double rightRows = totalRows - leftRows;
+            if (leftRows < minLeafSize || rightRows < minLeafSize) continue;
+            double right0 = total0 - left0, right1 = total1 - left1;
+            double leftWeight = left0 + left1, rightWeight = right0 + right1;
+            if (leftWeight <= 0 || rightWeight <= 0) continue;
+            double score = (left0 * left0 + left1 * left1) / leftWeight + (right0 * right0 + right1 * right1) / rightWeight;
+            if (!(score > bestScore)) continue;
+            bestScore = score;
+            best = Record(feature, codes[j], score, leftRows, rightRows, hasMissing, hasBelow, missingLeft, belowLeft);
+        }
+    }
+
+    private void ScanGeneral(NodeHistogram histogram, int feature, ReadOnlySpan<double> nodeTotals, int minLeafSize,
+        bool hasMissing, bool hasBelow, bool missingLeft, bool belowLeft, ref SplitCandidate best)
+    {
+        var left = _left.AsSpan();
+        left.Clear();
+        if (missingLeft) Add(left, histogram.Missing);
+        if (belowLeft) Add(left, histogram.BelowDetection);
+        var codes = histogram.ValueCodes;
+        // Invariant: after step j, left holds the placed groups plus value codes[0..j].
+        for (int j = 0; j < codes.Length; j++)
+        {
+            Add(left, histogram.Entry(codes[j]));
+            ConsiderGeneral(left, nodeTotals, minLeafSize, feature, codes[j], hasMissing, hasBelow, missingLeft, belowLeft, ref best);
+        }
+    }
+
+    private static void ConsiderGeneral(ReadOnlySpan<double> left, ReadOnlySpan<double> nodeTotals, int minLeafSize,
+        int feature, byte binThreshold, bool hasMissing, bool hasBelow, bool missingLeft, bool belowLeft, ref SplitCandidate best)
+    {
+        int classCount = nodeTotals.Length - 1;
+        double leftRows = left[classCount];
+        double rightRows = nodeTotals[classCount] - leftRows;
+        if (leftRows < minLeafSize || rightRows < minLeafSize) return;
+        double leftWeight = 0, rightWeight = 0, leftSquares = 0, rightSquares = 0;
+        for (int c = 0; c < classCount; c++)
+        {
+            double l = left[c];
+            double r = nodeTotals[c] - l;
+            leftWeight += l;
+            rightWeight += r;
+            leftSquares += l * l;
+            rightSquares += r * r;
+        }
+        if (leftWeight <= 0 || rightWeight <= 0) return;
+        double score = leftSquares / leftWeight + rightSquares / rightWeight;
+        if (!(score > best.Score)) return;
+        best = Record(feature, binThreshold, score, leftRows, rightRows, hasMissing, hasBelow, missingLeft, belowLeft);
+    }
+
+    private static SplitCandidate Record(int feature, byte binThreshold, double score, double leftRows, double rightRows,
+        bool hasMissing, bool hasBelow, bool missingLeft, bool belowLeft)
+    {
+        bool largerLeft = leftRows >= rightRows;
+        var routing = UnmeasuredRouting.BothRight;
+        if (hasMissing ? missingLeft : largerLeft) routing |= UnmeasuredRouting.MissingLeft;
+        if (hasBelow ? belowLeft : largerLeft) routing |= UnmeasuredRouting.BelowDetectionLeft;
+        return new SplitCandidate
+        {
+            Feature = feature,
+            BinThreshold = binThreshold,
+            Routing = routing,
+            Score = score,
+            LeftRowCount = (int)leftRows,
+            RightRowCount = (int)rightRows,
+        };
+    }
+
+    private static void Add(ReadOnlySpan<double> entry, ref double weight0, ref double weight1, ref double rows)
+    {
+        weight0 += entry[0];
+        weight1 += entry[1];
+        rows += entry[2];
+    }
+
+    private static void Add(Span<double> target, ReadOnlySpan<double> source)
+    {
+        for (int i = 0; i < target.Length; i++) target[i] += source[i];
+    }
+}

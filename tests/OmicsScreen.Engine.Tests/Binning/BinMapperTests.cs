@@ -1,0 +1,113 @@
+using OmicsScreen.Engine.Binning;
+using OmicsScreen.Engine.Panels;
+using OmicsScreen.TestSupport;
+
+namespace OmicsScreen.Engine.Tests.Binning;
+
+public class BinMapperTests
+{
+    private static FeatureMatrix Matrix(params float[][] columns)
+    {
+        var names = Enumerable.Range(0, columns.Length).Select(i => $"f{i}").ToArray();
+        var ids = Enumerable.Range(0, columns[0].Length).Select(i => $"s{i}").ToArray();
+        return new FeatureMatrix(names, ids, columns, new CellState[]?[columns.Length]);
+    }
+
+    [Fact]
+    public void Few_distinct_values_get_one_exact_bin_each_in_value_order()
+    {
+        var binned = new BinMapper().Bin(Matrix([3f, 1f, 2f, 3f, 1f, 10f]));
+        var bins = binned.Bins(0);
+        Assert.True(bins.IsExact);
+        Assert.Equal(4, bins.ValueBinCount);
+        Assert.Equal(new byte[] { 2, 0, 1, 2, 0, 3 }, binned.Codes(0).ToArray());
+        // Thresholds are midpoints between adjacent distinct values (common practice in CART).
+        Assert.Equal([1.5f, 2.5f, 6.5f, float.PositiveInfinity], bins.UpperBounds.ToArray());
+    }
+
+    [Fact]
+    public void Many_distinct_values_get_quantile_bins_that_keep_order_and_agree_with_bounds()
+    {
+        var generator = new Engine.Randomness.Xoshiro256StarStar(3);
+        var values = new float[5000];
+        for (int i = 0; i < values.Length; i++) values[i] = (float)Math.Exp(generator.NextGaussian());
+        for (int i = 0; i < 500; i++) values[i] = 1f; // a heavy tie
+        var binned = new BinMapper().Bin(Matrix(values));
+        var bins = binned.Bins(0);
+        Assert.False(bins.IsExact);
+        Assert.InRange(bins.ValueBinCount, 100, BinMapper.MaxValueBins);
+        var codes = binned.Codes(0);
+        var counts = new int[bins.ValueBinCount];
+        for (int i = 0; i < values.Length; i++)
+        {
+            int code = codes[i];
+            counts[code]++;
+            Assert.True(values[i] <= bins.UpperBound(code));
+            if (code > 0) Assert.True(values[i] > bins.UpperBound(code - 1));
+        }
+        // Quantile bins: apart from the tie's bin, none holds much more than its share n/B.
+        Assert.True(counts.Count(c => c > 3 * values.Length / BinMapper.MaxValueBins) <= 1);
+    }
+
+    [Fact]
+    public void Missing_and_below_detection_cells_get_their_own_codes()
+    {
+        var builder = new FeatureMatrixBuilder(["f"], ["a", "b", "c", "d"]);
+        builder.SetMeasured(0, 0, 2f);
+        builder.SetMissing(0, 1);
+        builder.SetBelowDetection(0, 2, 0.1f);
+        builder.SetMeasured(0, 3, 5f);
+        var binned = new BinMapper().Bin(builder.Build());
+        var bins = binned.Bins(0);
+        Assert.Equal(2, bins.ValueBinCount);
+        Assert.Equal(new byte[] { 0, bins.MissingCode, bins.BelowDetectionCode, 1 }, binned.Codes(0).ToArray());
+    }
+
+    [Fact]
+    public void A_bound_between_adjacent_floats_stays_below_the_upper_value()
+    {
+        float lower = 1f, upper = MathF.BitIncrement(1f);
+        float bound = BinMapper.Midpoint(lower, upper);
+        Assert.True(lower <= bound && bound < upper);
+        Assert.Equal(1f, BinMapper.Midpoint(1f, float.PositiveInfinity));
+    }
+
+    [Fact]
+    public void Shadow_columns_are_seeded_permutations_of_their_source_codes()
+    {
+        var panel = SyntheticPanel.Generate(new SyntheticPanelSpec { SampleCount = 300, FeatureCount = 6 });
+        var binned = new BinMapper().Bin(panel.Matrix);
+        var withShadows = binned.WithShadowFeatures([1, 4], runSeed: 9, repeat: 0);
+        Assert.Equal(8, withShadows.FeatureCount);
+        Assert.True(withShadows.IsShadow(7) && !withShadows.IsShadow(4));
+        Assert.Equal(4, withShadows.SourceFeature(7));
+        Assert.Equal("shadow:" + binned.FeatureNames[4], withShadows.FeatureNames[7]);
+        var source = binned.Codes(4).ToArray();
+        var shadow = withShadows.Codes(7).ToArray();
+        Assert.Equal(source.Order(), shadow.Order());
+        Assert.NotEqual(source, shadow);
+        Assert.Equal(shadow, binned.WithShadowFeatures([1, 4], 9, 0).Codes(7).ToArray());
+        Assert.NotEqual(shadow, binned.WithShadowFeatures([1, 4], 10, 0).Codes(7).ToArray());
+    }
+
+    [Fact]
+    public void Selecting_features_keeps_codes_bins_and_the_source_index()
+    {
+        var panel = SyntheticPanel.Generate(new SyntheticPanelSpec { SampleCount = 50, FeatureCount = 5 });
+        var binned = new BinMapper().Bin(panel.Matrix);
+        var picked = binned.SelectFeatures([3, 0]);
+        Assert.Equal(binned.Codes(3).ToArray(), picked.Codes(0).ToArray());
+        Assert.Same(binned.Bins(0), picked.Bins(1));
+        Assert.Equal(3, picked.SourceFeature(0));
+        Assert.Equal([binned.FeatureNames[3], binned.FeatureNames[0]], picked.FeatureNames);
+    }
+
+    [Fact]
+    public void Encoding_the_training_matrix_reproduces_its_codes()
+    {
+        var panel = SyntheticPanel.Generate(new SyntheticPanelSpec { SampleCount = 400, FeatureCount = 4, MissingFraction = 0.1 });
+        var binned = new BinMapper().Bin(panel.Matrix);
+        var encoded = binned.Encode(panel.Matrix);
+        for (int f = 0; f < binned.FeatureCount; f++) Assert.Equal(binned.Codes(f).ToArray(), encoded.Codes(f).ToArray());
+    }
+}
