@@ -13,8 +13,16 @@ internal sealed class OrdinalKeyDictionaryConverter<TDictionary, TValue> : JsonC
 {
     public override TDictionary? Read(ref Utf8JsonReader reader, Type typeToConvert, JsonSerializerOptions options)
     {
-        var entries = JsonSerializer.Deserialize<Dictionary<string, TValue>>(ref reader, options);
-        if (entries is null) return default;
+        // Read entry by entry: deserializing a Dictionary here would come back to this converter.
+        if (reader.TokenType == JsonTokenType.Null) return default;
+        if (reader.TokenType != JsonTokenType.StartObject) throw new JsonException("A dictionary must be a JSON object.");
+        var entries = new Dictionary<string, TValue>(StringComparer.Ordinal);
+        while (reader.Read() && reader.TokenType != JsonTokenType.EndObject)
+        {
+            string key = reader.GetString() ?? throw new JsonException("A dictionary key is null.");
+            reader.Read();
+            entries[key] = JsonSerializer.Deserialize<TValue>(ref reader, options)!;
+        }
         if (typeToConvert == typeof(SortedDictionary<string, TValue>))
             return (TDictionary)(object)new SortedDictionary<string, TValue>(entries, StringComparer.Ordinal);
         return (TDictionary)(object)entries;
