@@ -5,7 +5,7 @@ internal static class LegendPainter
 {
     private const double RowHeight = 18;
     private const double SwatchWidth = 22;
-    private const int MaxNameCharacters = 40;
+    private const int MaxNameCharacters = 64;
 
     /// <summary>Height the legend will take when drawn across <paramref name="availableWidth"/>.</summary>
     public static double Height(IReadOnlyList<LegendEntry> entries, double availableWidth) =>

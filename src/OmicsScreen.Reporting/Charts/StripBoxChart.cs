@@ -19,6 +19,8 @@ public static class StripBoxChart
 {
     private const double GoldenRatioConjugate = 0.6180339887498949;
     private const int MaxGroupNameCharacters = 24;
+    private const double LinearRowPadding = 0.05;
+    private const double LogRowPadding = 1.3;
 
     public static SvgImage Render(StripBoxChartOptions options, IReadOnlyList<StripGroup> groups)
     {
@@ -34,7 +36,13 @@ public static class StripBoxChart
             ArgumentOutOfRangeException.ThrowIfNegative(group.BelowDetectionCount);
             censoredTotal += group.BelowDetectionCount;
         }
-        if (censoredTotal > 0) range.Include(options.DetectionLimit, log);
+        if (censoredTotal > 0 && (log ? options.DetectionLimit > 0 : double.IsFinite(options.DetectionLimit)))
+        {
+            range.Include(options.DetectionLimit, log);
+            // Room under the limit row so its hollow markers do not sit on the axis line.
+            double span = range.Maximum - range.Minimum;
+            range.Include(log ? options.DetectionLimit / LogRowPadding : options.DetectionLimit - LinearRowPadding * span, log);
+        }
         var scale = range.Scale(options.ValueScale);
         double limitRow = scale.CanShow(options.DetectionLimit) && censoredTotal > 0 ? options.DetectionLimit : scale.Minimum;
 
@@ -62,7 +70,7 @@ public static class StripBoxChart
             double y = area.Y(scale, limitRow);
             string rowLabel = scale.CanShow(options.DetectionLimit) ? "detection limit" : "below detection (limit unknown)";
             svg.Line(area.Left, y, area.Right, y, ChartPalette.Axis, 1, "3 3");
-            svg.Text(area.Right - 4, y - 5, rowLabel, TextAnchor.End, 11, fill: ChartPalette.Axis);
+            svg.Text(area.Left + 4, y - 5, rowLabel, TextAnchor.Start, 11, fill: ChartPalette.Axis);
         }
 
         double groupWidth = area.Width / groups.Count;
@@ -114,11 +122,14 @@ public static class StripBoxChart
             double y = area.Y(scale, limitRow);
             for (int i = 0; i < group.BelowDetectionCount; i++)
                 svg.Circle(centre + Jitter(pointIndex++) * stripWidth, y, 3.2, "none", colour, 1.5);
-            svg.Text(centre, Math.Min(y + 16, area.Bottom - 3), string.Create(CultureInfo.InvariantCulture, $"{group.BelowDetectionCount} below limit"), TextAnchor.Middle, 10, fill: ChartPalette.Axis);
         }
 
         svg.Text(centre, area.Bottom + 17, ChartText.Shorten(group.Name, MaxGroupNameCharacters), TextAnchor.Middle, tooltip: group.Name);
-        svg.Text(centre, area.Bottom + 32, string.Create(CultureInfo.InvariantCulture, $"n = {group.MeasuredValues.Count + group.BelowDetectionCount}"), TextAnchor.Middle, 11, fill: ChartPalette.Axis);
+        int sampleCount = group.MeasuredValues.Count + group.BelowDetectionCount;
+        string counts = group.BelowDetectionCount > 0
+            ? string.Create(CultureInfo.InvariantCulture, $"n = {sampleCount}, {group.BelowDetectionCount} below limit")
+            : string.Create(CultureInfo.InvariantCulture, $"n = {sampleCount}");
+        svg.Text(centre, area.Bottom + 32, counts, TextAnchor.Middle, 11, fill: ChartPalette.Axis);
         svg.EndGroup();
     }
 

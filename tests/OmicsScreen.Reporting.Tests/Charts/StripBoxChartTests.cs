@@ -34,9 +34,8 @@ public class StripBoxChartTests
         Assert.Single(rowY);
         var texts = Markup.Texts(document, "text");
         Assert.Contains("detection limit", texts);
-        Assert.Contains("3 below limit", texts);
-        Assert.Contains("n = 5", texts);
-        Assert.Contains("n = 4", texts);
+        Assert.Contains("n = 4, 1 below limit", texts);
+        Assert.Contains("n = 5, 3 below limit", texts);
     }
 
     [Fact]
