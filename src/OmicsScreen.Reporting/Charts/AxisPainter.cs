@@ -43,6 +43,25 @@ internal static class AxisPainter
         svg.EndGroup();
     }
 
+    /// <summary>Dash pattern of reference lines (null effect, thresholds, detection limits).</summary>
+    public const string ReferenceDash = "5 4";
+
+    /// <summary>A dashed vertical line across the plot at <paramref name="value"/>; nothing when the axis cannot show it.</summary>
+    public static void VerticalReference(SvgWriter svg, IAxisScale scale, PlotArea area, double value)
+    {
+        if (!scale.CanShow(value)) return;
+        double x = area.ClampedX(scale, value);
+        svg.Line(x, area.Top, x, area.Bottom, ChartPalette.Axis, 1.25, ReferenceDash);
+    }
+
+    /// <summary>A dashed horizontal line across the plot at <paramref name="value"/>; nothing when the axis cannot show it.</summary>
+    public static void HorizontalReference(SvgWriter svg, IAxisScale scale, PlotArea area, double value)
+    {
+        if (!scale.CanShow(value)) return;
+        double y = area.ClampedY(scale, value);
+        svg.Line(area.Left, y, area.Right, y, ChartPalette.Axis, 1.25, ReferenceDash);
+    }
+
     /// <summary>The chart title, centred at the top; returns the y below it.</summary>
     public static double Title(SvgWriter svg, int width, string title)
     {

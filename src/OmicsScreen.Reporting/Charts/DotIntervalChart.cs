@@ -46,11 +46,7 @@ public static class DotIntervalChart
         AxisPainter.Bottom(svg, scale, area, options.ValueAxisLabel);
         svg.Text(14, area.Top + area.Height / 2, options.ItemAxisLabel, TextAnchor.Middle, bold: true, rotateDegrees: -90);
 
-        if (scale.CanShow(options.ReferenceValue))
-        {
-            double x = area.X(scale, options.ReferenceValue);
-            svg.Line(x, area.Top, x, area.Bottom, ChartPalette.Axis, 1, "4 3");
-        }
+        AxisPainter.VerticalReference(svg, scale, area, options.ReferenceValue);
 
         svg.BeginGroup("rows");
         for (int i = 0; i < items.Count; i++)

@@ -51,11 +51,7 @@ public static class ForestPlotChart
         svg.Text(area.Left - 12, top - 8, options.StudyAxisLabel, TextAnchor.End, bold: true);
         svg.Text(area.Right + NumberColumnWidth, top - 8, "Estimate [interval]", TextAnchor.End, bold: true);
         AxisPainter.Bottom(svg, scale, area, options.EffectAxisLabel);
-        if (scale.CanShow(options.NullValue))
-        {
-            double x = area.X(scale, options.NullValue);
-            svg.Line(x, area.Top, x, area.Bottom, ChartPalette.Axis, 1.25, "5 4");
-        }
+        AxisPainter.VerticalReference(svg, scale, area, options.NullValue);
 
         svg.BeginGroup("studies");
         for (int i = 0; i < rows.Count; i++)

@@ -3,6 +3,9 @@ namespace OmicsScreen.Reporting.Charts;
 /// <summary>Draws a legend as rows of swatch + name, wrapping to the chart width.</summary>
 internal static class LegendPainter
 {
+    /// <summary>Dash pattern of a dashed data series, shared with its legend swatch.</summary>
+    public const string SeriesDash = "6 4";
+
     private const double RowHeight = 18;
     private const double SwatchWidth = 22;
     private const int MaxNameCharacters = 64;
@@ -54,7 +57,7 @@ internal static class LegendPainter
                 svg.Line(x, middle, x + SwatchWidth, middle, entry.Colour, 2);
                 break;
             case LegendSymbol.DashedLine:
-                svg.Line(x, middle, x + SwatchWidth, middle, entry.Colour, 2, "5 3");
+                svg.Line(x, middle, x + SwatchWidth, middle, entry.Colour, 2, SeriesDash);
                 break;
             case LegendSymbol.Dot:
                 svg.Circle(x + SwatchWidth / 2, middle, 4, entry.Colour);

@@ -69,7 +69,7 @@ public static class StripBoxChart
         {
             double y = area.Y(scale, limitRow);
             string rowLabel = scale.CanShow(options.DetectionLimit) ? "detection limit" : "below detection (limit unknown)";
-            svg.Line(area.Left, y, area.Right, y, ChartPalette.Axis, 1, "3 3");
+            AxisPainter.HorizontalReference(svg, scale, area, limitRow);
             svg.Text(area.Left + 4, y - 5, rowLabel, TextAnchor.Start, 11, fill: ChartPalette.Axis);
         }
 

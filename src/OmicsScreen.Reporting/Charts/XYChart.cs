@@ -155,7 +155,7 @@ public static class XYChart
         svg.BeginGroup(series.Name);
         bool drawLine = series.Style != XYSeriesStyle.Points;
         bool drawPoints = series.Style is XYSeriesStyle.Points or XYSeriesStyle.LineAndPoints;
-        string? dash = series.Style == XYSeriesStyle.DashedLine ? "6 4" : null;
+        string? dash = series.Style == XYSeriesStyle.DashedLine ? LegendPainter.SeriesDash : null;
         var runX = new List<double>();
         var runY = new List<double>();
         for (int i = 0; i <= series.X.Count; i++)
@@ -183,16 +183,14 @@ public static class XYChart
         if (line.Axis == ChartAxis.Y)
         {
             if (!yScale.CanShow(line.Value)) return;
-            double y = area.ClampedY(yScale, line.Value);
-            svg.Line(area.Left, y, area.Right, y, ChartPalette.Axis, 1.25, "5 4");
-            svg.Text(area.Right - 4, y - 5, label, TextAnchor.End, 11, fill: ChartPalette.Axis, tooltip: line.Label);
+            AxisPainter.HorizontalReference(svg, yScale, area, line.Value);
+            svg.Text(area.Right - 4, area.ClampedY(yScale, line.Value) - 5, label, TextAnchor.End, 11, fill: ChartPalette.Axis, tooltip: line.Label);
         }
         else
         {
             if (!xScale.CanShow(line.Value)) return;
-            double x = area.ClampedX(xScale, line.Value);
-            svg.Line(x, area.Top, x, area.Bottom, ChartPalette.Axis, 1.25, "5 4");
-            svg.Text(x + 4, area.Top + 12, label, TextAnchor.Start, 11, fill: ChartPalette.Axis, tooltip: line.Label);
+            AxisPainter.VerticalReference(svg, xScale, area, line.Value);
+            svg.Text(area.ClampedX(xScale, line.Value) + 4, area.Top + 12, label, TextAnchor.Start, 11, fill: ChartPalette.Axis, tooltip: line.Label);
         }
     }
 
