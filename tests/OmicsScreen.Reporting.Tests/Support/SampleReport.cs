@@ -30,7 +30,7 @@ internal static class SampleReport
     {
         var importance = DotIntervalChart.Render(
             new DotIntervalChartOptions("Top features by importance", AxisLabels[0], AxisLabels[1], ReferenceValue: 0, DrawBars: true,
-                LegendText: "Median across repeats; bars: 10th to 90th percentile"),
+                LegendText: "Median across repeats; whiskers: 10th to 90th percentile"),
             [
                 new DotIntervalItem(Script, 0.12, 0.08, 0.16),
                 new DotIntervalItem(NonAscii, 0.09, 0.05, 0.11),
