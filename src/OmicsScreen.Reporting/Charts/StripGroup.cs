@@ -1,0 +1,7 @@
+namespace OmicsScreen.Reporting.Charts;
+
+/// <summary>
+/// The values of one feature in one class for a <see cref="StripBoxChart"/>: the measured values
+/// (missing cells left out by the caller) and how many samples were below the detection limit.
+/// </summary>
+public sealed record StripGroup(string Name, IReadOnlyList<double> MeasuredValues, int BelowDetectionCount = 0);

@@ -1,0 +1,10 @@
+namespace OmicsScreen.Reporting.Html;
+
+/// <summary>How a table column's cells are aligned.</summary>
+public enum ColumnAlignment
+{
+    /// <summary>Left-aligned text (names, labels).</summary>
+    Text = 0,
+    /// <summary>Right-aligned with tabular figures, so decimal places line up down the column.</summary>
+    Numeric = 1,
+}

@@ -1,0 +1,32 @@
+using OmicsScreen.Reporting.Html;
+using OmicsScreen.Reporting.Tests.Support;
+
+namespace OmicsScreen.Reporting.Tests.Html;
+
+public class MarkupTextTests
+{
+    // OWASP XSS prevention guidance: encode & < > " ' in element content and quoted attributes.
+    [Fact]
+    public void The_five_markup_characters_are_encoded()
+    {
+        Assert.Equal("&lt;script&gt;alert(1)&lt;/script&gt;", MarkupText.Encode("<script>alert(1)</script>"));
+        Assert.Equal("&amp;amp; &quot;q&quot; &#39;s&#39;", MarkupText.Encode("&amp; \"q\" 's'"));
+    }
+
+    [Fact]
+    public void Non_ascii_letters_are_kept()
+    {
+        Assert.Same(SampleReport.NonAscii, MarkupText.Encode(SampleReport.NonAscii));
+        Assert.Equal("\U0001F9EC gene", MarkupText.Encode("\U0001F9EC gene")); // a surrogate pair stays whole
+    }
+
+    // XML 1.0 section 2.2 (Char production) forbids most C0 controls and unpaired surrogates.
+    [Fact]
+    public void Characters_xml_forbids_are_replaced_so_the_result_parses()
+    {
+        string encoded = MarkupText.Encode("a\u0001b\uD800c\uFFFEd\te");
+        Assert.Equal("a\uFFFDb\uFFFDc\uFFFDd\te", encoded);
+        var document = Markup.Parse("<p>" + encoded + "</p>");
+        Assert.Equal("a\uFFFDb\uFFFDc\uFFFDd\te", document.Root!.Value);
+    }
+}
