@@ -1,5 +1,7 @@
 using System.Globalization;
 using nietras.SeparatedValues;
+using OmicsScreen.Data.Tests.Support;
+using OmicsScreen.Data.Writing;
 using OmicsScreen.TestSupport;
 
 namespace OmicsScreen.Data.Tests;
@@ -82,5 +84,24 @@ public class WdbcLoadTests
         var expected = Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(File.ReadAllBytes(input.Path)));
         Assert.Equal(expected, input.Sha256);
         Assert.Equal(64, input.Sha256.Length);
+    }
+
+    [Fact]
+    public void Wdbc_converted_to_Parquet_and_Arrow_in_both_layouts_loads_identically()
+    {
+        var fromText = LoadWdbc().Panel;
+        using var folder = new TempFolder();
+        foreach (var layout in new[] { PanelLayout.SamplesInRows, PanelLayout.FeaturesInRows })
+        {
+            var parquet = folder.File($"wdbc-{layout}.parquet");
+            var arrow = folder.File($"wdbc-{layout}.arrows");
+            ParquetPanelWriter.Write(fromText, parquet, layout);
+            ArrowPanelWriter.Write(fromText, arrow, layout, asStream: true);
+            foreach (var path in new[] { parquet, arrow })
+            {
+                var loaded = PanelLoader.Load(new PanelLoadOptions { MatrixPath = path, OutcomeColumn = "diagnosis", Layout = layout });
+                PanelAssert.Identical(fromText, loaded.Panel);
+            }
+        }
     }
 }
