@@ -1,4 +1,5 @@
 using OmicsScreen.Cli.Console;
+using OmicsScreen.Data;
 
 namespace OmicsScreen.Cli;
 
@@ -17,6 +18,11 @@ internal static class CommandRunner
         try
         {
             return body();
+        }
+        catch (PanelInputException e)
+        {
+            console.Error.WriteLine($"error: {TextTable.Printable(e.Message)}");
+            return ExitCode.InputError;
         }
         catch (CommandInputException e)
         {

@@ -1,0 +1,18 @@
+using OmicsScreen.Cli.Console;
+using OmicsScreen.Data;
+
+namespace OmicsScreen.Cli.Commands;
+
+/// <summary>Loads a panel and prints its inspection; the exit code says whether it can be screened.</summary>
+internal static class CheckRun
+{
+    public static int Execute(CliConsole console, PanelLoadOptions options, bool json)
+    {
+        var loaded = PanelLoader.Load(options);
+        if (json) InspectionPrinter.WriteJson(loaded, console.Out);
+        else InspectionPrinter.WriteTable(loaded, console.Out);
+        if (loaded.Inspection.CanScreen) return ExitCode.Success;
+        console.Error.WriteLine("The panel cannot be screened as it is: see the errors above.");
+        return ExitCode.NotScreenable;
+    }
+}

@@ -1,0 +1,99 @@
+using System.CommandLine;
+using OmicsScreen.Cli.Console;
+
+namespace OmicsScreen.Cli.Commands;
+
+/// <summary>
+/// `omicsscreen grow`: one random forest on the whole panel, with its out-of-bag error and
+/// impurity decrease per feature. A quick look; the screen is what ranks markers.
+/// </summary>
+public sealed class GrowCommand : Command
+{
+    public PanelInputOptions Input { get; } = new();
+
+    public Option<int> Trees { get; } = new("--trees")
+    {
+        Description = "Trees in the forest.",
+        DefaultValueFactory = _ => 500,
+    };
+
+    public Option<int> FeaturesPerSplit { get; } = new("--features-per-split")
+    {
+        Description = "Features tried at each split. Default: floor(sqrt(features)).",
+        HelpName = "K",
+    };
+
+    public Option<int> MinLeaf { get; } = new("--min-leaf")
+    {
+        Description = "Fewest samples a leaf may hold (1 grows leaves to purity).",
+        DefaultValueFactory = _ => 1,
+    };
+
+    public Option<int?> MaxDepth { get; } = new("--max-depth")
+    {
+        Description = "Deepest level a split may sit at (the root is level 0). Default: no limit.",
+    };
+
+    public Option<double?> SampleFraction { get; } = new("--sample-fraction")
+    {
+        Description = "Grow each tree on this fraction of samples drawn without replacement, instead of a bootstrap (e.g. 0.632).",
+        HelpName = "F",
+    };
+
+    public Option<bool> Balanced { get; } = new("--balanced")
+    {
+        Description = "Draw the same number of samples from each class for every tree (for imbalanced outcomes).",
+    };
+
+    public Option<ulong> Seed { get; } = new("--seed")
+    {
+        Description = "Seed of every random draw; the same seed gives the same forest on any number of threads.",
+        DefaultValueFactory = _ => 1,
+    };
+
+    public Option<int> Threads { get; } = new("--threads")
+    {
+        Description = "Threads to grow trees on. Default: all cores.",
+    };
+
+    public Option<string?> ImportanceFile { get; } = new("--importance-out")
+    {
+        Description = "Write every feature's impurity decrease to this TSV file.",
+        HelpName = "FILE",
+    };
+
+    public Option<bool> Json { get; } = new("--json")
+    {
+        Description = "Print the summary as JSON instead of text.",
+    };
+
+    public GrowCommand(CliConsole console)
+        : base("grow", "Grow one random forest on a panel and report its out-of-bag error, AUC and impurity decrease per feature.")
+    {
+        Input.AddTo(this);
+        Options.Add(Trees);
+        Options.Add(FeaturesPerSplit);
+        Options.Add(MinLeaf);
+        Options.Add(MaxDepth);
+        Options.Add(SampleFraction);
+        Options.Add(Balanced);
+        Options.Add(Seed);
+        Options.Add(Threads);
+        Options.Add(ImportanceFile);
+        Options.Add(Json);
+        SetAction(parse => CommandRunner.Run(console, () => GrowRun.Execute(console, new GrowRunOptions
+        {
+            Panel = Input.ToLoadOptions(parse),
+            TreeCount = parse.GetValue(Trees),
+            FeaturesPerSplit = parse.GetValue(FeaturesPerSplit),
+            MinLeafSize = parse.GetValue(MinLeaf),
+            MaxDepth = parse.GetValue(MaxDepth),
+            SampleFraction = parse.GetValue(SampleFraction),
+            Balanced = parse.GetValue(Balanced),
+            Seed = parse.GetValue(Seed),
+            ThreadCount = parse.GetValue(Threads),
+            ImportanceFile = parse.GetValue(ImportanceFile),
+            Json = parse.GetValue(Json),
+        })));
+    }
+}

@@ -1,0 +1,149 @@
+using System.Diagnostics;
+using System.Globalization;
+using OmicsScreen.Cli.Console;
+using OmicsScreen.Data;
+using OmicsScreen.Data.Output;
+using OmicsScreen.Engine.Forests;
+using OmicsScreen.Reporting.Json;
+using OmicsScreen.Reporting.Tables;
+
+namespace OmicsScreen.Cli.Commands;
+
+/// <summary>Loads a panel, grows one forest and reports it.</summary>
+internal static class GrowRun
+{
+    private const int PrintedFeatures = 15;
+
+    public static int Execute(CliConsole console, GrowRunOptions options)
+    {
+        options.Validate();
+        var watch = Stopwatch.StartNew();
+        var loaded = PanelLoader.Load(options.Panel).EnsureScreenable();
+        var loadTime = watch.Elapsed;
+        var panel = loaded.Panel;
+        var forestOptions = options.ToForestOptions(panel);
+        try
+        {
+            forestOptions.Validate(panel.SampleCount);
+        }
+        catch (ArgumentException e)
+        {
+            throw new CommandInputException(e.Message);
+        }
+        var grown = ForestGrower.Grow(panel, forestOptions);
+        var result = grown.Result;
+        var ranked = RankByImpurity(result);
+
+        if (options.ImportanceFile is { } path)
+            AtomicFile.WriteText(path, writer => ImportanceWriter.Write(writer, panel.Matrix.FeatureNames, ranked, result));
+
+        if (options.Json) WriteJson(console.Out, loaded, result, ranked, loadTime);
+        else WriteText(console.Out, loaded, result, ranked, loadTime);
+        return ExitCode.Success;
+    }
+
+    /// <summary>Feature indices by decreasing impurity decrease; ties by feature order, so the list is stable.</summary>
+    private static int[] RankByImpurity(ForestResult result)
+    {
+        var order = Enumerable.Range(0, result.MeanDecreaseImpurity.Count).ToArray();
+        Array.Sort(order, (a, b) =>
+        {
+            int byValue = result.MeanDecreaseImpurity[b].CompareTo(result.MeanDecreaseImpurity[a]);
+            return byValue != 0 ? byValue : a.CompareTo(b);
+        });
+        return order;
+    }
+
+    private static void WriteText(TextWriter output, LoadedPanel loaded, ForestResult result, int[] ranked, TimeSpan loadTime)
+    {
+        var panel = loaded.Panel;
+        var outcome = panel.Outcome;
+        output.WriteLine($"Forest of {result.Options.TreeCount} trees on {Path.GetFileName(loaded.Inspection.MatrixPath)}: "
+            + $"{panel.SampleCount} samples, {panel.FeatureCount} features, {result.FeaturesPerSplit} tried per split, seed {result.Options.Seed}");
+        output.WriteLine();
+        var summary = new TextTable("measure", "value").AlignRight(1);
+        summary.Add("out-of-bag error", Fraction(result.OutOfBagError));
+        for (int c = 0; c < outcome.ClassCount; c++)
+            summary.Add($"  error in {outcome.ClassNames[c]} ({outcome.ClassCounts[c]})", Fraction(result.PerClassError[c]));
+        if (result.OutOfBagAuc is { } auc) summary.Add($"out-of-bag AUC ({outcome.ClassNames[outcome.PositiveClass]} positive)", auc.ToString("0.000", CultureInfo.InvariantCulture));
+        foreach (var (label, trees) in CurveCheckpoints(result.ErrorCurve.Count))
+            summary.Add($"error after {trees} trees{label}", Fraction(result.ErrorCurve[trees - 1]));
+        summary.Add("load time", Seconds(loadTime));
+        summary.Add("binning time", Seconds(result.BinningTime));
+        summary.Add("training time", Seconds(result.TrainingTime));
+        summary.WriteTo(output);
+        output.WriteLine();
+        output.WriteLine($"Top {Math.Min(PrintedFeatures, ranked.Length)} features by mean decrease in Gini impurity");
+        var top = new TextTable("rank", "feature", "mean decrease", "share").AlignRight(0, 2, 3);
+        for (int i = 0; i < Math.Min(PrintedFeatures, ranked.Length); i++)
+        {
+            int f = ranked[i];
+            top.Add((i + 1).ToString(CultureInfo.InvariantCulture), panel.Matrix.FeatureNames[f],
+                result.MeanDecreaseImpurity[f].ToString("0.00000", CultureInfo.InvariantCulture),
+                result.NormalisedDecreaseImpurity[f].ToString("0.0%", CultureInfo.InvariantCulture));
+        }
+        top.WriteTo(output);
+        output.WriteLine();
+        output.WriteLine("The ranking of one forest depends on its seed and favours features with many distinct values; treat it as a first look.");
+    }
+
+    /// <summary>Points of the error curve worth printing: a tenth, half and all of the trees.</summary>
+    private static IEnumerable<(string Label, int Trees)> CurveCheckpoints(int treeCount)
+    {
+        var seen = new HashSet<int>();
+        foreach (var (label, trees) in new[] { ("", Math.Max(1, treeCount / 10)), ("", Math.Max(1, treeCount / 2)), (" (all)", treeCount) })
+            if (seen.Add(trees)) yield return (label, trees);
+    }
+
+    private static void WriteJson(TextWriter output, LoadedPanel loaded, ForestResult result, int[] ranked, TimeSpan loadTime)
+    {
+        var panel = loaded.Panel;
+        var document = new
+        {
+            panel = new
+            {
+                matrix = loaded.Inspection.MatrixPath,
+                samples = panel.SampleCount,
+                features = panel.FeatureCount,
+                classes = panel.Outcome.ClassNames,
+                class_counts = panel.Outcome.ClassCounts.ToArray(),
+                positive_class = panel.Outcome.ClassNames[panel.Outcome.PositiveClass],
+            },
+            forest = new
+            {
+                trees = result.Options.TreeCount,
+                features_per_split = result.FeaturesPerSplit,
+                min_leaf = result.Options.Tree.MinLeafSize,
+                max_depth = result.Options.Tree.MaxDepth == int.MaxValue ? (int?)null : result.Options.Tree.MaxDepth,
+                drawing = result.Options.Sampling.Drawing.ToString().ToLowerInvariant(),
+                sample_fraction = result.Options.Sampling.Drawing == Engine.Sampling.SampleDrawing.Subsample ? result.Options.Sampling.SubsampleFraction : (double?)null,
+                class_balanced = result.Options.Sampling.ClassBalanced,
+                seed = result.Options.Seed,
+            },
+            out_of_bag = new
+            {
+                error = result.OutOfBagError,
+                per_class_error = panel.Outcome.ClassNames.Select((name, c) => new { @class = name, error = result.PerClassError[c] }).ToArray(),
+                auc = result.OutOfBagAuc,
+                error_curve = result.ErrorCurve,
+            },
+            seconds = new
+            {
+                load = loadTime.TotalSeconds,
+                binning = result.BinningTime.TotalSeconds,
+                training = result.TrainingTime.TotalSeconds,
+            },
+            impurity_decrease = ranked.Select(f => new
+            {
+                feature = panel.Matrix.FeatureNames[f],
+                mean_decrease = result.MeanDecreaseImpurity[f],
+                share = result.NormalisedDecreaseImpurity[f],
+            }).ToArray(),
+        };
+        ManifestJson.Write(output, document);
+    }
+
+    private static string Fraction(double value) => value.ToString("0.0000", CultureInfo.InvariantCulture);
+
+    private static string Seconds(TimeSpan time) => time.TotalSeconds.ToString("0.000", CultureInfo.InvariantCulture) + " s";
+}

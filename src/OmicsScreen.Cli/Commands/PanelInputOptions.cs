@@ -1,0 +1,98 @@
+using System.CommandLine;
+using OmicsScreen.Data;
+
+namespace OmicsScreen.Cli.Commands;
+
+/// <summary>
+/// The options that say where a panel is and which columns mean what; shared by every verb
+/// that reads a panel, so they are spelled and validated the same way everywhere.
+/// </summary>
+public sealed class PanelInputOptions
+{
+    public Argument<string> Panel { get; } = new("PANEL")
+    {
+        Description = "The measurement matrix: CSV, TSV, Parquet or Arrow IPC (file or stream).",
+    };
+
+    public Option<string?> SampleSheet { get; } = new("--samples")
+    {
+        Description = "Sample sheet (CSV/TSV) joined to the matrix on sample id; holds the outcome and other sample columns.",
+        HelpName = "SHEET",
+    };
+
+    public Option<string> Outcome { get; } = new("--outcome")
+    {
+        Description = "Column holding each sample's class (in the sample sheet, or a text column of the matrix file).",
+        HelpName = "COLUMN",
+        Required = true,
+    };
+
+    public Option<string?> Cohort { get; } = new("--cohort")
+    {
+        Description = "Column naming each sample's cohort, recruitment centre or processing batch.",
+        HelpName = "COLUMN",
+    };
+
+    public Option<string?> Subject { get; } = new("--subject")
+    {
+        Description = "Column naming each sample's subject, when replicates or repeat visits share one; they are resampled together.",
+        HelpName = "COLUMN",
+    };
+
+    public Option<string?> PositiveClass { get; } = new("--positive-class")
+    {
+        Description = "The class scored as positive (AUC, direction of effect). Default: the smallest class.",
+        HelpName = "LABEL",
+    };
+
+    public Option<string?> SampleIdColumn { get; } = new("--id-column")
+    {
+        Description = "Sample id column of the matrix and the sample sheet. Default: the first column.",
+        HelpName = "COLUMN",
+    };
+
+    public Option<string[]> Annotations { get; } = new("--annotation")
+    {
+        Description = "Another text column of the matrix file that describes samples rather than measuring them (repeatable).",
+        HelpName = "COLUMN",
+        AllowMultipleArgumentsPerToken = false,
+    };
+
+    public Option<bool> FeaturesInRows { get; } = new("--features-in-rows")
+    {
+        Description = "The matrix has one feature per row and one sample per column.",
+    };
+
+    public Option<bool> DropUnmatched { get; } = new("--drop-unmatched")
+    {
+        Description = "Drop samples found in only one of matrix and sample sheet (with a warning) instead of stopping.",
+    };
+
+    public void AddTo(Command command)
+    {
+        command.Arguments.Add(Panel);
+        command.Options.Add(SampleSheet);
+        command.Options.Add(Outcome);
+        command.Options.Add(Cohort);
+        command.Options.Add(Subject);
+        command.Options.Add(PositiveClass);
+        command.Options.Add(SampleIdColumn);
+        command.Options.Add(Annotations);
+        command.Options.Add(FeaturesInRows);
+        command.Options.Add(DropUnmatched);
+    }
+
+    public PanelLoadOptions ToLoadOptions(ParseResult parse) => new()
+    {
+        MatrixPath = parse.GetValue(Panel)!,
+        SampleSheetPath = parse.GetValue(SampleSheet),
+        OutcomeColumn = parse.GetValue(Outcome)!,
+        CohortColumn = parse.GetValue(Cohort),
+        SubjectColumn = parse.GetValue(Subject),
+        PositiveClass = parse.GetValue(PositiveClass),
+        SampleIdColumn = parse.GetValue(SampleIdColumn),
+        AnnotationColumns = parse.GetValue(Annotations) ?? [],
+        Layout = parse.GetValue(FeaturesInRows) ? PanelLayout.FeaturesInRows : PanelLayout.SamplesInRows,
+        DropUnmatchedSamples = parse.GetValue(DropUnmatched),
+    };
+}

@@ -1,0 +1,109 @@
+using System.Globalization;
+using System.Text.Json;
+using System.Text.Json.Serialization;
+using OmicsScreen.Data;
+using OmicsScreen.Data.Inspection;
+
+namespace OmicsScreen.Cli.Console;
+
+/// <summary>Prints what `check` found, as a readable summary or as JSON for pipelines.</summary>
+internal static class InspectionPrinter
+{
+    private const int ListedNames = 5;
+
+    public static void WriteTable(LoadedPanel loaded, TextWriter output)
+    {
+        var i = loaded.Inspection;
+        var facts = new TextTable("item", "found");
+        facts.Add("matrix", $"{i.MatrixPath} ({FormatName(i.FileFormat, i.Delimiter)}, {LayoutName(i.Layout)})");
+        if (i.SampleSheetPath is not null) facts.Add("sample sheet", i.SampleSheetPath);
+        facts.Add("samples", Count(i.SampleCount));
+        facts.Add("features", Count(i.FeatureCount));
+        facts.Add("outcome", $"{i.OutcomeColumn}: " + string.Join(", ", i.Classes.Select(c => $"{c.Name} {c.SampleCount}")) + $" (positive class: {i.PositiveClass})");
+        if (i.CohortColumn is not null)
+            facts.Add("cohorts", $"{i.CohortColumn}: " + string.Join(", ", i.Cohorts.Select(c => $"{c.Name} {c.SampleCount}")));
+        if (i.SubjectColumn is not null) facts.Add("subjects", $"{i.SubjectColumn}: {Count(i.SubjectCount)}");
+        facts.Add("missing cells", Percent(i.MissingFraction));
+        if (i.MostMissingFeatures.Count > 0)
+            facts.Add("most missing", string.Join(", ", i.MostMissingFeatures.Take(ListedNames).Select(f => $"{f.Feature} {Percent(f.Fraction)}")));
+        facts.Add("below detection", $"{Count(i.BelowDetectionCellCount)} cells in {Count(i.BelowDetectionFeatureCount)} features");
+        facts.Add("constant features", Names(i.ConstantFeatures));
+        facts.Add("all-missing features", Names(i.AllMissingFeatures));
+        if (i.DroppedSamples.Count > 0) facts.Add("dropped samples", Names(i.DroppedSamples));
+        output.WriteLine("Panel check");
+        facts.WriteTo(output);
+
+        if (i.CohortColumn is not null && i.ClassesByCohort.Count > 0)
+        {
+            output.WriteLine();
+            output.WriteLine("Samples by class and cohort");
+            var classes = i.Classes.Select(c => c.Name).ToArray();
+            var table = new TextTable(["cohort", .. classes]).AlignRight(Enumerable.Range(1, classes.Length).ToArray());
+            foreach (var cohort in i.Cohorts)
+                table.Add([cohort.Name, .. classes.Select(c => Count(i.ClassesByCohort.FirstOrDefault(x => x.Cohort == cohort.Name && x.ClassName == c)?.SampleCount ?? 0))]);
+            table.WriteTo(output);
+        }
+
+        output.WriteLine();
+        if (i.Findings.Count == 0)
+        {
+            output.WriteLine("No problems found.");
+        }
+        else
+        {
+            output.WriteLine("Findings");
+            var findings = new TextTable("severity", "code", "message");
+            foreach (var f in i.Findings.OrderByDescending(f => f.Severity))
+                findings.Add(SeverityName(f.Severity), f.Code, f.Message);
+            findings.WriteTo(output);
+        }
+        output.WriteLine();
+        output.WriteLine(i.CanScreen ? "Verdict: the panel can be screened." : "Verdict: the panel cannot be screened until the errors are fixed.");
+    }
+
+    public static void WriteJson(LoadedPanel loaded, TextWriter output)
+    {
+        var options = new JsonSerializerOptions
+        {
+            WriteIndented = true,
+            PropertyNamingPolicy = JsonNamingPolicy.SnakeCaseLower,
+            Converters = { new JsonStringEnumConverter(JsonNamingPolicy.SnakeCaseLower) },
+            NumberHandling = JsonNumberHandling.AllowNamedFloatingPointLiterals,
+        };
+        var document = new
+        {
+            can_screen = loaded.Inspection.CanScreen,
+            inspection = loaded.Inspection,
+            inputs = loaded.Inputs,
+        };
+        output.WriteLine(JsonSerializer.Serialize(document, options));
+    }
+
+    private static string FormatName(MatrixFileFormat format, string? delimiter) => format switch
+    {
+        MatrixFileFormat.DelimitedText => $"text, {delimiter ?? "?"}-separated",
+        MatrixFileFormat.Parquet => "Parquet",
+        MatrixFileFormat.ArrowFile => "Arrow IPC file",
+        MatrixFileFormat.ArrowStream => "Arrow IPC stream",
+        _ => format.ToString(),
+    };
+
+    private static string LayoutName(PanelLayout layout) =>
+        layout == PanelLayout.SamplesInRows ? "samples in rows" : "features in rows";
+
+    private static string SeverityName(FindingSeverity severity) => severity switch
+    {
+        FindingSeverity.Error => "ERROR",
+        FindingSeverity.Warning => "warning",
+        _ => "note",
+    };
+
+    private static string Count(long value) => value.ToString("N0", CultureInfo.InvariantCulture);
+
+    private static string Percent(double fraction) => fraction.ToString("0.0#%", CultureInfo.InvariantCulture);
+
+    private static string Names(IReadOnlyList<string> names) =>
+        names.Count == 0 ? "none"
+        : names.Count <= ListedNames ? $"{names.Count}: {string.Join(", ", names)}"
+        : $"{names.Count}: {string.Join(", ", names.Take(ListedNames))}, and {names.Count - ListedNames} more";
+}

@@ -1,0 +1,93 @@
+namespace OmicsScreen.Screening.Screen;
+
+/// <summary>
+/// Every setting of a screen, with its default, in one place: the CLI builds its options from
+/// these defaults and the manifest echoes the resolved record whole, so a run can be repeated.
+/// </summary>
+public sealed record ScreenOptions
+{
+    /// <summary>Seed of the whole run; every random stream is derived from it.</summary>
+    public ulong Seed { get; init; } = 1;
+
+    /// <summary>
+    /// Complementary pairs of half-samples (Shah &amp; Samworth 2013); the screen grows two
+    /// forests on each half, so repeats = 2 x pairs.
+    /// </summary>
+    public int HalfSamplePairs { get; init; } = 25;
+
+    public int TreesPerForest { get; init; } = 500;
+
+    /// <summary>Features tried at each split; 0 means floor(sqrt(features)), common practice since Breiman 2001.</summary>
+    public int FeaturesPerSplit { get; init; }
+
+    public int MinLeafSize { get; init; } = 1;
+
+    /// <summary>Class-balanced drawing for each tree (Chen, Liaw &amp; Breiman 2004).</summary>
+    public BalanceMode Balance { get; init; } = BalanceMode.Auto;
+
+    /// <summary>
+    /// Bound on the expected number of noise features selected in a repeat's top list that still
+    /// reach the frequency threshold (Meinshausen &amp; Buhlmann 2010); sets how many features each
+    /// repeat selects when <see cref="SelectedPerRepeat"/> is 0.
+    /// </summary>
+    public double ExpectedFalseSelections { get; init; } = 1.0;
+
+    /// <summary>Features each repeat selects; 0 derives it from <see cref="ExpectedFalseSelections"/>.</summary>
+    public int SelectedPerRepeat { get; init; }
+
+    /// <summary>Selection frequency a feature needs to enter the shortlist; in (0.5, 1].</summary>
+    public double FrequencyThreshold { get; init; } = 0.6;
+
+    /// <summary>False discovery rate level for the importance q-values of shortlisted features.</summary>
+    public double QValueThreshold { get; init; } = 0.10;
+
+    /// <summary>Decoys (permuted copies of real features) per repeat; -1 means automatic.</summary>
+    public int DecoyCount { get; init; } = -1;
+
+    /// <summary>Above this many features, automatic decoys are off (they would widen every forest).</summary>
+    public int AutomaticDecoyFeatureLimit { get; init; } = 5000;
+
+    /// <summary>Outcome permutations for Altmann et al. (2010) p-values; 0 turns them off.</summary>
+    public int OutcomePermutations { get; init; }
+
+    /// <summary>Spearman |rho| at or above which shortlisted markers share a redundancy group.</summary>
+    public double RedundancyCorrelation { get; init; } = 0.7;
+
+    /// <summary>Outer folds of the panel-size curve; 0 skips the curve.</summary>
+    public int CurveFolds { get; init; } = 5;
+
+    public int CurveFoldRepeats { get; init; } = 1;
+
+    /// <summary>Half-sample pairs of the screen run inside each outer fold.</summary>
+    public int CurveInnerPairs { get; init; } = 5;
+
+    /// <summary>Largest panel size on the curve's grid.</summary>
+    public int CurveMaxPanelSize { get; init; } = 55;
+
+    public int ThreadCount { get; init; }
+
+    public void Validate()
+    {
+        Require(HalfSamplePairs >= 1, "The number of half-sample pairs must be at least 1.");
+        Require(TreesPerForest >= 10, "A forest needs at least 10 trees.");
+        Require(FeaturesPerSplit >= 0, "Features per split must be positive (or 0 for the default).");
+        Require(MinLeafSize >= 1, "The minimum leaf size must be at least 1.");
+        Require(ExpectedFalseSelections > 0, "The expected number of false selections must be positive.");
+        Require(SelectedPerRepeat >= 0, "Features selected per repeat must be positive (or 0 for the default).");
+        Require(FrequencyThreshold > 0.5 && FrequencyThreshold <= 1, "The frequency threshold must lie in (0.5, 1].");
+        Require(QValueThreshold > 0 && QValueThreshold <= 1, "The q-value threshold must lie in (0, 1].");
+        Require(DecoyCount >= -1, "The decoy count must be 0 or more (or -1 for automatic).");
+        Require(OutcomePermutations >= 0, "Outcome permutations must be 0 or more.");
+        Require(RedundancyCorrelation > 0 && RedundancyCorrelation <= 1, "The redundancy correlation must lie in (0, 1].");
+        Require(CurveFolds == 0 || CurveFolds >= 2, "The panel-size curve needs at least 2 folds (or 0 to skip it).");
+        Require(CurveFoldRepeats >= 1, "Curve fold repeats must be at least 1.");
+        Require(CurveInnerPairs >= 1, "The curve's inner screen needs at least 1 half-sample pair.");
+        Require(CurveMaxPanelSize >= 1, "The largest panel size must be at least 1.");
+        Require(ThreadCount >= 0, "The thread count must be 0 (all cores) or more.");
+    }
+
+    private static void Require(bool condition, string message)
+    {
+        if (!condition) throw new ArgumentException(message);
+    }
+}
