@@ -28,6 +28,9 @@ public static class ForestTrainer
         if (outcome.SampleCount != sampleCount) throw new ArgumentException("The outcome must have one class per sample.");
         if (sampleWeights is not null && sampleWeights.Length != sampleCount)
             throw new ArgumentException("One weight per sample is needed.");
+        if (sampleWeights is not null)
+            foreach (double weight in sampleWeights)
+                if (!(weight >= 0) || double.IsInfinity(weight)) throw new ArgumentException("Sample weights must be finite and not negative.");
         if (matrix.FeatureCount < 1) throw new ArgumentException("A forest needs at least one feature.");
         options.Validate(sampleCount);
         int count = treeCount ?? options.TreeCount - firstTree;

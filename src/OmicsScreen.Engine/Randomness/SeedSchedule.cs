@@ -15,6 +15,7 @@ public static class SeedSchedule
     {
         ulong state = SplitMix64.Mix(runSeed + SplitMix64.Increment);
         state = SplitMix64.Mix(state ^ (SplitMix64.Increment * (1UL + (uint)repeat)));
+        // Purposes are below 256, so (index << 8) ^ purpose differs for every (index, purpose) pair.
         state = SplitMix64.Mix(state ^ ((ulong)(uint)index << 8) ^ (ulong)purpose);
         return state;
     }

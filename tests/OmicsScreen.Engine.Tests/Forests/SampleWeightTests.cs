@@ -39,4 +39,16 @@ public class SampleWeightTests
             Assert.Equal(80 - weightedOutOfBag, forest.Tree(t).NodeSampleCounts[0]);
         }
     }
+
+    [Fact]
+    public void Negative_or_missing_weights_are_refused()
+    {
+        var panel = SyntheticPanel.Generate(new SyntheticPanelSpec { SampleCount = 10, FeatureCount = 3 });
+        var binned = new BinMapper().Bin(panel.Matrix);
+        var weights = Enumerable.Repeat(1.0, 10).ToArray();
+        weights[3] = -1;
+        Assert.Throws<ArgumentException>(() => ForestTrainer.Train(binned, panel.Outcome, new ForestOptions { TreeCount = 2 }, sampleWeights: weights));
+        weights[3] = double.NaN;
+        Assert.Throws<ArgumentException>(() => ForestTrainer.Train(binned, panel.Outcome, new ForestOptions { TreeCount = 2 }, sampleWeights: weights));
+    }
 }
