@@ -18,4 +18,6 @@ public enum SeedPurpose : ulong
     Shadow = 5,
     /// <summary>Drawing resamples or folds in the screening layer.</summary>
     Resampling = 6,
+    /// <summary>Permutations of the outcome labels that build an outcome-permutation null of importance.</summary>
+    OutcomePermutation = 7,
 }

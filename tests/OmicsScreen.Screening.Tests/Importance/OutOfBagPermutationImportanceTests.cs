@@ -1,0 +1,57 @@
+using OmicsScreen.Engine.Forests;
+using OmicsScreen.Screening.Importance;
+
+namespace OmicsScreen.Screening.Tests.Importance;
+
+public class OutOfBagPermutationImportanceTests
+{
+    [Fact]
+    public void Permuting_only_split_features_equals_permuting_every_feature_exactly()
+    {
+        var (matrix, outcome) = ImportanceTestPanels.Binned(120, 40, 4, 1.0, seed: 3);
+        var forest = ForestTrainer.Train(matrix, outcome, new ForestOptions { TreeCount = 60, Seed = 7, ThreadCount = 2 });
+
+        var fast = OutOfBagPermutationImportance.Measure(forest, matrix, outcome, threadCount: 2);
+        var naive = OutOfBagPermutationImportance.MeasureNaive(forest, matrix, outcome);
+
+        Assert.Equal(naive.MeanAccuracyDrop, fast.MeanAccuracyDrop);
+        Assert.Equal(naive.StandardError, fast.StandardError);
+        Assert.Equal(naive.MeanBrierIncrease, fast.MeanBrierIncrease);
+        // The comparison must not be vacuous: some feature matters.
+        Assert.Contains(fast.MeanAccuracyDrop, drop => drop > 0.01);
+    }
+
+    [Fact]
+    public void Results_are_identical_with_one_and_two_threads()
+    {
+        var (matrix, outcome) = ImportanceTestPanels.Binned(120, 40, 4, 1.0, seed: 4);
+        var forest = ForestTrainer.Train(matrix, outcome, new ForestOptions { TreeCount = 60, Seed = 2, ThreadCount = 2 });
+        var one = OutOfBagPermutationImportance.Measure(forest, matrix, outcome, threadCount: 1);
+        var two = OutOfBagPermutationImportance.Measure(forest, matrix, outcome, threadCount: 2);
+        Assert.Equal(one.MeanAccuracyDrop, two.MeanAccuracyDrop);
+        Assert.Equal(one.StandardError, two.StandardError);
+        Assert.Equal(one.MeanBrierIncrease, two.MeanBrierIncrease);
+
+        int[][] groups = [[0, 1], [2], [10, 11, 12]];
+        Assert.Equal(OutOfBagPermutationImportance.MeasureGroups(forest, matrix, outcome, groups, threadCount: 1),
+            OutOfBagPermutationImportance.MeasureGroups(forest, matrix, outcome, groups, threadCount: 2));
+    }
+
+    [Fact]
+    public void Informative_features_lose_accuracy_and_gain_Brier_score_when_permuted_and_noise_does_not()
+    {
+        var (matrix, outcome) = ImportanceTestPanels.Binned(200, 30, 3, 1.5, seed: 5);
+        var forest = ForestTrainer.Train(matrix, outcome, new ForestOptions { TreeCount = 200, Seed = 1 });
+        var importance = OutOfBagPermutationImportance.Measure(forest, matrix, outcome);
+        double noiseMean = 0;
+        for (int f = 3; f < 30; f++) noiseMean += importance.MeanAccuracyDrop[f] / 27;
+        // Breiman 2001: permuting a feature the outcome depends on raises OOB error; noise leaves it unchanged on average.
+        for (int f = 0; f < 3; f++)
+        {
+            Assert.True(importance.MeanAccuracyDrop[f] > noiseMean + 4 * importance.StandardError[f],
+                $"feature {f}: drop {importance.MeanAccuracyDrop[f]:F4}, SE {importance.StandardError[f]:F4}, noise mean {noiseMean:F4}");
+            Assert.True(importance.MeanBrierIncrease[f] > 0.01, $"feature {f}: Brier increase {importance.MeanBrierIncrease[f]:F4}");
+        }
+        Assert.InRange(noiseMean, -0.01, 0.01);
+    }
+}
