@@ -13,6 +13,7 @@ public static class CommandLine
             "OmicsScreen: rank the markers of a discovery omics panel with repeated random forests, "
             + "and shortlist the few worth a validation study. Research use only; a screen is not a diagnostic test.");
         root.Subcommands.Add(new CheckCommand(console));
+        root.Subcommands.Add(new ScreenCommand(console));
         root.Subcommands.Add(new GrowCommand(console));
         root.Subcommands.Add(new DemoCommand(console));
         return root;

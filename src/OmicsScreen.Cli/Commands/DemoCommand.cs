@@ -33,13 +33,19 @@ public sealed class DemoCommand : Command
         Description = "Only write the demo panel; do not run the screen on it.",
     };
 
+    public Option<bool> Quiet { get; } = new("--quiet")
+    {
+        Description = "No progress display.",
+    };
+
     public DemoCommand(CliConsole console) : base("demo", "Write the invented demo panel and run the main job on it.")
     {
         Options.Add(PanelFolder);
         Options.Add(ReportFolder);
         Options.Add(Seed);
         Options.Add(PanelOnly);
+        Options.Add(Quiet);
         SetAction(parse => CommandRunner.Run(console, () => DemoRun.Execute(console, new DemoRunOptions(
-            parse.GetValue(PanelFolder)!, parse.GetValue(ReportFolder)!, parse.GetValue(Seed), parse.GetValue(PanelOnly)))));
+            parse.GetValue(PanelFolder)!, parse.GetValue(ReportFolder)!, parse.GetValue(Seed), parse.GetValue(PanelOnly), parse.GetValue(Quiet)))));
     }
 }

@@ -1,10 +1,11 @@
 using OmicsScreen.Cli.Console;
 using OmicsScreen.Data;
 using OmicsScreen.Data.Demo;
+using OmicsScreen.Screening.Screen;
 
 namespace OmicsScreen.Cli.Commands;
 
-/// <summary>The demo's steps: generate and write the study, check it, then run the main job on it.</summary>
+/// <summary>The demo's steps: generate and write the study, check it, then screen it.</summary>
 internal static class DemoRun
 {
     public static int Execute(CliConsole console, DemoRunOptions options)
@@ -27,14 +28,25 @@ internal static class DemoRun
         int checkCode = CheckRun.Execute(console, panel, json: false);
         if (checkCode != ExitCode.Success) return checkCode;
 
-        Directory.CreateDirectory(options.ReportFolder);
-        string importance = Path.Combine(options.ReportFolder, "forest_importance.tsv");
         console.Out.WriteLine();
-        int growCode = GrowRun.Execute(console, new GrowRunOptions { Panel = panel, ImportanceFile = importance });
-        if (growCode != ExitCode.Success) return growCode;
-        console.Out.WriteLine();
-        console.Out.WriteLine($"Impurity decrease of every analyte: {importance}");
-        console.Out.WriteLine($"Compare with what was planted:      {files.Truth}");
+        var commandLine = new List<string>
+        {
+            "omicsscreen", "screen", files.Panel, "--samples", files.SampleSheet, "--outcome", DemoStudy.OutcomeColumn,
+            "--cohort", DemoStudy.CentreColumn, "--out", options.ReportFolder, "--force",
+        };
+        if (options.Quiet) commandLine.Add("--quiet");
+        int screenCode = ScreenRun.Execute(console, new ScreenRunOptions
+        {
+            Panel = panel,
+            Screen = new ScreenOptions(),
+            OutputFolder = options.ReportFolder,
+            // The demo's folder is the demo's own: rerunning the demo replaces it.
+            Force = true,
+            Quiet = options.Quiet,
+            CommandLine = commandLine,
+        });
+        if (screenCode != ExitCode.Success) return screenCode;
+        console.Out.WriteLine($"Compare the shortlist with what was planted: {files.Truth}");
         return ExitCode.Success;
     }
 }

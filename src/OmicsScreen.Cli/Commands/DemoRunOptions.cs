@@ -1,4 +1,4 @@
 namespace OmicsScreen.Cli.Commands;
 
 /// <summary>Everything `demo` was asked to do.</summary>
-public sealed record DemoRunOptions(string PanelFolder, string ReportFolder, ulong Seed, bool PanelOnly);
+public sealed record DemoRunOptions(string PanelFolder, string ReportFolder, ulong Seed, bool PanelOnly, bool Quiet = false);

@@ -26,13 +26,13 @@ public sealed record ScreenOptions
     public BalanceMode Balance { get; init; } = BalanceMode.Auto;
 
     /// <summary>
-    /// Bound on the expected number of noise features selected in a repeat's top list that still
-    /// reach the frequency threshold (Meinshausen &amp; Buhlmann 2010); sets how many features each
-    /// repeat selects when <see cref="SelectedPerRepeat"/> is 0.
+    /// A repeat selects the features whose corrected importance exceeds the (1 - level) quantile
+    /// of that repeat's null sample (mirrored non-positive importances and decoys): a test per
+    /// repeat, whose passes are then counted over repeats.
     /// </summary>
-    public double ExpectedFalseSelections { get; init; } = 1.0;
+    public double RepeatSelectionLevel { get; init; } = 0.10;
 
-    /// <summary>Features each repeat selects; 0 derives it from <see cref="ExpectedFalseSelections"/>.</summary>
+    /// <summary>Most features a repeat may select (its best ones); 0 sets no cap.</summary>
     public int SelectedPerRepeat { get; init; }
 
     /// <summary>Selection frequency a feature needs to enter the shortlist; in (0.5, 1].</summary>
@@ -72,8 +72,8 @@ public sealed record ScreenOptions
         Require(TreesPerForest >= 10, "A forest needs at least 10 trees.");
         Require(FeaturesPerSplit >= 0, "Features per split must be positive (or 0 for the default).");
         Require(MinLeafSize >= 1, "The minimum leaf size must be at least 1.");
-        Require(ExpectedFalseSelections > 0, "The expected number of false selections must be positive.");
-        Require(SelectedPerRepeat >= 0, "Features selected per repeat must be positive (or 0 for the default).");
+        Require(RepeatSelectionLevel > 0 && RepeatSelectionLevel < 0.5, "The per-repeat selection level must lie in (0, 0.5).");
+        Require(SelectedPerRepeat >= 0, "The cap on features selected per repeat must be positive (or 0 for none).");
         Require(FrequencyThreshold > 0.5 && FrequencyThreshold <= 1, "The frequency threshold must lie in (0.5, 1].");
         Require(QValueThreshold > 0 && QValueThreshold <= 1, "The q-value threshold must lie in (0, 1].");
         Require(DecoyCount >= -1, "The decoy count must be 0 or more (or -1 for automatic).");

@@ -1,0 +1,183 @@
+using System.CommandLine;
+using OmicsScreen.Cli.Console;
+using OmicsScreen.Screening.Screen;
+
+namespace OmicsScreen.Cli.Commands;
+
+/// <summary>
+/// `omicsscreen screen`: the main job. Repeated half-sample forests, corrected and permutation
+/// importance, a stability-ranked shortlist with error control, and the honest panel-size curve.
+/// </summary>
+public sealed class ScreenCommand : Command
+{
+    private static readonly ScreenOptions Defaults = new();
+
+    public PanelInputOptions Input { get; } = new();
+
+    public Option<string?> Out { get; } = new("--out")
+    {
+        Description = "Results folder. Default: reports/<panel file name>.",
+        HelpName = "DIR",
+    };
+
+    public Option<bool> Force { get; } = new("--force")
+    {
+        Description = "Write into a non-empty folder that does not hold an earlier screen's results.",
+    };
+
+    public Option<int> Pairs { get; } = new("--pairs")
+    {
+        Description = "Complementary pairs of half-samples; two forests are grown on each half.",
+        DefaultValueFactory = _ => Defaults.HalfSamplePairs,
+    };
+
+    public Option<int> Trees { get; } = new("--trees")
+    {
+        Description = "Trees per forest.",
+        DefaultValueFactory = _ => Defaults.TreesPerForest,
+    };
+
+    public Option<int> FeaturesPerSplit { get; } = new("--features-per-split")
+    {
+        Description = "Features tried at each split. Default: floor(sqrt(features)).",
+        HelpName = "K",
+    };
+
+    public Option<int> MinLeaf { get; } = new("--min-leaf")
+    {
+        Description = "Fewest samples a leaf may hold.",
+        DefaultValueFactory = _ => Defaults.MinLeafSize,
+    };
+
+    public Option<BalanceMode> Balance { get; } = new("--balance")
+    {
+        Description = "Class-balanced drawing for each tree: auto (when the smallest class is under 2/3 of the largest), on or off.",
+        DefaultValueFactory = _ => Defaults.Balance,
+    };
+
+    public Option<double> RepeatLevel { get; } = new("--repeat-level")
+    {
+        Description = "A repeat selects the features whose corrected importance beats this upper quantile of its null (mirrored and decoy importances).",
+        DefaultValueFactory = _ => Defaults.RepeatSelectionLevel,
+        HelpName = "A",
+    };
+
+    public Option<int> PerRepeat { get; } = new("--per-repeat-cap")
+    {
+        Description = "Most features a repeat may select (its best ones). Default: no cap.",
+        HelpName = "N",
+    };
+
+    public Option<double> MinFrequency { get; } = new("--min-frequency")
+    {
+        Description = "Selection frequency a marker needs for the shortlist, in (0.5, 1].",
+        DefaultValueFactory = _ => Defaults.FrequencyThreshold,
+        HelpName = "F",
+    };
+
+    public Option<double> MaxQ { get; } = new("--max-q")
+    {
+        Description = "False discovery rate level: the largest q-value a shortlisted marker may have.",
+        DefaultValueFactory = _ => Defaults.QValueThreshold,
+        HelpName = "Q",
+    };
+
+    public Option<int> Decoys { get; } = new("--decoys")
+    {
+        Description = "Decoys (permuted copies of features) per repeat for the target-decoy error estimate; -1: one per feature up to 5,000 features, none above.",
+        DefaultValueFactory = _ => Defaults.DecoyCount,
+        HelpName = "N",
+    };
+
+    public Option<int> OutcomePermutations { get; } = new("--outcome-permutations")
+    {
+        Description = "Permute the outcome this many times for permutation p-values (Altmann et al. 2010); 0 uses the mirrored-null p-values.",
+        DefaultValueFactory = _ => Defaults.OutcomePermutations,
+        HelpName = "N",
+    };
+
+    public Option<double> RedundancyRho { get; } = new("--redundancy-rho")
+    {
+        Description = "Spearman |rho| at which shortlisted markers share a redundancy group.",
+        DefaultValueFactory = _ => Defaults.RedundancyCorrelation,
+    };
+
+    public Option<int> CurveFolds { get; } = new("--curve-folds")
+    {
+        Description = "Outer folds of the panel-size curve (0 skips the curve).",
+        DefaultValueFactory = _ => Defaults.CurveFolds,
+    };
+
+    public Option<int> CurveRepeats { get; } = new("--curve-repeats")
+    {
+        Description = "Repeats of the outer folds.",
+        DefaultValueFactory = _ => Defaults.CurveFoldRepeats,
+    };
+
+    public Option<int> CurveInnerPairs { get; } = new("--curve-inner-pairs")
+    {
+        Description = "Half-sample pairs of the screen run inside each outer fold.",
+        DefaultValueFactory = _ => Defaults.CurveInnerPairs,
+    };
+
+    public Option<int> MaxPanelSize { get; } = new("--max-panel-size")
+    {
+        Description = "Largest panel size on the curve.",
+        DefaultValueFactory = _ => Defaults.CurveMaxPanelSize,
+    };
+
+    public Option<ulong> Seed { get; } = new("--seed")
+    {
+        Description = "Seed of the whole run; the same seed gives the same results on any number of threads.",
+        DefaultValueFactory = _ => Defaults.Seed,
+    };
+
+    public Option<int> Threads { get; } = new("--threads")
+    {
+        Description = "Threads to use. Default: all cores.",
+    };
+
+    public Option<bool> Quiet { get; } = new("--quiet")
+    {
+        Description = "No progress display.",
+    };
+
+    public ScreenCommand(CliConsole console)
+        : base("screen", "Screen a panel: repeated random forests on half-samples, a stability-ranked shortlist with error control, and the panel-size curve.")
+    {
+        Input.AddTo(this);
+        foreach (var option in new Option[] { Out, Force, Pairs, Trees, FeaturesPerSplit, MinLeaf, Balance, RepeatLevel, PerRepeat,
+                     MinFrequency, MaxQ, Decoys, OutcomePermutations, RedundancyRho, CurveFolds, CurveRepeats, CurveInnerPairs,
+                     MaxPanelSize, Seed, Threads, Quiet })
+            Options.Add(option);
+        SetAction(parse => CommandRunner.Run(console, () => ScreenRun.Execute(console, new ScreenRunOptions
+        {
+            Panel = Input.ToLoadOptions(parse),
+            OutputFolder = parse.GetValue(Out),
+            Force = parse.GetValue(Force),
+            Quiet = parse.GetValue(Quiet),
+            CommandLine = ["omicsscreen", .. parse.Tokens.Select(t => t.Value)],
+            Screen = new ScreenOptions
+            {
+                Seed = parse.GetValue(Seed),
+                HalfSamplePairs = parse.GetValue(Pairs),
+                TreesPerForest = parse.GetValue(Trees),
+                FeaturesPerSplit = parse.GetValue(FeaturesPerSplit),
+                MinLeafSize = parse.GetValue(MinLeaf),
+                Balance = parse.GetValue(Balance),
+                RepeatSelectionLevel = parse.GetValue(RepeatLevel),
+                SelectedPerRepeat = parse.GetValue(PerRepeat),
+                FrequencyThreshold = parse.GetValue(MinFrequency),
+                QValueThreshold = parse.GetValue(MaxQ),
+                DecoyCount = parse.GetValue(Decoys),
+                OutcomePermutations = parse.GetValue(OutcomePermutations),
+                RedundancyCorrelation = parse.GetValue(RedundancyRho),
+                CurveFolds = parse.GetValue(CurveFolds),
+                CurveFoldRepeats = parse.GetValue(CurveRepeats),
+                CurveInnerPairs = parse.GetValue(CurveInnerPairs),
+                CurveMaxPanelSize = parse.GetValue(MaxPanelSize),
+                ThreadCount = parse.GetValue(Threads),
+            },
+        })));
+    }
+}

@@ -1,0 +1,88 @@
+using System.Reflection;
+using OmicsScreen.Data;
+using OmicsScreen.Screening.Screen;
+
+namespace OmicsScreen.Cli.Commands;
+
+/// <summary>
+/// The provenance of a screen: inputs with their SHA-256, the software version, every
+/// parameter (defaults included) and seed, the command line to repeat it, and timings.
+/// </summary>
+internal static class ScreenManifest
+{
+    public static object Build(ScreenRunOptions options, LoadedPanel loaded, ScreenResult result, DateTimeOffset started,
+        DateTimeOffset finished, double loadSeconds, IReadOnlyList<string> outputs)
+    {
+        var panel = loaded.Panel;
+        var settings = result.Settings;
+        return new
+        {
+            tool = "omicsscreen",
+            version = Version(),
+            command_line = string.Join(' ', options.CommandLine.Select(ShellQuote)),
+            started_utc = started.ToString("O"),
+            finished_utc = finished.ToString("O"),
+            cores = Environment.ProcessorCount,
+            threads = settings.Options.ThreadCount > 0 ? settings.Options.ThreadCount : Environment.ProcessorCount,
+            seconds = new Dictionary<string, double>(result.StageSeconds.ToDictionary(kv => StageKey(kv.Key), kv => Math.Round(kv.Value, 3)))
+            {
+                ["loading"] = Math.Round(loadSeconds, 3),
+            },
+            inputs = loaded.Inputs.Select(i => new { path = i.Path, bytes = i.ByteCount, sha256 = i.Sha256 }).ToArray(),
+            panel = new
+            {
+                samples = panel.SampleCount,
+                features = panel.FeatureCount,
+                outcome_column = panel.Outcome.ColumnName,
+                classes = panel.Outcome.ClassNames.Select((name, c) => new { name, samples = panel.Outcome.ClassCounts[c] }).ToArray(),
+                positive_class = panel.Outcome.ClassNames[panel.Outcome.PositiveClass],
+                cohort_column = panel.Cohort?.ColumnName,
+                subject_column = panel.Subject?.ColumnName,
+                layout = options.Panel.Layout.ToString(),
+                dropped_samples = loaded.Inspection.DroppedSamples.Count,
+            },
+            parameters = settings.Options,
+            resolved = new
+            {
+                features_per_split = settings.FeaturesPerSplit,
+                class_balanced = settings.ClassBalanced,
+                decoys = settings.DecoyCount,
+                mean_selected_per_repeat = result.Stability.MeanSelectedPerRepeat,
+                repeats = settings.RepeatCount,
+                run_seed = settings.Options.Seed,
+            },
+            results = new
+            {
+                shortlisted = result.Shortlist.Count,
+                recommended_panel_size = result.PanelSize?.RecommendedSize,
+                expected_false_selections_bound = result.Stability.ExpectedFalseSelectionsBound,
+                decoy_false_discovery_rate = result.Decoys.EstimatedFalseDiscoveryRate,
+                selection_stability = result.Stability.Stability.Stability,
+                reference_out_of_bag_error = result.ReferenceForest.OutOfBagError,
+                reference_out_of_bag_auc = result.ReferenceForest.OutOfBagAuc,
+            },
+            outputs,
+            caution = "Research use only. A screen is not a diagnostic test; confirm markers in independent cohorts and follow local ethics, data-protection rules and licensed clinical practice.",
+        };
+    }
+
+    private static string StageKey(ScreenStage stage) => stage switch
+    {
+        ScreenStage.Binning => "binning",
+        ScreenStage.UnivariateStatistics => "univariate_statistics",
+        ScreenStage.ReferenceForest => "reference_forest",
+        ScreenStage.Repeats => "repeats",
+        ScreenStage.OutcomePermutations => "outcome_permutations",
+        ScreenStage.PanelSizeCurve => "panel_size_curve",
+        _ => stage.ToString(),
+    };
+
+    private static string Version() =>
+        typeof(ScreenManifest).Assembly.GetCustomAttribute<AssemblyInformationalVersionAttribute>()?.InformationalVersion ?? "unknown";
+
+    /// <summary>POSIX single quotes where a word needs them, so the line can be pasted into a shell.</summary>
+    internal static string ShellQuote(string word) =>
+        word.Length > 0 && word.All(c => char.IsAsciiLetterOrDigit(c) || "-_./=:,+@".Contains(c))
+            ? word
+            : "'" + word.Replace("'", "'\\''") + "'";
+}

@@ -1,0 +1,107 @@
+using System.Diagnostics;
+using System.Globalization;
+using OmicsScreen.Cli.Console;
+using OmicsScreen.Data;
+using OmicsScreen.Reporting.Json;
+using OmicsScreen.Reporting.Screen;
+using OmicsScreen.Reporting.Univariate;
+using OmicsScreen.Screening.Screen;
+
+namespace OmicsScreen.Cli.Commands;
+
+/// <summary>Loads a panel, runs the screen, writes the results folder and prints the top of the shortlist.</summary>
+internal static class ScreenRun
+{
+    private const int PrintedMarkers = 15;
+
+    public static int Execute(CliConsole console, ScreenRunOptions options)
+    {
+        try
+        {
+            options.Screen.Validate();
+        }
+        catch (ArgumentException e)
+        {
+            throw new CommandInputException(e.Message);
+        }
+        var started = DateTimeOffset.UtcNow;
+        var watch = Stopwatch.StartNew();
+        var loaded = PanelLoader.Load(options.Panel).EnsureScreenable();
+        double loadSeconds = watch.Elapsed.TotalSeconds;
+        var folder = ResultsFolder.Prepare(options.ResolveOutputFolder(), options.Force);
+
+        var progress = new ProgressDisplay(console, options.Quiet);
+        ScreenResult result;
+        try
+        {
+            result = ScreenRunner.Run(loaded.Panel, options.Screen, progress);
+        }
+        finally
+        {
+            progress.Complete();
+        }
+
+        folder.WriteText("shortlist.tsv", w => ScreenTables.WriteShortlist(w, result));
+        folder.WriteText("features.tsv", w => ScreenTables.WriteFeatures(w, result));
+        if (result.PanelSize is { } curve) folder.WriteText("panel_size_curve.tsv", w => ScreenTables.WritePanelSizeCurve(w, curve));
+        folder.WriteText("marker_statistics.tsv", w => UnivariateTableWriter.WriteAllSamples(w, result.Univariate));
+        if (result.Univariate.PerCohort.Count > 0)
+            folder.WriteText("marker_statistics_by_cohort.tsv", w => UnivariateTableWriter.WritePerCohort(w, result.Univariate));
+        var manifest = ScreenManifest.Build(options, loaded, result, started, DateTimeOffset.UtcNow, loadSeconds, folder.WrittenFiles);
+        folder.WriteText(ResultsFolder.ManifestFileName, w => ManifestJson.Write(w, manifest));
+
+        PrintSummary(console.Out, loaded, result, folder.Path);
+        return ExitCode.Success;
+    }
+
+    private static void PrintSummary(TextWriter output, LoadedPanel loaded, ScreenResult result, string folder)
+    {
+        var panel = loaded.Panel;
+        var settings = result.Settings;
+        var o = settings.Options;
+        output.WriteLine($"Screened {panel.SampleCount} samples x {panel.FeatureCount} features: {settings.RepeatCount} half-sample repeats, "
+            + $"{o.TreesPerForest} trees per forest, seed {o.Seed}.");
+        string auc = result.ReferenceForest.OutOfBagAuc is { } value ? FormattableString.Invariant($", AUC {value:0.000}") : "";
+        output.WriteLine(FormattableString.Invariant($"Forest on all samples: out-of-bag error {result.ReferenceForest.OutOfBagError:0.000}{auc}."));
+        output.WriteLine();
+        if (result.Shortlist.Count == 0)
+        {
+            output.WriteLine($"Shortlist: empty. No feature was selected in at least {o.FrequencyThreshold * 100:0}% of repeats with q <= {o.QValueThreshold}.");
+        }
+        else
+        {
+            output.WriteLine($"Shortlist: {result.Shortlist.Count} markers (selected in >= {o.FrequencyThreshold * 100:0}% of repeats, q <= {o.QValueThreshold})"
+                + (result.Shortlist.Count > PrintedMarkers ? $", top {PrintedMarkers} shown" : ""));
+            var table = new TextTable("rank", "marker", "frequency", "median rank", "q", "direction", "AUC", "group").AlignRight(0, 2, 3, 4, 6, 7);
+            foreach (var e in result.Shortlist.Take(PrintedMarkers))
+                table.Add(e.Rank.ToString(CultureInfo.InvariantCulture), e.Forest.Feature,
+                    e.Forest.SelectionFrequency.ToString("0.00", CultureInfo.InvariantCulture),
+                    e.Forest.MedianRank.ToString("0.0", CultureInfo.InvariantCulture),
+                    e.Forest.QValue.ToString("0.###", CultureInfo.InvariantCulture),
+                    ScreenTables.DirectionText(e.Univariate),
+                    e.Univariate.Auc.ToString("0.000", CultureInfo.InvariantCulture),
+                    e.RedundancyGroup.ToString(CultureInfo.InvariantCulture));
+            table.WriteTo(output);
+        }
+        output.WriteLine();
+        var s = result.Stability;
+        output.WriteLine("Error control:");
+        output.WriteLine(FormattableString.Invariant($"  q-values: Benjamini-Hochberg over {panel.FeatureCount} features; shortlisted markers have q <= {o.QValueThreshold}."));
+        if (result.Decoys.DecoyCount > 0)
+            output.WriteLine(FormattableString.Invariant(
+                $"  decoys: {result.Decoys.DecoysPassing} of {result.Decoys.DecoyCount} permuted copies passed the shortlist rule; estimated false discovery rate {result.Decoys.EstimatedFalseDiscoveryRate:0.###}."));
+        output.WriteLine(FormattableString.Invariant(
+            $"  stability selection: repeats selected {s.MeanSelectedPerRepeat:0.#} features on average, so at most {s.ExpectedFalseSelectionsBound:0.##} noise features are expected to reach {o.FrequencyThreshold * 100:0}% (Meinshausen-Buhlmann bound; loose when repeats select many)."));
+        output.WriteLine(FormattableString.Invariant(
+            $"  agreement between repeats (Nogueira et al. 2018): {s.Stability.Stability:0.00} [{s.Stability.Interval.Lower:0.00}, {s.Stability.Interval.Upper:0.00}], over everything each repeat selected."));
+        if (result.PanelSize is { } curve)
+        {
+            var point = curve.Points.First(p => p.PanelSize == curve.RecommendedSize);
+            output.WriteLine(FormattableString.Invariant(
+                $"Recommended panel size: {curve.RecommendedSize} markers, honest {curve.Metric} {point.HonestAuc:0.000} +- {point.HonestAucStandardError:0.000} ({curve.FoldCount}-fold, selection inside each fold); optimistic {point.OptimisticAuc:0.000} if selection re-uses the samples."));
+        }
+        output.WriteLine();
+        output.WriteLine($"Results: {folder}");
+        output.WriteLine("A screen is not a diagnostic test: confirm every marker in independent cohorts before any use.");
+    }
+}

@@ -1,0 +1,29 @@
+using OmicsScreen.Data;
+using OmicsScreen.Screening.Screen;
+
+namespace OmicsScreen.Cli.Commands;
+
+/// <summary>Everything `screen` was asked to do.</summary>
+public sealed record ScreenRunOptions
+{
+    public required PanelLoadOptions Panel { get; init; }
+    public required ScreenOptions Screen { get; init; }
+    public string? OutputFolder { get; init; }
+    public bool Force { get; init; }
+    public bool Quiet { get; init; }
+
+    /// <summary>The command line as typed, recorded in the manifest so the run can be repeated.</summary>
+    public IReadOnlyList<string> CommandLine { get; init; } = [];
+
+    /// <summary>The results folder: the one given, or reports/ and the panel file's name.</summary>
+    public string ResolveOutputFolder() =>
+        OutputFolder ?? Path.Combine("reports", SafeFolderName(Path.GetFileNameWithoutExtension(Panel.MatrixPath)));
+
+    /// <summary>A file name is data: keep letters, digits, dot, dash and underscore only, so it can never leave reports/.</summary>
+    internal static string SafeFolderName(string name)
+    {
+        var chars = name.Select(c => char.IsAsciiLetterOrDigit(c) || c is '-' or '_' or '.' ? c : '_').ToArray();
+        string safe = new string(chars).Trim('.');
+        return safe.Length == 0 ? "screen" : safe;
+    }
+}

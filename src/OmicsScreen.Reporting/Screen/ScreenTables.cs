@@ -1,0 +1,102 @@
+using OmicsScreen.Reporting.Tables;
+using OmicsScreen.Screening.Screen;
+using OmicsScreen.Screening.Univariate;
+
+namespace OmicsScreen.Reporting.Screen;
+
+/// <summary>
+/// The machine-readable tables of a screen: one row per feature (or panel size), a header row,
+/// invariant numbers, spreadsheet-safe names. Column names are documented in the README.
+/// </summary>
+public static class ScreenTables
+{
+    private static readonly NumberFormat Importance = NumberFormat.Significant(6);
+    private static readonly NumberFormat Probability = NumberFormat.Significant(4);
+    private static readonly NumberFormat Share = NumberFormat.Fixed(4);
+
+    public static int WriteShortlist(TextWriter writer, ScreenResult result)
+    {
+        var columns = new List<TsvColumn<ShortlistEntry>>
+        {
+            TsvColumn<ShortlistEntry>.Integer("rank", e => e.Rank),
+            TsvColumn<ShortlistEntry>.Text("feature", e => e.Forest.Feature),
+            TsvColumn<ShortlistEntry>.Integer("redundancy_group", e => e.RedundancyGroup),
+            TsvColumn<ShortlistEntry>.Number("selection_frequency", e => e.Forest.SelectionFrequency, Share),
+            TsvColumn<ShortlistEntry>.Number("median_rank", e => e.Forest.MedianRank, NumberFormat.Fixed(1)),
+            TsvColumn<ShortlistEntry>.Number("rank_q1", e => e.Forest.RankLowerQuartile, NumberFormat.Fixed(1)),
+            TsvColumn<ShortlistEntry>.Number("rank_q3", e => e.Forest.RankUpperQuartile, NumberFormat.Fixed(1)),
+            TsvColumn<ShortlistEntry>.Number("corrected_importance", e => e.Forest.CorrectedMean, Importance),
+            TsvColumn<ShortlistEntry>.Number("corrected_importance_sd", e => e.Forest.CorrectedSd, Importance),
+            TsvColumn<ShortlistEntry>.Number("permutation_importance", e => e.Forest.PermutationMean, Importance),
+            TsvColumn<ShortlistEntry>.Number("permutation_importance_sd", e => e.Forest.PermutationSd, Importance),
+            TsvColumn<ShortlistEntry>.Number("gini_decrease", e => e.Forest.ImpurityMean, Importance),
+            TsvColumn<ShortlistEntry>.Number("gini_decrease_sd", e => e.Forest.ImpuritySd, Importance),
+            TsvColumn<ShortlistEntry>.Number("group_permutation_importance", e => e.GroupPermutationImportance, Importance),
+            TsvColumn<ShortlistEntry>.Number("p_value", e => e.Forest.PValue, Probability),
+            TsvColumn<ShortlistEntry>.Number("q_value", e => e.Forest.QValue, Probability),
+            TsvColumn<ShortlistEntry>.Text("direction", e => DirectionText(e.Univariate)),
+            TsvColumn<ShortlistEntry>.Number("log2_median_ratio", e => e.Univariate.Log2MedianRatio, NumberFormat.Fixed(3)),
+            TsvColumn<ShortlistEntry>.Number("auc", e => e.Univariate.Auc, NumberFormat.Fixed(4)),
+            TsvColumn<ShortlistEntry>.Number("auc_low95", e => e.Univariate.AucInterval.Lower, NumberFormat.Fixed(4)),
+            TsvColumn<ShortlistEntry>.Number("auc_high95", e => e.Univariate.AucInterval.Upper, NumberFormat.Fixed(4)),
+            TsvColumn<ShortlistEntry>.Number("rank_test_q", e => e.Univariate.QValue, Probability),
+            TsvColumn<ShortlistEntry>.Integer("univariate_rank", e => e.UnivariateRank),
+        };
+        return new TsvTableWriter<ShortlistEntry>(columns).Write(writer, result.Shortlist);
+    }
+
+    public static int WriteFeatures(TextWriter writer, ScreenResult result)
+    {
+        var shortlisted = result.Shortlist.Select(e => e.Forest.FeatureIndex).ToHashSet();
+        var columns = new List<TsvColumn<FeatureSummary>>
+        {
+            TsvColumn<FeatureSummary>.Integer("order", f => f.Order),
+            TsvColumn<FeatureSummary>.Text("feature", f => f.Feature),
+            TsvColumn<FeatureSummary>.Text("shortlisted", f => shortlisted.Contains(f.FeatureIndex) ? "yes" : "no"),
+            TsvColumn<FeatureSummary>.Number("selection_frequency", f => f.SelectionFrequency, Share),
+            TsvColumn<FeatureSummary>.Number("median_rank", f => f.MedianRank, NumberFormat.Fixed(1)),
+            TsvColumn<FeatureSummary>.Number("rank_q1", f => f.RankLowerQuartile, NumberFormat.Fixed(1)),
+            TsvColumn<FeatureSummary>.Number("rank_q3", f => f.RankUpperQuartile, NumberFormat.Fixed(1)),
+            TsvColumn<FeatureSummary>.Number("corrected_importance", f => f.CorrectedMean, Importance),
+            TsvColumn<FeatureSummary>.Number("corrected_importance_sd", f => f.CorrectedSd, Importance),
+            TsvColumn<FeatureSummary>.Number("permutation_importance", f => f.PermutationMean, Importance),
+            TsvColumn<FeatureSummary>.Number("permutation_importance_sd", f => f.PermutationSd, Importance),
+            TsvColumn<FeatureSummary>.Number("gini_decrease", f => f.ImpurityMean, Importance),
+            TsvColumn<FeatureSummary>.Number("gini_decrease_sd", f => f.ImpuritySd, Importance),
+            TsvColumn<FeatureSummary>.Number("null_p", f => f.NullP, Probability),
+            TsvColumn<FeatureSummary>.Number("outcome_permutation_p", f => f.OutcomePermutationP, Probability),
+            TsvColumn<FeatureSummary>.Number("p_value", f => f.PValue, Probability),
+            TsvColumn<FeatureSummary>.Number("q_value", f => f.QValue, Probability),
+            TsvColumn<FeatureSummary>.Integer("univariate_rank", f => result.UnivariateRanks[f.FeatureIndex]),
+        };
+        return new TsvTableWriter<FeatureSummary>(columns).Write(writer, result.Order.Select(f => result.Features[f]));
+    }
+
+    public static int WritePanelSizeCurve(TextWriter writer, PanelSizeCurve curve)
+    {
+        string metric = curve.Metric;
+        var columns = new List<TsvColumn<PanelSizePoint>>
+        {
+            TsvColumn<PanelSizePoint>.Integer("panel_size", p => p.PanelSize),
+            TsvColumn<PanelSizePoint>.Text("recommended", p => p.PanelSize == curve.RecommendedSize ? "yes" : "no"),
+            TsvColumn<PanelSizePoint>.Number($"honest_{metric}", p => p.HonestAuc, NumberFormat.Fixed(4)),
+            TsvColumn<PanelSizePoint>.Number($"honest_{metric}_sd", p => p.HonestAucSd, NumberFormat.Fixed(4)),
+            TsvColumn<PanelSizePoint>.Number($"honest_{metric}_se", p => p.HonestAucStandardError, NumberFormat.Fixed(4)),
+            TsvColumn<PanelSizePoint>.Number("honest_error", p => p.HonestError, NumberFormat.Fixed(4)),
+            TsvColumn<PanelSizePoint>.Number($"optimistic_{metric}", p => p.OptimisticAuc, NumberFormat.Fixed(4)),
+            TsvColumn<PanelSizePoint>.Number($"optimistic_{metric}_sd", p => p.OptimisticAucSd, NumberFormat.Fixed(4)),
+            TsvColumn<PanelSizePoint>.Number("optimistic_error", p => p.OptimisticError, NumberFormat.Fixed(4)),
+            TsvColumn<PanelSizePoint>.Integer("outer_folds", p => p.FoldCount),
+        };
+        return new TsvTableWriter<PanelSizePoint>(columns).Write(writer, curve.Points);
+    }
+
+    /// <summary>"higher in case" style text: what a lab reads first about a marker.</summary>
+    public static string DirectionText(MarkerStatistics row) => row.Direction switch
+    {
+        EffectDirection.Higher => $"higher in {row.ContrastClass}",
+        EffectDirection.Lower => $"lower in {row.ContrastClass}",
+        EffectDirection.NoDifference => "no difference",
+        _ => "undetermined",
+    };
+}

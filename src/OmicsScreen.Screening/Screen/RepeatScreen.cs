@@ -1,0 +1,124 @@
+using OmicsScreen.Engine.Binning;
+using OmicsScreen.Engine.Forests;
+using OmicsScreen.Engine.Panels;
+using OmicsScreen.Engine.Randomness;
+using OmicsScreen.Screening.Importance;
+using OmicsScreen.Screening.Resampling;
+using OmicsScreen.Screening.Statistics;
+
+namespace OmicsScreen.Screening.Screen;
+
+/// <summary>
+/// The repeated core of a screen: on each half-sample, one forest for the out-of-bag
+/// permutation and impurity importances, and one forest carrying shadow copies and decoys for
+/// the corrected importance; then each repeat's selection and combined rank.
+/// </summary>
+/// <remarks>
+/// Two forests per repeat, because the shadow columns compete for splits: the forest that carries
+/// them is used for corrected importances only, never for errors, votes or permutation importance.
+/// </remarks>
+internal static class RepeatScreen
+{
+    /// <summary>Index slot of the decoy-source draw in the resampling streams.</summary>
+    private const int DecoyStream = 2;
+
+    public static RepeatImportances Run(BinnedMatrix matrix, ClassOutcome outcome, SampleGrouping? subject,
+        ReadOnlySpan<int> eligibleRows, ScreenSettings settings, ulong runSeed, int pairCount, int decoyCount,
+        Action<int>? repeatDone, CancellationToken cancellation)
+    {
+        int featureCount = matrix.FeatureCount;
+        var halves = HalfSamplePairs.Draw(outcome, subject, eligibleRows, pairCount, runSeed);
+        var result = new RepeatImportances(halves.Length, featureCount, decoyCount);
+        var correctedRanks = new double[featureCount];
+        var permutationRanks = new double[featureCount];
+        var negated = new double[featureCount];
+        for (int repeat = 0; repeat < halves.Length; repeat++)
+        {
+            cancellation.ThrowIfCancellationRequested();
+            int[] rows = halves[repeat];
+            result.TrainingSampleCounts[repeat] = rows.Length;
+            var options = settings.ForestOptions(subject, runSeed, repeat);
+
+            var forest = ForestTrainer.Train(matrix, outcome, options, rows);
+            ImpurityImportance.From(forest).MeanDecrease.CopyTo(result.Row(result.Impurity, repeat));
+            var permutation = OutOfBagPermutationImportance.Measure(forest, matrix, outcome, settings.Options.ThreadCount);
+            permutation.MeanAccuracyDrop.CopyTo(result.Row(result.Permutation, repeat));
+
+            var decoySources = DecoySources(featureCount, decoyCount, runSeed, repeat);
+            var corrected = CorrectedImpurityImportance.Measure(matrix, outcome, rows, decoySources, options);
+            corrected.Features.CopyTo(result.Row(result.Corrected, repeat));
+            corrected.Decoys.CopyTo(result.DecoyCorrected.AsSpan(repeat * decoyCount, decoyCount));
+
+            Select(result, repeat, settings.Options.RepeatSelectionLevel, settings.Options.SelectedPerRepeat);
+
+            // Ranks of both measures, 1 = most important, ties averaged; their mean is the
+            // repeat's combined rank, so neither measure alone decides the order.
+            Negate(result.Row(result.Corrected, repeat), negated);
+            Ranking.Rank(negated, correctedRanks);
+            Negate(result.Row(result.Permutation, repeat), negated);
+            Ranking.Rank(negated, permutationRanks);
+            var combined = result.Row(result.CombinedRank, repeat);
+            for (int f = 0; f < featureCount; f++) combined[f] = 0.5 * (correctedRanks[f] + permutationRanks[f]);
+            repeatDone?.Invoke(repeat + 1);
+        }
+        return result;
+    }
+
+    /// <summary>
+    /// A repeat selects the features (and decoys) whose corrected importance is above zero and
+    /// above the (1 - level) quantile of the repeat's own null sample: the mirrored non-positive
+    /// importances and the decoys with their mirror images (<see cref="DecoyAugmentedNull"/>).
+    /// Real features and decoys face the same rule, so the decoys' selection rate estimates the
+    /// noise that gets through (target-decoy reasoning). An optional cap keeps the best ones.
+    /// </summary>
+    internal static void Select(RepeatImportances result, int repeat, double level, int cap)
+    {
+        int featureCount = result.FeatureCount, decoyCount = result.DecoyCount;
+        var features = result.Row(result.Corrected, repeat);
+        var decoys = result.DecoyCorrected.AsSpan(repeat * decoyCount, decoyCount);
+        var nullSample = DecoyAugmentedNull.NullSample(features, decoys);
+        double threshold = 0;
+        if (nullSample.Length > 0)
+        {
+            Array.Sort(nullSample);
+            // The order statistic at ceil((1 - level) |null|): an upper quantile (Hyndman-Fan type 1).
+            int index = Math.Clamp((int)Math.Ceiling((1 - level) * nullSample.Length) - 1, 0, nullSample.Length - 1);
+            threshold = Math.Max(0, nullSample[index]);
+        }
+        var candidates = new List<(double Value, int Index)>();
+        for (int f = 0; f < featureCount; f++) if (features[f] > threshold) candidates.Add((features[f], f));
+        for (int d = 0; d < decoyCount; d++) if (decoys[d] > threshold) candidates.Add((decoys[d], featureCount + d));
+        // Highest first; equal values by index so the choice never depends on sort stability.
+        candidates.Sort((a, b) => a.Value != b.Value ? b.Value.CompareTo(a.Value) : a.Index.CompareTo(b.Index));
+        int take = cap > 0 ? Math.Min(cap, candidates.Count) : candidates.Count;
+        for (int i = 0; i < take; i++)
+        {
+            int index = candidates[i].Index;
+            if (index < featureCount) result.Selected[repeat * featureCount + index] = true;
+            else result.DecoySelected[repeat * decoyCount + index - featureCount] = true;
+        }
+    }
+
+    /// <summary>Every feature gets a decoy when there are as many decoys as features; otherwise a fresh random subset per repeat.</summary>
+    internal static int[] DecoySources(int featureCount, int decoyCount, ulong runSeed, int repeat)
+    {
+        var all = new int[featureCount];
+        for (int f = 0; f < featureCount; f++) all[f] = f;
+        if (decoyCount >= featureCount) return decoyCount == featureCount ? all : Enumerable.Range(0, decoyCount).Select(i => i % featureCount).ToArray();
+        var random = SeedSchedule.Generator(runSeed, repeat, DecoyStream, SeedPurpose.Resampling);
+        // Partial Fisher-Yates: the first decoyCount entries are a uniform random subset.
+        for (int i = 0; i < decoyCount; i++)
+        {
+            int j = i + random.NextInt(featureCount - i);
+            (all[i], all[j]) = (all[j], all[i]);
+        }
+        var chosen = all.AsSpan(0, decoyCount).ToArray();
+        Array.Sort(chosen);
+        return chosen;
+    }
+
+    private static void Negate(ReadOnlySpan<double> values, Span<double> negated)
+    {
+        for (int i = 0; i < values.Length; i++) negated[i] = -values[i];
+    }
+}

@@ -1,0 +1,26 @@
+using OmicsScreen.Screening.Univariate;
+
+namespace OmicsScreen.Screening.Screen;
+
+/// <summary>Everything a screen found, as plain records for tables and reports.</summary>
+/// <param name="Features">Every feature's forest evidence, in panel order.</param>
+/// <param name="Order">Feature indices in the screen's final order.</param>
+/// <param name="Shortlist">The markers that pass the frequency and q-value thresholds, in order.</param>
+/// <param name="ShortlistCorrelations">Spearman correlations between shortlisted markers, in shortlist order.</param>
+/// <param name="UnivariateRanks">Per feature, rank by rank-test p-value (1 = smallest).</param>
+/// <param name="PanelSize">Null when the curve was skipped.</param>
+/// <param name="StageSeconds">Wall time of each stage that ran.</param>
+public sealed record ScreenResult(
+    ScreenSettings Settings,
+    RepeatImportances Repeats,
+    IReadOnlyList<FeatureSummary> Features,
+    IReadOnlyList<int> Order,
+    IReadOnlyList<ShortlistEntry> Shortlist,
+    double[,] ShortlistCorrelations,
+    StabilitySummary Stability,
+    DecoyEstimate Decoys,
+    ReferenceForestSummary ReferenceForest,
+    UnivariateTable Univariate,
+    IReadOnlyList<int> UnivariateRanks,
+    PanelSizeCurve? PanelSize,
+    IReadOnlyDictionary<ScreenStage, double> StageSeconds);

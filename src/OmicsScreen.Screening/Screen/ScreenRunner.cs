@@ -1,0 +1,164 @@
+using System.Diagnostics;
+using OmicsScreen.Engine.Binning;
+using OmicsScreen.Engine.Forests;
+using OmicsScreen.Engine.Panels;
+using OmicsScreen.Screening.Importance;
+using OmicsScreen.Screening.Statistics;
+using OmicsScreen.Screening.Univariate;
+
+namespace OmicsScreen.Screening.Screen;
+
+/// <summary>
+/// Runs a whole screen on a panel: bin once, univariate statistics, a reference forest, the
+/// repeated half-sample forests, aggregation into a stability-ranked shortlist with error
+/// control, redundancy groups, and the honest panel-size curve.
+/// </summary>
+public static class ScreenRunner
+{
+    /// <summary>Repeat index of the reference forest's random streams; far above any half-sample repeat.</summary>
+    private const int ReferenceRepeat = int.MaxValue;
+
+    public static ScreenResult Run(Panel panel, ScreenOptions options, IProgress<ScreenProgress>? progress = null,
+        CancellationToken cancellation = default)
+    {
+        ArgumentNullException.ThrowIfNull(panel);
+        var settings = ScreenSettings.Resolve(options, panel);
+        var seconds = new Dictionary<ScreenStage, double>();
+        var watch = Stopwatch.StartNew();
+        void Finish(ScreenStage stage)
+        {
+            seconds[stage] = watch.Elapsed.TotalSeconds;
+            watch.Restart();
+        }
+
+        progress?.Report(new ScreenProgress(ScreenStage.Binning, 0, 1));
+        var matrix = new BinMapper().Bin(panel.Matrix, options.ThreadCount);
+        Finish(ScreenStage.Binning);
+
+        progress?.Report(new ScreenProgress(ScreenStage.UnivariateStatistics, 0, 1));
+        var univariate = UnivariateScreen.Compute(panel);
+        var univariateRanks = UnivariateRanks(univariate, panel.FeatureCount);
+        Finish(ScreenStage.UnivariateStatistics);
+
+        progress?.Report(new ScreenProgress(ScreenStage.ReferenceForest, 0, 1));
+        var referenceForest = ForestTrainer.Train(matrix, panel.Outcome, settings.ForestOptions(panel.Subject, options.Seed, ReferenceRepeat));
+        var votes = new OutOfBagVotes(referenceForest, panel.Outcome);
+        var reference = new ReferenceForestSummary(votes.Error, votes.PerClassError.ToArray(), votes.Auc, votes.ErrorCurve.ToArray());
+        Finish(ScreenStage.ReferenceForest);
+
+        var allRows = Enumerable.Range(0, panel.SampleCount).ToArray();
+        int repeatCount = settings.RepeatCount;
+        var repeats = RepeatScreen.Run(matrix, panel.Outcome, panel.Subject, allRows, settings, options.Seed,
+            options.HalfSamplePairs, settings.DecoyCount,
+            done => progress?.Report(new ScreenProgress(ScreenStage.Repeats, done, repeatCount)), cancellation);
+        Finish(ScreenStage.Repeats);
+
+        double[] outcomePermutationP = [];
+        if (options.OutcomePermutations > 0)
+        {
+            progress?.Report(new ScreenProgress(ScreenStage.OutcomePermutations, 0, options.OutcomePermutations));
+            var observed = CorrectedImpurityImportance.Measure(matrix, panel.Outcome, null, [],
+                settings.ForestOptions(panel.Subject, options.Seed, ReferenceRepeat));
+            outcomePermutationP = OutcomePermutationNull.PValues(matrix, panel.Outcome, null, observed.Features,
+                options.OutcomePermutations, settings.ForestOptions(panel.Subject, options.Seed, ReferenceRepeat),
+                new Progress<int>(done => progress?.Report(new ScreenProgress(ScreenStage.OutcomePermutations, done, options.OutcomePermutations))));
+            Finish(ScreenStage.OutcomePermutations);
+        }
+
+        var decoyMeans = DecoyMeans(repeats);
+        var features = ScreenAggregation.Summarise(repeats, panel.Matrix.FeatureNames, decoyMeans, outcomePermutationP);
+        var order = Enumerable.Range(0, features.Length).OrderBy(f => features[f].Order).ToArray();
+        var shortlisted = order.Where(f => Passes(features[f], options)).ToList();
+        var decoys = EstimateDecoys(repeats, features, decoyMeans, shortlisted.Count, options);
+        var stability = new StabilitySummary(
+            SelectionStability.Nogueira(repeats.Selected, repeats.FeatureCount),
+            SelectionStability.MeanSelectedCount(repeats.Selected, repeats.FeatureCount),
+            options.FrequencyThreshold,
+            StabilitySelectionBound.ExpectedFalseSelections(SelectionStability.MeanSelectedCount(repeats.Selected, repeats.FeatureCount),
+                options.FrequencyThreshold, repeats.FeatureCount));
+
+        var groups = RedundancyGroups.Assign(panel.Matrix, shortlisted, options.RedundancyCorrelation, out var correlations);
+        var groupMembers = new List<int[]>();
+        for (int g = 1; g <= (groups.Length == 0 ? 0 : groups.Max()); g++)
+            groupMembers.Add(shortlisted.Where((_, i) => groups[i] == g).ToArray());
+        var groupImportance = groupMembers.Count == 0 ? []
+            : OutOfBagPermutationImportance.MeasureGroups(referenceForest, matrix, panel.Outcome, groupMembers, options.ThreadCount);
+        int positiveContrast = ContrastOfPositiveClass(univariate, panel);
+        var shortlist = shortlisted.Select((f, i) => new ShortlistEntry(i + 1, features[f], groups[i], groupImportance[groups[i] - 1],
+            univariate.Row(f, positiveContrast), univariateRanks[f])).ToList();
+
+        PanelSizeCurve? curve = null;
+        if (options.CurveFolds > 0)
+        {
+            int foldTotal = options.CurveFolds * options.CurveFoldRepeats;
+            progress?.Report(new ScreenProgress(ScreenStage.PanelSizeCurve, 0, foldTotal));
+            curve = PanelSizeEstimator.Estimate(matrix, panel, settings, order,
+                (done, total) => progress?.Report(new ScreenProgress(ScreenStage.PanelSizeCurve, done, total)), cancellation);
+            Finish(ScreenStage.PanelSizeCurve);
+        }
+
+        return new ScreenResult(settings, repeats, features, order, shortlist, correlations, stability, decoys, reference,
+            univariate, univariateRanks, curve, seconds);
+    }
+
+    /// <summary>The shortlist rule: selected often enough, and a q-value at the false discovery rate level.</summary>
+    internal static bool Passes(FeatureSummary feature, ScreenOptions options) =>
+        feature.SelectionFrequency >= options.FrequencyThreshold && feature.QValue <= options.QValueThreshold;
+
+    /// <summary>
+    /// Applies the shortlist rule to the decoys: a decoy passes when its selection frequency
+    /// reaches the threshold and its p-value (against the same null) is no larger than the
+    /// largest p-value of a real feature the q-value rule accepts.
+    /// </summary>
+    private static DecoyEstimate EstimateDecoys(RepeatImportances repeats, FeatureSummary[] features, double[] decoyMeans,
+        int shortlisted, ScreenOptions options)
+    {
+        int decoyCount = repeats.DecoyCount;
+        if (decoyCount == 0) return new DecoyEstimate(0, 0, shortlisted, double.NaN);
+        double pCutoff = double.NegativeInfinity;
+        foreach (var f in features) if (f.QValue <= options.QValueThreshold) pCutoff = Math.Max(pCutoff, f.PValue);
+        var decoyFrequency = new double[decoyCount];
+        for (int r = 0; r < repeats.RepeatCount; r++)
+            for (int d = 0; d < decoyCount; d++)
+                if (repeats.DecoySelected[r * decoyCount + d]) decoyFrequency[d] += 1.0 / repeats.RepeatCount;
+        var featureMeans = features.Select(f => f.CorrectedMean).ToArray();
+        var decoyP = DecoyAugmentedNull.PValues(featureMeans, decoyMeans, decoyMeans);
+        int passing = 0;
+        for (int d = 0; d < decoyCount; d++)
+            if (decoyFrequency[d] >= options.FrequencyThreshold && decoyP[d] <= pCutoff) passing++;
+        double fdr = shortlisted == 0 ? (passing == 0 ? 0 : 1)
+            : Math.Min(1.0, (double)passing / decoyCount * features.Length / shortlisted);
+        return new DecoyEstimate(decoyCount, passing, shortlisted, fdr);
+    }
+
+    /// <summary>Each decoy's corrected importance averaged over repeats.</summary>
+    private static double[] DecoyMeans(RepeatImportances repeats)
+    {
+        int decoyCount = repeats.DecoyCount;
+        var means = new double[decoyCount];
+        for (int r = 0; r < repeats.RepeatCount; r++)
+            for (int d = 0; d < decoyCount; d++) means[d] += repeats.DecoyCorrected[r * decoyCount + d] / repeats.RepeatCount;
+        return means;
+    }
+
+    private static int ContrastOfPositiveClass(UnivariateTable univariate, Panel panel)
+    {
+        string positive = panel.Outcome.ClassNames[panel.Outcome.PositiveClass];
+        for (int c = 0; c < univariate.Contrasts.Count; c++) if (univariate.Contrasts[c] == positive) return c;
+        return 0;
+    }
+
+    /// <summary>Rank of every feature by its smallest rank-test p-value over contrasts (1 = smallest; ties by feature order).</summary>
+    private static int[] UnivariateRanks(UnivariateTable univariate, int featureCount)
+    {
+        var best = new double[featureCount];
+        Array.Fill(best, double.PositiveInfinity);
+        foreach (var row in univariate.AllSamples)
+            if (!double.IsNaN(row.PValue)) best[row.FeatureIndex] = Math.Min(best[row.FeatureIndex], row.PValue);
+        var order = Enumerable.Range(0, featureCount).ToArray();
+        Array.Sort(order, (a, b) => best[a] != best[b] ? best[a].CompareTo(best[b]) : a.CompareTo(b));
+        var ranks = new int[featureCount];
+        for (int i = 0; i < order.Length; i++) ranks[order[i]] = i + 1;
+        return ranks;
+    }
+}

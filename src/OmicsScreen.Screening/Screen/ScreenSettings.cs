@@ -1,0 +1,74 @@
+using OmicsScreen.Engine.Forests;
+using OmicsScreen.Engine.Panels;
+using OmicsScreen.Engine.Sampling;
+using OmicsScreen.Engine.Trees;
+
+namespace OmicsScreen.Screening.Screen;
+
+/// <summary>
+/// The options of a screen resolved against one panel: every "automatic" choice made concrete,
+/// so the manifest records exactly what ran.
+/// </summary>
+public sealed record ScreenSettings
+{
+    public required ScreenOptions Options { get; init; }
+    public required int FeatureCount { get; init; }
+    public required int FeaturesPerSplit { get; init; }
+    public required bool ClassBalanced { get; init; }
+    public required int DecoyCount { get; init; }
+    public int RepeatCount => 2 * Options.HalfSamplePairs;
+
+    public static ScreenSettings Resolve(ScreenOptions options, Panel panel)
+    {
+        options.Validate();
+        int featureCount = panel.FeatureCount;
+        var counts = panel.Outcome.ClassCounts;
+        int smallest = int.MaxValue, largest = 0;
+        foreach (int count in counts)
+        {
+            smallest = Math.Min(smallest, count);
+            largest = Math.Max(largest, count);
+        }
+        bool balanced = options.Balance switch
+        {
+            BalanceMode.On => true,
+            BalanceMode.Off => false,
+            _ => smallest * 3 < largest * 2,
+        };
+        // Grouped sampling and class balance do not combine in the engine; subjects win, since
+        // splitting a subject's replicates would flatter every estimate.
+        if (panel.Subject is not null) balanced = false;
+        int decoys = options.DecoyCount >= 0 ? options.DecoyCount
+            : featureCount <= options.AutomaticDecoyFeatureLimit ? featureCount : 0;
+        int tried = options.FeaturesPerSplit > 0 ? Math.Min(options.FeaturesPerSplit, featureCount)
+            : Math.Max(1, (int)Math.Floor(Math.Sqrt(featureCount)));
+        return new ScreenSettings
+        {
+            Options = options,
+            FeatureCount = featureCount,
+            FeaturesPerSplit = tried,
+            ClassBalanced = balanced,
+            DecoyCount = decoys,
+        };
+    }
+
+    /// <summary>The engine options of every forest of this screen; seed and repeat are set per forest.</summary>
+    public ForestOptions ForestOptions(SampleGrouping? subject, ulong seed, int repeat, int? featuresPerSplit = null) => new()
+    {
+        TreeCount = Options.TreesPerForest,
+        Seed = seed,
+        Repeat = repeat,
+        ThreadCount = Options.ThreadCount,
+        Tree = new TreeOptions
+        {
+            FeaturesPerSplit = featuresPerSplit ?? (Options.FeaturesPerSplit > 0 ? Options.FeaturesPerSplit : null),
+            MinLeafSize = Options.MinLeafSize,
+        },
+        Sampling = new SamplingOptions
+        {
+            Drawing = SampleDrawing.Bootstrap,
+            ClassBalanced = ClassBalanced,
+            Groups = subject,
+        },
+    };
+}

@@ -1,0 +1,12 @@
+namespace OmicsScreen.Screening.Screen;
+
+/// <summary>The stages of a screen, in the order they run.</summary>
+public enum ScreenStage
+{
+    Binning,
+    UnivariateStatistics,
+    ReferenceForest,
+    Repeats,
+    OutcomePermutations,
+    PanelSizeCurve,
+}

@@ -1,0 +1,132 @@
+using OmicsScreen.Screening.Screen;
+using OmicsScreen.Screening.Statistics;
+using OmicsScreen.TestSupport;
+
+namespace OmicsScreen.Screening.Tests.Screen;
+
+/// <summary>The screen against known truth, on simulated panels (design in CausalBlockPanel).</summary>
+public class ScreenRunnerTests
+{
+    /// <summary>Settings small enough for a unit test; the defaults are exercised by the benchmark and the demo.</summary>
+    private static ScreenOptions QuickOptions(ulong seed) => new()
+    {
+        Seed = seed,
+        HalfSamplePairs = 10,
+        TreesPerForest = 500,
+        CurveFolds = 0,
+    };
+
+    [Fact]
+    public void The_shortlist_recovers_detectable_causal_features_with_few_false_discoveries()
+    {
+        // Design: n = 100, p = 1,000, 30 causal features in 6 correlated blocks of 10 (5 causal + 5
+        // correlated noise each), effects 0.6-1.2 SD, the rest noise in blocks (rho = 0.5).
+        // "Detectable" = causal features a univariate rank test finds at BH q <= 0.05 on the same data.
+        double recoveredShare = 0, falseDiscoveryProportion = 0;
+        const int seeds = 3;
+        for (ulong seed = 1; seed <= seeds; seed++)
+        {
+            var (panel, causal) = CausalBlockPanel.Generate(new CausalBlockPanel.Design { Seed = seed });
+            var result = ScreenRunner.Run(panel, QuickOptions(seed));
+            var detectable = Enumerable.Range(0, panel.FeatureCount)
+                .Where(f => causal[f] && result.Univariate.Row(f, 0).QValue <= 0.05).ToHashSet();
+            var shortlisted = result.Shortlist.Select(e => e.Forest.FeatureIndex).ToList();
+            int recovered = detectable.Count(f => shortlisted.Contains(f));
+            recoveredShare += detectable.Count == 0 ? 1 : (double)recovered / detectable.Count;
+            falseDiscoveryProportion += shortlisted.Count == 0 ? 0 : (double)shortlisted.Count(f => !causal[f]) / shortlisted.Count;
+        }
+        recoveredShare /= seeds;
+        falseDiscoveryProportion /= seeds;
+        Assert.True(recoveredShare >= 0.8, $"recovered {recoveredShare:P0} of the detectable causal features");
+        // Nominal level 0.10 (the q-value threshold) plus a slack of 0.05 for three seeds.
+        Assert.True(falseDiscoveryProportion <= 0.15, $"false discovery proportion {falseDiscoveryProportion:P0}");
+    }
+
+    [Fact]
+    public void On_a_null_panel_the_shortlist_is_empty_or_within_the_nominal_level()
+    {
+        int acceptable = 0;
+        const int seeds = 10;
+        for (ulong seed = 1; seed <= seeds; seed++)
+        {
+            var (panel, _) = CausalBlockPanel.Generate(new CausalBlockPanel.Design { Null = true, SampleCount = 60, FeatureCount = 300, Seed = 100 + seed });
+            var result = ScreenRunner.Run(panel, QuickOptions(seed) with { HalfSamplePairs = 5, TreesPerForest = 100 });
+            // Every shortlisted feature is a false discovery here, so the proportion is 1 unless the list is empty.
+            if (result.Shortlist.Count == 0) acceptable++;
+        }
+        Assert.True(acceptable >= 9, $"{seeds - acceptable} of {seeds} null panels gave a non-empty shortlist");
+    }
+
+    [Fact]
+    public void The_honest_panel_size_curve_stays_at_chance_on_a_null_panel_while_the_optimistic_one_does_not()
+    {
+        // Ambroise & McLachlan (2002): selecting features on all samples and then cross-validating
+        // the panel is biased upwards; selecting inside each fold is not.
+        var (panel, _) = CausalBlockPanel.Generate(new CausalBlockPanel.Design { Null = true, SampleCount = 50, FeatureCount = 1500, Seed = 7 });
+        var result = ScreenRunner.Run(panel, QuickOptions(3) with
+        {
+            HalfSamplePairs = 5, TreesPerForest = 100, CurveFolds = 5, CurveInnerPairs = 3, CurveMaxPanelSize = 8,
+        });
+        var curve = result.PanelSize!;
+        foreach (var point in curve.Points)
+            Assert.InRange(point.HonestAuc, 0.5 - 2.5 * point.HonestAucSd - 0.05, 0.5 + 2.5 * point.HonestAucSd + 0.05);
+        double honest = curve.Points.Average(p => p.HonestAuc), optimistic = curve.Points.Average(p => p.OptimisticAuc);
+        Assert.InRange(honest, 0.35, 0.62);
+        Assert.True(optimistic > 0.62 && optimistic > honest + 0.1,
+            $"optimistic AUC {optimistic:0.000} should be visibly above chance and above the honest {honest:0.000}");
+    }
+
+    [Fact]
+    public void The_screen_gives_identical_results_on_one_and_two_threads()
+    {
+        var (panel, _) = CausalBlockPanel.Generate(new CausalBlockPanel.Design { SampleCount = 60, FeatureCount = 200, Seed = 5 });
+        var options = QuickOptions(9) with { HalfSamplePairs = 3, TreesPerForest = 60, CurveFolds = 3, CurveInnerPairs = 2, CurveMaxPanelSize = 5 };
+        var one = ScreenRunner.Run(panel, options with { ThreadCount = 1 });
+        var two = ScreenRunner.Run(panel, options with { ThreadCount = 2 });
+        Assert.Equal(one.Repeats.Corrected, two.Repeats.Corrected);
+        Assert.Equal(one.Repeats.Permutation, two.Repeats.Permutation);
+        Assert.Equal(one.Features, two.Features);
+        Assert.Equal(one.Shortlist.Select(e => e.Forest.Feature), two.Shortlist.Select(e => e.Forest.Feature));
+        Assert.Equal(one.PanelSize!.Points, two.PanelSize!.Points);
+    }
+
+    [Fact]
+    public void Settings_resolve_automatic_choices_against_the_panel()
+    {
+        var (panel, _) = CausalBlockPanel.Generate(new CausalBlockPanel.Design { SampleCount = 20, FeatureCount = 2000, CaseFraction = 0.25 });
+        var settings = ScreenSettings.Resolve(new ScreenOptions(), panel);
+        Assert.Equal(2000, settings.DecoyCount);
+        Assert.Equal(44, settings.FeaturesPerSplit);
+        Assert.True(settings.ClassBalanced);
+        var wide = ScreenSettings.Resolve(new ScreenOptions { AutomaticDecoyFeatureLimit = 1000 }, panel);
+        Assert.Equal(0, wide.DecoyCount);
+    }
+
+    [Fact]
+    public void A_repeat_selects_features_above_the_upper_quantile_of_its_null()
+    {
+        // Null sample: mirrored non-positive importances {-0.2, 0.2, -0.1, 0.1} and decoys with
+        // mirrors {0.05, -0.05, -0.3, 0.3}: sorted, its 0.75 quantile (type 1) is the 6th of 8, 0.1.
+        var repeats = new RepeatImportances(1, 5, 2);
+        double[] features = [0.5, 0.15, 0.1, -0.2, -0.1];
+        features.CopyTo(repeats.Corrected, 0);
+        repeats.DecoyCorrected[0] = 0.05;
+        repeats.DecoyCorrected[1] = -0.3;
+        RepeatScreen.Select(repeats, 0, level: 0.25, cap: 0);
+        Assert.Equal([true, true, false, false, false], repeats.Selected);
+        Assert.Equal([false, false], repeats.DecoySelected);
+
+        var capped = new RepeatImportances(1, 5, 2);
+        features.CopyTo(capped.Corrected, 0);
+        RepeatScreen.Select(capped, 0, level: 0.25, cap: 1);
+        Assert.Equal([true, false, false, false, false], capped.Selected);
+    }
+
+    [Fact]
+    public void The_size_grid_follows_fibonacci_steps_and_ends_at_the_limit()
+    {
+        Assert.Equal([1, 2, 3, 5, 8, 13, 21, 34, 55], PanelSizeEstimator.SizeGrid(55));
+        Assert.Equal([1, 2, 3, 5, 8, 10], PanelSizeEstimator.SizeGrid(10));
+        Assert.Equal([1], PanelSizeEstimator.SizeGrid(1));
+    }
+}
