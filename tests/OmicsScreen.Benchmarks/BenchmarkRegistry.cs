@@ -12,6 +12,8 @@ public static class BenchmarkRegistry
         cases.Add(("forest", new ForestTrainingCase("forest-200x20000", 200, 20_000)));
         cases.Add(("forest", new ForestTrainingCase("forest-1000x2000", 1_000, 2_000)));
         cases.Add(("forest", new ForestTrainingCase("forest-4000x500", 4_000, 500)));
+        cases.Add(("screen", new ScreenCase("screen-200x20000", 200, 20_000)));
+        cases.Add(("screen", new ScreenCase("screen-1000x2000", 1_000, 2_000)));
         return cases;
     }
 

@@ -1,4 +1,5 @@
 using System.Text.Json;
+using Microsoft.Data.Analysis;
 using OmicsScreen.TestSupport;
 
 namespace OmicsScreen.Cli.Tests.Commands;
@@ -95,5 +96,23 @@ public sealed class ScreenCommandTests : IDisposable
         Assert.Equal(ExitCode.Usage, run.ExitCode);
         Assert.Contains("frequency", run.Error);
         Assert.False(Directory.Exists(Path.Combine(_folder.Path, "x")));
+    }
+
+    [Fact]
+    public void Result_tables_load_in_a_general_purpose_data_frame_with_numeric_columns()
+    {
+        // Microsoft.Data.Analysis DataFrame.LoadCsv, a general-purpose reader: the tables must load
+        // with one row per record and their number columns typed as numbers, not text.
+        string results = Path.Combine(_folder.Path, "frame");
+        Assert.Equal(ExitCode.Success, CliHarness.Run(ScreenWdbc(results)).ExitCode);
+
+        var features = DataFrame.LoadCsv(Path.Combine(results, "features.tsv"), separator: '\t');
+        Assert.Equal(30, features.Rows.Count);
+        Assert.IsAssignableFrom<PrimitiveDataFrameColumn<float>>(features.Columns["selection_frequency"]);
+        Assert.IsAssignableFrom<PrimitiveDataFrameColumn<float>>(features.Columns["q_value"]);
+
+        var curve = DataFrame.LoadCsv(Path.Combine(results, "panel_size_curve.tsv"), separator: '\t');
+        Assert.Equal(4, curve.Rows.Count); // sizes 1, 2, 3, 5
+        Assert.Single(curve.Rows, row => (string)row[1] == "yes");
     }
 }
