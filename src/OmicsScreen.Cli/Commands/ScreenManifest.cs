@@ -74,6 +74,7 @@ internal static class ScreenManifest
         ScreenStage.Repeats => "repeats",
         ScreenStage.OutcomePermutations => "outcome_permutations",
         ScreenStage.PanelSizeCurve => "panel_size_curve",
+        ScreenStage.Cohorts => "cohorts",
         _ => stage.ToString(),
     };
 

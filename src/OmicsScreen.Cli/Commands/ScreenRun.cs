@@ -47,10 +47,12 @@ internal static class ScreenRun
         folder.WriteText("marker_statistics.tsv", w => UnivariateTableWriter.WriteAllSamples(w, result.Univariate));
         if (result.Univariate.PerCohort.Count > 0)
             folder.WriteText("marker_statistics_by_cohort.tsv", w => UnivariateTableWriter.WritePerCohort(w, result.Univariate));
+        if (result.Cohorts is { } cohorts) CohortOutput.Write(folder, cohorts);
         var manifest = ScreenManifest.Build(options, loaded, result, started, DateTimeOffset.UtcNow, loadSeconds, folder.WrittenFiles);
         folder.WriteText(ResultsFolder.ManifestFileName, w => ManifestJson.Write(w, manifest));
 
         PrintSummary(console.Out, loaded, result, folder.Path);
+        if (result.Cohorts is { } checkedCohorts) CohortOutput.PrintSummary(console.Out, result, checkedCohorts);
         return ExitCode.Success;
     }
 

@@ -92,6 +92,7 @@ internal sealed class ProgressDisplay : IProgress<ScreenProgress>
         ScreenStage.Repeats => "half-sample repeats",
         ScreenStage.OutcomePermutations => "outcome permutations",
         ScreenStage.PanelSizeCurve => "panel-size curve",
+        ScreenStage.Cohorts => "cohort check",
         _ => stage.ToString(),
     };
 }

@@ -21,6 +21,7 @@ public static class ScreenTables
             TsvColumn<ShortlistEntry>.Integer("rank", e => e.Rank),
             TsvColumn<ShortlistEntry>.Text("feature", e => e.Forest.Feature),
             TsvColumn<ShortlistEntry>.Integer("redundancy_group", e => e.RedundancyGroup),
+            TsvColumn<ShortlistEntry>.Text("cohort_flag", e => result.Cohorts?.Marker(e.Forest.FeatureIndex) is { } m ? CohortTables.FlagText(m.Flag) : ""),
             TsvColumn<ShortlistEntry>.Number("selection_frequency", e => e.Forest.SelectionFrequency, Share),
             TsvColumn<ShortlistEntry>.Number("median_rank", e => e.Forest.MedianRank, NumberFormat.Fixed(1)),
             TsvColumn<ShortlistEntry>.Number("rank_q1", e => e.Forest.RankLowerQuartile, NumberFormat.Fixed(1)),

@@ -1,3 +1,4 @@
+using OmicsScreen.Screening.Cohorts;
 using OmicsScreen.Screening.Univariate;
 
 namespace OmicsScreen.Screening.Screen;
@@ -10,6 +11,7 @@ namespace OmicsScreen.Screening.Screen;
 /// <param name="UnivariateRanks">Per feature, rank by rank-test p-value (1 = smallest).</param>
 /// <param name="PanelSize">Null when the curve was skipped.</param>
 /// <param name="StageSeconds">Wall time of each stage that ran.</param>
+/// <param name="Cohorts">The cohort check; null without a cohort column with at least two cohorts.</param>
 public sealed record ScreenResult(
     ScreenSettings Settings,
     RepeatImportances Repeats,
@@ -23,4 +25,5 @@ public sealed record ScreenResult(
     UnivariateTable Univariate,
     IReadOnlyList<int> UnivariateRanks,
     PanelSizeCurve? PanelSize,
-    IReadOnlyDictionary<ScreenStage, double> StageSeconds);
+    IReadOnlyDictionary<ScreenStage, double> StageSeconds,
+    CohortResult? Cohorts);

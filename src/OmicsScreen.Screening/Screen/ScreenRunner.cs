@@ -2,6 +2,7 @@ using System.Diagnostics;
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Panels;
+using OmicsScreen.Screening.Cohorts;
 using OmicsScreen.Screening.Importance;
 using OmicsScreen.Screening.Statistics;
 using OmicsScreen.Screening.Univariate;
@@ -97,8 +98,18 @@ public static class ScreenRunner
             Finish(ScreenStage.PanelSizeCurve);
         }
 
+        CohortResult? cohorts = null;
+        if (panel.Cohort is { LevelCount: >= 2 })
+        {
+            progress?.Report(new ScreenProgress(ScreenStage.Cohorts, 0, 1));
+            int panelSize = curve?.RecommendedSize ?? Math.Max(1, shortlist.Count);
+            cohorts = CohortAnalysis.Run(panel, matrix, settings, order, univariate, panelSize,
+                (done, total) => progress?.Report(new ScreenProgress(ScreenStage.Cohorts, done, total)), cancellation);
+            Finish(ScreenStage.Cohorts);
+        }
+
         return new ScreenResult(settings, repeats, features, order, shortlist, correlations, stability, decoys, reference,
-            univariate, univariateRanks, curve, seconds);
+            univariate, univariateRanks, curve, seconds, cohorts);
     }
 
     /// <summary>The shortlist rule: selected often enough, and a q-value at the false discovery rate level.</summary>

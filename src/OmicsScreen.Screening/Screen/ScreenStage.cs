@@ -9,4 +9,5 @@ public enum ScreenStage
     Repeats,
     OutcomePermutations,
     PanelSizeCurve,
+    Cohorts,
 }

@@ -1,0 +1,265 @@
+using MathNet.Numerics.Distributions;
+using OmicsScreen.Engine.Binning;
+using OmicsScreen.Engine.Forests;
+using OmicsScreen.Engine.Panels;
+using OmicsScreen.Engine.Randomness;
+using OmicsScreen.Screening.Screen;
+using OmicsScreen.Screening.Statistics;
+using OmicsScreen.Screening.Univariate;
+
+namespace OmicsScreen.Screening.Cohorts;
+
+/// <summary>
+/// Checks that top markers hold across cohorts and are not cohort or batch artefacts: each
+/// cohort's own screen and their concordance, per-marker heterogeneity, a forest that predicts
+/// the cohort, the outcome-cohort association, and leave-one-cohort-out validation.
+/// </summary>
+internal static class CohortAnalysis
+{
+    /// <summary>A cohort gets its own screen (and is held out) only with this many samples in every class.</summary>
+    public const int MinimumSamplesPerClass = 5;
+
+    /// <summary>One-cohort-against-the-rest AUC from which a marker counts as separating cohorts.</summary>
+    private const double StrongCohortSeparation = 0.75;
+
+    private const double HeterogeneityFlagI2 = 0.75;
+    private const double ConfoundingCramersV = 0.5;
+
+    // Index slots of SeedSchedule for the cohort check's streams, clear of the screen's own.
+    private const int CohortScreenSlot = 2000;
+    private const int HeldOutSlot = 3000;
+    private const int CohortForestRepeat = int.MaxValue - 1;
+
+    public static CohortResult Run(Panel panel, BinnedMatrix matrix, ScreenSettings settings, IReadOnlyList<int> order,
+        UnivariateTable univariate, int panelSize, Action<int, int>? progress,
+        CancellationToken cancellation)
+    {
+        var cohort = panel.Cohort ?? throw new ArgumentException("The panel names no cohort.");
+        var outcome = panel.Outcome;
+        var options = settings.Options;
+        int featureCount = panel.FeatureCount;
+        var levels = cohort.SampleLevels.ToArray();
+        var rowsOf = Enumerable.Range(0, cohort.LevelCount)
+            .Select(c => Enumerable.Range(0, panel.SampleCount).Where(s => levels[s] == c).ToArray()).ToArray();
+        var screenable = Enumerable.Range(0, cohort.LevelCount).Where(c => HasEnoughOfEachClass(rowsOf[c], outcome)).ToArray();
+        int steps = screenable.Length * 2 + 1, done = 0;
+
+        // Each cohort's own screen.
+        var cohortOrders = new Dictionary<int, int[]>();
+        var cohortImportance = new Dictionary<int, double[]>();
+        foreach (int c in screenable)
+        {
+            cancellation.ThrowIfCancellationRequested();
+            ulong seed = SeedSchedule.Derive(options.Seed, 0, CohortScreenSlot + c, SeedPurpose.Resampling);
+            var repeats = RepeatScreen.Run(matrix, outcome, panel.Subject, rowsOf[c], settings, seed, options.CurveInnerPairs, 0, null, cancellation);
+            cohortOrders[c] = ScreenAggregation.OrderOf(repeats);
+            cohortImportance[c] = MeanCorrected(repeats);
+            progress?.Invoke(++done, steps);
+        }
+        var concordance = new List<CohortConcordance>();
+        for (int i = 0; i < screenable.Length; i++)
+            for (int j = i + 1; j < screenable.Length; j++)
+            {
+                int a = screenable[i], b = screenable[j];
+                concordance.Add(Concord(cohort.LevelNames[a], cohort.LevelNames[b], cohortImportance[a], cohortImportance[b],
+                    cohortOrders[a], cohortOrders[b]));
+            }
+
+        // How well the features predict the cohort, and each feature's importance for it.
+        var cohortOutcome = new ClassOutcome(cohort.ColumnName, cohort.LevelNames, levels);
+        var cohortForest = ForestTrainer.Train(matrix, cohortOutcome, settings.ForestOptions(panel.Subject, options.Seed, CohortForestRepeat) with
+        {
+            Sampling = settings.ForestOptions(panel.Subject, options.Seed, CohortForestRepeat).Sampling with { ClassBalanced = false },
+        });
+        double cohortAccuracy = 1 - new OutOfBagVotes(cohortForest, cohortOutcome).Error;
+        var cohortImportanceRank = RankDescending(ImpurityImportance.From(cohortForest).MeanDecrease);
+        double largestShare = rowsOf.Max(r => r.Length) / (double)panel.SampleCount;
+        progress?.Invoke(++done, steps);
+
+        var (cramersV, associationP) = OutcomeCohortAssociation(outcome, cohort);
+
+        // Per-marker heterogeneity of every feature, in the screen's order; features are
+        // independent, so they run in parallel and are gathered by index.
+        int positiveContrast = Math.Max(0, univariate.Contrasts.ToList().IndexOf(outcome.ClassNames[outcome.PositiveClass]));
+        var markers = new MarkerHeterogeneity[featureCount];
+        Parallel.For(0, featureCount, new ParallelOptions { MaxDegreeOfParallelism = ThreadCount(options) },
+            i => markers[i] = Heterogeneity(panel, univariate, order[i], positiveContrast, cohortImportanceRank[order[i]]));
+
+        // Leave one cohort out: screen the others, score the held-out one.
+        var heldOut = new List<HeldOutCohort>();
+        foreach (int c in screenable)
+        {
+            cancellation.ThrowIfCancellationRequested();
+            var training = Enumerable.Range(0, panel.SampleCount).Where(s => levels[s] != c).ToArray();
+            if (!HasEnoughOfEachClass(training, outcome)) continue;
+            ulong seed = SeedSchedule.Derive(options.Seed, 0, HeldOutSlot + c, SeedPurpose.Resampling);
+            var repeats = RepeatScreen.Run(matrix, outcome, panel.Subject, training, settings, seed, options.CurveInnerPairs, 0, null, cancellation);
+            var top = ScreenAggregation.OrderOf(repeats).AsSpan(0, Math.Min(panelSize, featureCount)).ToArray();
+            heldOut.Add(ScoreHeldOut(matrix, panel, settings, top, training, rowsOf[c], cohort.LevelNames[c], seed));
+            progress?.Invoke(++done, steps);
+        }
+
+        return new CohortResult(cohort.ColumnName, cohort.LevelNames, screenable.Select(c => cohort.LevelNames[c]).ToArray(),
+            concordance, markers, heldOut, cohortAccuracy, largestShare, cramersV, associationP, cramersV >= ConfoundingCramersV);
+    }
+
+    private static int ThreadCount(ScreenOptions options) => options.ThreadCount > 0 ? options.ThreadCount : Environment.ProcessorCount;
+
+    private static bool HasEnoughOfEachClass(int[] rows, ClassOutcome outcome)
+    {
+        var counts = new int[outcome.ClassCount];
+        foreach (int row in rows) counts[outcome.SampleClasses[row]]++;
+        return counts.All(n => n >= MinimumSamplesPerClass);
+    }
+
+    private static double[] MeanCorrected(RepeatImportances repeats)
+    {
+        var mean = new double[repeats.FeatureCount];
+        for (int r = 0; r < repeats.RepeatCount; r++)
+            for (int f = 0; f < repeats.FeatureCount; f++) mean[f] += repeats.Corrected[r * repeats.FeatureCount + f] / repeats.RepeatCount;
+        return mean;
+    }
+
+    private static CohortConcordance Concord(string first, string second, double[] importanceA, double[] importanceB, int[] orderA, int[] orderB)
+    {
+        const int rboDepth = 100;
+        double Overlap(int k)
+        {
+            k = Math.Min(k, orderA.Length);
+            return RankBiasedOverlap.TopOverlap<int>(orderA.AsSpan(0, k), orderB.AsSpan(0, k), k) / (double)k;
+        }
+        int depth = Math.Min(rboDepth, orderA.Length);
+        return new CohortConcordance(first, second, Correlation.Spearman(importanceA, importanceB), Overlap(10), Overlap(20), Overlap(50),
+            RankBiasedOverlap.Extrapolated<int>(orderA.AsSpan(0, depth), orderB.AsSpan(0, depth), 0.9));
+    }
+
+    private static MarkerHeterogeneity Heterogeneity(Panel panel, UnivariateTable univariate, int feature, int contrast, int cohortRank)
+    {
+        var cohort = panel.Cohort!;
+        int perCohort = panel.FeatureCount * univariate.Contrasts.Count;
+        var effects = new List<CohortEffect>();
+        var estimates = new List<double>();
+        var variances = new List<double>();
+        for (int c = 0; c < cohort.LevelCount; c++)
+        {
+            var row = univariate.PerCohort[c * perCohort + feature * univariate.Contrasts.Count + contrast];
+            effects.Add(new CohortEffect(cohort.LevelNames[c], row.ClassSampleCount + row.RestSampleCount, row.Log2MedianRatio,
+                row.Auc, row.AucStandardError, row.AucInterval));
+            if (double.IsFinite(row.Auc) && row.AucStandardError > 0)
+            {
+                estimates.Add(row.Auc);
+                variances.Add(row.AucStandardError * row.AucStandardError);
+            }
+        }
+        var within = estimates.Count >= 2 ? RandomEffectsMetaAnalysis.DerSimonianLaird(estimates.ToArray(), variances.ToArray()) : null;
+        var pooled = univariate.Row(feature, contrast);
+        var (separation, separated) = CohortSeparation(panel.Matrix, feature, cohort);
+
+        // An artefact: the pooled samples show an effect, the cohorts differ strongly, and within
+        // cohorts there is no consistent effect (the pooled within-cohort interval spans 0.5).
+        bool pooledEffect = !(pooled.AucInterval.Lower <= 0.5 && pooled.AucInterval.Upper >= 0.5);
+        bool noWithinEffect = within is not null && within.RandomInterval.Lower <= 0.5 && within.RandomInterval.Upper >= 0.5;
+        var flag = pooledEffect && noWithinEffect && separation >= StrongCohortSeparation ? CohortFlag.CohortArtefact
+            : within is not null && within.I2 >= HeterogeneityFlagI2 ? CohortFlag.Heterogeneous
+            : CohortFlag.None;
+        return new MarkerHeterogeneity(feature, panel.Matrix.FeatureNames[feature], effects, within, pooled.Auc, pooled.AucInterval,
+            separation, separated, cohortRank, flag);
+    }
+
+    /// <summary>The cohort that the feature separates best from the others, by Mann-Whitney AUC folded to at least 0.5.</summary>
+    private static (double Auc, string Cohort) CohortSeparation(FeatureMatrix matrix, int feature, SampleGrouping cohort)
+    {
+        var values = new List<double>[cohort.LevelCount];
+        for (int c = 0; c < values.Length; c++) values[c] = [];
+        var column = matrix.Column(feature);
+        for (int s = 0; s < matrix.SampleCount; s++)
+        {
+            var state = matrix.State(feature, s);
+            if (state == CellState.Missing) continue;
+            values[cohort.SampleLevels[s]].Add(state == CellState.BelowDetection ? double.NegativeInfinity : column[s]);
+        }
+        double best = 0.5;
+        string bestCohort = cohort.LevelNames[0];
+        for (int c = 0; c < values.Length; c++)
+        {
+            var rest = values.Where((_, i) => i != c).SelectMany(v => v).ToArray();
+            if (values[c].Count == 0 || rest.Length == 0) continue;
+            double auc = MannWhitney.Test(values[c].ToArray(), rest).Auc;
+            double folded = Math.Max(auc, 1 - auc);
+            if (folded > best)
+            {
+                best = folded;
+                bestCohort = cohort.LevelNames[c];
+            }
+        }
+        return (best, bestCohort);
+    }
+
+    /// <summary>Cramer's V of the class x cohort table (Cramer 1946) with the chi-square test of independence.</summary>
+    internal static (double CramersV, double PValue) OutcomeCohortAssociation(ClassOutcome outcome, SampleGrouping cohort)
+    {
+        int rows = outcome.ClassCount, columns = cohort.LevelCount, n = outcome.SampleCount;
+        var table = new double[rows, columns];
+        for (int s = 0; s < n; s++) table[outcome.SampleClasses[s], cohort.SampleLevels[s]]++;
+        var rowSums = new double[rows];
+        var columnSums = new double[columns];
+        for (int r = 0; r < rows; r++)
+            for (int c = 0; c < columns; c++)
+            {
+                rowSums[r] += table[r, c];
+                columnSums[c] += table[r, c];
+            }
+        double chiSquare = 0;
+        for (int r = 0; r < rows; r++)
+            for (int c = 0; c < columns; c++)
+            {
+                double expected = rowSums[r] * columnSums[c] / n;
+                if (expected > 0) chiSquare += (table[r, c] - expected) * (table[r, c] - expected) / expected;
+            }
+        int usedRows = rowSums.Count(x => x > 0), usedColumns = columnSums.Count(x => x > 0);
+        int smaller = Math.Min(usedRows, usedColumns) - 1;
+        if (smaller < 1) return (double.NaN, double.NaN);
+        double v = Math.Sqrt(chiSquare / (n * smaller));
+        int degrees = (usedRows - 1) * (usedColumns - 1);
+        return (v, ChiSquared.CDF(degrees, chiSquare) is var cdf ? 1 - cdf : double.NaN);
+    }
+
+    private static HeldOutCohort ScoreHeldOut(BinnedMatrix matrix, Panel panel, ScreenSettings settings, int[] features,
+        int[] training, int[] test, string cohortName, ulong seed)
+    {
+        var outcome = panel.Outcome;
+        var selected = matrix.SelectFeatures(features);
+        var forestOptions = settings.ForestOptions(panel.Subject, seed, 0);
+        forestOptions = forestOptions with { Tree = forestOptions.Tree with { FeaturesPerSplit = null } };
+        var forest = ForestTrainer.Train(selected, outcome, forestOptions, training);
+        var prediction = forest.Predict(selected);
+        int wrong = 0;
+        var positives = new List<double>();
+        var negatives = new List<double>();
+        foreach (int row in test)
+        {
+            if (prediction.PredictedClasses[row] != outcome.SampleClasses[row]) wrong++;
+            double probability = prediction.Probability(row, outcome.PositiveClass);
+            (outcome.SampleClasses[row] == outcome.PositiveClass ? positives : negatives).Add(probability);
+        }
+        double auc = double.NaN;
+        var interval = ConfidenceInterval.Undefined(0.95);
+        if (outcome.ClassCount == 2 && positives.Count > 0 && negatives.Count > 0)
+        {
+            var estimate = DeLong.Estimate(positives.ToArray(), negatives.ToArray());
+            auc = estimate.Auc;
+            interval = AucInterval.Compute(estimate.Auc, estimate.StandardError);
+        }
+        return new HeldOutCohort(cohortName, test.Length, features.Length, auc, interval, (double)wrong / test.Length);
+    }
+
+    private static int[] RankDescending(ReadOnlySpan<double> values)
+    {
+        var copy = values.ToArray();
+        var order = Enumerable.Range(0, copy.Length).ToArray();
+        Array.Sort(order, (a, b) => copy[a] != copy[b] ? copy[b].CompareTo(copy[a]) : a.CompareTo(b));
+        var ranks = new int[copy.Length];
+        for (int i = 0; i < order.Length; i++) ranks[order[i]] = i + 1;
+        return ranks;
+    }
+}

@@ -1,0 +1,112 @@
+using OmicsScreen.Engine.Panels;
+using OmicsScreen.Engine.Randomness;
+using OmicsScreen.Screening.Cohorts;
+using OmicsScreen.Screening.Screen;
+
+namespace OmicsScreen.Screening.Tests.Cohorts;
+
+public class CohortAnalysisTests
+{
+    private const int Artefact = 0, Consistent = 1, OneCohortOnly = 2;
+
+    /// <summary>
+    /// Three cohorts of 90 (case shares 25%, 25%, 60%, so cohort and outcome are associated),
+    /// 150 noise features, and three planted ones: feature 0 shifted 2.5 SD in cohort 2 only (no
+    /// class effect); feature 1 shifted 1.2 SD in cases of every cohort; feature 2 shifted 2 SD in
+    /// cases of cohort 0 only.
+    /// </summary>
+    private static Panel ThreeCohortPanel(ulong seed)
+    {
+        const int perCohort = 90, featureCount = 153;
+        double[] caseShare = [0.25, 0.25, 0.6];
+        var random = new Xoshiro256StarStar(seed);
+        int sampleCount = 3 * perCohort;
+        var cohort = new int[sampleCount];
+        var classes = new int[sampleCount];
+        for (int c = 0; c < 3; c++)
+            for (int i = 0; i < perCohort; i++)
+            {
+                int s = c * perCohort + i;
+                cohort[s] = c;
+                classes[s] = i < caseShare[c] * perCohort ? 1 : 0;
+            }
+        var columns = new float[featureCount][];
+        for (int f = 0; f < featureCount; f++)
+        {
+            columns[f] = new float[sampleCount];
+            for (int s = 0; s < sampleCount; s++)
+            {
+                double x = random.NextGaussian();
+                if (f == Artefact && cohort[s] == 2) x += 2.5;
+                if (f == Consistent && classes[s] == 1) x += 1.2;
+                if (f == OneCohortOnly && classes[s] == 1 && cohort[s] == 0) x += 2.0;
+                columns[f][s] = (float)Math.Exp(x);
+            }
+        }
+        var names = Enumerable.Range(0, featureCount).Select(f => $"f{f:D3}").ToArray();
+        var ids = Enumerable.Range(0, sampleCount).Select(s => $"s{s:D3}").ToArray();
+        var matrix = new FeatureMatrix(names, ids, columns, new CellState[]?[featureCount]);
+        return new Panel(matrix, new ClassOutcome("status", ["control", "case"], classes, positiveClass: 1),
+            new SampleGrouping("centre", ["c0", "c1", "c2"], cohort));
+    }
+
+    private static ScreenResult Screen(Panel panel) => ScreenRunner.Run(panel, new ScreenOptions
+    {
+        Seed = 3, HalfSamplePairs = 5, TreesPerForest = 300, CurveFolds = 0, CurveInnerPairs = 3,
+    });
+
+    [Fact]
+    public void A_marker_shifted_only_between_cohorts_is_flagged_and_consistent_markers_are_not()
+    {
+        var result = Screen(ThreeCohortPanel(11));
+        var cohorts = result.Cohorts!;
+        var artefact = cohorts.Marker(Artefact);
+        Assert.NotNull(artefact);
+        Assert.Equal(CohortFlag.CohortArtefact, artefact!.Flag);
+        Assert.Equal("c2", artefact.SeparatedCohort);
+        Assert.NotEqual(CohortFlag.CohortArtefact, cohorts.Marker(Consistent)!.Flag);
+    }
+
+    [Fact]
+    public void A_consistent_effect_has_low_heterogeneity_and_a_one_cohort_effect_high()
+    {
+        var result = Screen(ThreeCohortPanel(12));
+        var cohorts = result.Cohorts!;
+        var consistent = cohorts.Marker(Consistent)!;
+        var oneCohort = cohorts.Marker(OneCohortOnly)!;
+        // I^2 (Higgins & Thompson 2002) of the per-cohort AUCs.
+        Assert.True(consistent.WithinCohort!.I2 < 0.3, $"consistent I2 {consistent.WithinCohort.I2:0.00}");
+        Assert.True(oneCohort.WithinCohort!.I2 > 0.75, $"one-cohort I2 {oneCohort.WithinCohort.I2:0.00}");
+        Assert.Equal(CohortFlag.Heterogeneous, oneCohort.Flag);
+        // The consistent marker leads every cohort's own screen, so their orders agree at the top.
+        Assert.All(cohorts.Concordance, c => Assert.True(c.RankBiasedOverlap > 0, $"{c.First}-{c.Second}"));
+    }
+
+    [Fact]
+    public void Held_out_cohorts_are_scored_and_the_outcome_cohort_association_is_measured()
+    {
+        var result = Screen(ThreeCohortPanel(13));
+        var cohorts = result.Cohorts!;
+        Assert.Equal(3, cohorts.HeldOut.Count);
+        // The consistent marker carries over to every held-out cohort.
+        Assert.All(cohorts.HeldOut, h => Assert.True(h.Auc > 0.6, $"{h.Cohort}: AUC {h.Auc:0.000}"));
+        // Case shares 25/25/60%: a moderate association, not confounding.
+        Assert.InRange(cohorts.OutcomeCohortCramersV, 0.2, 0.5);
+        Assert.False(cohorts.Confounded);
+        // Feature 0 makes cohort c2 recognisable, so cohort is predicted above the largest share.
+        Assert.True(cohorts.CohortPredictionAccuracy > cohorts.LargestCohortShare);
+    }
+
+    [Fact]
+    public void Cramers_v_of_a_table_worked_by_hand()
+    {
+        // 2 x 2 table [[30, 10], [10, 30]]: chi^2 = 80 * (30*30 - 10*10)^2 / (40^4) = 20, so
+        // V = sqrt(20 / 80) = 0.5 (Cramer 1946, V = sqrt(chi^2 / (n (min(r, c) - 1)))).
+        var classes = Enumerable.Repeat(0, 40).Concat(Enumerable.Repeat(1, 40)).ToArray();
+        var levels = Enumerable.Repeat(0, 30).Concat(Enumerable.Repeat(1, 10)).Concat(Enumerable.Repeat(0, 10)).Concat(Enumerable.Repeat(1, 30)).ToArray();
+        var (v, p) = CohortAnalysis.OutcomeCohortAssociation(new ClassOutcome("y", ["a", "b"], classes), new SampleGrouping("c", ["x", "y"], levels));
+        Assert.Equal(0.5, v, 12);
+        // P(chi^2_1 >= 20) = 7.74e-6 (standard chi-square table value, from memory).
+        Assert.InRange(p, 7.6e-6, 7.9e-6);
+    }
+}
