@@ -83,7 +83,7 @@ internal static class ScreenReportText
             new("Half-sample pairs (repeats)", Invariant($"{o.HalfSamplePairs} ({settings.RepeatCount} repeats)")),
             new("Trees per forest", Integer(o.TreesPerForest)),
             new("Features tried at each split", o.FeaturesPerSplit > 0 ? Integer(settings.FeaturesPerSplit) : Invariant($"{settings.FeaturesPerSplit} (square root of the feature count)")),
-            new("Smallest leaf", Integer(o.MinLeafSize) + " samples"),
+            new("Smallest leaf (samples)", Integer(o.MinLeafSize)),
             new("Class-balanced trees", Invariant($"{(settings.ClassBalanced ? "yes" : "no")} (setting: {o.Balance})")),
             new("Per-repeat selection level", Invariant($"{o.RepeatSelectionLevel:0.###}")),
             new("Cap on features selected per repeat", o.SelectedPerRepeat > 0 ? Integer(o.SelectedPerRepeat) : "none"),
