@@ -85,7 +85,7 @@ public static class ScreenReport
         }
         else
         {
-            html.Paragraph("One row per shortlisted marker, best first. Markers sharing a redundancy group are strongly correlated "
+            html.Paragraph("One row per shortlisted marker, best first. Markers sharing a redundancy group (Group) are strongly correlated "
                 + "and can stand in for one another. Direction, log2 median ratio and AUC compare the positive class with the rest; "
                 + "the AUC interval is DeLong's. Univariate rank is the marker's position by rank-test p-value among all features.");
             html.Table(ScreenReportTables.Shortlist(result));

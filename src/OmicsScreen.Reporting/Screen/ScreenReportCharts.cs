@@ -136,10 +136,10 @@ internal static class ScreenReportCharts
     {
         var values = MarkerValues.Of(panel, feature.FeatureIndex);
         var scale = values.AllMeasuredPositive ? AxisScaleKind.Log10 : AxisScaleKind.Linear;
-        string axis = scale == AxisScaleKind.Log10 ? "Measured value (file units, log scale)" : "Measured value (file units)";
+        string axis = scale == AxisScaleKind.Log10 ? "Value (log scale)" : "Value (linear scale)";
         string? description = showSampleIds ? DescribeWithSampleIds(panel, feature.FeatureIndex) : null;
         return StripBoxChart.Render(new StripBoxChartOptions(feature.Feature, axis, ClassAxisLabel, description, scale, values.DetectionLimit,
-            Width: 420, Height: 360), values.Groups);
+            Width: 520, Height: 420), values.Groups);
     }
 
     public static SvgImage Correlations(ScreenResult result)

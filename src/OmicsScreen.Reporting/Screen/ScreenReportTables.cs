@@ -11,20 +11,22 @@ internal static class ScreenReportTables
 
     public static HtmlTable Shortlist(ScreenResult result)
     {
+        // Numeric headers do not wrap (the style sheet keeps figures on one line), so the wide
+        // columns are text columns with wrapping headers; the table then fits a printed A4 page.
         var table = new HtmlTable(ShortlistCaption,
         [
             new("Rank", ColumnAlignment.Numeric),
             new("Marker"),
-            new("Redundancy group", ColumnAlignment.Numeric),
-            new("Selection frequency", ColumnAlignment.Numeric),
-            new("Median rank [IQR]", ColumnAlignment.Text),
-            new("Corrected importance ± SD", ColumnAlignment.Text),
-            new("Permutation importance ± SD", ColumnAlignment.Text),
+            new("Group", ColumnAlignment.Numeric),
+            new("Selection frequency"),
+            new("Median rank [IQR]"),
+            new("Corrected importance ± SD"),
+            new("Permutation importance ± SD"),
             new("q-value", ColumnAlignment.Numeric),
             new("Direction"),
-            new("log2 median ratio", ColumnAlignment.Numeric),
-            new("AUC [95% CI]", ColumnAlignment.Text),
-            new("Univariate rank", ColumnAlignment.Numeric),
+            new("log2 ratio", ColumnAlignment.Numeric),
+            new("AUC [95% CI]"),
+            new("Univariate rank"),
         ])
         { FirstColumnIsRowHeader = false };
         foreach (var entry in result.Shortlist)
@@ -37,8 +39,8 @@ internal static class ScreenReportTables
                 ReportNumber.Integer(entry.RedundancyGroup),
                 ReportNumber.Fixed(forest.SelectionFrequency, 2),
                 MedianRank(forest),
-                ReportNumber.MeanSd(forest.CorrectedMean, forest.CorrectedSd),
-                ReportNumber.MeanSd(forest.PermutationMean, forest.PermutationSd),
+                ReportNumber.MeanSd(forest.CorrectedMean, forest.CorrectedSd, 2),
+                ReportNumber.MeanSd(forest.PermutationMean, forest.PermutationSd, 2),
                 ReportNumber.Significant(forest.QValue, 2),
                 ScreenTables.DirectionText(univariate),
                 ReportNumber.Fixed(univariate.Log2MedianRatio, 2),
