@@ -38,25 +38,23 @@ internal static class ScreenReportCharts
         return top;
     }
 
-    public static SvgImage CorrectedImportance(ScreenResult result)
-    {
-        var top = TopFeatures(result, ImportanceFeatureLimit);
-        var items = new DotIntervalItem[top.Count];
-        for (int i = 0; i < items.Length; i++)
-            items[i] = new DotIntervalItem(top[i].Feature, top[i].CorrectedMean, top[i].CorrectedMean - top[i].CorrectedSd, top[i].CorrectedMean + top[i].CorrectedSd);
-        return DotIntervalChart.Render(new DotIntervalChartOptions(
-            Invariant($"Corrected impurity importance of the top {items.Length} features"), CorrectedAxisLabel, FeatureAxisLabel,
-            ReferenceValue: 0, LegendText: "Dot: mean over repeats; bar: ± 1 SD", Width: 820), items);
-    }
+    public static SvgImage CorrectedImportance(ScreenResult result) =>
+        ImportanceChart(result, "Corrected impurity importance", CorrectedAxisLabel, f => (f.CorrectedMean, f.CorrectedSd));
 
-    public static SvgImage PermutationImportance(ScreenResult result)
+    public static SvgImage PermutationImportance(ScreenResult result) =>
+        ImportanceChart(result, "Permutation importance", PermutationAxisLabel, f => (f.PermutationMean, f.PermutationSd));
+
+    private static SvgImage ImportanceChart(ScreenResult result, string measure, string axisLabel, Func<FeatureSummary, (double Mean, double Sd)> spread)
     {
         var top = TopFeatures(result, ImportanceFeatureLimit);
         var items = new DotIntervalItem[top.Count];
         for (int i = 0; i < items.Length; i++)
-            items[i] = new DotIntervalItem(top[i].Feature, top[i].PermutationMean, top[i].PermutationMean - top[i].PermutationSd, top[i].PermutationMean + top[i].PermutationSd);
+        {
+            var (mean, sd) = spread(top[i]);
+            items[i] = new DotIntervalItem(top[i].Feature, mean, mean - sd, mean + sd);
+        }
         return DotIntervalChart.Render(new DotIntervalChartOptions(
-            Invariant($"Permutation importance of the top {items.Length} features"), PermutationAxisLabel, FeatureAxisLabel,
+            Invariant($"{measure} of the top {items.Length} features"), axisLabel, FeatureAxisLabel,
             ReferenceValue: 0, LegendText: "Dot: mean over repeats; bar: ± 1 SD", Width: 820), items);
     }
 
