@@ -55,7 +55,7 @@ internal static class ScreenReportTables
     public static HtmlTable NotShortlisted(ScreenResult result)
     {
         var top = ScreenReportCharts.TopFeatures(result, FallbackFeatureCount);
-        var table = new HtmlTable($"NOT shortlisted: the first {top.Count} features of the screen order, for orientation only",
+        var table = new HtmlTable("NOT shortlisted: the first " + ReportNumber.Integer(top.Count) + " features of the screen order, for orientation only",
         [
             new("Order", ColumnAlignment.Numeric),
             new("Feature"),

@@ -133,6 +133,15 @@ public sealed class ScreenReportTests
     }
 
     [Fact]
+    public void A_comma_decimal_culture_changes_no_byte_of_the_report()
+    {
+        string underCommaCulture;
+        using (CultureScope.CommaDecimal()) underCommaCulture = ScreenReport.Render(ScreenReportSample.Input());
+
+        Assert.Equal(DefaultReport.Value, underCommaCulture);
+    }
+
+    [Fact]
     public void An_empty_shortlist_is_said_plainly_and_the_top_features_are_labelled_not_shortlisted()
     {
         var empty = ScreenReportSample.Result with { Shortlist = [], ShortlistCorrelations = new double[0, 0] };
