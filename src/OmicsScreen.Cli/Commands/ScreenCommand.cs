@@ -137,6 +137,11 @@ public sealed class ScreenCommand : Command
         Description = "Threads to use. Default: all cores.",
     };
 
+    public Option<bool> ShowSampleIds { get; } = new("--show-sample-ids")
+    {
+        Description = "Put sample identifiers in the report's charts (as accessible descriptions). Off by default: identifiers can be personal data.",
+    };
+
     public Option<bool> Quiet { get; } = new("--quiet")
     {
         Description = "No progress display.",
@@ -148,7 +153,7 @@ public sealed class ScreenCommand : Command
         Input.AddTo(this);
         foreach (var option in new Option[] { Out, Force, Pairs, Trees, FeaturesPerSplit, MinLeaf, Balance, RepeatLevel, PerRepeat,
                      MinFrequency, MaxQ, Decoys, OutcomePermutations, RedundancyRho, CurveFolds, CurveRepeats, CurveInnerPairs,
-                     MaxPanelSize, Seed, Threads, Quiet })
+                     MaxPanelSize, Seed, Threads, ShowSampleIds, Quiet })
             Options.Add(option);
         SetAction(parse => CommandRunner.Run(console, () => ScreenRun.Execute(console, new ScreenRunOptions
         {
@@ -156,6 +161,7 @@ public sealed class ScreenCommand : Command
             OutputFolder = parse.GetValue(Out),
             Force = parse.GetValue(Force),
             Quiet = parse.GetValue(Quiet),
+            ShowSampleIds = parse.GetValue(ShowSampleIds),
             CommandLine = ["omicsscreen", .. parse.Tokens.Select(t => t.Value)],
             Screen = new ScreenOptions
             {

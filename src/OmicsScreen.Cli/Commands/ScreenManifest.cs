@@ -78,7 +78,7 @@ internal static class ScreenManifest
         _ => stage.ToString(),
     };
 
-    private static string Version() =>
+    internal static string Version() =>
         typeof(ScreenManifest).Assembly.GetCustomAttribute<AssemblyInformationalVersionAttribute>()?.InformationalVersion ?? "unknown";
 
     /// <summary>POSIX single quotes where a word needs them, so the line can be pasted into a shell.</summary>

@@ -1,5 +1,6 @@
 using System.Diagnostics;
 using System.Globalization;
+using System.Security.Cryptography;
 using OmicsScreen.Cli.Console;
 using OmicsScreen.Data;
 using OmicsScreen.Reporting.Json;
@@ -13,6 +14,8 @@ namespace OmicsScreen.Cli.Commands;
 internal static class ScreenRun
 {
     private const int PrintedMarkers = 15;
+
+    public const string ReportFileName = "report.html";
 
     public static int Execute(CliConsole console, ScreenRunOptions options)
     {
@@ -48,12 +51,34 @@ internal static class ScreenRun
         if (result.Univariate.PerCohort.Count > 0)
             folder.WriteText("marker_statistics_by_cohort.tsv", w => UnivariateTableWriter.WritePerCohort(w, result.Univariate));
         if (result.Cohorts is { } cohorts) CohortOutput.Write(folder, cohorts);
-        var manifest = ScreenManifest.Build(options, loaded, result, started, DateTimeOffset.UtcNow, loadSeconds, folder.WrittenFiles);
+        var finished = DateTimeOffset.UtcNow;
+        var report = ReportInput(options, loaded, result, folder, started, finished, loadSeconds);
+        folder.WriteText(ReportFileName, w => w.Write(ScreenReport.Render(report)));
+        var manifest = ScreenManifest.Build(options, loaded, result, started, finished, loadSeconds, folder.WrittenFiles);
         folder.WriteText(ResultsFolder.ManifestFileName, w => ManifestJson.Write(w, manifest));
 
         PrintSummary(console.Out, loaded, result, folder.Path);
         if (result.Cohorts is { } checkedCohorts) CohortOutput.PrintSummary(console.Out, result, checkedCohorts);
         return ExitCode.Success;
+    }
+
+    /// <summary>What the report shows: the run's provenance, with the SHA-256 of every table already written beside it.</summary>
+    private static ScreenReportInput ReportInput(ScreenRunOptions options, LoadedPanel loaded, ScreenResult result, ResultsFolder folder,
+        DateTimeOffset started, DateTimeOffset finished, double loadSeconds)
+    {
+        var inputs = new List<ReportedFile>(loaded.Inputs.Count);
+        for (int i = 0; i < loaded.Inputs.Count; i++)
+            inputs.Add(new ReportedFile(i == 0 ? "matrix" : "sample sheet", loaded.Inputs[i].Path, loaded.Inputs[i].Sha256));
+        var tables = new List<ReportedFile>(folder.WrittenFiles.Count);
+        foreach (var name in folder.WrittenFiles)
+        {
+            using var stream = File.OpenRead(Path.Combine(folder.Path, name));
+            tables.Add(new ReportedFile("result table", name, Convert.ToHexStringLower(SHA256.HashData(stream))));
+        }
+        int threads = result.Settings.Options.ThreadCount > 0 ? result.Settings.Options.ThreadCount : Environment.ProcessorCount;
+        return new ScreenReportInput(loaded.Panel, result, inputs, options.Panel.Layout.ToString(), tables,
+            string.Join(' ', options.CommandLine.Select(ScreenManifest.ShellQuote)), ScreenManifest.Version(), started, finished, loadSeconds,
+            Environment.ProcessorCount, threads, options.ShowSampleIds);
     }
 
     private static void PrintSummary(TextWriter output, LoadedPanel loaded, ScreenResult result, string folder)
@@ -104,6 +129,7 @@ internal static class ScreenRun
         }
         output.WriteLine();
         output.WriteLine($"Results: {folder}");
+        output.WriteLine($"Report: {Path.Combine(folder, ReportFileName)}");
         output.WriteLine("A screen is not a diagnostic test: confirm every marker in independent cohorts before any use.");
     }
 }

@@ -12,6 +12,9 @@ public sealed record ScreenRunOptions
     public bool Force { get; init; }
     public bool Quiet { get; init; }
 
+    /// <summary>Let sample identifiers into the HTML report (as chart descriptions only); off by default, since identifiers can be personal data.</summary>
+    public bool ShowSampleIds { get; init; }
+
     /// <summary>The command line as typed, recorded in the manifest so the run can be repeated.</summary>
     public IReadOnlyList<string> CommandLine { get; init; } = [];
 

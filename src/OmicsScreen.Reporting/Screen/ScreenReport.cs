@@ -1,0 +1,238 @@
+using System.Globalization;
+using OmicsScreen.Engine.Panels;
+using OmicsScreen.Reporting.Html;
+using OmicsScreen.Screening.Screen;
+
+namespace OmicsScreen.Reporting.Screen;
+
+/// <summary>
+/// The self-contained HTML report of a screen, written for a lab manager first and a statistician
+/// second: the answer in one paragraph, the cautions, what went in, the shortlist, the figures, how
+/// to repeat the run, and the methods in plain words with their citations.
+/// </summary>
+/// <remarks>
+/// One XHTML-compatible page built with <see cref="HtmlBuilder"/>: no script, no external resource,
+/// charts as inline SVG, every user-provided name encoded. The page is a pure function of its
+/// <see cref="ScreenReportInput"/> (no clock, no machine name), so the same input gives the same bytes.
+/// Sample identifiers appear only when <see cref="ScreenReportInput.ShowSampleIds"/> is set, and then
+/// only inside the strip charts' accessible descriptions.
+/// </remarks>
+public static class ScreenReport
+{
+    public const string Title = "Marker screen report";
+
+    public static string Render(ScreenReportInput input)
+    {
+        ArgumentNullException.ThrowIfNull(input);
+        var html = new HtmlBuilder().BeginDocument(Title);
+        WriteAnswer(html, input);
+        html.Caution("Cautions", ScreenReportText.Cautions);
+        WriteInputs(html, input);
+        WriteShortlist(html, input.Result);
+        WriteFigures(html, input);
+        WriteReproducibility(html, input);
+        html.BeginSection("Methods in plain words");
+        html.BulletList(ScreenReportText.MethodNotes);
+        html.EndSection();
+        return html.EndDocument();
+    }
+
+    private static void WriteAnswer(HtmlBuilder html, ScreenReportInput input)
+    {
+        var result = input.Result;
+        var options = result.Settings.Options;
+        html.Paragraph(ScreenReportText.Answer(input.Panel, result));
+        if (result.PanelSize is { } curve) html.Paragraph(ScreenReportText.PanelSizeAnswer(curve, options));
+        else html.Paragraph("The panel-size curve was not computed for this run (curve folds set to 0), so no panel size is recommended.");
+        html.Paragraph(ScreenReportText.Confidence(result));
+    }
+
+    private static void WriteInputs(HtmlBuilder html, ScreenReportInput input)
+    {
+        var panel = input.Panel;
+        var settings = input.Result.Settings;
+        var options = settings.Options;
+        var (missingShare, belowDetectionShare) = UnmeasuredShares(panel.Matrix);
+        html.BeginSection("Input and settings");
+        var facts = new List<KeyValuePair<string, string>>();
+        foreach (var file in input.Inputs) facts.Add(new(Capitalised(file.Role), file.Name));
+        facts.Add(new("Matrix layout", input.PanelLayout));
+        facts.Add(new("Samples", ReportNumber.Integer(panel.SampleCount)));
+        facts.Add(new("Features", ReportNumber.Integer(panel.FeatureCount)));
+        facts.Add(new("Outcome column", panel.Outcome.ColumnName));
+        facts.Add(new("Classes (samples)", ClassCounts(panel.Outcome)));
+        facts.Add(new("Positive class", panel.Outcome.ClassNames[panel.Outcome.PositiveClass]));
+        facts.Add(new("Cohorts (samples)", panel.Cohort is { } cohort ? cohort.ColumnName + ": " + LevelCounts(cohort) : "none given"));
+        if (panel.Subject is { } subject)
+            facts.Add(new("Subjects", subject.ColumnName + ": " + ReportNumber.Integer(subject.LevelCount) + " (replicates of a subject are never split)"));
+        facts.Add(new("Missing cells", ReportNumber.Percent(missingShare, 2)));
+        facts.Add(new("Below-detection cells", ReportNumber.Percent(belowDetectionShare, 2)));
+        html.DefinitionList(facts);
+        html.Paragraph("Screen parameters (every one; the defaults are included):");
+        html.DefinitionList(ScreenReportText.Parameters(settings));
+        html.EndSection();
+    }
+
+    private static void WriteShortlist(HtmlBuilder html, ScreenResult result)
+    {
+        html.BeginSection("Shortlist");
+        if (result.Shortlist.Count == 0)
+        {
+            html.Paragraph("No marker was shortlisted: no feature was selected often enough with a small enough q-value. "
+                + "The table below shows the first features of the screen order for orientation only; they are NOT shortlisted "
+                + "and should not be carried into a validation study on this evidence.");
+            html.Table(ScreenReportTables.NotShortlisted(result));
+        }
+        else
+        {
+            html.Paragraph("One row per shortlisted marker, best first. Markers sharing a redundancy group (Group) are strongly correlated "
+                + "and can stand in for one another. Direction, log2 median ratio and AUC compare the positive class with the rest; "
+                + "the AUC interval is DeLong's. Univariate rank is the marker's position by rank-test p-value among all features.");
+            html.Table(ScreenReportTables.Shortlist(result));
+        }
+        html.EndSection();
+    }
+
+    private static void WriteFigures(HtmlBuilder html, ScreenReportInput input)
+    {
+        var result = input.Result;
+        html.BeginSection("Figures");
+
+        html.BeginSection("Importance of the top features");
+        html.Figure(ScreenReportCharts.CorrectedImportance(result),
+            "Corrected impurity importance (Nembrini et al. 2018) of the first features in screen order: dot at the mean over repeats, bar ± 1 SD. "
+            + "Values near or below 0 are what a feature unrelated to the outcome gets.");
+        html.Figure(ScreenReportCharts.PermutationImportance(result),
+            "Out-of-bag permutation importance (Breiman 2001) of the same features: the drop in accuracy when the feature's values are shuffled.");
+        html.EndSection();
+
+        html.BeginSection("Selection frequency");
+        html.Figure(ScreenReportCharts.SelectionFrequency(result),
+            "Share of repeats that selected each feature, by position in the screen order. Features above the dashed line (and with a small enough q-value) are shortlisted.");
+        html.EndSection();
+
+        if (result.ReferenceForest.ErrorCurve.Count > 0)
+        {
+            html.BeginSection("Enough trees?");
+            html.Figure(ScreenReportCharts.OutOfBagError(result.ReferenceForest),
+                "Out-of-bag error of the forest grown on all samples as trees are added. A flat end says the forests have enough trees.");
+            html.EndSection();
+        }
+
+        if (result.PanelSize is { } curve)
+        {
+            html.BeginSection("How many markers to measure");
+            html.Figure(ScreenReportCharts.PanelSize(curve),
+                "Solid line: honest estimate, markers chosen afresh inside each outer training part (Ambroise & McLachlan 2002). "
+                + "Dashed line: optimistic estimate, markers chosen once on all samples. Shading: ± 1 SD over outer folds. "
+                + "The diamond marks the recommended size: the smallest within one standard error of the best (Breiman et al. 1984).");
+            html.EndSection();
+        }
+
+        var markers = result.Shortlist.Count > 0
+            ? ShortlistFeatures(result, ScreenReportCharts.StripMarkerLimit)
+            : [];
+        if (markers.Count > 0)
+        {
+            html.BeginSection("Values of the top markers by class");
+            html.Paragraph("Each dot is one sample; boxes show quartiles and the median. Hollow markers on the dashed row are samples below the "
+                + "detection limit. Missing values are left out. A log axis is used when every measured value is positive.");
+            foreach (var feature in markers)
+                html.Figure(ScreenReportCharts.MarkerByClass(input.Panel, feature, input.ShowSampleIds),
+                    "Values of " + feature.Feature + " by class.");
+            html.EndSection();
+        }
+
+        if (result.Shortlist.Count > 0)
+        {
+            html.BeginSection("Redundancy");
+            int count = result.Shortlist.Count;
+            if (count >= ScreenReportCharts.HeatMapMinimum && count <= ScreenReportCharts.HeatMapMaximum)
+                html.Figure(ScreenReportCharts.Correlations(result),
+                    "Spearman correlation between shortlisted markers over all samples; vermillion is positive, blue negative.");
+            else
+                html.Paragraph(count < ScreenReportCharts.HeatMapMinimum
+                    ? "A correlation map needs at least two shortlisted markers."
+                    : string.Create(CultureInfo.InvariantCulture, $"The correlation map is left out above {ScreenReportCharts.HeatMapMaximum} markers; the groups below summarise it."));
+            html.Paragraph(string.Create(CultureInfo.InvariantCulture,
+                $"Markers are grouped when their Spearman |rho| is at least {result.Settings.Options.RedundancyCorrelation:0.##}. Group permutation importance is the out-of-bag accuracy drop when all members of a group are shuffled together."));
+            html.Table(ScreenReportTables.RedundancyGroups(result));
+            html.EndSection();
+        }
+        html.EndSection();
+    }
+
+    private static void WriteReproducibility(HtmlBuilder html, ScreenReportInput input)
+    {
+        var result = input.Result;
+        var settings = result.Settings;
+        html.BeginSection("Reproducibility");
+        html.Paragraph("Running this command with the same input files and the same software version gives the same tables, on any number of threads:");
+        html.DefinitionList(
+        [
+            new("Command", input.CommandLine),
+            new("Software version", input.SoftwareVersion),
+            new("Run seed", settings.Options.Seed.ToString(CultureInfo.InvariantCulture)),
+            new("Repeats", ReportNumber.Integer(settings.RepeatCount) + " (every repeat's seeds are derived from the run seed)"),
+            new("Started (UTC)", input.Started.UtcDateTime.ToString("yyyy-MM-dd HH:mm:ss", CultureInfo.InvariantCulture)),
+            new("Finished (UTC)", input.Finished.UtcDateTime.ToString("yyyy-MM-dd HH:mm:ss", CultureInfo.InvariantCulture)),
+            new("Cores", ReportNumber.Integer(input.Cores)),
+            new("Threads", ReportNumber.Integer(input.Threads)),
+        ]);
+        html.Paragraph("Every parameter as the program holds it:");
+        html.DefinitionList(ScreenReportText.RawParameters(settings));
+        html.Table(ScreenReportTables.Files("Input files", input.Inputs));
+        html.Table(ScreenReportTables.Files("Result tables beside this report", input.Tables));
+        var timings = new List<KeyValuePair<string, string>> { new("Reading and checking the inputs", ReportNumber.Seconds(input.LoadSeconds)) };
+        foreach (var stage in Enum.GetValues<ScreenStage>())
+            if (result.StageSeconds.TryGetValue(stage, out double seconds)) timings.Add(new(ScreenReportText.StageName(stage), ReportNumber.Seconds(seconds)));
+        html.Paragraph("Time spent in each stage:");
+        html.DefinitionList(timings);
+        html.Paragraph($"The run's manifest ({ScreenReportInput.ManifestFileName}) sits beside this report: it records the same provenance in machine-readable form and lists this report among the outputs.");
+        html.EndSection();
+    }
+
+    private static List<FeatureSummary> ShortlistFeatures(ScreenResult result, int limit)
+    {
+        int count = Math.Min(limit, result.Shortlist.Count);
+        var features = new List<FeatureSummary>(count);
+        for (int i = 0; i < count; i++) features.Add(result.Shortlist[i].Forest);
+        return features;
+    }
+
+    /// <summary>Shares of all cells that are missing and below detection.</summary>
+    internal static (double Missing, double BelowDetection) UnmeasuredShares(FeatureMatrix matrix)
+    {
+        long missing = 0, belowDetection = 0;
+        for (int feature = 0; feature < matrix.FeatureCount; feature++)
+        {
+            if (!matrix.HasUnmeasuredCells(feature)) continue;
+            foreach (var state in matrix.States(feature))
+            {
+                if (state == CellState.Missing) missing++;
+                else if (state == CellState.BelowDetection) belowDetection++;
+            }
+        }
+        double cells = (double)matrix.FeatureCount * matrix.SampleCount;
+        return cells > 0 ? (missing / cells, belowDetection / cells) : (0, 0);
+    }
+
+    private static string ClassCounts(ClassOutcome outcome)
+    {
+        var parts = new string[outcome.ClassCount];
+        for (int c = 0; c < parts.Length; c++) parts[c] = outcome.ClassNames[c] + " (" + ReportNumber.Integer(outcome.ClassCounts[c]) + ")";
+        return string.Join(", ", parts);
+    }
+
+    private static string LevelCounts(SampleGrouping grouping)
+    {
+        var counts = new int[grouping.LevelCount];
+        foreach (int level in grouping.SampleLevels) counts[level]++;
+        var parts = new string[counts.Length];
+        for (int l = 0; l < parts.Length; l++) parts[l] = grouping.LevelNames[l] + " (" + ReportNumber.Integer(counts[l]) + ")";
+        return string.Join(", ", parts);
+    }
+
+    private static string Capitalised(string text) =>
+        text.Length == 0 ? text : char.ToUpperInvariant(text[0]) + text[1..];
+}

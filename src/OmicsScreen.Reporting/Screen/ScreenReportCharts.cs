@@ -1,0 +1,184 @@
+using System.Globalization;
+using System.Text;
+using OmicsScreen.Engine.Panels;
+using OmicsScreen.Reporting.Charts;
+using OmicsScreen.Screening.Screen;
+
+namespace OmicsScreen.Reporting.Screen;
+
+/// <summary>
+/// The figures of the screen report, each built from result records only: importance with its
+/// spread, selection frequency against order, out-of-bag error against trees, the panel-size
+/// curve, per-class values of the top markers and the shortlist's correlations.
+/// </summary>
+internal static class ScreenReportCharts
+{
+    public const int ImportanceFeatureLimit = 20;
+    public const int FrequencyFeatureLimit = 100;
+    public const int StripMarkerLimit = 12;
+    public const int HeatMapMinimum = 2;
+    public const int HeatMapMaximum = 40;
+
+    public const string FeatureAxisLabel = "Feature (in screen order)";
+    public const string CorrectedAxisLabel = "Corrected impurity importance (Gini decrease, mean ± SD over repeats)";
+    public const string PermutationAxisLabel = "Permutation importance (out-of-bag accuracy drop, mean ± SD over repeats)";
+    public const string OrderAxisLabel = "Position in screen order (1 = best)";
+    public const string FrequencyAxisLabel = "Selection frequency (fraction of repeats)";
+    public const string TreesAxisLabel = "Number of trees";
+    public const string ErrorAxisLabel = "Out-of-bag error (fraction misclassified)";
+    public const string PanelSizeAxisLabel = "Panel size (number of markers)";
+    public const string ClassAxisLabel = "Class";
+
+    /// <summary>The features drawn in the importance charts: the first of the screen order.</summary>
+    public static IReadOnlyList<FeatureSummary> TopFeatures(ScreenResult result, int limit)
+    {
+        int count = Math.Min(limit, result.Order.Count);
+        var top = new FeatureSummary[count];
+        for (int i = 0; i < count; i++) top[i] = result.Features[result.Order[i]];
+        return top;
+    }
+
+    public static SvgImage CorrectedImportance(ScreenResult result) =>
+        ImportanceChart(result, "Corrected impurity importance", CorrectedAxisLabel, f => (f.CorrectedMean, f.CorrectedSd));
+
+    public static SvgImage PermutationImportance(ScreenResult result) =>
+        ImportanceChart(result, "Permutation importance", PermutationAxisLabel, f => (f.PermutationMean, f.PermutationSd));
+
+    private static SvgImage ImportanceChart(ScreenResult result, string measure, string axisLabel, Func<FeatureSummary, (double Mean, double Sd)> spread)
+    {
+        var top = TopFeatures(result, ImportanceFeatureLimit);
+        var items = new DotIntervalItem[top.Count];
+        for (int i = 0; i < items.Length; i++)
+        {
+            var (mean, sd) = spread(top[i]);
+            items[i] = new DotIntervalItem(top[i].Feature, mean, mean - sd, mean + sd);
+        }
+        return DotIntervalChart.Render(new DotIntervalChartOptions(
+            Invariant($"{measure} of the top {items.Length} features"), axisLabel, FeatureAxisLabel,
+            ReferenceValue: 0, LegendText: "Dot: mean over repeats; bar: ± 1 SD", Width: 820), items);
+    }
+
+    public static SvgImage SelectionFrequency(ScreenResult result)
+    {
+        int count = Math.Min(FrequencyFeatureLimit, result.Order.Count);
+        var positions = new double[count];
+        var frequencies = new double[count];
+        for (int i = 0; i < count; i++)
+        {
+            positions[i] = i + 1;
+            frequencies[i] = result.Features[result.Order[i]].SelectionFrequency;
+        }
+        double threshold = result.Settings.Options.FrequencyThreshold;
+        return XYChart.Render(
+            new XYChartOptions(Invariant($"Selection frequency of the first {count} features"), OrderAxisLabel, FrequencyAxisLabel,
+                YMinimum: 0, YMaximum: 1),
+            [new XYSeries("Feature", positions, frequencies, XYSeriesStyle.Points)],
+            [new ReferenceLine(ChartAxis.Y, threshold, Invariant($"Shortlist threshold {threshold:0.##}"))]);
+    }
+
+    public static SvgImage OutOfBagError(ReferenceForestSummary forest)
+    {
+        var curve = forest.ErrorCurve;
+        var trees = new double[curve.Count];
+        var errors = new double[curve.Count];
+        for (int t = 0; t < curve.Count; t++)
+        {
+            trees[t] = t + 1;
+            errors[t] = curve[t];
+        }
+        return XYChart.Render(
+            new XYChartOptions("Out-of-bag error of the forest on all samples", TreesAxisLabel, ErrorAxisLabel, YMinimum: 0),
+            [new XYSeries("Out-of-bag error", trees, errors)]);
+    }
+
+    /// <summary>The y-axis label of the panel-size curve: AUC for two classes, accuracy for more.</summary>
+    public static string PanelSizeScoreLabel(PanelSizeCurve curve) =>
+        curve.Metric == "auc" ? "Held-out AUC (mean over outer folds)" : "Held-out accuracy (mean over outer folds)";
+
+    public static SvgImage PanelSize(PanelSizeCurve curve)
+    {
+        int count = curve.Points.Count;
+        var sizes = new double[count];
+        var honest = new double[count];
+        var honestLow = new double[count];
+        var honestHigh = new double[count];
+        var optimistic = new double[count];
+        var optimisticLow = new double[count];
+        var optimisticHigh = new double[count];
+        double recommendedScore = double.NaN;
+        for (int i = 0; i < count; i++)
+        {
+            var point = curve.Points[i];
+            sizes[i] = point.PanelSize;
+            honest[i] = point.HonestAuc;
+            honestLow[i] = point.HonestAuc - point.HonestAucSd;
+            honestHigh[i] = point.HonestAuc + point.HonestAucSd;
+            optimistic[i] = point.OptimisticAuc;
+            optimisticLow[i] = point.OptimisticAuc - point.OptimisticAucSd;
+            optimisticHigh[i] = point.OptimisticAuc + point.OptimisticAucSd;
+            if (point.PanelSize == curve.RecommendedSize) recommendedScore = point.HonestAuc;
+        }
+        var markers = double.IsFinite(recommendedScore)
+            ? new[] { new PointMarker(curve.RecommendedSize, recommendedScore, Invariant($"Recommended size: {curve.RecommendedSize}")) }
+            : [];
+        return XYChart.Render(
+            new XYChartOptions("Panel-size curve: honest and optimistic estimates", PanelSizeAxisLabel, PanelSizeScoreLabel(curve), Width: 820),
+            [
+                new XYSeries("Honest (markers chosen inside each training part)", sizes, honest, XYSeriesStyle.LineAndPoints, honestLow, honestHigh),
+                new XYSeries("Optimistic (markers chosen once on all samples)", sizes, optimistic, XYSeriesStyle.DashedLine, optimisticLow, optimisticHigh),
+            ],
+            markers: markers);
+    }
+
+    public static SvgImage MarkerByClass(Panel panel, FeatureSummary feature, bool showSampleIds)
+    {
+        var values = MarkerValues.Of(panel, feature.FeatureIndex);
+        var scale = values.AllMeasuredPositive ? AxisScaleKind.Log10 : AxisScaleKind.Linear;
+        string axis = scale == AxisScaleKind.Log10 ? "Value (log scale)" : "Value (linear scale)";
+        string? description = showSampleIds ? DescribeWithSampleIds(panel, feature.FeatureIndex) : null;
+        return StripBoxChart.Render(new StripBoxChartOptions(feature.Feature, axis, ClassAxisLabel, description, scale, values.DetectionLimit,
+            Width: 520, Height: 420), values.Groups);
+    }
+
+    public static SvgImage Correlations(ScreenResult result)
+    {
+        var labels = new string[result.Shortlist.Count];
+        for (int i = 0; i < labels.Length; i++) labels[i] = result.Shortlist[i].Forest.Feature;
+        return HeatMapChart.Render(new HeatMapOptions("Spearman correlation between shortlisted markers", "Spearman correlation (rho)",
+            "Shortlisted marker", "Shortlisted marker"), labels, labels, result.ShortlistCorrelations);
+    }
+
+    /// <summary>
+    /// Only with the sample-id flag: the chart's accessible description lists each class's samples
+    /// with their values, so identifiers never appear as page text.
+    /// </summary>
+    private static string DescribeWithSampleIds(Panel panel, int feature)
+    {
+        var matrix = panel.Matrix;
+        var outcome = panel.Outcome;
+        var classes = outcome.SampleClasses;
+        var text = new StringBuilder();
+        text.Append("Values by sample. ");
+        for (int c = 0; c < outcome.ClassCount; c++)
+        {
+            text.Append(outcome.ClassNames[c]).Append(':');
+            for (int sample = 0; sample < matrix.SampleCount; sample++)
+            {
+                if (classes[sample] != c) continue;
+                var state = matrix.State(feature, sample);
+                text.Append(' ').Append(matrix.SampleIds[sample]).Append(' ');
+                text.Append(state switch
+                {
+                    CellState.Measured => ReportNumber.Significant(matrix.Value(feature, sample), 4),
+                    CellState.BelowDetection => "below detection",
+                    _ => "missing",
+                });
+                text.Append(';');
+            }
+            text.Append(' ');
+        }
+        return text.ToString().TrimEnd();
+    }
+
+    private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
+}

@@ -1,0 +1,41 @@
+using OmicsScreen.Engine.Panels;
+using OmicsScreen.Screening.Screen;
+
+namespace OmicsScreen.Reporting.Screen;
+
+/// <summary>
+/// Everything the HTML report of a screen shows. The report is a pure function of this record:
+/// nothing is read from the clock, the machine or the file system, so the same input gives the
+/// same bytes.
+/// </summary>
+/// <param name="Panel">The screened panel: class names and counts, cohorts, and the values of the top markers.</param>
+/// <param name="Result">The screen's result records.</param>
+/// <param name="Inputs">The input files (matrix, sample sheet) with their SHA-256.</param>
+/// <param name="PanelLayout">How the matrix file is laid out (for example "SamplesInRows").</param>
+/// <param name="Tables">The result tables written beside the report, with their SHA-256.</param>
+/// <param name="CommandLine">The command that reruns the screen, already quoted for a shell.</param>
+/// <param name="SoftwareVersion">Version of the program that ran the screen.</param>
+/// <param name="Started">When the run started (UTC).</param>
+/// <param name="Finished">When the screen finished, before the report was written (UTC).</param>
+/// <param name="LoadSeconds">Wall time of reading and checking the inputs.</param>
+/// <param name="Cores">Logical processors of the machine.</param>
+/// <param name="Threads">Threads the forests used.</param>
+/// <param name="ShowSampleIds">When false (the default), no sample identifier appears anywhere in the report.</param>
+public sealed record ScreenReportInput(
+    Panel Panel,
+    ScreenResult Result,
+    IReadOnlyList<ReportedFile> Inputs,
+    string PanelLayout,
+    IReadOnlyList<ReportedFile> Tables,
+    string CommandLine,
+    string SoftwareVersion,
+    DateTimeOffset Started,
+    DateTimeOffset Finished,
+    double LoadSeconds,
+    int Cores,
+    int Threads,
+    bool ShowSampleIds = false)
+{
+    /// <summary>File name of the manifest the report points to; it sits beside the report.</summary>
+    public const string ManifestFileName = "manifest.json";
+}

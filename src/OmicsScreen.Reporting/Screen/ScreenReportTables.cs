@@ -1,0 +1,121 @@
+using OmicsScreen.Reporting.Html;
+using OmicsScreen.Screening.Screen;
+
+namespace OmicsScreen.Reporting.Screen;
+
+/// <summary>The tables of the screen report; every cell is plain text that <see cref="HtmlBuilder"/> encodes.</summary>
+internal static class ScreenReportTables
+{
+    public const string ShortlistCaption = "Shortlisted markers";
+    public const int FallbackFeatureCount = 10;
+
+    public static HtmlTable Shortlist(ScreenResult result)
+    {
+        // Numeric headers do not wrap (the style sheet keeps figures on one line), so the wide
+        // columns are text columns with wrapping headers; the table then fits a printed A4 page.
+        var table = new HtmlTable(ShortlistCaption,
+        [
+            new("Rank", ColumnAlignment.Numeric),
+            new("Marker"),
+            new("Group", ColumnAlignment.Numeric),
+            new("Selection frequency"),
+            new("Median rank [IQR]"),
+            new("Corrected importance ± SD"),
+            new("Permutation importance ± SD"),
+            new("q-value", ColumnAlignment.Numeric),
+            new("Direction"),
+            new("log2 ratio", ColumnAlignment.Numeric),
+            new("AUC [95% CI]"),
+            new("Univariate rank"),
+        ])
+        { FirstColumnIsRowHeader = false };
+        foreach (var entry in result.Shortlist)
+        {
+            var forest = entry.Forest;
+            var univariate = entry.Univariate;
+            table.AddRow(
+                ReportNumber.Integer(entry.Rank),
+                forest.Feature,
+                ReportNumber.Integer(entry.RedundancyGroup),
+                ReportNumber.Fixed(forest.SelectionFrequency, 2),
+                MedianRank(forest),
+                ReportNumber.MeanSd(forest.CorrectedMean, forest.CorrectedSd, 2),
+                ReportNumber.MeanSd(forest.PermutationMean, forest.PermutationSd, 2),
+                ReportNumber.Significant(forest.QValue, 2),
+                ScreenTables.DirectionText(univariate),
+                ReportNumber.Fixed(univariate.Log2MedianRatio, 2),
+                ReportNumber.Fixed(univariate.Auc, 3) + " [" + ReportNumber.Fixed(univariate.AucInterval.Lower, 3) + ", "
+                    + ReportNumber.Fixed(univariate.AucInterval.Upper, 3) + "]",
+                ReportNumber.Integer(entry.UnivariateRank));
+        }
+        return table;
+    }
+
+    /// <summary>When nothing passed: the first features of the screen order, labelled as not shortlisted.</summary>
+    public static HtmlTable NotShortlisted(ScreenResult result)
+    {
+        var top = ScreenReportCharts.TopFeatures(result, FallbackFeatureCount);
+        var table = new HtmlTable("NOT shortlisted: the first " + ReportNumber.Integer(top.Count) + " features of the screen order, for orientation only",
+        [
+            new("Order", ColumnAlignment.Numeric),
+            new("Feature"),
+            new("Selection frequency", ColumnAlignment.Numeric),
+            new("Median rank [IQR]", ColumnAlignment.Text),
+            new("Corrected importance ± SD", ColumnAlignment.Text),
+            new("Permutation importance ± SD", ColumnAlignment.Text),
+            new("q-value", ColumnAlignment.Numeric),
+            new("Univariate rank", ColumnAlignment.Numeric),
+        ])
+        { FirstColumnIsRowHeader = false };
+        foreach (var feature in top)
+            table.AddRow(
+                ReportNumber.Integer(feature.Order),
+                feature.Feature,
+                ReportNumber.Fixed(feature.SelectionFrequency, 2),
+                MedianRank(feature),
+                ReportNumber.MeanSd(feature.CorrectedMean, feature.CorrectedSd),
+                ReportNumber.MeanSd(feature.PermutationMean, feature.PermutationSd),
+                ReportNumber.Significant(feature.QValue, 2),
+                ReportNumber.Integer(result.UnivariateRanks[feature.FeatureIndex]));
+        return table;
+    }
+
+    /// <summary>One row per redundancy group, in order of its best member: members that stand in for one another.</summary>
+    public static HtmlTable RedundancyGroups(ScreenResult result)
+    {
+        var table = new HtmlTable("Redundancy groups of the shortlist",
+        [
+            new("Group", ColumnAlignment.Numeric),
+            new("Members (in shortlist order)"),
+            new("Group permutation importance", ColumnAlignment.Numeric),
+        ]);
+        var groupOrder = new List<int>();
+        var members = new Dictionary<int, List<string>>();
+        var importance = new Dictionary<int, double>();
+        foreach (var entry in result.Shortlist)
+        {
+            if (!members.TryGetValue(entry.RedundancyGroup, out var names))
+            {
+                names = [];
+                members.Add(entry.RedundancyGroup, names);
+                groupOrder.Add(entry.RedundancyGroup);
+                importance.Add(entry.RedundancyGroup, entry.GroupPermutationImportance);
+            }
+            names.Add(entry.Forest.Feature);
+        }
+        foreach (int group in groupOrder)
+            table.AddRow(ReportNumber.Integer(group), string.Join("; ", members[group]), ReportNumber.Significant(importance[group], 3));
+        return table;
+    }
+
+    public static HtmlTable Files(string caption, IReadOnlyList<ReportedFile> files)
+    {
+        var table = new HtmlTable(caption, [new("File"), new("Role"), new("SHA-256")]);
+        foreach (var file in files) table.AddRow(file.Name, file.Role, file.Sha256);
+        return table;
+    }
+
+    private static string MedianRank(FeatureSummary feature) =>
+        ReportNumber.Fixed(feature.MedianRank, 1) + " [" + ReportNumber.Fixed(feature.RankLowerQuartile, 1) + "–"
+            + ReportNumber.Fixed(feature.RankUpperQuartile, 1) + "]";
+}
