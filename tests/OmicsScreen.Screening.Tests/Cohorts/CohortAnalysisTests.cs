@@ -2,6 +2,7 @@ using OmicsScreen.Engine.Panels;
 using OmicsScreen.Engine.Randomness;
 using OmicsScreen.Screening.Cohorts;
 using OmicsScreen.Screening.Screen;
+using OmicsScreen.TestSupport;
 
 namespace OmicsScreen.Screening.Tests.Cohorts;
 
@@ -108,5 +109,34 @@ public class CohortAnalysisTests
         Assert.Equal(0.5, v, 12);
         // P(chi^2_1 >= 20) = 7.74e-6 (standard chi-square table value, from memory).
         Assert.InRange(p, 7.6e-6, 7.9e-6);
+    }
+
+    [Fact]
+    public void With_exchangeable_cohorts_held_out_aucs_scatter_around_the_honest_estimate()
+    {
+        // Cohort labels assigned at random: every cohort is a random third of one population, so a
+        // panel chosen on two thirds should score on the last third as the honest cross-validated
+        // estimate predicts (common practice; the spread allowed is the held-out AUC's own DeLong
+        // interval widened by the curve's fold SD).
+        var (panel, _) = CausalBlockPanel.Generate(new CausalBlockPanel.Design { SampleCount = 240, FeatureCount = 300, Seed = 21 });
+        var random = new Xoshiro256StarStar(99);
+        var labels = Enumerable.Range(0, panel.SampleCount).Select(s => s % 3).ToArray();
+        random.Shuffle(labels.AsSpan());
+        var withCohorts = new Panel(panel.Matrix, panel.Outcome, new SampleGrouping("centre", ["a", "b", "c"], labels));
+        var result = ScreenRunner.Run(withCohorts, new ScreenOptions
+        {
+            Seed = 5, HalfSamplePairs = 5, TreesPerForest = 300, CurveFolds = 5, CurveInnerPairs = 3, CurveMaxPanelSize = 21,
+        });
+        var curve = result.PanelSize!;
+        var point = curve.Points.First(p => p.PanelSize == curve.RecommendedSize);
+        var heldOut = result.Cohorts!.HeldOut;
+        Assert.Equal(3, heldOut.Count);
+        foreach (var h in heldOut)
+        {
+            double halfWidth = (h.AucInterval.Upper - h.AucInterval.Lower) / 2 + point.HonestAucSd;
+            Assert.True(Math.Abs(h.Auc - point.HonestAuc) <= halfWidth,
+                $"{h.Cohort}: held-out AUC {h.Auc:0.000} vs honest {point.HonestAuc:0.000} (allowed {halfWidth:0.000})");
+        }
+        Assert.InRange(heldOut.Average(h => h.Auc), point.HonestAuc - 0.08, point.HonestAuc + 0.08);
     }
 }
