@@ -62,7 +62,7 @@ internal static class ApplyRun
             command_line = string.Join(' ', options.CommandLine.Select(ScreenManifest.ShellQuote)),
             started_utc = started.ToString("O"),
             finished_utc = DateTimeOffset.UtcNow.ToString("O"),
-            model = new { path = options.ModelPath, markers = model.MarkerNames, discovery_inputs_sha256 = model.Provenance.InputSha256 },
+            model = new { path = options.ModelPath, sha256 = ApplyModelFile.FileSha256(options.ModelPath), markers = model.MarkerNames, discovery_inputs_sha256 = model.Provenance.InputSha256 },
             inputs = inputs.Select(i => new { path = i.Path, bytes = i.ByteCount, sha256 = i.Sha256 }).ToArray(),
             outputs = folder.WrittenFiles.ToArray(),
         };

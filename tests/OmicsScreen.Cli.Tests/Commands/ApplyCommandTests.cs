@@ -176,6 +176,29 @@ public class ApplyCommandTests
     }
 
     [Fact]
+    public void A_screen_results_folder_gets_a_locked_panel_the_apply_verb_reads()
+    {
+        using var folder = new TempFolder();
+        string train = folder.File("train.csv", WdbcRows("train"));
+        var loaded = Data.PanelLoader.Load(new Data.PanelLoadOptions { MatrixPath = train, OutcomeColumn = "diagnosis" });
+        var result = Screening.Screen.ScreenRunner.Run(loaded.Panel,
+            new Screening.Screen.ScreenOptions { Seed = 5, HalfSamplePairs = 2, TreesPerForest = 40, CurveFolds = 0 });
+        string results = Path.Combine(folder.Path, "screen");
+        Directory.CreateDirectory(results);
+        Assert.Equal("locked_panel.json", ApplyModelFile.LockInto(results, loaded, result, panelSize: 3));
+
+        var locked = ApplyModelFile.Read(Path.Combine(results, "locked_panel.json"));
+        Assert.Equal(result.Order.Take(3).Select(f => loaded.Panel.Matrix.FeatureNames[f]), locked.MarkerNames);
+        Assert.Equal(40, locked.Trees.Count);
+        Assert.Equal(5UL, locked.Provenance.Seed);
+        // The discovery input is named with the SHA-256 the loader recorded.
+        Assert.Equal(loaded.Inputs[0].Sha256, locked.Provenance.InputSha256["train.csv"]);
+        var run = CliHarness.Run("apply", Path.Combine(results, "locked_panel.json"), folder.File("test.csv", WdbcRows("test")),
+            "--outcome", "diagnosis", "--out", Path.Combine(folder.Path, "applied"));
+        Assert.True(run.ExitCode == ExitCode.Success, run.Error);
+    }
+
+    [Fact]
     public void Apply_has_help()
     {
         var run = CliHarness.Run("apply", "--help");
