@@ -15,44 +15,14 @@ public sealed class ApplyCommand : Command
         Description = "The locked panel: locked_panel.json from a screen's results folder.",
     };
 
-    public Argument<string> Panel { get; } = new("PANEL")
-    {
-        Description = "The new cohort's measurement matrix: CSV, TSV, Parquet or Arrow IPC. Markers are matched by name.",
-    };
+    /// <summary>The panel options every verb spells the same way; apply uses the matrix, sheet, id and layout ones.</summary>
+    public PanelInputOptions Input { get; } = new();
 
-    public Option<string?> SampleSheet { get; } = new("--samples")
-    {
-        Description = "Sample sheet (CSV/TSV) joined to the matrix on sample id; holds the outcome.",
-        HelpName = "SHEET",
-    };
-
+    /// <summary>Unlike the screen's, the outcome is optional here: a cohort can be scored before its outcome is known.</summary>
     public Option<string?> Outcome { get; } = new("--outcome")
     {
         Description = "Column holding each sample's known class. Without it samples are scored only, not evaluated.",
         HelpName = "COLUMN",
-    };
-
-    public Option<string?> SampleIdColumn { get; } = new("--id-column")
-    {
-        Description = "Sample id column of the matrix and the sample sheet. Default: the first column.",
-        HelpName = "COLUMN",
-    };
-
-    public Option<string[]> Annotations { get; } = new("--annotation")
-    {
-        Description = "Another text column of the matrix file that describes samples rather than measuring them (repeatable).",
-        HelpName = "COLUMN",
-        AllowMultipleArgumentsPerToken = false,
-    };
-
-    public Option<bool> FeaturesInRows { get; } = new("--features-in-rows")
-    {
-        Description = "The matrix has one feature per row and one sample per column.",
-    };
-
-    public Option<bool> DropUnmatched { get; } = new("--drop-unmatched")
-    {
-        Description = "Drop samples found in only one of matrix and sample sheet (with a warning) instead of stopping.",
     };
 
     public Option<string> Out { get; } = new("--out")
@@ -76,26 +46,26 @@ public sealed class ApplyCommand : Command
         : base("apply", "Score a new cohort with a locked panel; with a known outcome, report AUC, error and calibration.")
     {
         Arguments.Add(Model);
-        Arguments.Add(Panel);
-        Options.Add(SampleSheet);
+        Arguments.Add(Input.Panel);
+        Options.Add(Input.SampleSheet);
         Options.Add(Outcome);
-        Options.Add(SampleIdColumn);
-        Options.Add(Annotations);
-        Options.Add(FeaturesInRows);
-        Options.Add(DropUnmatched);
+        Options.Add(Input.SampleIdColumn);
+        Options.Add(Input.Annotations);
+        Options.Add(Input.FeaturesInRows);
+        Options.Add(Input.DropUnmatched);
         Options.Add(Out);
         Options.Add(Force);
         Options.Add(ShowSampleIds);
         SetAction(parse => CommandRunner.Run(console, () => ApplyRun.Execute(console, new ApplyRunOptions
         {
             ModelPath = parse.GetValue(Model)!,
-            MatrixPath = parse.GetValue(Panel)!,
-            SampleSheetPath = parse.GetValue(SampleSheet),
+            MatrixPath = parse.GetValue(Input.Panel)!,
+            SampleSheetPath = parse.GetValue(Input.SampleSheet),
             OutcomeColumn = parse.GetValue(Outcome),
-            SampleIdColumn = parse.GetValue(SampleIdColumn),
-            AnnotationColumns = parse.GetValue(Annotations) ?? [],
-            Layout = parse.GetValue(FeaturesInRows) ? PanelLayout.FeaturesInRows : PanelLayout.SamplesInRows,
-            DropUnmatchedSamples = parse.GetValue(DropUnmatched),
+            SampleIdColumn = parse.GetValue(Input.SampleIdColumn),
+            AnnotationColumns = parse.GetValue(Input.Annotations) ?? [],
+            Layout = parse.GetValue(Input.FeaturesInRows) ? PanelLayout.FeaturesInRows : PanelLayout.SamplesInRows,
+            DropUnmatchedSamples = parse.GetValue(Input.DropUnmatched),
             OutputFolder = parse.GetValue(Out)!,
             Force = parse.GetValue(Force),
             ShowSampleIds = parse.GetValue(ShowSampleIds),
