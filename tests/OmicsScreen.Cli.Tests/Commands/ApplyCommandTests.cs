@@ -77,8 +77,7 @@ public class ApplyCommandTests
     {
         using var folder = new TempFolder();
         string model = WriteModel(folder);
-        string test = folder.File("test.csv", WdbcRows("test", drop: ["worst_radius", "mean_concave_points"]));
-        var run = CliHarness.Run("apply", model, test, "--outcome", "diagnosis", "--out", Path.Combine(folder.Path, "applied"));
+        var run = ApplyToTestRows(folder, model, WdbcRows("test", drop: ["worst_radius", "mean_concave_points"]));
         Assert.Equal(ExitCode.InputError, run.ExitCode);
         Assert.Contains("test.csv", run.Error);
         Assert.Contains("worst_radius", run.Error);
@@ -107,7 +106,7 @@ public class ApplyCommandTests
         string model = WriteModel(folder);
         var bytes = File.ReadAllBytes(model);
         File.WriteAllBytes(model, bytes[..(bytes.Length / 2)]);
-        var run = CliHarness.Run("apply", model, folder.File("test.csv", WdbcRows("test")), "--outcome", "diagnosis", "--out", Path.Combine(folder.Path, "applied"));
+        var run = ApplyToTestRows(folder, model);
         Assert.Equal(ExitCode.InputError, run.ExitCode);
         Assert.Contains("locked_panel.json", run.Error);
         Assert.Contains("checksum does not match: the file was changed or truncated", run.Error);
@@ -127,7 +126,7 @@ public class ApplyCommandTests
         int at = text.IndexOf("\"thresholds\": [", StringComparison.Ordinal);
         at = text.IndexOf(written, at, StringComparison.Ordinal);
         File.WriteAllText(model, text[..at] + edited + text[(at + written.Length)..]);
-        var run = CliHarness.Run("apply", model, folder.File("test.csv", WdbcRows("test")), "--outcome", "diagnosis", "--out", Path.Combine(folder.Path, "applied"));
+        var run = ApplyToTestRows(folder, model);
         Assert.Equal(ExitCode.InputError, run.ExitCode);
         Assert.Contains("checksum does not match: the file was changed or truncated", run.Error);
     }
@@ -141,7 +140,7 @@ public class ApplyCommandTests
         // Written through the file writer, so the checksum is right and only the structure is wrong.
         string model = Path.Combine(folder.Path, "broken.json");
         LockedPanelFile.Write(model, content);
-        var run = CliHarness.Run("apply", model, folder.File("test.csv", WdbcRows("test")), "--outcome", "diagnosis", "--out", Path.Combine(folder.Path, "applied"));
+        var run = ApplyToTestRows(folder, model);
         Assert.Equal(ExitCode.InputError, run.ExitCode);
         Assert.Contains("broken.json: the locked panel is not valid: forest[2]", run.Error);
     }
@@ -151,8 +150,7 @@ public class ApplyCommandTests
     {
         using var folder = new TempFolder();
         string model = WriteModel(folder);
-        string test = folder.File("test.csv", WdbcRows("test", scale: ("worst_area", 1000)));
-        var run = CliHarness.Run("apply", model, test, "--outcome", "diagnosis", "--out", Path.Combine(folder.Path, "applied"));
+        var run = ApplyToTestRows(folder, model, WdbcRows("test", scale: ("worst_area", 1000)));
         Assert.True(run.ExitCode == ExitCode.Success, run.Error);
         Assert.Contains("warning: worst_area looks measured on another scale", run.Error);
         Assert.DoesNotContain("worst_radius looks", run.Error);
@@ -206,6 +204,11 @@ public class ApplyCommandTests
         Assert.Contains("MODEL", run.Out);
         Assert.Contains("--show-sample-ids", run.Out);
     }
+
+    /// <summary>Runs apply with the model on the test rows (or the given matrix text), outcome known, into "applied".</summary>
+    private static CliHarness.Outcome ApplyToTestRows(TempFolder folder, string model, string? matrixText = null) =>
+        CliHarness.Run("apply", model, folder.File("test.csv", matrixText ?? WdbcRows("test")), "--outcome", "diagnosis",
+            "--out", Path.Combine(folder.Path, "applied"));
 
     private static string WriteModel(TempFolder folder) => ApplyModelFile.WriteInto(folder.Path, TrainPanel.Value);
 

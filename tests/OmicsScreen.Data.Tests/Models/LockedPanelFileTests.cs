@@ -23,12 +23,18 @@ public class LockedPanelFileTests
         };
     }
 
+    private static string Written(TempFolder folder, string name)
+    {
+        string path = folder.File(name);
+        LockedPanelFile.Write(path, Content());
+        return path;
+    }
+
     [Fact]
     public void Floats_and_text_round_trip_exactly()
     {
         using var folder = new TempFolder();
-        string path = folder.File("model.json");
-        LockedPanelFile.Write(path, Content());
+        string path = Written(folder, "model.json");
         var content = LockedPanelFile.Read(path);
         var read = content["thresholds"]!.AsArray().Select(n => n!.GetValue<float>()).ToArray();
         Assert.Equal(Thresholds.Select(BitConverter.SingleToInt32Bits), read.Select(BitConverter.SingleToInt32Bits));
@@ -41,8 +47,7 @@ public class LockedPanelFileTests
     public void The_file_is_indented_json_with_the_header_first()
     {
         using var folder = new TempFolder();
-        string path = folder.File("model.json");
-        LockedPanelFile.Write(path, Content());
+        string path = Written(folder, "model.json");
         var lines = File.ReadAllLines(path);
         Assert.Equal("{", lines[0]);
         Assert.Equal($"  \"format\": \"{LockedPanelFile.FormatName}\",", lines[1]);
@@ -54,8 +59,7 @@ public class LockedPanelFileTests
     public void A_truncated_file_fails_with_the_checksum_message_naming_the_file()
     {
         using var folder = new TempFolder();
-        string path = folder.File("panel_a.json");
-        LockedPanelFile.Write(path, Content());
+        string path = Written(folder, "panel_a.json");
         var bytes = File.ReadAllBytes(path);
         File.WriteAllBytes(path, bytes[..(bytes.Length * 2 / 3)]);
         var error = Assert.Throws<PanelInputException>(() => LockedPanelFile.Read(path));
@@ -67,8 +71,7 @@ public class LockedPanelFileTests
     public void A_file_with_one_threshold_digit_changed_fails_with_the_checksum_message()
     {
         using var folder = new TempFolder();
-        string path = folder.File("panel_b.json");
-        LockedPanelFile.Write(path, Content());
+        string path = Written(folder, "panel_b.json");
         string text = File.ReadAllText(path);
         Assert.Contains("12.345678", text);
         File.WriteAllText(path, text.Replace("12.345678", "12.345679"));
@@ -82,8 +85,7 @@ public class LockedPanelFileTests
     {
         // The checksum covers the content's values, not the layout: re-indenting by hand is harmless.
         using var folder = new TempFolder();
-        string path = folder.File("model.json");
-        LockedPanelFile.Write(path, Content());
+        string path = Written(folder, "model.json");
         File.WriteAllText(path, File.ReadAllText(path).Replace("\n  ", "\n\t"));
         Assert.NotNull(LockedPanelFile.Read(path));
     }
@@ -111,8 +113,7 @@ public class LockedPanelFileTests
     public void A_newer_format_version_is_refused_as_unsupported()
     {
         using var folder = new TempFolder();
-        string path = folder.File("model.json");
-        LockedPanelFile.Write(path, Content());
+        string path = Written(folder, "model.json");
         File.WriteAllText(path, File.ReadAllText(path).Replace("\"version\": 1,", "\"version\": 2,"));
         var error = Assert.Throws<PanelInputException>(() => LockedPanelFile.Read(path));
         Assert.Contains("format version 2", error.Message);
@@ -123,8 +124,7 @@ public class LockedPanelFileTests
     public void A_decoder_failure_is_reported_naming_the_file()
     {
         using var folder = new TempFolder();
-        string path = folder.File("model.json");
-        LockedPanelFile.Write(path, Content());
+        string path = Written(folder, "model.json");
         var error = Assert.Throws<PanelInputException>(() =>
             LockedPanelFile.Read<int>(path, _ => throw new InvalidDataException("forest[3]: Node 2 has a child out of range.")));
         Assert.StartsWith("model.json: the locked panel is not valid: forest[3]: Node 2 has a child out of range.", error.Message);
