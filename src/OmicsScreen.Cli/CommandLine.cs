@@ -15,6 +15,7 @@ public static class CommandLine
         root.Subcommands.Add(new CheckCommand(console));
         root.Subcommands.Add(new ScreenCommand(console));
         root.Subcommands.Add(new GrowCommand(console));
+        root.Subcommands.Add(new ApplyCommand(console));
         root.Subcommands.Add(new DemoCommand(console));
         return root;
     }

@@ -1,0 +1,75 @@
+using System.CommandLine;
+using OmicsScreen.Cli.Console;
+using OmicsScreen.Data;
+
+namespace OmicsScreen.Cli.Commands;
+
+/// <summary>
+/// `omicsscreen apply MODEL PANEL`: scores a new cohort with a locked panel and, when its outcome
+/// is known, measures how well the panel does on it.
+/// </summary>
+public sealed class ApplyCommand : Command
+{
+    public Argument<string> Model { get; } = new("MODEL")
+    {
+        Description = "The locked panel: locked_panel.json from a screen's results folder.",
+    };
+
+    /// <summary>The panel options every verb spells the same way; apply uses the matrix, sheet, id and layout ones.</summary>
+    public PanelInputOptions Input { get; } = new();
+
+    /// <summary>Unlike the screen's, the outcome is optional here: a cohort can be scored before its outcome is known.</summary>
+    public Option<string?> Outcome { get; } = new("--outcome")
+    {
+        Description = "Column holding each sample's known class. Without it samples are scored only, not evaluated.",
+        HelpName = "COLUMN",
+    };
+
+    public Option<string> Out { get; } = new("--out")
+    {
+        Description = "Folder for scores.tsv, the evaluation tables and apply_report.html.",
+        HelpName = "DIR",
+        Required = true,
+    };
+
+    public Option<bool> Force { get; } = new("--force")
+    {
+        Description = "Write into a folder that is not empty and holds no earlier results.",
+    };
+
+    public Option<bool> ShowSampleIds { get; } = new("--show-sample-ids")
+    {
+        Description = "List every sample's score with its id in the HTML report (scores.tsv always has them).",
+    };
+
+    public ApplyCommand(CliConsole console)
+        : base("apply", "Score a new cohort with a locked panel; with a known outcome, report AUC, error and calibration.")
+    {
+        Arguments.Add(Model);
+        Arguments.Add(Input.Panel);
+        Options.Add(Input.SampleSheet);
+        Options.Add(Outcome);
+        Options.Add(Input.SampleIdColumn);
+        Options.Add(Input.Annotations);
+        Options.Add(Input.FeaturesInRows);
+        Options.Add(Input.DropUnmatched);
+        Options.Add(Out);
+        Options.Add(Force);
+        Options.Add(ShowSampleIds);
+        SetAction(parse => CommandRunner.Run(console, () => ApplyRun.Execute(console, new ApplyRunOptions
+        {
+            ModelPath = parse.GetValue(Model)!,
+            MatrixPath = parse.GetValue(Input.Panel)!,
+            SampleSheetPath = parse.GetValue(Input.SampleSheet),
+            OutcomeColumn = parse.GetValue(Outcome),
+            SampleIdColumn = parse.GetValue(Input.SampleIdColumn),
+            AnnotationColumns = parse.GetValue(Input.Annotations) ?? [],
+            Layout = parse.GetValue(Input.FeaturesInRows) ? PanelLayout.FeaturesInRows : PanelLayout.SamplesInRows,
+            DropUnmatchedSamples = parse.GetValue(Input.DropUnmatched),
+            OutputFolder = parse.GetValue(Out)!,
+            Force = parse.GetValue(Force),
+            ShowSampleIds = parse.GetValue(ShowSampleIds),
+            CommandLine = ["omicsscreen", .. parse.Tokens.Select(t => t.Value)],
+        })));
+    }
+}

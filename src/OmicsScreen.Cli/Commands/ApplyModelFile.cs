@@ -1,0 +1,70 @@
+using System.Reflection;
+using System.Security.Cryptography;
+using OmicsScreen.Data;
+using OmicsScreen.Data.Models;
+using OmicsScreen.Screening.Locking;
+using OmicsScreen.Screening.Screen;
+
+namespace OmicsScreen.Cli.Commands;
+
+/// <summary>
+/// A locked panel on disk: the file envelope of <see cref="LockedPanelFile"/> around the
+/// content of <see cref="LockedPanelJson"/>. The screen writes it into its results folder; the
+/// apply verb reads it.
+/// </summary>
+public static class ApplyModelFile
+{
+    /// <summary>Writes <see cref="LockedPanelFile.DefaultFileName"/> into a results folder (atomically); returns its path.</summary>
+    public static string WriteInto(string resultsFolder, LockedPanel panel)
+    {
+        ArgumentNullException.ThrowIfNull(resultsFolder);
+        string path = Path.Combine(resultsFolder, LockedPanelFile.DefaultFileName);
+        Write(path, panel);
+        return path;
+    }
+
+    /// <summary>
+    /// Locks the top of a finished screen (the screen's seed, trees per forest and threads; the
+    /// recommended size unless <paramref name="panelSize"/> is given) with the discovery inputs'
+    /// SHA-256 as provenance, and writes it into the results folder; returns the file name written.
+    /// </summary>
+    public static string LockInto(string resultsFolder, LoadedPanel loaded, ScreenResult result, int? panelSize = null)
+    {
+        ArgumentNullException.ThrowIfNull(loaded);
+        ArgumentNullException.ThrowIfNull(result);
+        var screen = result.Settings.Options;
+        var inputs = new Dictionary<string, string>(StringComparer.Ordinal);
+        foreach (var input in loaded.Inputs) inputs[Path.GetFileName(input.Path)] = input.Sha256;
+        var locked = PanelLocker.Lock(loaded.Panel, result, new PanelLockOptions
+        {
+            PanelSize = panelSize,
+            Seed = screen.Seed,
+            TreeCount = screen.TreesPerForest,
+            ThreadCount = screen.ThreadCount,
+            ToolVersion = ToolVersion(),
+            InputSha256 = inputs,
+        });
+        WriteInto(resultsFolder, locked);
+        return LockedPanelFile.DefaultFileName;
+    }
+
+    public static void Write(string path, LockedPanel panel)
+    {
+        ArgumentNullException.ThrowIfNull(panel);
+        LockedPanelFile.Write(path, LockedPanelJson.ToJson(panel));
+    }
+
+    /// <exception cref="Data.PanelInputException">The file is missing, not ours, changed, truncated or structurally invalid; the message names it.</exception>
+    public static LockedPanel Read(string path) => LockedPanelFile.Read(path, LockedPanelJson.FromJson);
+
+    /// <summary>SHA-256 (lower-case hex) of a model file's bytes, for manifests.</summary>
+    public static string FileSha256(string path)
+    {
+        using var stream = File.OpenRead(path);
+        return Convert.ToHexStringLower(SHA256.HashData(stream));
+    }
+
+    /// <summary>The version this program stamps into the panels it locks.</summary>
+    public static string ToolVersion() =>
+        typeof(ApplyModelFile).Assembly.GetCustomAttribute<AssemblyInformationalVersionAttribute>()?.InformationalVersion ?? "unknown";
+}

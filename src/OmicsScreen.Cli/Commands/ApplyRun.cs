@@ -1,0 +1,153 @@
+using System.Globalization;
+using OmicsScreen.Cli.Console;
+using OmicsScreen.Data;
+using OmicsScreen.Engine.Panels;
+using OmicsScreen.Reporting.Json;
+using OmicsScreen.Screening.Locking;
+
+namespace OmicsScreen.Cli.Commands;
+
+/// <summary>Reads a locked panel and a new cohort, scores it, evaluates it when the outcome is known, and writes the results folder.</summary>
+internal static class ApplyRun
+{
+    public const string ScoresFileName = "scores.tsv";
+    public const string EvaluationFileName = "evaluation.json";
+    public const string CalibrationFileName = "calibration.tsv";
+    public const string ConfusionFileName = "confusion.tsv";
+    public const string ReportFileName = "apply_report.html";
+
+    public static int Execute(CliConsole console, ApplyRunOptions options)
+    {
+        options.Validate();
+        var started = DateTimeOffset.UtcNow;
+        var model = ApplyModelFile.Read(options.ModelPath);
+        var (matrix, outcome, inputs) = LoadCohort(options);
+        LockedPanelScores scores;
+        try
+        {
+            scores = LockedPanelScorer.Score(model, matrix);
+        }
+        catch (MissingMarkersException e)
+        {
+            throw new CommandInputException($"{Path.GetFileName(options.MatrixPath)}: {e.Message}", ExitCode.InputError);
+        }
+        LockedPanelPerformance? performance = null;
+        if (outcome is not null)
+        {
+            try
+            {
+                performance = LockedPanelEvaluation.Evaluate(scores, outcome);
+            }
+            catch (ArgumentException e)
+            {
+                throw new CommandInputException($"{Path.GetFileName(options.MatrixPath)}: {e.Message}", ExitCode.InputError);
+            }
+        }
+
+        var folder = ResultsFolder.Prepare(options.OutputFolder, options.Force);
+        var knownClasses = outcome is null ? null : KnownClassNames(outcome);
+        folder.WriteText(ScoresFileName, w => ApplyTables.WriteScores(w, scores, knownClasses));
+        if (performance is not null)
+        {
+            folder.WriteText(EvaluationFileName, w => ManifestJson.Write(w, EvaluationDocument(model, scores, performance)));
+            folder.WriteText(CalibrationFileName, w => ApplyTables.WriteCalibration(w, performance));
+            folder.WriteText(ConfusionFileName, w => ApplyTables.WriteConfusion(w, performance));
+        }
+        folder.WriteText(ReportFileName, w => w.Write(ApplyReport.Build(model, scores, performance, options)));
+        var manifest = new
+        {
+            tool = "omicsscreen",
+            version = ApplyModelFile.ToolVersion(),
+            command = "apply",
+            command_line = string.Join(' ', options.CommandLine.Select(ScreenManifest.ShellQuote)),
+            started_utc = started.ToString("O"),
+            finished_utc = DateTimeOffset.UtcNow.ToString("O"),
+            model = new { path = options.ModelPath, sha256 = ApplyModelFile.FileSha256(options.ModelPath), markers = model.MarkerNames, discovery_inputs_sha256 = model.Provenance.InputSha256 },
+            inputs = inputs.Select(i => new { path = i.Path, bytes = i.ByteCount, sha256 = i.Sha256 }).ToArray(),
+            outputs = folder.WrittenFiles.ToArray(),
+        };
+        folder.WriteText(ResultsFolder.ManifestFileName, w => ManifestJson.Write(w, manifest));
+
+        PrintSummary(console, model, scores, performance, folder.Path);
+        return ExitCode.Success;
+    }
+
+    private static (FeatureMatrix Matrix, ClassOutcome? Outcome, IReadOnlyList<InputFileRecord> Inputs) LoadCohort(ApplyRunOptions options)
+    {
+        if (options.OutcomeColumn is null)
+        {
+            var (matrix, input) = MatrixLoader.Load(options.MatrixPath, options.Layout, options.SampleIdColumn, options.AnnotationColumns);
+            return (matrix, null, [input]);
+        }
+        // No EnsureScreenable: a cohort of one class can still be scored and its error measured.
+        var loaded = PanelLoader.Load(options.ToLoadOptions());
+        return (loaded.Panel.Matrix, loaded.Panel.Outcome, loaded.Inputs);
+    }
+
+    private static string[] KnownClassNames(ClassOutcome outcome)
+    {
+        var names = new string[outcome.SampleCount];
+        var classes = outcome.SampleClasses;
+        for (int s = 0; s < names.Length; s++) names[s] = outcome.ClassNames[classes[s]];
+        return names;
+    }
+
+    private static object EvaluationDocument(LockedPanel model, LockedPanelScores scores, LockedPanelPerformance performance) => new
+    {
+        tool = "omicsscreen",
+        samples = performance.SampleCount,
+        classes = performance.ClassNames,
+        positive_class = performance.ClassNames[performance.PositiveClass],
+        threshold = performance.Threshold,
+        auc = performance.Auc,
+        auc_interval = performance.AucInterval is { } interval
+            ? new { method = "DeLong 1988, normal approximation", level = interval.Level, lower = interval.Lower, upper = interval.Upper }
+            : null,
+        error = performance.Error,
+        confusion = performance.ClassNames.Select((name, c) => new
+        {
+            known_class = name,
+            called = performance.ClassNames.Select((calledName, k) => new { @class = calledName, samples = performance.Confusion[c][k] }).ToArray(),
+        }).ToArray(),
+        calibration = performance.Calibration,
+        discovery_out_of_bag_auc = model.OutOfBagAuc,
+        scale_warnings = scores.Warnings.Select(w => new { marker = w.Marker, message = w.Message }).ToArray(),
+    };
+
+    private static void PrintSummary(CliConsole console, LockedPanel model, LockedPanelScores scores, LockedPanelPerformance? performance, string folder)
+    {
+        var output = console.Out;
+        foreach (var warning in scores.Warnings) console.Error.WriteLine($"warning: {TextTable.Printable(warning.Message)}");
+        string rule = model.Threshold is { } threshold
+            ? FormattableString.Invariant($"{model.ClassNames[model.PositiveClass]} when its probability is at least {threshold:0.###}")
+            : "majority vote of the trees";
+        output.WriteLine($"Scored {scores.SampleCount} samples with a locked panel of {model.MarkerCount} markers and {model.Trees.Count} trees; call: {rule}.");
+        var called = new int[scores.ClassCount];
+        foreach (int c in scores.PredictedClasses) called[c]++;
+        output.WriteLine("Called: " + string.Join(", ", scores.ClassNames.Select((name, c) => $"{called[c]} {name}")) + ".");
+        if (performance is not null)
+        {
+            output.WriteLine();
+            if (performance.Auc is { } auc && performance.AucInterval is { } interval)
+            {
+                string discovery = model.OutOfBagAuc is { } value ? FormattableString.Invariant($"; discovery out-of-bag AUC {value:0.000}") : "";
+                output.WriteLine(FormattableString.Invariant(
+                    $"AUC {auc:0.000} [95% CI {interval.Lower:0.000} to {interval.Upper:0.000}] ({model.ClassNames[model.PositiveClass]} positive){discovery}."));
+            }
+            output.WriteLine(FormattableString.Invariant($"Error at the locked call: {performance.Error:0.000}"));
+            output.WriteLine();
+            var header = new List<string> { "known \\ called" };
+            header.AddRange(performance.ClassNames);
+            var table = new TextTable(header.ToArray()).AlignRight(Enumerable.Range(1, performance.ClassNames.Count).ToArray());
+            for (int c = 0; c < performance.ClassNames.Count; c++)
+            {
+                var row = new List<string> { performance.ClassNames[c] };
+                foreach (int count in performance.Confusion[c]) row.Add(count.ToString(CultureInfo.InvariantCulture));
+                table.Add(row.ToArray());
+            }
+            table.WriteTo(output);
+        }
+        output.WriteLine();
+        output.WriteLine($"Results in {folder}");
+    }
+}

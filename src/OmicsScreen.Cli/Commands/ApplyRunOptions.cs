@@ -1,0 +1,55 @@
+using OmicsScreen.Data;
+
+namespace OmicsScreen.Cli.Commands;
+
+/// <summary>Everything `omicsscreen apply` needs, as plain values.</summary>
+public sealed record ApplyRunOptions
+{
+    /// <summary>The locked panel file (locked_panel.json of a screen's results folder).</summary>
+    public required string ModelPath { get; init; }
+
+    /// <summary>The new cohort's measurement matrix.</summary>
+    public required string MatrixPath { get; init; }
+
+    public string? SampleSheetPath { get; init; }
+
+    /// <summary>The outcome column; null when the outcome is not known, which skips the evaluation.</summary>
+    public string? OutcomeColumn { get; init; }
+
+    public string? SampleIdColumn { get; init; }
+
+    public IReadOnlyList<string> AnnotationColumns { get; init; } = [];
+
+    public PanelLayout Layout { get; init; } = PanelLayout.SamplesInRows;
+
+    public bool DropUnmatchedSamples { get; init; }
+
+    public required string OutputFolder { get; init; }
+
+    public bool Force { get; init; }
+
+    /// <summary>Show per-sample scores with their ids in the HTML report (they are always in scores.tsv).</summary>
+    public bool ShowSampleIds { get; init; }
+
+    /// <summary>The arguments as typed, for the manifest.</summary>
+    public IReadOnlyList<string> CommandLine { get; init; } = [];
+
+    public void Validate()
+    {
+        if (string.IsNullOrWhiteSpace(OutputFolder)) throw new CommandInputException("Give the results folder with --out.");
+        if (SampleSheetPath is not null && OutcomeColumn is null)
+            throw new CommandInputException("A sample sheet was given without --outcome; name the outcome column, or leave out --samples to score without one.");
+    }
+
+    /// <summary>The panel load options when the outcome is known.</summary>
+    public PanelLoadOptions ToLoadOptions() => new()
+    {
+        MatrixPath = MatrixPath,
+        SampleSheetPath = SampleSheetPath,
+        OutcomeColumn = OutcomeColumn ?? throw new InvalidOperationException("No outcome column."),
+        SampleIdColumn = SampleIdColumn,
+        AnnotationColumns = AnnotationColumns,
+        Layout = Layout,
+        DropUnmatchedSamples = DropUnmatchedSamples,
+    };
+}

@@ -1,0 +1,53 @@
+using System.Text.Json.Nodes;
+using OmicsScreen.Screening.Locking;
+
+namespace OmicsScreen.Screening.Tests.Locking;
+
+public class LockedPanelJsonTests
+{
+    [Fact]
+    public void A_panel_through_json_text_gives_bit_identical_probabilities()
+    {
+        var locked = WdbcLockedPanels.Panel;
+        string text = LockedPanelJson.ToJson(locked).ToJsonString();
+        var reloaded = LockedPanelJson.FromJson(JsonNode.Parse(text)!.AsObject());
+        var test = WdbcLockedPanels.Test.Matrix;
+        var before = LockedPanelScorer.Score(locked, test);
+        var after = LockedPanelScorer.Score(reloaded, test);
+        Assert.Equal(before.Probabilities.Select(BitConverter.DoubleToInt64Bits), after.Probabilities.Select(BitConverter.DoubleToInt64Bits));
+        Assert.Equal(before.PredictedClasses, after.PredictedClasses);
+        for (int t = 0; t < locked.Trees.Count; t++)
+            Assert.Equal(locked.Trees[t].Thresholds.ToArray().Select(BitConverter.SingleToInt32Bits),
+                reloaded.Trees[t].Thresholds.ToArray().Select(BitConverter.SingleToInt32Bits));
+        Assert.Equal(locked.Threshold, reloaded.Threshold);
+        Assert.Equal(locked.Markers, reloaded.Markers);
+        Assert.Equal(locked.Provenance.Seed, reloaded.Provenance.Seed);
+    }
+
+    [Fact]
+    public void A_tree_splitting_on_a_marker_that_does_not_exist_is_refused()
+    {
+        var content = LockedPanelJson.ToJson(WdbcLockedPanels.Panel);
+        var features = content["forest"]![0]!["features"]!.AsArray();
+        features[0] = 99;
+        var error = Assert.Throws<InvalidDataException>(() => LockedPanelJson.FromJson(content));
+        Assert.Contains("marker 99", error.Message);
+    }
+
+    [Fact]
+    public void A_tree_whose_child_points_backwards_is_refused()
+    {
+        var content = LockedPanelJson.ToJson(WdbcLockedPanels.Panel);
+        content["forest"]![0]!["left"]!.AsArray()[0] = 0;
+        var error = Assert.Throws<InvalidDataException>(() => LockedPanelJson.FromJson(content));
+        Assert.StartsWith("forest[0]:", error.Message);
+    }
+
+    [Fact]
+    public void Arrays_of_different_lengths_are_refused()
+    {
+        var content = LockedPanelJson.ToJson(WdbcLockedPanels.Panel);
+        content["forest"]![1]!["thresholds"]!.AsArray().RemoveAt(0);
+        Assert.Throws<InvalidDataException>(() => LockedPanelJson.FromJson(content));
+    }
+}
