@@ -49,7 +49,7 @@ internal static class CohortReportSection
 
     public static string Association(CohortResult cohorts) =>
         // Cramér's V of the class x cohort table (Cramér 1946) with Pearson's chi-square test of independence.
-        Invariant($"Outcome and cohort: Cramér's V {cohorts.OutcomeCohortCramersV:0.00} (0 means the class mix is the same in every cohort, 1 that the cohort fixes the class), chi-square test p = {ReportNumber.Significant(cohorts.OutcomeCohortPValue, 2)}. ")
+        Invariant($"Outcome and cohort: Cramér's V {cohorts.OutcomeCohortCramersV:0.00} (0 means the class mix is the same in every cohort, 1 that the cohort fixes the class), chi-square test {PValue(cohorts.OutcomeCohortPValue)}. ")
             + (cohorts.Confounded
                 ? "That is too strong an association to separate the two (see the warning below)."
                 : "The association is weak enough that within-cohort comparisons can separate a marker of outcome from a marker of cohort.");
@@ -98,7 +98,7 @@ internal static class CohortReportSection
     {
         string caption = Invariant($"Shortlist rank {rank}: {marker.Feature}, AUC in each cohort. ");
         caption += marker.WithinCohort is { } within
-            ? Invariant($"Heterogeneity: I² = {ReportNumber.Percent(within.I2, 0)} (Higgins & Thompson 2002), tau² = {ReportNumber.Significant(within.Tau2, 2)}, Cochran's Q p = {ReportNumber.Significant(within.QPValue, 2)} (DerSimonian & Laird 1986).")
+            ? Invariant($"Heterogeneity: I² = {ReportNumber.Percent(within.I2, 0)} (Higgins & Thompson 2002), tau² = {ReportNumber.Significant(within.Tau2, 2)}, Cochran's Q {PValue(within.QPValue)} (DerSimonian & Laird 1986).")
             : "Fewer than two cohorts had an AUC, so there is no pooled estimate or heterogeneity.";
         if (marker.Flag != CohortFlag.None) caption += " Flagged: " + CohortReportTables.FlagWords(marker.Flag) + ".";
         return caption;
@@ -140,33 +140,44 @@ internal static class CohortReportSection
         html.EndSection();
     }
 
-    /// <summary>One sentence setting the held-out cohorts beside the honest panel-size estimate at the recommended size.</summary>
+    /// <summary>
+    /// One sentence setting the held-out cohorts beside the honest panel-size estimate at the
+    /// recommended size. A cohort counts as clearly worse only when the honest estimate lies outside
+    /// its own 95% interval (above it for the AUC), so a small cohort's wide interval is not read as a failure.
+    /// </summary>
     public static string HeldOutComparison(PanelSizeCurve? curve, IReadOnlyList<HeldOutCohort> heldOut)
     {
-        double lowestAuc = double.PositiveInfinity, highestAuc = double.NegativeInfinity, highestError = double.NegativeInfinity;
-        foreach (var held in heldOut)
-        {
-            if (double.IsFinite(held.Auc))
-            {
-                lowestAuc = Math.Min(lowestAuc, held.Auc);
-                highestAuc = Math.Max(highestAuc, held.Auc);
-            }
-            highestError = Math.Max(highestError, held.Error);
-        }
         PanelSizePoint? recommended = null;
         if (curve is not null)
             foreach (var point in curve.Points)
                 if (point.PanelSize == curve.RecommendedSize) recommended = point;
-        if (recommended is null)
+        if (curve is null || recommended is null)
             return "The panel-size curve was not computed for this run, so the held-out cohorts cannot be set beside its honest estimate.";
-        if (curve!.Metric == "auc" && double.IsFinite(lowestAuc))
+
+        double lowestAuc = double.PositiveInfinity, highestAuc = double.NegativeInfinity;
+        double lowestError = double.PositiveInfinity, highestError = double.NegativeInfinity;
+        var worse = new List<string>();
+        foreach (var held in heldOut)
+        {
+            lowestError = Math.Min(lowestError, held.Error);
+            highestError = Math.Max(highestError, held.Error);
+            if (!double.IsFinite(held.Auc)) continue;
+            lowestAuc = Math.Min(lowestAuc, held.Auc);
+            highestAuc = Math.Max(highestAuc, held.Auc);
+            if (held.AucInterval.Upper < recommended.HonestAuc) worse.Add(held.Cohort);
+        }
+        if (curve.Metric == "auc" && double.IsFinite(lowestAuc))
             return Invariant($"Held-out-cohort AUCs run from {lowestAuc:0.000} to {highestAuc:0.000}, against the honest cross-validated AUC of {recommended.HonestAuc:0.000} at the recommended {curve.RecommendedSize} markers; ")
-                + (lowestAuc < recommended.HonestAuc - 1.96 * recommended.HonestAucStandardError
-                    ? "a cohort well below it means the markers carry over less well to a new centre than to new samples from the same centres."
-                    : "no cohort falls clearly below it, so the markers seem to carry over to a cohort they were not chosen on.");
-        return Invariant($"The highest held-out-cohort error is {highestError:0.000}, against the honest cross-validated error of {recommended.HonestError:0.000} at the recommended {curve.RecommendedSize} markers; ")
-            + "a clearly higher figure means the markers carry over less well to a new centre than to new samples from the same centres.";
+                + (worse.Count == 0
+                    ? "no held-out cohort's 95% interval lies below that estimate, so the markers carry over to a centre they were not chosen on about as well as to new samples from the same centres."
+                    : "the 95% interval of " + string.Join(", ", worse) + " lies below it, so the markers carry over less well to that centre than to new samples from the same centres.");
+        return Invariant($"Held-out-cohort errors run from {lowestError:0.000} to {highestError:0.000}, against the honest cross-validated error of {recommended.HonestError:0.000} at the recommended {curve.RecommendedSize} markers; ")
+            + "a clearly higher error in a cohort means the markers carry over less well to a new centre than to new samples from the same centres.";
     }
+
+    /// <summary>A p-value for reading: two significant digits, and "&lt; 0.001" below that (common practice in reporting).</summary>
+    public static string PValue(double p) =>
+        double.IsFinite(p) && p < 0.001 ? "p < 0.001" : "p = " + ReportNumber.Significant(p, 2);
 
     private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
 }

@@ -5,6 +5,7 @@ using OmicsScreen.Reporting.Screen;
 using OmicsScreen.Reporting.Tests.Support;
 using OmicsScreen.Screening.Cohorts;
 using OmicsScreen.Screening.Screen;
+using OmicsScreen.Screening.Statistics;
 
 namespace OmicsScreen.Reporting.Tests.Screen;
 
@@ -223,5 +224,35 @@ public sealed class CohortReportTests
         Assert.Null(TableStartingWith(document, CohortReportTables.HeldOutCaption));
         Assert.DoesNotContain(Markup.Elements(document, "svg"),
             svg => svg.Elements().First(e => e.Name.LocalName == "title").Value.StartsWith("AUC of ", StringComparison.Ordinal));
+    }
+
+    private static HeldOutCohort Held(string cohort, double auc, double low, double high) =>
+        new(cohort, 50, 5, auc, new ConfidenceInterval(low, high, 0.95), 0.2);
+
+    private static PanelSizeCurve Curve(double honestAuc) =>
+        new("auc", [new PanelSizePoint(5, honestAuc, 0.02, 0.01, 0.15, honestAuc + 0.02, 0.02, 0.1, 5)], 5, 5, 1);
+
+    [Fact]
+    public void Held_out_comparison_names_only_cohorts_whose_interval_lies_below_the_honest_estimate()
+    {
+        // Hand-built: honest AUC 0.90; "far" has interval [0.70, 0.85] wholly below it, "near" [0.80, 0.95] spans it.
+        string sentence = CohortReportSection.HeldOutComparison(Curve(0.90), [Held("near", 0.88, 0.80, 0.95), Held("far", 0.78, 0.70, 0.85)]);
+
+        Assert.Contains("from 0.780 to 0.880", sentence);
+        Assert.Contains("0.900 at the recommended 5 markers", sentence);
+        Assert.Contains("interval of far lies below it", sentence);
+        Assert.DoesNotContain("near", sentence);
+
+        string none = CohortReportSection.HeldOutComparison(Curve(0.90), [Held("near", 0.88, 0.80, 0.95)]);
+        Assert.Contains("no held-out cohort's 95% interval lies below", none);
+        Assert.Contains("not computed", CohortReportSection.HeldOutComparison(null, [Held("near", 0.88, 0.80, 0.95)]));
+    }
+
+    [Fact]
+    public void P_values_below_one_in_a_thousand_are_written_as_an_upper_bound()
+    {
+        Assert.Equal("p < 0.001", CohortReportSection.PValue(6.4e-5));
+        Assert.Equal("p = 0.057", CohortReportSection.PValue(0.0571));
+        Assert.Equal("p = n/a", CohortReportSection.PValue(double.NaN));
     }
 }
