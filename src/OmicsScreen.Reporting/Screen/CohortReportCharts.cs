@@ -17,6 +17,9 @@ internal static class CohortReportCharts
     public const string PooledLabel = "Pooled (random effects)";
     public const string ConcordanceColourLabel = "Spearman correlation of importance";
 
+    /// <summary>Short, because a map of three cohorts is narrow and a longer title would be cut.</summary>
+    public const string ConcordanceTitle = "Agreement of cohort screens";
+
     /// <summary>
     /// One row per cohort with its Mann-Whitney AUC and DeLong interval, and the DerSimonian-Laird
     /// pooled within-cohort AUC as the diamond. A square's weight is the cohort's random-effects
@@ -56,7 +59,7 @@ internal static class CohortReportCharts
             values[a, b] = pair.Spearman;
             values[b, a] = pair.Spearman;
         }
-        return HeatMapChart.Render(new HeatMapOptions("Agreement between the cohorts' own screens", ConcordanceColourLabel,
+        return HeatMapChart.Render(new HeatMapOptions(ConcordanceTitle, ConcordanceColourLabel,
             CohortAxisLabel, CohortAxisLabel), names, names, values);
     }
 }

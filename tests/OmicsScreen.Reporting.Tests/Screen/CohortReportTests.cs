@@ -162,8 +162,10 @@ public sealed class CohortReportTests
         var rows = BodyCells(TableStartingWith(document, CohortReportTables.ConcordanceCaption)!);
         Assert.Equal(3, rows.Count);
         Assert.Contains(rows, r => r[0] == Formula && r[1] == Hostile);
-        var map = Markup.Elements(document, "svg").Single(svg => svg.Elements().First(e => e.Name.LocalName == "title").Value == "Agreement between the cohorts' own screens");
-        Assert.Contains(CohortReportCharts.ConcordanceColourLabel, Markup.Texts(new XDocument(map), "text"));
+        var map = Markup.Elements(document, "svg").Single(svg => svg.Elements().First(e => e.Name.LocalName == "title").Value == CohortReportCharts.ConcordanceTitle);
+        var mapTexts = Markup.Texts(new XDocument(map), "text");
+        Assert.Contains(CohortReportCharts.ConcordanceTitle, mapTexts);
+        Assert.Contains(CohortReportCharts.ConcordanceColourLabel, mapTexts);
     }
 
     [Fact]
