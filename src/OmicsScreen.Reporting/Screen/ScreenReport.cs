@@ -26,10 +26,11 @@ public static class ScreenReport
         ArgumentNullException.ThrowIfNull(input);
         var html = new HtmlBuilder().BeginDocument(Title);
         WriteAnswer(html, input);
-        html.Caution("Cautions", ScreenReportText.Cautions);
+        html.Caution("Cautions", ScreenReportText.Cautions(input.Result.Cohorts is not null));
         WriteInputs(html, input);
         WriteShortlist(html, input.Result);
         WriteFigures(html, input);
+        if (input.Result.Cohorts is { } cohorts) CohortReportSection.Write(html, input.Result, cohorts);
         WriteReproducibility(html, input);
         html.BeginSection("Methods in plain words");
         html.BulletList(ScreenReportText.MethodNotes);

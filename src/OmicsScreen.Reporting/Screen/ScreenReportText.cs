@@ -9,13 +9,20 @@ namespace OmicsScreen.Reporting.Screen;
 /// <summary>The prose of the screen report: the answer up top, the cautions, the parameters and the method notes.</summary>
 internal static class ScreenReportText
 {
-    public static IReadOnlyList<string> Cautions { get; } =
+    /// <summary>The cautions box; the last one says whether the cohort check ran.</summary>
+    public static IReadOnlyList<string> Cautions(bool cohortsChecked) =>
     [
         "Research use only. A screen ranks candidates for a validation study; it is not a diagnostic test and says nothing about any individual patient.",
         "Every shortlisted marker needs confirmation in independent cohorts, measured with the assay that will be used later, before any further use.",
         "Follow your local ethics approvals, data-protection rules and licensed clinical practice; where they differ from anything here, they take precedence.",
-        "A marker that tracks a batch, centre or cohort rather than the outcome is not a marker. This report does not check for that; the cohort comparison is a separate step and should be read before choosing markers.",
+        cohortsChecked
+            ? "A marker that tracks a batch, centre or cohort rather than the outcome is not a marker. The cohort check below flags markers whose signal is explained by cohort or differs between cohorts; read it before choosing markers."
+            : NoCohortCaution,
     ];
+
+    public const string NoCohortCaution =
+        "A marker that tracks a batch, centre or cohort rather than the outcome is not a marker. No cohort column was given, so batch and cohort artefacts were not checked; "
+        + "if the samples come from several centres, batches or cohorts, rerun with --cohort naming that column.";
 
     public static IReadOnlyList<string> MethodNotes { get; } =
     [

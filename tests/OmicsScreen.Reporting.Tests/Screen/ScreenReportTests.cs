@@ -85,8 +85,11 @@ public sealed class ScreenReportTests
         var charts = Markup.Elements(document, "svg").ToList();
         var result = ScreenReportSample.Result;
         int strips = Math.Min(ScreenReportCharts.StripMarkerLimit, result.Shortlist.Count);
-        // importance x2, frequency, out-of-bag error, panel-size curve, one per top marker, correlation map
-        int expected = 5 + strips + (result.Shortlist.Count >= 2 ? 1 : 0);
+        // importance x2, frequency, out-of-bag error, panel-size curve, one per top marker, correlation map,
+        // then the cohort section: one forest plot per top marker and, from three screened cohorts, the agreement map
+        int forests = result.Cohorts is null ? 0 : Math.Min(CohortReportCharts.ForestPlotMarkerLimit, result.Shortlist.Count);
+        int cohortMap = result.Cohorts is { ScreenedCohorts.Count: >= CohortReportCharts.HeatMapMinimumCohorts } ? 1 : 0;
+        int expected = 5 + strips + (result.Shortlist.Count >= 2 ? 1 : 0) + forests + cohortMap;
         Assert.Equal(expected, charts.Count);
 
         foreach (var chart in charts)
