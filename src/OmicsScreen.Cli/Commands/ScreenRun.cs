@@ -51,6 +51,8 @@ internal static class ScreenRun
         if (result.Univariate.PerCohort.Count > 0)
             folder.WriteText("marker_statistics_by_cohort.tsv", w => UnivariateTableWriter.WritePerCohort(w, result.Univariate));
         if (result.Cohorts is { } cohorts) CohortOutput.Write(folder, cohorts);
+        // The panel of the recommended size, locked for scoring new cohorts with `apply`.
+        folder.WrittenFiles.Add(ApplyModelFile.LockInto(folder.Path, loaded, result));
         var finished = DateTimeOffset.UtcNow;
         var report = ReportInput(options, loaded, result, folder, started, finished, loadSeconds);
         folder.WriteText(ReportFileName, w => w.Write(ScreenReport.Render(report)));
@@ -130,6 +132,7 @@ internal static class ScreenRun
         output.WriteLine();
         output.WriteLine($"Results: {folder}");
         output.WriteLine($"Report: {Path.Combine(folder, ReportFileName)}");
+        output.WriteLine($"Locked panel for `omicsscreen apply`: {Path.Combine(folder, Data.Models.LockedPanelFile.DefaultFileName)}");
         output.WriteLine("A screen is not a diagnostic test: confirm every marker in independent cohorts before any use.");
     }
 }

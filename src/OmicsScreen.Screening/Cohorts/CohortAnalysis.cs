@@ -120,13 +120,13 @@ internal static class CohortAnalysis
         return mean;
     }
 
-    private static CohortConcordance Concord(string first, string second, double[] importanceA, double[] importanceB, int[] orderA, int[] orderB)
+    internal static CohortConcordance Concord(string first, string second, double[] importanceA, double[] importanceB, int[] orderA, int[] orderB)
     {
         const int rboDepth = 100;
         double Overlap(int k)
         {
             k = Math.Min(k, orderA.Length);
-            return RankBiasedOverlap.TopOverlap<int>(orderA.AsSpan(0, k), orderB.AsSpan(0, k), k) / (double)k;
+            return RankBiasedOverlap.TopOverlap<int>(orderA.AsSpan(0, k), orderB.AsSpan(0, k), k);
         }
         int depth = Math.Min(rboDepth, orderA.Length);
         return new CohortConcordance(first, second, Correlation.Spearman(importanceA, importanceB), Overlap(10), Overlap(20), Overlap(50),

@@ -118,6 +118,13 @@ public static class LockedPanelJson
         return panel;
     }
 
+    /// <summary>One tree through its JSON form and back; what the file format does to every tree.</summary>
+    internal static DecisionTree TreeJsonRoundTrip(DecisionTree tree) =>
+        TreeFromJson(JsonNode.Parse(TreeToJson(tree).ToJsonString())!.AsObject(), tree.ClassCount);
+
+    private const string PositiveInfinityText = "Infinity";
+    private const string NegativeInfinityText = "-Infinity";
+
     private static JsonObject TreeToJson(DecisionTree tree)
     {
         int nodeCount = tree.NodeCount;
@@ -126,8 +133,13 @@ public static class LockedPanelJson
         for (int node = 0; node < nodeCount; node++)
         {
             float threshold = tree.Thresholds[node];
-            // Leaves carry no threshold (NaN in memory), which JSON cannot spell.
-            thresholds.Add(float.IsNaN(threshold) ? null : JsonValue.Create(threshold));
+            // Leaves carry no threshold (NaN in memory), which JSON cannot spell; a split that
+            // sends every measured value left and only unmeasured cells right has an infinite
+            // threshold, written as the text "Infinity" or "-Infinity".
+            thresholds.Add(float.IsNaN(threshold) ? null
+                : float.IsPositiveInfinity(threshold) ? JsonValue.Create(PositiveInfinityText)
+                : float.IsNegativeInfinity(threshold) ? JsonValue.Create(NegativeInfinityText)
+                : JsonValue.Create(threshold));
             routing.Add((int)tree.Routing[node]);
         }
         return new JsonObject
@@ -152,6 +164,8 @@ public static class LockedPanelJson
         for (int i = 0; i < thresholds.Length; i++)
             thresholds[i] = thresholdNodes[i] is null ? float.NaN
                 : thresholdNodes[i] is JsonValue v && v.TryGetValue(out float value) ? value
+                : thresholdNodes[i] is JsonValue t && t.TryGetValue(out string? text) && text == PositiveInfinityText ? float.PositiveInfinity
+                : thresholdNodes[i] is JsonValue u && u.TryGetValue(out string? other) && other == NegativeInfinityText ? float.NegativeInfinity
                 : throw new InvalidDataException($"thresholds[{i}] is not a number.");
         var routingCodes = ReadInts(node, "unmeasured_routing");
         var routing = new UnmeasuredRouting[routingCodes.Length];

@@ -139,4 +139,23 @@ public class CohortAnalysisTests
         }
         Assert.InRange(heldOut.Average(h => h.Auc), point.HonestAuc - 0.08, point.HonestAuc + 0.08);
     }
+
+    [Fact]
+    public void Concordance_of_identical_screens_is_complete_and_of_reversed_ones_is_not()
+    {
+        var order = Enumerable.Range(0, 60).ToArray();
+        var importance = order.Select(f => 60.0 - f).ToArray();
+        var same = CohortAnalysis.Concord("a", "b", importance, importance, order, order);
+        Assert.Equal(1.0, same.Top10Overlap);
+        Assert.Equal(1.0, same.Top50Overlap);
+        Assert.Equal(1.0, same.Spearman, 12);
+        Assert.Equal(1.0, same.RankBiasedOverlap, 9);
+
+        var reversed = order.Reverse().ToArray();
+        var opposite = CohortAnalysis.Concord("a", "b", importance, importance.Reverse().ToArray(), order, reversed);
+        // Top 10 of 0..59 and of 59..0 share nothing; their top 50 share 40 of 50 (items 10..49).
+        Assert.Equal(0.0, opposite.Top10Overlap);
+        Assert.Equal(0.8, opposite.Top50Overlap, 12);
+        Assert.Equal(-1.0, opposite.Spearman, 12);
+    }
 }
