@@ -46,14 +46,8 @@ public static class DecoyAugmentedNull
                 pValues[i] = double.NaN;
                 continue;
             }
-            // First index holding a value >= the scored one (binary search over the sorted null).
-            int low = 0, high = nullSample.Length;
-            while (low < high)
-            {
-                int middle = (low + high) >>> 1;
-                if (nullSample[middle] < value) low = middle + 1; else high = middle;
-            }
-            pValues[i] = (1.0 + nullSample.Length - low) / (1.0 + nullSample.Length);
+            int firstAtLeast = JanitzaNull.LowerBound(nullSample, value);
+            pValues[i] = (1.0 + nullSample.Length - firstAtLeast) / (1.0 + nullSample.Length);
         }
         return pValues;
     }

@@ -71,7 +71,7 @@ public static class JanitzaNull
     }
 
     /// <summary>The first index of an ascending array whose value is &gt;= x (the array's length if none).</summary>
-    private static int LowerBound(double[] sorted, double x)
+    internal static int LowerBound(double[] sorted, double x)
     {
         int low = 0, high = sorted.Length;
         // Invariant: sorted[..low] < x and sorted[high..] >= x.

@@ -1,11 +1,11 @@
 using System.Xml.Linq;
 using OmicsScreen.Engine.Panels;
-using OmicsScreen.Engine.Randomness;
 using OmicsScreen.Reporting.Screen;
 using OmicsScreen.Reporting.Tests.Support;
 using OmicsScreen.Screening.Cohorts;
 using OmicsScreen.Screening.Screen;
 using OmicsScreen.Screening.Statistics;
+using OmicsScreen.TestSupport;
 
 namespace OmicsScreen.Reporting.Tests.Screen;
 
@@ -34,41 +34,21 @@ public sealed class CohortReportTests
     /// </summary>
     private static (Panel, ScreenResult) Screen()
     {
-        const int perCohort = 60, featureCount = 150;
-        double[] caseShare = [0.25, 0.25, 0.6];
-        var random = new Xoshiro256StarStar(21);
-        int sampleCount = 3 * perCohort;
-        var cohort = new int[sampleCount];
-        var classes = new int[sampleCount];
-        for (int c = 0; c < 3; c++)
-            for (int i = 0; i < perCohort; i++)
-            {
-                int s = c * perCohort + i;
-                cohort[s] = c;
-                classes[s] = i < caseShare[c] * perCohort ? 1 : 0;
-            }
-        var columns = new float[featureCount][];
-        for (int f = 0; f < featureCount; f++)
+        var panel = CohortPanel.Generate(new CohortPanel.Design
         {
-            columns[f] = new float[sampleCount];
-            for (int s = 0; s < sampleCount; s++)
-            {
-                double x = random.NextGaussian();
-                if (f == Artefact && cohort[s] == 2) x += 2.5;
-                if (f == Consistent && classes[s] == 1) x += 1.5;
-                if (f == Second && classes[s] == 1) x += 1.2;
-                columns[f][s] = (float)Math.Exp(x);
-            }
-        }
-        var names = new string[featureCount];
-        for (int f = 0; f < featureCount; f++) names[f] = "f" + f.ToString("D2", System.Globalization.CultureInfo.InvariantCulture);
-        names[Artefact] = ArtefactName;
-        names[Consistent] = ConsistentName;
-        var ids = new string[sampleCount];
-        for (int s = 0; s < sampleCount; s++) ids[s] = "SAMPLE-ID-" + s.ToString("D3", System.Globalization.CultureInfo.InvariantCulture);
-        var panel = new Panel(new FeatureMatrix(names, ids, columns, new CellState[]?[featureCount]),
-            new ClassOutcome("status", ["control", "case"], classes, positiveClass: 1),
-            new SampleGrouping("centre", CohortNames, cohort));
+            SamplesPerCohort = 60,
+            FeatureCount = 150,
+            CohortNames = CohortNames,
+            Effects =
+            [
+                new CohortPanel.PlantedEffect(Artefact, 2.5, CasesOnly: false, OnlyCohort: 2),
+                new CohortPanel.PlantedEffect(Consistent, 1.5, CasesOnly: true),
+                new CohortPanel.PlantedEffect(Second, 1.2, CasesOnly: true),
+            ],
+            FeatureNames = new Dictionary<int, string> { [Artefact] = ArtefactName, [Consistent] = ConsistentName },
+            SampleIdPrefix = "SAMPLE-ID-",
+            Seed = 21,
+        });
         var options = new ScreenOptions
         {
             Seed = 5, HalfSamplePairs = 5, TreesPerForest = 100, CurveFolds = 3, CurveInnerPairs = 2, CurveMaxPanelSize = 4,

@@ -16,40 +16,17 @@ public class CohortAnalysisTests
     /// class effect); feature 1 shifted 1.2 SD in cases of every cohort; feature 2 shifted 2 SD in
     /// cases of cohort 0 only.
     /// </summary>
-    private static Panel ThreeCohortPanel(ulong seed)
+    private static Panel ThreeCohortPanel(ulong seed) => CohortPanel.Generate(new CohortPanel.Design
     {
-        const int perCohort = 90, featureCount = 153;
-        double[] caseShare = [0.25, 0.25, 0.6];
-        var random = new Xoshiro256StarStar(seed);
-        int sampleCount = 3 * perCohort;
-        var cohort = new int[sampleCount];
-        var classes = new int[sampleCount];
-        for (int c = 0; c < 3; c++)
-            for (int i = 0; i < perCohort; i++)
-            {
-                int s = c * perCohort + i;
-                cohort[s] = c;
-                classes[s] = i < caseShare[c] * perCohort ? 1 : 0;
-            }
-        var columns = new float[featureCount][];
-        for (int f = 0; f < featureCount; f++)
-        {
-            columns[f] = new float[sampleCount];
-            for (int s = 0; s < sampleCount; s++)
-            {
-                double x = random.NextGaussian();
-                if (f == Artefact && cohort[s] == 2) x += 2.5;
-                if (f == Consistent && classes[s] == 1) x += 1.2;
-                if (f == OneCohortOnly && classes[s] == 1 && cohort[s] == 0) x += 2.0;
-                columns[f][s] = (float)Math.Exp(x);
-            }
-        }
-        var names = Enumerable.Range(0, featureCount).Select(f => $"f{f:D3}").ToArray();
-        var ids = Enumerable.Range(0, sampleCount).Select(s => $"s{s:D3}").ToArray();
-        var matrix = new FeatureMatrix(names, ids, columns, new CellState[]?[featureCount]);
-        return new Panel(matrix, new ClassOutcome("status", ["control", "case"], classes, positiveClass: 1),
-            new SampleGrouping("centre", ["c0", "c1", "c2"], cohort));
-    }
+        FeatureCount = 153,
+        Effects =
+        [
+            new CohortPanel.PlantedEffect(Artefact, 2.5, CasesOnly: false, OnlyCohort: 2),
+            new CohortPanel.PlantedEffect(Consistent, 1.2, CasesOnly: true),
+            new CohortPanel.PlantedEffect(OneCohortOnly, 2.0, CasesOnly: true, OnlyCohort: 0),
+        ],
+        Seed = seed,
+    });
 
     private static ScreenResult Screen(Panel panel) => ScreenRunner.Run(panel, new ScreenOptions
     {
