@@ -60,7 +60,6 @@ internal static class ScreenRun
         folder.WriteText(ResultsFolder.ManifestFileName, w => ManifestJson.Write(w, manifest));
 
         PrintSummary(console.Out, loaded, result, folder.Path);
-        if (result.Cohorts is { } checkedCohorts) CohortOutput.PrintSummary(console.Out, result, checkedCohorts);
         return ExitCode.Success;
     }
 
@@ -129,6 +128,7 @@ internal static class ScreenRun
             output.WriteLine(FormattableString.Invariant(
                 $"Recommended panel size: {curve.RecommendedSize} markers, honest {curve.Metric} {point.HonestAuc:0.000} +- {point.HonestAucStandardError:0.000} ({curve.FoldCount}-fold, selection inside each fold); optimistic {point.OptimisticAuc:0.000} if selection re-uses the samples."));
         }
+        if (result.Cohorts is { } cohorts) CohortOutput.PrintSummary(output, result, cohorts);
         output.WriteLine();
         output.WriteLine($"Results: {folder}");
         output.WriteLine($"Report: {Path.Combine(folder, ReportFileName)}");
