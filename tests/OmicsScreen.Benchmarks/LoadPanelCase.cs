@@ -9,7 +9,10 @@ namespace OmicsScreen.Benchmarks;
 /// <summary>
 /// Loads a synthetic samples-in-rows panel (sample id, outcome, then features) from CSV, Parquet
 /// or Arrow IPC through <see cref="PanelLoader"/>, the path the CLI takes. The files are
-/// generated once, deterministically, and cached in the work folder.
+/// generated once, deterministically, and cached in the work folder. Each run loads the file
+/// twice: `mb_per_s` is the first load of the process (compiling the parser included, what a
+/// command-line user waits for), `warm_mb_per_s` the second (the parser itself); the harness's
+/// `median_s` covers both.
 /// </summary>
 public sealed class LoadPanelCase : IBenchmarkCase
 {
@@ -119,14 +122,30 @@ public sealed class LoadPanelCase : IBenchmarkCase
         double processorSeconds = (Process.GetCurrentProcess().TotalProcessorTime - processorStart).TotalSeconds;
         double megabytes = new FileInfo(path).Length / 1048576.0;
         double matrixMegabytes = 4.0 * loaded.Panel.SampleCount * loaded.Panel.FeatureCount / 1048576.0;
+        double missing = loaded.Inspection.MissingFraction;
+        double coldSeconds = watch.Elapsed.TotalSeconds;
+
+        // The first load of a process pays for compiling the parser; a second load of the same
+        // file measures the parser itself. The first panel is released first so the peak memory
+        // printed still belongs to one panel.
+        loaded = null!;
+        GC.Collect();
+        GC.WaitForPendingFinalizers();
+        watch.Restart();
+        var warm = PanelLoader.Load(options);
+        watch.Stop();
+        GC.KeepAlive(warm);
+        double warmSeconds = watch.Elapsed.TotalSeconds;
         return
         [
             string.Create(CultureInfo.InvariantCulture, $"file_mb={megabytes:F1}"),
-            string.Create(CultureInfo.InvariantCulture, $"mb_per_s={megabytes / watch.Elapsed.TotalSeconds:F0}"),
+            string.Create(CultureInfo.InvariantCulture, $"mb_per_s={megabytes / coldSeconds:F0}"),
+            string.Create(CultureInfo.InvariantCulture, $"warm_s={warmSeconds:F3}"),
+            string.Create(CultureInfo.InvariantCulture, $"warm_mb_per_s={megabytes / warmSeconds:F0}"),
             // On a shared machine wall time swings with load; processor time does not.
             string.Create(CultureInfo.InvariantCulture, $"cpu_s={processorSeconds:F3}"),
             string.Create(CultureInfo.InvariantCulture, $"matrix_mb={matrixMegabytes:F1}"),
-            string.Create(CultureInfo.InvariantCulture, $"missing={loaded.Inspection.MissingFraction:F4}"),
+            string.Create(CultureInfo.InvariantCulture, $"missing={missing:F4}"),
         ];
     }
 }
