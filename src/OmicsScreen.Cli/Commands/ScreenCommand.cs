@@ -27,12 +27,14 @@ public sealed class ScreenCommand : Command
 
     public Option<int> Pairs { get; } = new("--pairs")
     {
+        HelpName = "N",
         Description = "Complementary pairs of half-samples; two forests are grown on each half.",
         DefaultValueFactory = _ => Defaults.HalfSamplePairs,
     };
 
     public Option<int> Trees { get; } = new("--trees")
     {
+        HelpName = "N",
         Description = "Trees per forest.",
         DefaultValueFactory = _ => Defaults.TreesPerForest,
     };
@@ -45,6 +47,7 @@ public sealed class ScreenCommand : Command
 
     public Option<int> MinLeaf { get; } = new("--min-leaf")
     {
+        HelpName = "N",
         Description = "Fewest samples a leaf may hold.",
         DefaultValueFactory = _ => Defaults.MinLeafSize,
     };
@@ -104,36 +107,42 @@ public sealed class ScreenCommand : Command
 
     public Option<int> CurveFolds { get; } = new("--curve-folds")
     {
+        HelpName = "N",
         Description = "Outer folds of the panel-size curve (0 skips the curve).",
         DefaultValueFactory = _ => Defaults.CurveFolds,
     };
 
     public Option<int> CurveRepeats { get; } = new("--curve-repeats")
     {
+        HelpName = "N",
         Description = "Repeats of the outer folds.",
         DefaultValueFactory = _ => Defaults.CurveFoldRepeats,
     };
 
     public Option<int> CurveInnerPairs { get; } = new("--curve-inner-pairs")
     {
+        HelpName = "N",
         Description = "Half-sample pairs of the screen run inside each outer fold.",
         DefaultValueFactory = _ => Defaults.CurveInnerPairs,
     };
 
     public Option<int> MaxPanelSize { get; } = new("--max-panel-size")
     {
+        HelpName = "N",
         Description = "Largest panel size on the curve.",
         DefaultValueFactory = _ => Defaults.CurveMaxPanelSize,
     };
 
     public Option<ulong> Seed { get; } = new("--seed")
     {
+        HelpName = "S",
         Description = "Seed of the whole run; the same seed gives the same results on any number of threads.",
         DefaultValueFactory = _ => Defaults.Seed,
     };
 
     public Option<int> Threads { get; } = new("--threads")
     {
+        HelpName = "N",
         Description = "Threads to use. Default: all cores.",
     };
 
