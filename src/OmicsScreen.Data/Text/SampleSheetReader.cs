@@ -11,8 +11,7 @@ internal static class SampleSheetReader
 {
     public static SampleSheet Read(string path)
     {
-        if (!File.Exists(path))
-            throw PanelInputException.At(path, null, null, "does not exist.", "Check the sample sheet path.");
+        InputFilePath.EnsureFile(path, "sample sheet");
         if (new FileInfo(path).Length == 0)
             throw PanelInputException.At(path, null, null, "is empty (0 bytes).",
                 "Give a sample sheet with a header row (sample id, outcome, ...) and one row per sample.");
