@@ -37,8 +37,12 @@ internal static class HostileInputCorpus
             ExitCode.InputError, ["m.csv", "UTF-16", "UTF-8"]);
         yield return new("Latin-1 accent in a cell", "m.csv", Bytes(Latin1.GetBytes(WithSecondSample("s2,3,\u00e94"))), Sheet,
             ExitCode.InputError, ["m.csv", "line 3", "f2"]);
+        yield return new("Latin-1 accent in a feature name", "m.csv", Bytes(Latin1.GetBytes(Valid.Replace("f1", "caf\u00e9"))), Sheet,
+            ExitCode.InputError, ["m.csv", "line 1", "not valid UTF-8", "save the file again as UTF-8"]);
+        yield return new("Latin-1 accent in a sample id", "m.csv", Bytes(Latin1.GetBytes(Valid.Replace("s2,", "s\u00e92,"))), Sheet.Replace("s2,", "s\u00e92,"),
+            ExitCode.InputError, ["m.csv", "line 3", "not valid UTF-8"]);
         yield return new("BOM in the middle of the file", "m.csv", Text(Header + "s1,1,2\ns2,3,4\n\ufeffs3,5,6\ns4,7,8\ns5,9,10\ns6,11,13\n"), Sheet,
-            ExitCode.InputError, ["m.csv", "s3", "fix the ids"]);
+            ExitCode.InputError, ["m.csv", "line 4", "byte-order mark", "without BOM"]);
         yield return new("gzip file renamed .csv", "m.csv", Bytes(Gzip(Valid)), Sheet,
             ExitCode.InputError, ["m.csv", "gzip", "decompress"]);
 
@@ -110,13 +114,13 @@ internal static class HostileInputCorpus
         yield return new("a 0-byte Parquet file", "m.parquet", Bytes([]), Sheet,
             ExitCode.InputError, ["m.parquet", "empty", "export the matrix again"]);
         yield return new("a truncated Parquet file", "m.parquet", TruncatedParquet, Sheet,
-            ExitCode.InputError, ["m.parquet"]);
+            ExitCode.InputError, ["m.parquet", "truncated or damaged", "write it again"]);
         yield return new("an Arrow file with a date column", "m.arrow", ArrowWithDateColumn, Sheet,
-            ExitCode.InputError, ["m.arrow", "visit"]);
+            ExitCode.InputError, ["m.arrow", "'visit'", "neither a number nor text", "float32 or float64"]);
         yield return new("a path that is a directory", "folder.csv", _ => [], Sheet,
-            ExitCode.InputError, ["folder.csv"]);
+            ExitCode.InputError, ["folder.csv", "is a folder", "file itself"]);
         yield return new("a path that does not exist", "absent.csv", _ => [], Sheet,
-            ExitCode.InputError, ["absent.csv"]);
+            ExitCode.InputError, ["absent.csv", "does not exist", "check the matrix path"]);
     }
 
     private static byte[] Gzip(string text)
