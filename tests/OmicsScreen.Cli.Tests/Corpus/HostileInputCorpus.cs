@@ -62,7 +62,25 @@ internal static class HostileInputCorpus
         yield return new("quoted thousands separator", "m.csv", Text(WithSecondSample("s2,\"1,234.5\",4")), Sheet,
             ExitCode.InputError, ["m.csv", "line 3", "1,234.5", "correct the cell"]);
 
+        yield return new("decimal comma in a semicolon file", "m.csv", Text("sample_id;f1;f2\ns1;1;2\ns2;1,5;4\ns3;5;6\ns4;7;8\ns5;9;10\ns6;11;13\n"), Sheet,
+            ExitCode.InputError, ["m.csv", "line 3", "1.5, not 1,5"]);
+        yield return new("a quote inside an unquoted cell", "m.csv", Text(WithSecondSample("s2,3\"4,4")), Sheet,
+            ExitCode.InputError, ["m.csv", "line 3", "fix the row"]);
+        yield return new("a trailing delimiter on every line", "m.csv", Text(Valid.Replace("\n", ",\n")), Sheet,
+            ExitCode.InputError, ["m.csv", "line 1", "column 4", "give every feature column a name"]);
+        yield return new("a NUL byte in a text file", "m.csv", Text(WithSecondSample("s2,3,4\0")), Sheet,
+            ExitCode.InputError, ["m.csv", "binary", "CSV"]);
+        yield return new("Windows line ends load", "m.csv", Text(Valid.Replace("\n", "\r\n")), Sheet, ExitCode.Success, ["samples"]);
+        yield return new("blank lines between rows load", "m.csv", Text(Valid.Replace("s3,", "\n\ns3,")), Sheet, ExitCode.Success, ["samples"]);
+
         // Out-of-range and special numbers.
+        yield return new("a hexadecimal number", "m.csv", Text(WithSecondSample("s2,0x1A,4")), Sheet,
+            ExitCode.InputError, ["m.csv", "line 3", "0x1A", "correct the cell"]);
+        yield return new("an exponent with no digits", "m.csv", Text(WithSecondSample("s2,1.5e,4")), Sheet,
+            ExitCode.InputError, ["m.csv", "line 3", "1.5e", "correct the cell"]);
+        yield return new("spaces around numbers and a plus sign load", "m.csv", Text(WithSecondSample("s2, 3 ,+4")), Sheet, ExitCode.Success, ["samples"]);
+        yield return new("a feature entirely below detection is not an error", "m.csv", Text(Header + "s1,1,<LOD\ns2,3,<LOD\ns3,5,<LOD\ns4,7,<LOD\ns5,9,<LOD\ns6,11,<LOD\n"), Sheet,
+            ExitCode.Success, ["below"]);
         foreach (string infinite in new[] { "Inf", "-Inf", "1e400", "-1e400", "Infinity", "-infinity" })
             yield return new($"{infinite} in a cell", "m.csv", Text(WithSecondSample($"s2,{infinite},4")), Sheet,
                 ExitCode.InputError, ["m.csv", "line 3", "'f1'", "NA when it is missing"]);
@@ -89,7 +107,24 @@ internal static class HostileInputCorpus
         yield return new("features in rows with the flag loads", "m.csv", Text("feature,s1,s2,s3,s4,s5,s6\nf1,1,2,3,4,5,6\nf2,3,4,5,6,7,9\n"), Sheet,
             ExitCode.Success, ["samples"], ["--features-in-rows"]);
 
+        yield return new("an empty feature name in the header", "m.csv", Text(Valid.Replace("sample_id,f1,", "sample_id,,")), Sheet,
+            ExitCode.InputError, ["m.csv", "line 1", "column 2", "has no name"]);
+        yield return new("feature names equal once trimmed", "m.csv", Text(Valid.Replace("f1,f2", "f1,f1 ")), Sheet,
+            ExitCode.InputError, ["m.csv", "'f1'", "more than once", "unique"]);
+        yield return new("a matrix with no feature columns", "m.csv", Text("sample_id\ns1\ns2\ns3\ns4\ns5\ns6\n"), Sheet,
+            ExitCode.InputError, ["m.csv", "no feature columns", "check the delimiter"]);
+
         // Sample sheets.
+        yield return new("a UTF-16 sample sheet with BOM loads", "m.csv", Text(Valid), null, ExitCode.Success, ["samples"],
+            SampleSheetBytes: [.. Encoding.Unicode.GetPreamble(), .. Encoding.Unicode.GetBytes(Sheet)]);
+        yield return new("a gzip sample sheet", "m.csv", Text(Valid), null, ExitCode.InputError, ["s.csv", "gzip", "decompress"],
+            SampleSheetBytes: Gzip(Sheet));
+        yield return new("a Latin-1 accent in a sheet id", "m.csv", Text(Valid), null, ExitCode.InputError, ["s.csv", "line 3", "not valid UTF-8"],
+            SampleSheetBytes: Latin1.GetBytes(Sheet.Replace("s2,", "s\u00e92,")));
+        yield return new("an empty outcome value", "m.csv", Text(Valid), Sheet.Replace("s1,case", "s1,"),
+            ExitCode.InputError, ["s.csv", "line 2", "'s1'", "no outcome value"]);
+        yield return new("a sheet without the id column named", "m.csv", Text(Valid), Sheet, ExitCode.InputError, ["patient"],
+            ExtraArguments: ["--id-column", "patient"]);
         yield return new("a sample twice in the sheet with different outcomes", "m.csv", Text(Valid), Sheet + "s1,control\n",
             ExitCode.InputError, ["s.csv", "line 8", "s1", "one sample-sheet row per sample"]);
         yield return new("outcome labels differing only by case", "m.csv", Text(Valid), Sheet.Replace("s2,case", "s2,Case"),

@@ -71,7 +71,8 @@ public sealed class HostileInputCorpusTests : IDisposable
         else if (corpusCase.Name != "a path that does not exist") File.WriteAllBytes(matrixPath, corpusCase.MakeMatrix(_folder.Path));
 
         var arguments = new List<string> { verb, matrixPath, "--outcome", "status" };
-        if (corpusCase.SampleSheet is not null) arguments.AddRange(["--samples", _folder.File("s.csv", corpusCase.SampleSheet)]);
+        if (corpusCase.SampleSheetBytes is not null) arguments.AddRange(["--samples", _folder.File("s.csv", corpusCase.SampleSheetBytes)]);
+        else if (corpusCase.SampleSheet is not null) arguments.AddRange(["--samples", _folder.File("s.csv", corpusCase.SampleSheet)]);
         if (corpusCase.ExtraArguments is not null) arguments.AddRange(corpusCase.ExtraArguments);
         return arguments;
     }
