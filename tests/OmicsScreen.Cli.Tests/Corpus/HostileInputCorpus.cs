@@ -33,7 +33,7 @@ internal static class HostileInputCorpus
     public static IEnumerable<CorpusCase> Cases()
     {
         // Encodings.
-        yield return new("UTF-16 file with BOM", "m.csv", Bytes(Encoding.Unicode.GetPreamble().Concat(Encoding.Unicode.GetBytes(Valid)).ToArray()), Sheet,
+        yield return new("UTF-16 file with BOM", "m.csv", Bytes([.. Encoding.Unicode.GetPreamble(), .. Encoding.Unicode.GetBytes(Valid)]), Sheet,
             ExitCode.InputError, ["m.csv", "UTF-16", "UTF-8"]);
         yield return new("Latin-1 accent in a cell", "m.csv", Bytes(Latin1.GetBytes(WithSecondSample("s2,3,\u00e94"))), Sheet,
             ExitCode.InputError, ["m.csv", "line 3", "'f2'", "save the file again as UTF-8"]);
