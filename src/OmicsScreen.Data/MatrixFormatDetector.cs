@@ -36,6 +36,16 @@ public static class MatrixFormatDetector
         if (head.StartsWith("ARROW1"u8)) return MatrixFileFormat.ArrowFile;
         if (head.StartsWith((ReadOnlySpan<byte>)[0xFF, 0xFF, 0xFF, 0xFF])) return MatrixFileFormat.ArrowStream;
 
+        // UTF-16 byte-order marks (FF FE little-endian, FE FF big-endian; Unicode Standard, section 23.8)
+        // and the gzip magic 1F 8B (RFC 1952, section 2.3.1) are named so the fix is clear: both
+        // would otherwise read as "unknown binary".
+        if (head.StartsWith((ReadOnlySpan<byte>)[0xFF, 0xFE]) || head.StartsWith((ReadOnlySpan<byte>)[0xFE, 0xFF]))
+            throw PanelInputException.At(path, null, null, "is text encoded as UTF-16, which is not read.",
+                "Save the file again as UTF-8 (\"CSV UTF-8\" in spreadsheet programs).");
+        if (head.StartsWith((ReadOnlySpan<byte>)[0x1F, 0x8B]))
+            throw PanelInputException.At(path, null, null, "is gzip-compressed.",
+                "Decompress it first (gunzip) and give the uncompressed CSV/TSV.");
+
         string extension = Path.GetExtension(path).ToLowerInvariant();
         if (ParquetExtensions.Contains(extension))
             throw PanelInputException.At(path, null, null,

@@ -24,8 +24,7 @@ public static class MatrixLoader
         string? sampleIdColumn = null, IReadOnlyList<string>? annotationColumns = null, CancellationToken ct = default)
     {
         ArgumentNullException.ThrowIfNull(matrixPath);
-        if (!File.Exists(matrixPath))
-            throw PanelInputException.At(matrixPath, null, null, "does not exist.", "Check the matrix path.");
+        InputFilePath.EnsureFile(matrixPath, "matrix");
         var options = new PanelLoadOptions
         {
             MatrixPath = matrixPath,

@@ -22,10 +22,8 @@ public static class PanelLoader
     public static LoadedPanel Load(PanelLoadOptions options, CancellationToken ct = default)
     {
         ArgumentNullException.ThrowIfNull(options);
-        if (!File.Exists(options.MatrixPath))
-            throw PanelInputException.At(options.MatrixPath, null, null, "does not exist.", "Check the matrix path.");
-        if (options.SampleSheetPath is { } sheetFile && !File.Exists(sheetFile))
-            throw PanelInputException.At(sheetFile, null, null, "does not exist.", "Check the sample sheet path.");
+        InputFilePath.EnsureFile(options.MatrixPath, "matrix");
+        if (options.SampleSheetPath is { } sheetFile) InputFilePath.EnsureFile(sheetFile, "sample sheet");
         var format = MatrixFormatDetector.Detect(options.MatrixPath);
         // Hashing is independent of parsing, so it runs on another core meanwhile.
         var matrixRecord = Task.Run(() => Record(options.MatrixPath), ct);

@@ -11,6 +11,17 @@ internal static class NameRules
                 $"Give every {kind} a non-empty value, or remove the row.", isTableRow: isTableRow);
         foreach (char c in name)
         {
+            // U+FFFD is what a UTF-8 decoder puts for bytes that are not UTF-8 (an accent saved as
+            // Latin-1 or Windows-1252); U+FEFF inside a file is a byte-order mark left by joining
+            // files. Either would make a name that no other file spells the same way.
+            if (c == '\uFFFD')
+                throw PanelInputException.At(filePath, line, column,
+                    $"the {kind} '{Display.Name(name)}' holds bytes that are not valid UTF-8 (the file is probably Latin-1 or Windows-1252).",
+                    "Save the file again as UTF-8 (\"CSV UTF-8\" in spreadsheet programs).", isTableRow: isTableRow);
+            if (c == '\uFEFF')
+                throw PanelInputException.At(filePath, line, column,
+                    $"the {kind} '{Display.Name(name)}' holds a byte-order mark (U+FEFF), left by joining files.",
+                    "Remove the byte-order mark: save each part as UTF-8 without BOM before joining them.", isTableRow: isTableRow);
             if (char.IsControl(c))
                 throw PanelInputException.At(filePath, line, column,
                     $"the {kind} '{Display.Name(name)}' contains a line break or control character.",

@@ -29,7 +29,7 @@ internal sealed class PanelAssembler
     {
         var join = sheet is null
             ? SampleJoin.WithoutSheet(raw.Matrix.SampleCount)
-            : SampleJoin.Match(raw.Matrix.SampleIds, raw.Source.Path, sheet, options, findings);
+            : SampleJoin.Match(raw.Matrix.SampleIds, raw.Matrix.FeatureNames, raw.Source.Path, sheet, options, findings);
         var assembler = new PanelAssembler(raw, sheet, options, join);
         return (assembler.Build(findings), join.DroppedSamples);
     }

@@ -37,7 +37,8 @@ internal sealed class SampleJoin
         return new SampleJoin(kept, rows, []);
     }
 
-    public static SampleJoin Match(IReadOnlyList<string> matrixIds, string matrixPath, SampleSheet sheet,
+    /// <param name="matrixFeatureNames">The matrix's feature names, to recognise a matrix read in the wrong orientation.</param>
+    public static SampleJoin Match(IReadOnlyList<string> matrixIds, IReadOnlyList<string> matrixFeatureNames, string matrixPath, SampleSheet sheet,
         PanelLoadOptions options, List<InspectionFinding> findings)
     {
         int idColumn = options.SampleIdColumn is { } name && sheet.IndexOf(name) >= 0 ? sheet.IndexOf(name) : 0;
@@ -72,9 +73,18 @@ internal sealed class SampleJoin
         string sheetName = Path.GetFileName(sheet.Path);
         string matrixName = Path.GetFileName(matrixPath);
         if (kept.Count == 0)
+        {
+            string fix = "Check that the sample id column is the right one (set the sample id column), and that ids are spelt the same way in both files.";
+            if (LooksTransposed(sheetIds, matrixFeatureNames))
+            {
+                bool readAsSamplesInRows = options.Layout == PanelLayout.SamplesInRows;
+                var otherLayout = readAsSamplesInRows ? PanelLayout.FeaturesInRows : PanelLayout.SamplesInRows;
+                fix = $"The sheet's ids are column names of {matrixName}, so the matrix holds one row per {(readAsSamplesInRows ? "feature" : "sample")}: load it with the layout {otherLayout}.";
+            }
             throw PanelInputException.At(sheet.Path, null, sheet.ColumnNames[idColumn],
                 $"no sample id matches the matrix {matrixName}: the sheet has {Display.List(sheetIds)}; the matrix has {Display.List(matrixIds)}.",
-                "Check that the sample id column is the right one (set the sample id column), and that ids are spelt the same way in both files.");
+                fix);
+        }
         if (matrixOnly.Count == 0 && sheetOnly.Count == 0)
             return new SampleJoin(kept.ToArray(), rows.ToArray(), []);
 
@@ -89,4 +99,14 @@ internal sealed class SampleJoin
 
     private static string Unmatched(List<string> ids, string inFile, string notInFile) =>
         ids.Count == 0 ? "" : FormattableString.Invariant($" {ids.Count} in {inFile} but not in {notInFile} ({Display.List(ids)}).");
+
+    /// <summary>True when most sheet ids are feature names of the matrix: the matrix was read in the other orientation.</summary>
+    private static bool LooksTransposed(IReadOnlyList<string> sheetIds, IReadOnlyList<string> matrixFeatureNames)
+    {
+        var featureNames = new HashSet<string>(matrixFeatureNames, StringComparer.Ordinal);
+        int found = 0;
+        foreach (var id in sheetIds)
+            if (featureNames.Contains(id)) found++;
+        return found * 2 > sheetIds.Count;
+    }
 }

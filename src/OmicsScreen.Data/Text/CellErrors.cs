@@ -14,8 +14,12 @@ internal static class CellErrors
                 "Infinity is not a measurement: put the measured value, NA when it is missing, or a below-detection token such as <LOD.",
                 isTableRow: isTableRow);
         string fix = "Correct the cell. If this column describes samples rather than measuring them, name it as an annotation column (or as the outcome, cohort or subject column).";
-        if (text.Contains(',') && !text.Contains('.'))
+        if (text.Contains('\uFFFD'))
+            fix = "The cell holds bytes that are not valid UTF-8 (the file is probably Latin-1 or Windows-1252): save the file again as UTF-8.";
+        else if (text.Contains(',') && !text.Contains('.'))
             fix = "Write decimals with a point (1.5, not 1,5) and load again.";
+        else if (text.Contains(',') && text.Contains('.'))
+            fix = "Write numbers without thousands separators and with a decimal point (1234.5, not 1,234.5 or 1.234,5) and load again.";
         return PanelInputException.At(filePath, line, column,
             $"found '{shown}'{where}, which is not a number, a missing-value token (empty, NA, NaN, N/A, null) or a below-detection token (<LOD, <LLOQ, <LOQ, <0.05, BLQ, BLOD).",
             fix, isTableRow: isTableRow);

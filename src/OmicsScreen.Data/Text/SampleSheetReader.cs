@@ -11,11 +11,11 @@ internal static class SampleSheetReader
 {
     public static SampleSheet Read(string path)
     {
-        if (!File.Exists(path))
-            throw PanelInputException.At(path, null, null, "does not exist.", "Check the sample sheet path.");
+        InputFilePath.EnsureFile(path, "sample sheet");
         if (new FileInfo(path).Length == 0)
             throw PanelInputException.At(path, null, null, "is empty (0 bytes).",
                 "Give a sample sheet with a header row (sample id, outcome, ...) and one row per sample.");
+        EnsureText(path);
         char delimiter = DelimiterDetector.Detect(path);
         using var text = DelimiterDetector.OpenText(path);
         using var reader = Sep.New(delimiter)
@@ -51,5 +51,26 @@ internal static class SampleSheetReader
         var arrays = new string[columns.Length][];
         for (int c = 0; c < arrays.Length; c++) arrays[c] = columns[c].ToArray();
         return new SampleSheet(path, delimiter, header, arrays, lines.ToArray());
+    }
+
+    /// <summary>
+    /// Refuses a compressed or binary sheet before parsing, which would otherwise see one garbled
+    /// "header" and report no sample rows. A UTF-16 sheet starts with its byte-order mark
+    /// (FF FE or FE FF) and is decoded as text, so its zero bytes are expected.
+    /// </summary>
+    private static void EnsureText(string path)
+    {
+        Span<byte> head = stackalloc byte[4096];
+        int length;
+        using (var stream = File.OpenRead(path)) length = stream.ReadAtLeast(head, head.Length, throwOnEndOfStream: false);
+        head = head[..length];
+        // Gzip member header: ID1 = 0x1F, ID2 = 0x8B (RFC 1952, section 2.3.1).
+        if (head.StartsWith((ReadOnlySpan<byte>)[0x1F, 0x8B]))
+            throw PanelInputException.At(path, null, null, "is gzip-compressed.",
+                "Decompress it first (gunzip) and give the uncompressed CSV/TSV sample sheet.");
+        bool utf16 = head.StartsWith((ReadOnlySpan<byte>)[0xFF, 0xFE]) || head.StartsWith((ReadOnlySpan<byte>)[0xFE, 0xFF]);
+        if (!utf16 && head.Contains((byte)0))
+            throw PanelInputException.At(path, null, null, "is not a text file (it holds zero bytes).",
+                "Give the sample sheet as CSV or TSV text; Excel workbooks must be saved as CSV first.");
     }
 }

@@ -1,0 +1,222 @@
+using System.IO.Compression;
+using System.Text;
+using Apache.Arrow;
+using Apache.Arrow.Ipc;
+using OmicsScreen.Data;
+using OmicsScreen.Data.Writing;
+
+namespace OmicsScreen.Cli.Tests.Corpus;
+
+/// <summary>
+/// The corpus of hostile and broken inputs: encodings, delimiters, quotes, locale-formatted and
+/// out-of-range numbers, broken sample sheets, damaged binary files and paths that are not files.
+/// Every message must name the place and the fix; the few inputs that are valid must load.
+/// </summary>
+internal static class HostileInputCorpus
+{
+    public const string Sheet = "sample_id,status\ns1,case\ns2,case\ns3,case\ns4,control\ns5,control\ns6,control\n";
+
+    private const string Header = "sample_id,f1,f2\n";
+
+    /// <summary>A valid six-sample comma-separated panel whose third line (sample s2) holds <paramref name="s2Row"/>.</summary>
+    private static string WithSecondSample(string s2Row) =>
+        Header + "s1,1,2\n" + s2Row + "\ns3,5,6\ns4,7,8\ns5,9,10\ns6,11,13\n";
+
+    private const string Valid = "sample_id,f1,f2\ns1,1,2\ns2,3,4\ns3,5,6\ns4,7,8\ns5,9,10\ns6,11,13\n";
+
+    private static Func<string, byte[]> Text(string contents) => _ => Encoding.UTF8.GetBytes(contents);
+
+    private static Func<string, byte[]> Bytes(byte[] contents) => _ => contents;
+
+    private static readonly Encoding Latin1 = Encoding.Latin1;
+
+    public static IEnumerable<CorpusCase> Cases()
+    {
+        // Encodings.
+        yield return new("UTF-16 file with BOM", "m.csv", Bytes([.. Encoding.Unicode.GetPreamble(), .. Encoding.Unicode.GetBytes(Valid)]), Sheet,
+            ExitCode.InputError, ["m.csv", "UTF-16", "UTF-8"]);
+        yield return new("Latin-1 accent in a cell", "m.csv", Bytes(Latin1.GetBytes(WithSecondSample("s2,3,\u00e94"))), Sheet,
+            ExitCode.InputError, ["m.csv", "line 3", "'f2'", "save the file again as UTF-8"]);
+        yield return new("Latin-1 accent in a feature name", "m.csv", Bytes(Latin1.GetBytes(Valid.Replace("f1", "caf\u00e9"))), Sheet,
+            ExitCode.InputError, ["m.csv", "line 1", "not valid UTF-8", "save the file again as UTF-8"]);
+        yield return new("Latin-1 accent in a sample id", "m.csv", Bytes(Latin1.GetBytes(Valid.Replace("s2,", "s\u00e92,"))), Sheet.Replace("s2,", "s\u00e92,"),
+            ExitCode.InputError, ["m.csv", "line 3", "not valid UTF-8"]);
+        yield return new("BOM in the middle of the file", "m.csv", Text(Header + "s1,1,2\ns2,3,4\n\ufeffs3,5,6\ns4,7,8\ns5,9,10\ns6,11,13\n"), Sheet,
+            ExitCode.InputError, ["m.csv", "line 4", "byte-order mark", "without BOM"]);
+        yield return new("gzip file renamed .csv", "m.csv", Bytes(Gzip(Valid)), Sheet,
+            ExitCode.InputError, ["m.csv", "gzip", "decompress"]);
+
+        // Delimiters and quotes.
+        yield return new("tabs in a row of a comma file", "m.csv", Text(WithSecondSample("s2\t3\t4")), Sheet,
+            ExitCode.InputError, ["m.csv", "line 3", "one field per header column"]);
+        yield return new("unterminated quote", "m.csv", Text(WithSecondSample("s2,\"3,4")), Sheet,
+            ExitCode.InputError, ["m.csv", "line 3", "fix the row"]);
+
+        // Numbers in locale formats.
+        yield return new("decimal comma in a comma file is a ragged row", "m.csv", Text(WithSecondSample("s2,1,5,4")), Sheet,
+            ExitCode.InputError, ["m.csv", "line 3", "4 fields"]);
+        yield return new("decimal comma in a TSV", "m.tsv", Text("sample_id\tf1\tf2\ns1\t1\t2\ns2\t1,5\t4\ns3\t5\t6\ns4\t7\t8\ns5\t9\t10\ns6\t11\t13\n"), Sheet,
+            ExitCode.InputError, ["m.tsv", "line 3", "1.5, not 1,5"]);
+        yield return new("German thousands and decimal separators", "m.tsv", Text("sample_id\tf1\tf2\ns1\t1\t2\ns2\t1.234,5\t4\ns3\t5\t6\ns4\t7\t8\ns5\t9\t10\ns6\t11\t13\n"), Sheet,
+            ExitCode.InputError, ["m.tsv", "line 3", "'f1'", "without thousands separators"]);
+        yield return new("quoted thousands separator", "m.csv", Text(WithSecondSample("s2,\"1,234.5\",4")), Sheet,
+            ExitCode.InputError, ["m.csv", "line 3", "1,234.5", "without thousands separators"]);
+
+        yield return new("decimal comma in a semicolon file", "m.csv", Text("sample_id;f1;f2\ns1;1;2\ns2;1,5;4\ns3;5;6\ns4;7;8\ns5;9;10\ns6;11;13\n"), Sheet,
+            ExitCode.InputError, ["m.csv", "line 3", "1.5, not 1,5"]);
+        yield return new("a quote inside an unquoted cell", "m.csv", Text(WithSecondSample("s2,3\"4,4")), Sheet,
+            ExitCode.InputError, ["m.csv", "line 3", "fix the row"]);
+        yield return new("a trailing delimiter on every line", "m.csv", Text(Valid.Replace("\n", ",\n")), Sheet,
+            ExitCode.InputError, ["m.csv", "line 1", "column 4", "give every feature column a name"]);
+        yield return new("a NUL byte in a text file", "m.csv", Text(WithSecondSample("s2,3,4\0")), Sheet,
+            ExitCode.InputError, ["m.csv", "binary", "CSV"]);
+        yield return new("Windows line ends load", "m.csv", Text(Valid.Replace("\n", "\r\n")), Sheet, ExitCode.Success, ["samples"]);
+        yield return new("blank lines between rows load", "m.csv", Text(Valid.Replace("s3,", "\n\ns3,")), Sheet, ExitCode.Success, ["samples"]);
+
+        // Out-of-range and special numbers.
+        yield return new("a hexadecimal number", "m.csv", Text(WithSecondSample("s2,0x1A,4")), Sheet,
+            ExitCode.InputError, ["m.csv", "line 3", "0x1A", "correct the cell"]);
+        yield return new("an exponent with no digits", "m.csv", Text(WithSecondSample("s2,1.5e,4")), Sheet,
+            ExitCode.InputError, ["m.csv", "line 3", "1.5e", "correct the cell"]);
+        yield return new("spaces around numbers and a plus sign load", "m.csv", Text(WithSecondSample("s2, 3 ,+4")), Sheet, ExitCode.Success, ["samples"]);
+        yield return new("a feature entirely below detection is not an error", "m.csv", Text(Header + "s1,1,<LOD\ns2,3,<LOD\ns3,5,<LOD\ns4,7,<LOD\ns5,9,<LOD\ns6,11,<LOD\n"), Sheet,
+            ExitCode.Success, ["below"]);
+        foreach (string infinite in new[] { "Inf", "-Inf", "1e400", "-1e400", "Infinity", "-infinity" })
+            yield return new($"{infinite} in a cell", "m.csv", Text(WithSecondSample($"s2,{infinite},4")), Sheet,
+                ExitCode.InputError, ["m.csv", "line 3", "'f1'", "NA when it is missing"]);
+        yield return new("NaN is missing and loads", "m.csv", Text(WithSecondSample("s2,NaN,4")), Sheet, ExitCode.Success, ["samples"]);
+        yield return new("negative zero loads", "m.csv", Text(WithSecondSample("s2,-0,-0.0")), Sheet, ExitCode.Success, ["samples"]);
+        yield return new("a million-digit number is out of range", "m.csv", Text(WithSecondSample("s2," + new string('9', 1_000_000) + ",4")), Sheet,
+            ExitCode.InputError, ["m.csv", "line 3", "'f1'"]);
+        yield return new("a million-character text cell", "m.csv", Text(WithSecondSample("s2," + new string('x', 1_000_000) + ",4")), Sheet,
+            ExitCode.InputError, ["m.csv", "line 3", "'f1'", "correct the cell"]);
+        yield return new("100,000 columns with one broken cell at the end", "m.csv", WideWithBrokenLastCell, Sheet,
+            ExitCode.InputError, ["m.csv", "line 7", "'f100000'"]);
+
+        // Columns and names.
+        yield return new("a feature with every value missing is a warning", "m.csv", Text(Header + "s1,1,\ns2,3,NA\ns3,5,\ns4,7,\ns5,9,NA\ns6,11,\n"), Sheet,
+            ExitCode.Success, ["all-missing-features", "'f2'"]);
+        yield return new("a feature name with a tab", "m.tsv", Text("sample_id\t\"f\t1\"\tf2\ns1\t1\t2\ns2\t3\t4\ns3\t5\t6\ns4\t7\t8\ns5\t9\t10\ns6\t11\t13\n"), Sheet,
+            ExitCode.InputError, ["m.tsv", "line 1", "control character", "printable"]);
+        yield return new("a feature name with a control character", "m.csv", Text("sample_id,f\u00011,f2\ns1,1,2\ns2,3,4\ns3,5,6\ns4,7,8\ns5,9,10\ns6,11,13\n"), Sheet,
+            ExitCode.InputError, ["m.csv", "line 1", "control character"]);
+        yield return new("an empty sample id in the matrix", "m.csv", Text(WithSecondSample(",3,4")), Sheet,
+            ExitCode.InputError, ["m.csv", "line 3", "sample id is empty"]);
+        yield return new("features in rows without the flag", "m.csv", Text("feature,s1,s2,s3,s4,s5,s6\nf1,1,2,3,4,5,6\nf2,3,4,5,6,7,9\n"), Sheet,
+            ExitCode.InputError, ["m.csv", "one row per feature", "FeaturesInRows"]);
+        yield return new("samples in rows given with the features-in-rows flag", "m.csv", Text(Valid), Sheet,
+            ExitCode.InputError, ["m.csv", "one row per sample", "SamplesInRows"], ["--features-in-rows"]);
+        yield return new("features in rows with the flag loads", "m.csv", Text("feature,s1,s2,s3,s4,s5,s6\nf1,1,2,3,4,5,6\nf2,3,4,5,6,7,9\n"), Sheet,
+            ExitCode.Success, ["samples"], ["--features-in-rows"]);
+
+        yield return new("an empty feature name in the header", "m.csv", Text(Valid.Replace("sample_id,f1,", "sample_id,,")), Sheet,
+            ExitCode.InputError, ["m.csv", "line 1", "column 2", "has no name"]);
+        yield return new("feature names equal once trimmed", "m.csv", Text(Valid.Replace("f1,f2", "f1,f1 ")), Sheet,
+            ExitCode.InputError, ["m.csv", "'f1'", "more than once", "unique"]);
+        yield return new("a matrix with no feature columns", "m.csv", Text("sample_id\ns1\ns2\ns3\ns4\ns5\ns6\n"), Sheet,
+            ExitCode.InputError, ["m.csv", "no feature columns", "check the delimiter"]);
+
+        // Sample sheets.
+        yield return new("a UTF-16 sample sheet with BOM loads", "m.csv", Text(Valid), null, ExitCode.Success, ["samples"],
+            SampleSheetBytes: [.. Encoding.Unicode.GetPreamble(), .. Encoding.Unicode.GetBytes(Sheet)]);
+        yield return new("a gzip sample sheet", "m.csv", Text(Valid), null, ExitCode.InputError, ["s.csv", "gzip", "decompress"],
+            SampleSheetBytes: Gzip(Sheet));
+        yield return new("a Latin-1 accent in a sheet id", "m.csv", Text(Valid), null, ExitCode.InputError, ["s.csv", "line 3", "not valid UTF-8"],
+            SampleSheetBytes: Latin1.GetBytes(Sheet.Replace("s2,", "s\u00e92,")));
+        yield return new("an empty outcome value", "m.csv", Text(Valid), Sheet.Replace("s1,case", "s1,"),
+            ExitCode.InputError, ["s.csv", "line 2", "'s1'", "no outcome value"]);
+        yield return new("a sheet without the id column named", "m.csv", Text(Valid), Sheet, ExitCode.InputError, ["patient"],
+            ExtraArguments: ["--id-column", "patient"]);
+        yield return new("a sample twice in the sheet with different outcomes", "m.csv", Text(Valid), Sheet + "s1,control\n",
+            ExitCode.InputError, ["s.csv", "line 8", "s1", "one sample-sheet row per sample"]);
+        yield return new("outcome labels differing only by case", "m.csv", Text(Valid), Sheet.Replace("s2,case", "s2,Case"),
+            ExitCode.InputError, ["s.csv", "'status'", "differ only by case"]);
+        yield return new("outcome labels with surrounding spaces are trimmed", "m.csv", Text(Valid), "sample_id,status\ns1,case \ns2,case\ns3, case\ns4,control  \ns5,control\ns6,control\n",
+            ExitCode.Success, ["samples"]);
+        yield return new("an empty sample sheet", "m.csv", Text(Valid), "",
+            ExitCode.InputError, ["s.csv", "empty", "header row"]);
+        yield return new("a header-only sample sheet", "m.csv", Text(Valid), "sample_id,status\n",
+            ExitCode.InputError, ["s.csv", "no sample rows"]);
+        yield return new("an outcome column with only NA", "m.csv", Text(Valid), "sample_id,status\ns1,NA\ns2,NA\ns3,NA\ns4,NA\ns5,NA\ns6,NA\n",
+            ExitCode.InputError, ["s.csv", "line 2", "no outcome value", "fill in its class"]);
+        yield return new("sheet ids in a different case from the matrix ids", "m.csv", Text(Valid), Sheet.ToUpperInvariant().Replace("SAMPLE_ID,STATUS", "sample_id,status"),
+            ExitCode.InputError, ["s.csv", "'S1'", "'s1'", "spelt the same way"]);
+        yield return new("a panel of two samples cannot be screened", "m.csv", Text("sample_id,f1,f2\ns1,1,2\ns4,7,8\n"), "sample_id,status\ns1,case\ns4,control\n",
+            ExitCode.NotScreenable, ["cannot be screened"]);
+        // Documented behaviour: ids are compared exactly (ordinal), so s1 and S1 are two samples.
+        yield return new("sample ids differing only by case are distinct", "m.csv", Text(Valid.Replace("s2,", "S1,")), Sheet.Replace("s2,", "S1,"),
+            ExitCode.Success, ["samples"]);
+
+        // Binary formats and paths.
+        yield return new("a 0-byte Parquet file", "m.parquet", Bytes([]), Sheet,
+            ExitCode.InputError, ["m.parquet", "empty", "export the matrix again"]);
+        yield return new("a truncated Parquet file", "m.parquet", TruncatedParquet, Sheet,
+            ExitCode.InputError, ["m.parquet", "truncated or damaged", "write it again"]);
+        yield return new("an Arrow file with a date column", "m.arrow", ArrowWithDateColumn, Sheet,
+            ExitCode.InputError, ["m.arrow", "'visit'", "neither a number nor text", "float32 or float64"]);
+        yield return new("a path that is a directory", "folder.csv", _ => [], Sheet,
+            ExitCode.InputError, ["folder.csv", "is a folder", "file itself"]);
+        yield return new("a path that does not exist", "absent.csv", _ => [], Sheet,
+            ExitCode.InputError, ["absent.csv", "does not exist", "check the matrix path"]);
+    }
+
+    private static byte[] Gzip(string text)
+    {
+        using var buffer = new MemoryStream();
+        using (var zip = new GZipStream(buffer, CompressionLevel.Fastest)) zip.Write(Encoding.UTF8.GetBytes(text));
+        return buffer.ToArray();
+    }
+
+    private static byte[] WideWithBrokenLastCell(string folder)
+    {
+        const int featureCount = 100_000;
+        var text = new StringBuilder(featureCount * 16);
+        text.Append("sample_id");
+        for (int feature = 1; feature <= featureCount; feature++) text.Append(",f").Append(feature);
+        text.Append('\n');
+        for (int sample = 1; sample <= 6; sample++)
+        {
+            text.Append('s').Append(sample);
+            for (int feature = 1; feature <= featureCount; feature++)
+                text.Append(',').Append(sample == 6 && feature == featureCount ? "broken" : ((sample * 7 + feature) % 13).ToString(System.Globalization.CultureInfo.InvariantCulture));
+            text.Append('\n');
+        }
+        return Encoding.UTF8.GetBytes(text.ToString());
+    }
+
+    /// <summary>A valid Parquet panel cut in half: the footer, which Parquet readers need first, is gone.</summary>
+    private static byte[] TruncatedParquet(string folder)
+    {
+        string csv = Path.Combine(folder, "source.csv");
+        File.WriteAllText(csv, Valid);
+        string sheet = Path.Combine(folder, "source-sheet.csv");
+        File.WriteAllText(sheet, Sheet);
+        var loaded = PanelLoader.Load(new PanelLoadOptions { MatrixPath = csv, SampleSheetPath = sheet, OutcomeColumn = "status" });
+        string parquet = Path.Combine(folder, "source.parquet");
+        ParquetPanelWriter.Write(loaded.Panel, parquet, PanelLayout.SamplesInRows);
+        byte[] bytes = File.ReadAllBytes(parquet);
+        return bytes[..(bytes.Length / 2)];
+    }
+
+    /// <summary>An Arrow IPC file whose second column is a date, which is not a measurement type.</summary>
+    private static byte[] ArrowWithDateColumn(string folder)
+    {
+        var ids = new StringArray.Builder().AppendRange(["s1", "s2", "s3", "s4", "s5", "s6"]).Build();
+        var f1 = new DoubleArray.Builder().AppendRange([1, 3, 5, 7, 9, 11]).Build();
+        var visitBuilder = new Date32Array.Builder();
+        for (int day = 1; day <= 6; day++) visitBuilder.Append(new DateTime(2024, 1, day));
+        var schema = new Schema.Builder()
+            .Field(f => f.Name("sample_id").DataType(Apache.Arrow.Types.StringType.Default))
+            .Field(f => f.Name("f1").DataType(Apache.Arrow.Types.DoubleType.Default))
+            .Field(f => f.Name("visit").DataType(Apache.Arrow.Types.Date32Type.Default))
+            .Build();
+        var batch = new RecordBatch(schema, [ids, f1, visitBuilder.Build()], 6);
+        using var buffer = new MemoryStream();
+        using (var writer = new ArrowFileWriter(buffer, schema, leaveOpen: true))
+        {
+            writer.WriteRecordBatch(batch);
+            writer.WriteEnd();
+        }
+        return buffer.ToArray();
+    }
+}
