@@ -67,9 +67,10 @@ internal static class CohortAnalysis
 
         // How well the features predict the cohort, and each feature's importance for it.
         var cohortOutcome = new ClassOutcome(cohort.ColumnName, cohort.LevelNames, levels);
-        var cohortForest = ForestTrainer.Train(matrix, cohortOutcome, settings.ForestOptions(panel.Subject, options.Seed, CohortForestRepeat) with
+        var cohortOptions = settings.ForestOptions(panel.Subject, options.Seed, CohortForestRepeat);
+        var cohortForest = ForestTrainer.Train(matrix, cohortOutcome, cohortOptions with
         {
-            Sampling = settings.ForestOptions(panel.Subject, options.Seed, CohortForestRepeat).Sampling with { ClassBalanced = false },
+            Sampling = cohortOptions.Sampling with { ClassBalanced = false },
         });
         double cohortAccuracy = 1 - new OutOfBagVotes(cohortForest, cohortOutcome).Error;
         var cohortImportanceRank = RankDescending(ImpurityImportance.From(cohortForest).MeanDecrease);

@@ -88,10 +88,8 @@ internal static class PanelSizeEstimator
         var outcome = panel.Outcome;
         var selected = matrix.SelectFeatures(features);
         // The panel forest tries floor(sqrt(k)) features per split of its own k, whatever the screen used.
-        var forestOptions = settings.ForestOptions(panel.Subject, seed, sizeIndex) with
-        {
-            Tree = settings.ForestOptions(panel.Subject, seed, sizeIndex).Tree with { FeaturesPerSplit = null },
-        };
+        var forestOptions = settings.ForestOptions(panel.Subject, seed, sizeIndex);
+        forestOptions = forestOptions with { Tree = forestOptions.Tree with { FeaturesPerSplit = null } };
         var forest = ForestTrainer.Train(selected, outcome, forestOptions, fold.TrainingRows);
         var prediction = forest.Predict(selected);
         var classes = outcome.SampleClasses;

@@ -71,12 +71,12 @@ public static class ScreenRunner
         var order = Enumerable.Range(0, features.Length).OrderBy(f => features[f].Order).ToArray();
         var shortlisted = order.Where(f => Passes(features[f], options)).ToList();
         var decoys = EstimateDecoys(repeats, features, decoyMeans, shortlisted.Count, options);
+        double meanSelected = SelectionStability.MeanSelectedCount(repeats.Selected, repeats.FeatureCount);
         var stability = new StabilitySummary(
             SelectionStability.Nogueira(repeats.Selected, repeats.FeatureCount),
-            SelectionStability.MeanSelectedCount(repeats.Selected, repeats.FeatureCount),
+            meanSelected,
             options.FrequencyThreshold,
-            StabilitySelectionBound.ExpectedFalseSelections(SelectionStability.MeanSelectedCount(repeats.Selected, repeats.FeatureCount),
-                options.FrequencyThreshold, repeats.FeatureCount));
+            StabilitySelectionBound.ExpectedFalseSelections(meanSelected, options.FrequencyThreshold, repeats.FeatureCount));
 
         var groups = RedundancyGroups.Assign(panel.Matrix, shortlisted, options.RedundancyCorrelation, out var correlations);
         var groupMembers = new List<int[]>();
