@@ -28,27 +28,6 @@ public static class DecoyAugmentedNull
         return sample;
     }
 
-    public static double[] PValues(ReadOnlySpan<double> featureImportances, ReadOnlySpan<double> decoyImportances, ReadOnlySpan<double> scored)
-    {
-        var nullSample = NullSample(featureImportances, decoyImportances);
-        var pValues = new double[scored.Length];
-        if (nullSample.Length == 0)
-        {
-            Array.Fill(pValues, double.NaN);
-            return pValues;
-        }
-        Array.Sort(nullSample);
-        for (int i = 0; i < scored.Length; i++)
-        {
-            double value = scored[i];
-            if (double.IsNaN(value))
-            {
-                pValues[i] = double.NaN;
-                continue;
-            }
-            int firstAtLeast = JanitzaNull.LowerBound(nullSample, value);
-            pValues[i] = (1.0 + nullSample.Length - firstAtLeast) / (1.0 + nullSample.Length);
-        }
-        return pValues;
-    }
+    public static double[] PValues(ReadOnlySpan<double> featureImportances, ReadOnlySpan<double> decoyImportances, ReadOnlySpan<double> scored) =>
+        JanitzaNull.ExceedanceShares(NullSample(featureImportances, decoyImportances), scored, pseudoCount: 1);
 }

@@ -23,9 +23,15 @@ public static class JanitzaNull
     public static double[] PValues(ReadOnlySpan<double> importances) => PValues(importances, importances);
 
     /// <summary>The p-value of each scored value (for example decoys) against the null built from the importances.</summary>
-    public static double[] PValues(ReadOnlySpan<double> importances, ReadOnlySpan<double> scored)
+    public static double[] PValues(ReadOnlySpan<double> importances, ReadOnlySpan<double> scored) =>
+        ExceedanceShares(NullSample(importances), scored, pseudoCount: 0);
+
+    /// <summary>
+    /// For each scored value, (c + #{null &gt;= x}) / (c + |null|) with pseudo-count c; NaN for a NaN
+    /// value or an empty null. The null sample is sorted in place.
+    /// </summary>
+    internal static double[] ExceedanceShares(double[] nullSample, ReadOnlySpan<double> scored, int pseudoCount)
     {
-        var nullSample = NullSample(importances);
         var pValues = new double[scored.Length];
         if (nullSample.Length == 0)
         {
@@ -36,13 +42,8 @@ public static class JanitzaNull
         for (int i = 0; i < scored.Length; i++)
         {
             double value = scored[i];
-            if (double.IsNaN(value))
-            {
-                pValues[i] = double.NaN;
-                continue;
-            }
-            int firstAtLeast = LowerBound(nullSample, value);
-            pValues[i] = (double)(nullSample.Length - firstAtLeast) / nullSample.Length;
+            pValues[i] = double.IsNaN(value) ? double.NaN
+                : (double)(pseudoCount + nullSample.Length - LowerBound(nullSample, value)) / (pseudoCount + nullSample.Length);
         }
         return pValues;
     }

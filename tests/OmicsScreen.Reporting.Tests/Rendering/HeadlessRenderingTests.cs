@@ -18,14 +18,6 @@ public sealed class HeadlessRenderingTests : IDisposable
         catch (IOException) { } // a browser helper process may still hold its profile for a moment
     }
 
-    private static bool ChromiumAvailable()
-    {
-        if (HeadlessChromium.IsInstalled) return true;
-        bool onCi = string.Equals(Environment.GetEnvironmentVariable("CI"), "true", StringComparison.OrdinalIgnoreCase);
-        Assert.False(onCi, $"{HeadlessChromium.Executable} is missing; CI installs it with .ci/install-packages.");
-        return false; // not on CI: nothing to render with
-    }
-
     private string WriteReport()
     {
         string path = Path.Combine(_directory, "report.html");
@@ -36,7 +28,7 @@ public sealed class HeadlessRenderingTests : IDisposable
     [Fact]
     public void Browser_dom_shows_every_axis_label_and_table_row_and_runs_no_script()
     {
-        if (!ChromiumAvailable()) return;
+        if (!HeadlessChromium.AvailableOrFailOnCi()) return;
         string dom = HeadlessChromium.Run(Path.Combine(_directory, "profile-dom"), "--dump-dom", WriteReport());
 
         foreach (var label in SampleReport.AxisLabels) Assert.Contains(">" + label + "<", dom);
@@ -52,7 +44,7 @@ public sealed class HeadlessRenderingTests : IDisposable
     [Fact]
     public void Browser_screenshot_of_the_report_is_not_blank()
     {
-        if (!ChromiumAvailable()) return;
+        if (!HeadlessChromium.AvailableOrFailOnCi()) return;
         string screenshot = Path.Combine(_directory, "report.png");
         HeadlessChromium.Run(Path.Combine(_directory, "profile-shot"), "--screenshot=" + screenshot, "--window-size=1000,1400", WriteReport());
 

@@ -20,14 +20,6 @@ public sealed class ScreenReportBrowserTests : IDisposable
         catch (IOException) { } // a browser helper process may still hold its profile for a moment
     }
 
-    private static bool ChromiumAvailable()
-    {
-        if (HeadlessChromium.IsInstalled) return true;
-        bool onCi = string.Equals(Environment.GetEnvironmentVariable("CI"), "true", StringComparison.OrdinalIgnoreCase);
-        Assert.False(onCi, $"{HeadlessChromium.Executable} is missing; CI installs it with .ci/install-packages.");
-        return false;
-    }
-
     private string WritePage(string name, string html)
     {
         string path = Path.Combine(_directory, name);
@@ -49,7 +41,7 @@ public sealed class ScreenReportBrowserTests : IDisposable
     [Fact]
     public void Console_check_catches_a_blocked_network_request()
     {
-        if (!ChromiumAvailable()) return;
+        if (!HeadlessChromium.AvailableOrFailOnCi()) return;
         // Control for the test below: a page under the report's policy that asks for a remote image must leave a console line.
         string page = "<!DOCTYPE html><html><head><meta http-equiv=\"Content-Security-Policy\" content=\"" + HtmlBuilder.ContentSecurityPolicy.Replace("'", "&#39;")
             + "\"/></head><body><img src=\"http://example.invalid/x.png\"/></body></html>";
@@ -62,7 +54,7 @@ public sealed class ScreenReportBrowserTests : IDisposable
     [Fact]
     public void Browser_shows_the_report_without_console_errors_or_network_requests()
     {
-        if (!ChromiumAvailable()) return;
+        if (!HeadlessChromium.AvailableOrFailOnCi()) return;
         var result = ScreenReportSample.Result;
         var (dom, console) = Open(WritePage("report.html", ScreenReport.Render(ScreenReportSample.Input())), "profile-dom");
 
@@ -85,7 +77,7 @@ public sealed class ScreenReportBrowserTests : IDisposable
     [Fact]
     public void Browser_screenshot_of_the_report_is_not_blank()
     {
-        if (!ChromiumAvailable()) return;
+        if (!HeadlessChromium.AvailableOrFailOnCi()) return;
         string screenshot = Path.Combine(_directory, "report.png");
         string url = WritePage("report.html", ScreenReport.Render(ScreenReportSample.Input()));
         HeadlessChromium.Run(Path.Combine(_directory, "profile-shot"), "--screenshot=" + screenshot, "--window-size=1200,1600", url);
