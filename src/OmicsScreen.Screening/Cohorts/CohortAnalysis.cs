@@ -6,6 +6,7 @@ using OmicsScreen.Engine.Randomness;
 using OmicsScreen.Screening.Screen;
 using OmicsScreen.Screening.Statistics;
 using OmicsScreen.Screening.Univariate;
+using OmicsScreen.Screening.Work;
 
 namespace OmicsScreen.Screening.Cohorts;
 
@@ -31,7 +32,7 @@ internal static class CohortAnalysis
     private const int CohortForestRepeat = int.MaxValue - 1;
 
     public static CohortResult Run(Panel panel, BinnedMatrix matrix, ScreenSettings settings, IReadOnlyList<int> order,
-        UnivariateTable univariate, int panelSize, Action<int, int>? progress,
+        UnivariateTable univariate, int panelSize, ScreenWork work, Action<int, int>? progress,
         CancellationToken cancellation)
     {
         var cohort = panel.Cohort ?? throw new ArgumentException("The panel names no cohort.");
@@ -39,10 +40,10 @@ internal static class CohortAnalysis
         var options = settings.Options;
         int featureCount = panel.FeatureCount;
         var levels = cohort.SampleLevels.ToArray();
-        var rowsOf = Enumerable.Range(0, cohort.LevelCount)
-            .Select(c => Enumerable.Range(0, panel.SampleCount).Where(s => levels[s] == c).ToArray()).ToArray();
-        var screenable = Enumerable.Range(0, cohort.LevelCount).Where(c => HasEnoughOfEachClass(rowsOf[c], outcome)).ToArray();
-        int steps = screenable.Length * 2 + 1, done = 0;
+        var rowsOf = RowsOfCohorts(panel);
+        var screenable = ScreenableCohorts(panel, rowsOf);
+        var heldOutCohorts = HeldOutCohorts(panel, rowsOf);
+        int steps = screenable.Length + heldOutCohorts.Length + 1, done = 0;
 
         // Each cohort's own screen.
         var cohortOrders = new Dictionary<int, int[]>();
@@ -50,10 +51,9 @@ internal static class CohortAnalysis
         foreach (int c in screenable)
         {
             cancellation.ThrowIfCancellationRequested();
-            ulong seed = SeedSchedule.Derive(options.Seed, 0, CohortScreenSlot + c, SeedPurpose.Resampling);
-            var repeats = RepeatScreen.Run(matrix, outcome, panel.Subject, rowsOf[c], settings, seed, options.CurveInnerPairs, 0, null, cancellation);
-            cohortOrders[c] = ScreenAggregation.OrderOf(repeats);
-            cohortImportance[c] = MeanCorrected(repeats);
+            var screen = work.CohortScreen(c);
+            cohortOrders[c] = screen.Order;
+            cohortImportance[c] = screen.MeanCorrected;
             progress?.Invoke(++done, steps);
         }
         var concordance = new List<CohortConcordance>();
@@ -88,21 +88,52 @@ internal static class CohortAnalysis
 
         // Leave one cohort out: screen the others, score the held-out one.
         var heldOut = new List<HeldOutCohort>();
-        foreach (int c in screenable)
+        foreach (int c in heldOutCohorts)
         {
             cancellation.ThrowIfCancellationRequested();
-            var training = Enumerable.Range(0, panel.SampleCount).Where(s => levels[s] != c).ToArray();
-            if (!HasEnoughOfEachClass(training, outcome)) continue;
-            ulong seed = SeedSchedule.Derive(options.Seed, 0, HeldOutSlot + c, SeedPurpose.Resampling);
-            var repeats = RepeatScreen.Run(matrix, outcome, panel.Subject, training, settings, seed, options.CurveInnerPairs, 0, null, cancellation);
-            var top = ScreenAggregation.OrderOf(repeats).AsSpan(0, Math.Min(panelSize, featureCount)).ToArray();
-            heldOut.Add(ScoreHeldOut(matrix, panel, settings, top, training, rowsOf[c], cohort.LevelNames[c], seed));
+            var training = TrainingRowsWithout(panel, c);
+            var top = work.HeldOutScreen(c).Order.AsSpan(0, Math.Min(panelSize, featureCount)).ToArray();
+            heldOut.Add(ScoreHeldOut(matrix, panel, settings, top, training, rowsOf[c], cohort.LevelNames[c], HeldOutSeed(options, c)));
             progress?.Invoke(++done, steps);
         }
 
         return new CohortResult(cohort.ColumnName, cohort.LevelNames, screenable.Select(c => cohort.LevelNames[c]).ToArray(),
             concordance, markers, heldOut, cohortAccuracy, largestShare, cramersV, associationP, cramersV >= ConfoundingCramersV);
     }
+
+    /// <summary>The samples of each cohort, by cohort level.</summary>
+    internal static int[][] RowsOfCohorts(Panel panel)
+    {
+        var cohort = panel.Cohort ?? throw new ArgumentException("The panel names no cohort.");
+        var levels = cohort.SampleLevels;
+        var rows = new List<int>[cohort.LevelCount];
+        for (int c = 0; c < rows.Length; c++) rows[c] = [];
+        for (int s = 0; s < levels.Length; s++) rows[levels[s]].Add(s);
+        return rows.Select(r => r.ToArray()).ToArray();
+    }
+
+    /// <summary>Cohorts with enough samples of every class for a screen of their own.</summary>
+    internal static int[] ScreenableCohorts(Panel panel, int[][] rowsOf) =>
+        Enumerable.Range(0, rowsOf.Length).Where(c => HasEnoughOfEachClass(rowsOf[c], panel.Outcome)).ToArray();
+
+    /// <summary>Screenable cohorts whose complement also has enough of every class to be screened and scored on them.</summary>
+    internal static int[] HeldOutCohorts(Panel panel, int[][] rowsOf) =>
+        ScreenableCohorts(panel, rowsOf).Where(c => HasEnoughOfEachClass(TrainingRowsWithout(panel, c), panel.Outcome)).ToArray();
+
+    /// <summary>All samples outside cohort <paramref name="held"/>.</summary>
+    internal static int[] TrainingRowsWithout(Panel panel, int held)
+    {
+        var levels = panel.Cohort!.SampleLevels;
+        var rows = new List<int>(levels.Length);
+        for (int s = 0; s < levels.Length; s++) if (levels[s] != held) rows.Add(s);
+        return rows.ToArray();
+    }
+
+    internal static ulong CohortScreenSeed(ScreenOptions options, int cohort) =>
+        SeedSchedule.Derive(options.Seed, 0, CohortScreenSlot + cohort, SeedPurpose.Resampling);
+
+    internal static ulong HeldOutSeed(ScreenOptions options, int cohort) =>
+        SeedSchedule.Derive(options.Seed, 0, HeldOutSlot + cohort, SeedPurpose.Resampling);
 
     private static int ThreadCount(ScreenOptions options) => options.ThreadCount > 0 ? options.ThreadCount : Environment.ProcessorCount;
 
@@ -113,7 +144,7 @@ internal static class CohortAnalysis
         return counts.All(n => n >= MinimumSamplesPerClass);
     }
 
-    private static double[] MeanCorrected(RepeatImportances repeats)
+    internal static double[] MeanCorrected(RepeatImportances repeats)
     {
         var mean = new double[repeats.FeatureCount];
         for (int r = 0; r < repeats.RepeatCount; r++)

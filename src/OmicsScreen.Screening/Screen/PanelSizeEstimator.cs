@@ -5,6 +5,7 @@ using OmicsScreen.Engine.Panels;
 using OmicsScreen.Engine.Randomness;
 using OmicsScreen.Screening.Resampling;
 using OmicsScreen.Screening.Statistics;
+using OmicsScreen.Screening.Work;
 
 namespace OmicsScreen.Screening.Screen;
 
@@ -34,14 +35,17 @@ internal static class PanelSizeEstimator
         return sizes.ToArray();
     }
 
+    /// <summary>Seed of the inner screen (and the scoring forests) of an outer fold.</summary>
+    internal static ulong InnerSeed(ScreenOptions options, OuterFold fold) =>
+        SeedSchedule.Derive(options.Seed, fold.Repeat, InnerSeedSlot + fold.Fold, SeedPurpose.Resampling);
+
     public static PanelSizeCurve Estimate(BinnedMatrix matrix, Panel panel, ScreenSettings settings, int[] fullOrder,
-        Action<int, int>? foldDone, CancellationToken cancellation)
+        ScreenWork work, Action<int, int>? foldDone, CancellationToken cancellation)
     {
         var options = settings.Options;
         var outcome = panel.Outcome;
         bool binary = outcome.ClassCount == 2;
-        var allRows = Enumerable.Range(0, panel.SampleCount).ToArray();
-        var folds = StratifiedFolds.Draw(outcome, panel.Subject, allRows, options.CurveFolds, options.CurveFoldRepeats, options.Seed);
+        var folds = work.CurveFolds;
         var sizes = SizeGrid(Math.Min(options.CurveMaxPanelSize, matrix.FeatureCount));
         var honest = new double[folds.Count, sizes.Length];
         var honestError = new double[folds.Count, sizes.Length];
@@ -51,10 +55,8 @@ internal static class PanelSizeEstimator
         {
             cancellation.ThrowIfCancellationRequested();
             var fold = folds[i];
-            ulong innerSeed = SeedSchedule.Derive(options.Seed, fold.Repeat, InnerSeedSlot + fold.Fold, SeedPurpose.Resampling);
-            var inner = RepeatScreen.Run(matrix, outcome, panel.Subject, fold.TrainingRows, settings, innerSeed,
-                options.CurveInnerPairs, decoyCount: 0, repeatDone: null, cancellation);
-            var innerOrder = ScreenAggregation.OrderOf(inner);
+            ulong innerSeed = InnerSeed(options, fold);
+            var innerOrder = work.CurveFoldScreen(i, cancellation).Order;
             for (int s = 0; s < sizes.Length; s++)
             {
                 (honest[i, s], honestError[i, s]) = Score(matrix, panel, settings, innerOrder.AsSpan(0, sizes[s]), fold, innerSeed, s, binary);

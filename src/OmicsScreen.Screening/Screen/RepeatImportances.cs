@@ -48,4 +48,19 @@ public sealed class RepeatImportances
     public int[] TrainingSampleCounts { get; }
 
     public Span<double> Row(double[] matrix, int repeat) => matrix.AsSpan(repeat * FeatureCount, FeatureCount);
+
+    /// <summary>Copies every value of repeat <paramref name="fromRepeat"/> of <paramref name="source"/> into repeat <paramref name="toRepeat"/>.</summary>
+    public void CopyRepeatFrom(RepeatImportances source, int fromRepeat, int toRepeat)
+    {
+        if (source.FeatureCount != FeatureCount || source.DecoyCount != DecoyCount)
+            throw new ArgumentException($"A repeat of {source.FeatureCount} features and {source.DecoyCount} decoys does not fit {FeatureCount} and {DecoyCount}.");
+        source.Row(source.Corrected, fromRepeat).CopyTo(Row(Corrected, toRepeat));
+        source.Row(source.Permutation, fromRepeat).CopyTo(Row(Permutation, toRepeat));
+        source.Row(source.Impurity, fromRepeat).CopyTo(Row(Impurity, toRepeat));
+        source.Row(source.CombinedRank, fromRepeat).CopyTo(Row(CombinedRank, toRepeat));
+        source.Selected.AsSpan(fromRepeat * FeatureCount, FeatureCount).CopyTo(Selected.AsSpan(toRepeat * FeatureCount, FeatureCount));
+        source.DecoyCorrected.AsSpan(fromRepeat * DecoyCount, DecoyCount).CopyTo(DecoyCorrected.AsSpan(toRepeat * DecoyCount, DecoyCount));
+        source.DecoySelected.AsSpan(fromRepeat * DecoyCount, DecoyCount).CopyTo(DecoySelected.AsSpan(toRepeat * DecoyCount, DecoyCount));
+        TrainingSampleCounts[toRepeat] = source.TrainingSampleCounts[fromRepeat];
+    }
 }

@@ -26,42 +26,52 @@ internal static class RepeatScreen
         ReadOnlySpan<int> eligibleRows, ScreenSettings settings, ulong runSeed, int pairCount, int decoyCount,
         Action<int>? repeatDone, CancellationToken cancellation)
     {
-        int featureCount = matrix.FeatureCount;
         var halves = HalfSamplePairs.Draw(outcome, subject, eligibleRows, pairCount, runSeed);
-        var result = new RepeatImportances(halves.Length, featureCount, decoyCount);
-        var correctedRanks = new double[featureCount];
-        var permutationRanks = new double[featureCount];
-        var negated = new double[featureCount];
+        var result = new RepeatImportances(halves.Length, matrix.FeatureCount, decoyCount);
         for (int repeat = 0; repeat < halves.Length; repeat++)
         {
             cancellation.ThrowIfCancellationRequested();
-            int[] rows = halves[repeat];
-            result.TrainingSampleCounts[repeat] = rows.Length;
-            var options = settings.ForestOptions(subject, runSeed, repeat);
-
-            var forest = ForestTrainer.Train(matrix, outcome, options, rows);
-            ImpurityImportance.From(forest).MeanDecrease.CopyTo(result.Row(result.Impurity, repeat));
-            var permutation = OutOfBagPermutationImportance.Measure(forest, matrix, outcome, settings.Options.ThreadCount);
-            permutation.MeanAccuracyDrop.CopyTo(result.Row(result.Permutation, repeat));
-
-            var decoySources = DecoySources(featureCount, decoyCount, runSeed, repeat);
-            var corrected = CorrectedImpurityImportance.Measure(matrix, outcome, rows, decoySources, options);
-            corrected.Features.CopyTo(result.Row(result.Corrected, repeat));
-            corrected.Decoys.CopyTo(result.DecoyCorrected.AsSpan(repeat * decoyCount, decoyCount));
-
-            Select(result, repeat, settings.Options.RepeatSelectionLevel, settings.Options.SelectedPerRepeat);
-
-            // Ranks of both measures, 1 = most important, ties averaged; their mean is the
-            // repeat's combined rank, so neither measure alone decides the order.
-            Negate(result.Row(result.Corrected, repeat), negated);
-            Ranking.Rank(negated, correctedRanks);
-            Negate(result.Row(result.Permutation, repeat), negated);
-            Ranking.Rank(negated, permutationRanks);
-            var combined = result.Row(result.CombinedRank, repeat);
-            for (int f = 0; f < featureCount; f++) combined[f] = 0.5 * (correctedRanks[f] + permutationRanks[f]);
+            RunOne(matrix, outcome, subject, halves[repeat], settings, runSeed, repeat, result, repeat);
             repeatDone?.Invoke(repeat + 1);
         }
         return result;
+    }
+
+    /// <summary>
+    /// One repeat on the half-sample <paramref name="rows"/>, written into row
+    /// <paramref name="row"/> of <paramref name="result"/>. Its random streams come from
+    /// (run seed, repeat) alone, so a repeat computed on its own equals the same repeat of a loop.
+    /// </summary>
+    internal static void RunOne(BinnedMatrix matrix, ClassOutcome outcome, SampleGrouping? subject, int[] rows,
+        ScreenSettings settings, ulong runSeed, int repeat, RepeatImportances result, int row)
+    {
+        int featureCount = matrix.FeatureCount, decoyCount = result.DecoyCount;
+        result.TrainingSampleCounts[row] = rows.Length;
+        var options = settings.ForestOptions(subject, runSeed, repeat);
+
+        var forest = ForestTrainer.Train(matrix, outcome, options, rows);
+        ImpurityImportance.From(forest).MeanDecrease.CopyTo(result.Row(result.Impurity, row));
+        var permutation = OutOfBagPermutationImportance.Measure(forest, matrix, outcome, settings.Options.ThreadCount);
+        permutation.MeanAccuracyDrop.CopyTo(result.Row(result.Permutation, row));
+
+        var decoySources = DecoySources(featureCount, decoyCount, runSeed, repeat);
+        var corrected = CorrectedImpurityImportance.Measure(matrix, outcome, rows, decoySources, options);
+        corrected.Features.CopyTo(result.Row(result.Corrected, row));
+        corrected.Decoys.CopyTo(result.DecoyCorrected.AsSpan(row * decoyCount, decoyCount));
+
+        Select(result, row, settings.Options.RepeatSelectionLevel, settings.Options.SelectedPerRepeat);
+
+        // Ranks of both measures, 1 = most important, ties averaged; their mean is the
+        // repeat's combined rank, so neither measure alone decides the order.
+        var correctedRanks = new double[featureCount];
+        var permutationRanks = new double[featureCount];
+        var negated = new double[featureCount];
+        Negate(result.Row(result.Corrected, row), negated);
+        Ranking.Rank(negated, correctedRanks);
+        Negate(result.Row(result.Permutation, row), negated);
+        Ranking.Rank(negated, permutationRanks);
+        var combined = result.Row(result.CombinedRank, row);
+        for (int f = 0; f < featureCount; f++) combined[f] = 0.5 * (correctedRanks[f] + permutationRanks[f]);
     }
 
     /// <summary>

@@ -6,6 +6,7 @@ using OmicsScreen.Screening.Cohorts;
 using OmicsScreen.Screening.Importance;
 using OmicsScreen.Screening.Statistics;
 using OmicsScreen.Screening.Univariate;
+using OmicsScreen.Screening.Work;
 
 namespace OmicsScreen.Screening.Screen;
 
@@ -19,8 +20,13 @@ public static class ScreenRunner
     /// <summary>Repeat index of the reference forest's random streams; far above any half-sample repeat.</summary>
     private const int ReferenceRepeat = int.MaxValue;
 
+    /// <param name="store">
+    /// Where finished work units are kept and found: units already in it are not computed again
+    /// (resuming a killed run), new ones are saved as soon as they finish.
+    /// </param>
+    /// <param name="computeMissing">False when every unit must come from <paramref name="store"/> (merging parts).</param>
     public static ScreenResult Run(Panel panel, ScreenOptions options, IProgress<ScreenProgress>? progress = null,
-        CancellationToken cancellation = default)
+        CancellationToken cancellation = default, IWorkUnitStore? store = null, bool computeMissing = true)
     {
         ArgumentNullException.ThrowIfNull(panel);
         var settings = ScreenSettings.Resolve(options, panel);
@@ -47,11 +53,9 @@ public static class ScreenRunner
         var reference = new ReferenceForestSummary(votes.Error, votes.PerClassError.ToArray(), votes.Auc, votes.ErrorCurve.ToArray());
         Finish(ScreenStage.ReferenceForest);
 
-        var allRows = Enumerable.Range(0, panel.SampleCount).ToArray();
+        var work = new ScreenWork(panel, matrix, settings, store, computeMissing);
         int repeatCount = settings.RepeatCount;
-        var repeats = RepeatScreen.Run(matrix, panel.Outcome, panel.Subject, allRows, settings, options.Seed,
-            options.HalfSamplePairs, settings.DecoyCount,
-            done => progress?.Report(new ScreenProgress(ScreenStage.Repeats, done, repeatCount)), cancellation);
+        var repeats = work.MainRepeats(done => progress?.Report(new ScreenProgress(ScreenStage.Repeats, done, repeatCount)), cancellation);
         Finish(ScreenStage.Repeats);
 
         double[] outcomePermutationP = [];
@@ -93,7 +97,7 @@ public static class ScreenRunner
         {
             int foldTotal = options.CurveFolds * options.CurveFoldRepeats;
             progress?.Report(new ScreenProgress(ScreenStage.PanelSizeCurve, 0, foldTotal));
-            curve = PanelSizeEstimator.Estimate(matrix, panel, settings, order,
+            curve = PanelSizeEstimator.Estimate(matrix, panel, settings, order, work,
                 (done, total) => progress?.Report(new ScreenProgress(ScreenStage.PanelSizeCurve, done, total)), cancellation);
             Finish(ScreenStage.PanelSizeCurve);
         }
@@ -103,13 +107,34 @@ public static class ScreenRunner
         {
             progress?.Report(new ScreenProgress(ScreenStage.Cohorts, 0, 1));
             int panelSize = curve?.RecommendedSize ?? Math.Max(1, shortlist.Count);
-            cohorts = CohortAnalysis.Run(panel, matrix, settings, order, univariate, panelSize,
+            cohorts = CohortAnalysis.Run(panel, matrix, settings, order, univariate, panelSize, work,
                 (done, total) => progress?.Report(new ScreenProgress(ScreenStage.Cohorts, done, total)), cancellation);
             Finish(ScreenStage.Cohorts);
         }
 
         return new ScreenResult(settings, repeats, features, order, shortlist, correlations, stability, decoys, reference,
             univariate, univariateRanks, curve, seconds, cohorts);
+    }
+
+    /// <summary>
+    /// Computes only the given units of a screen and saves each in <paramref name="store"/>: one
+    /// part of a run split over machines (<see cref="WorkPlan.UnitsOfPart"/>). Units already in
+    /// the store are kept, so a killed part can be run again and resumes.
+    /// </summary>
+    public static void RunUnits(Panel panel, ScreenOptions options, IReadOnlyList<WorkUnit> units, IWorkUnitStore store,
+        IProgress<ScreenProgress>? progress = null, CancellationToken cancellation = default)
+    {
+        ArgumentNullException.ThrowIfNull(panel);
+        var settings = ScreenSettings.Resolve(options, panel);
+        progress?.Report(new ScreenProgress(ScreenStage.Binning, 0, 1));
+        var matrix = new BinMapper().Bin(panel.Matrix, options.ThreadCount);
+        var work = new ScreenWork(panel, matrix, settings, store);
+        for (int i = 0; i < units.Count; i++)
+        {
+            progress?.Report(new ScreenProgress(ScreenStage.WorkUnits, i, units.Count));
+            work.Obtain(units[i], cancellation);
+        }
+        progress?.Report(new ScreenProgress(ScreenStage.WorkUnits, units.Count, units.Count));
     }
 
     /// <summary>The shortlist rule: selected often enough, and a q-value at the false discovery rate level.</summary>

@@ -10,4 +10,7 @@ public enum ScreenStage
     OutcomePermutations,
     PanelSizeCurve,
     Cohorts,
+
+    /// <summary>The work units of one part of a split run.</summary>
+    WorkUnits,
 }
