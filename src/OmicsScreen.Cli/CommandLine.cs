@@ -14,6 +14,7 @@ public static class CommandLine
             + "and shortlist the few worth a validation study. Research use only; a screen is not a diagnostic test.");
         root.Subcommands.Add(new CheckCommand(console));
         root.Subcommands.Add(new ScreenCommand(console));
+        root.Subcommands.Add(new MergeCommand(console));
         root.Subcommands.Add(new GrowCommand(console));
         root.Subcommands.Add(new ApplyCommand(console));
         root.Subcommands.Add(new DemoCommand(console));

@@ -41,12 +41,16 @@ internal sealed class ResultsFolder
         WrittenFiles.Add(fileName);
     }
 
-    private static bool IsOurs(string folder)
+    /// <summary>A folder is ours when it holds our manifest, or the checkpoint of a run that has not finished.</summary>
+    private static bool IsOurs(string folder) =>
+        HasMarker(System.IO.Path.Combine(folder, ManifestFileName))
+        || HasMarker(System.IO.Path.Combine(folder, ScreenRun.CheckpointFolderName, ScreenRun.CheckpointRecordName));
+
+    private static bool HasMarker(string file)
     {
-        string manifest = System.IO.Path.Combine(folder, ManifestFileName);
-        if (!File.Exists(manifest)) return false;
-        // Manifests are small; a large file of that name is not one of ours.
-        if (new FileInfo(manifest).Length > 4 << 20) return false;
-        return File.ReadAllText(manifest).Contains(ManifestMarker, StringComparison.Ordinal);
+        if (!File.Exists(file)) return false;
+        // Our records are small; a large file of that name is not one of ours.
+        if (new FileInfo(file).Length > 4 << 20) return false;
+        return File.ReadAllText(file).Contains(ManifestMarker, StringComparison.Ordinal);
     }
 }

@@ -1,5 +1,6 @@
 using System.CommandLine;
 using OmicsScreen.Cli.Console;
+using OmicsScreen.Cli.Work;
 using OmicsScreen.Screening.Screen;
 
 namespace OmicsScreen.Cli.Commands;
@@ -23,6 +24,17 @@ public sealed class ScreenCommand : Command
     public Option<bool> Force { get; } = new("--force")
     {
         Description = "Write into a non-empty folder that does not hold an earlier screen's results.",
+    };
+
+    public Option<bool> Resume { get; } = new("--resume")
+    {
+        Description = "Continue an unfinished run from the checkpoint in its results folder (or part folder): finished repeats and folds are not computed again.",
+    };
+
+    public Option<string?> Part { get; } = new("--part")
+    {
+        HelpName = "I/N",
+        Description = "Run only part I of N of the work (repeats and folds) into the --out folder, for `omicsscreen merge` to join later.",
     };
 
     public Option<int> Pairs { get; } = new("--pairs")
@@ -160,7 +172,7 @@ public sealed class ScreenCommand : Command
         : base("screen", "Screen a panel: repeated random forests on half-samples, a stability-ranked shortlist with error control, and the panel-size curve.")
     {
         Input.AddTo(this);
-        foreach (var option in new Option[] { Out, Force, Pairs, Trees, FeaturesPerSplit, MinLeaf, Balance, RepeatLevel, PerRepeat,
+        foreach (var option in new Option[] { Out, Force, Resume, Part, Pairs, Trees, FeaturesPerSplit, MinLeaf, Balance, RepeatLevel, PerRepeat,
                      MinFrequency, MaxQ, Decoys, OutcomePermutations, RedundancyRho, CurveFolds, CurveRepeats, CurveInnerPairs,
                      MaxPanelSize, Seed, Threads, ShowSampleIds, Quiet })
             Options.Add(option);
@@ -169,6 +181,8 @@ public sealed class ScreenCommand : Command
             Panel = Input.ToLoadOptions(parse),
             OutputFolder = parse.GetValue(Out),
             Force = parse.GetValue(Force),
+            Resume = parse.GetValue(Resume),
+            Part = parse.GetValue(Part) is { } part ? RunPart.Parse(part) : null,
             Quiet = parse.GetValue(Quiet),
             ShowSampleIds = parse.GetValue(ShowSampleIds),
             CommandLine = ["omicsscreen", .. parse.Tokens.Select(t => t.Value)],

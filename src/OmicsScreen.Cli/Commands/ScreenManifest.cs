@@ -11,7 +11,7 @@ namespace OmicsScreen.Cli.Commands;
 internal static class ScreenManifest
 {
     public static object Build(ScreenRunOptions options, LoadedPanel loaded, ScreenResult result, DateTimeOffset started,
-        DateTimeOffset finished, double loadSeconds, IReadOnlyList<string> outputs)
+        DateTimeOffset finished, double loadSeconds, IReadOnlyList<string> outputs, int mergedParts = 0)
     {
         var panel = loaded.Panel;
         var settings = result.Settings;
@@ -20,6 +20,8 @@ internal static class ScreenManifest
             tool = "omicsscreen",
             version = Version(),
             command_line = string.Join(' ', options.CommandLine.Select(ShellQuote)),
+            // A merged run names its part count; its command line is the single run it equals.
+            merged_from_parts = mergedParts > 0 ? mergedParts : (int?)null,
             started_utc = started.ToString("O"),
             finished_utc = finished.ToString("O"),
             cores = Environment.ProcessorCount,
@@ -75,6 +77,7 @@ internal static class ScreenManifest
         ScreenStage.OutcomePermutations => "outcome_permutations",
         ScreenStage.PanelSizeCurve => "panel_size_curve",
         ScreenStage.Cohorts => "cohorts",
+        ScreenStage.WorkUnits => "work_units",
         _ => stage.ToString(),
     };
 

@@ -2,11 +2,13 @@ using System.Diagnostics;
 using System.Globalization;
 using System.Security.Cryptography;
 using OmicsScreen.Cli.Console;
+using OmicsScreen.Cli.Work;
 using OmicsScreen.Data;
 using OmicsScreen.Reporting.Json;
 using OmicsScreen.Reporting.Screen;
 using OmicsScreen.Reporting.Univariate;
 using OmicsScreen.Screening.Screen;
+using OmicsScreen.Screening.Work;
 
 namespace OmicsScreen.Cli.Commands;
 
@@ -16,6 +18,11 @@ internal static class ScreenRun
     private const int PrintedMarkers = 15;
 
     public const string ReportFileName = "report.html";
+
+    /// <summary>Name of the checkpoint folder inside a results folder while a screen runs.</summary>
+    public const string CheckpointFolderName = "checkpoint";
+
+    public const string CheckpointRecordName = "run.json";
 
     public static int Execute(CliConsole console, ScreenRunOptions options)
     {
@@ -31,19 +38,46 @@ internal static class ScreenRun
         var watch = Stopwatch.StartNew();
         var loaded = PanelLoader.Load(options.Panel).EnsureScreenable();
         double loadSeconds = watch.Elapsed.TotalSeconds;
+        if (options.Part is { } part) return PartRun.Execute(console, options, loaded, part);
+
         var folder = ResultsFolder.Prepare(options.ResolveOutputFolder(), options.Force);
+        var settings = ScreenSettings.Resolve(options.Screen, loaded.Panel);
+        var digest = PanelDigest.Compute(loaded.Panel);
+        var identity = RunIdentity.Compute(digest, options.Screen, ScreenManifest.Version());
+        var checkpoint = WorkFolder.Open(Path.Combine(folder.Path, CheckpointFolderName), CheckpointRecordName,
+            RunIdentity.Describe("checkpoint", loaded, digest, options, identity), identity, loaded.Panel.FeatureCount,
+            settings.DecoyCount, options.Resume, options.Force, "checkpoint",
+            Path.Combine(options.ResolveOutputFolder(), CheckpointFolderName));
+        var plan = WorkPlan.For(loaded.Panel, settings);
+        if (options.Resume && !options.Quiet)
+            console.Error.WriteLine($"resume: {checkpoint.CountUsable(plan.Units.Select(u => u.Unit))} of {plan.Units.Count} work units are in the checkpoint.");
 
         var progress = new ProgressDisplay(console, options.Quiet);
         ScreenResult result;
         try
         {
-            result = ScreenRunner.Run(loaded.Panel, options.Screen, progress);
+            result = ScreenRunner.Run(loaded.Panel, options.Screen, progress, default, checkpoint);
         }
         finally
         {
             progress.Complete();
         }
+        foreach (var discarded in checkpoint.Discarded) console.Error.WriteLine($"warning: checkpoint unit {discarded}; it was computed again.");
 
+        WriteResults(console, options, loaded, result, folder, started, loadSeconds, mergedParts: 0);
+        checkpoint.Delete();
+        if (options.Resume)
+            console.Out.WriteLine($"Resumed: {checkpoint.ReusedCount} of {plan.Units.Count} work units came from the checkpoint.");
+        return ExitCode.Success;
+    }
+
+    /// <summary>
+    /// Writes every table, the locked panel, the report and (last) the manifest of a finished
+    /// screen, and prints its summary: the same for a single run and for merged parts.
+    /// </summary>
+    internal static void WriteResults(CliConsole console, ScreenRunOptions options, LoadedPanel loaded, ScreenResult result,
+        ResultsFolder folder, DateTimeOffset started, double loadSeconds, int mergedParts)
+    {
         folder.WriteText("shortlist.tsv", w => ScreenTables.WriteShortlist(w, result));
         folder.WriteText("features.tsv", w => ScreenTables.WriteFeatures(w, result));
         if (result.PanelSize is { } curve) folder.WriteText("panel_size_curve.tsv", w => ScreenTables.WritePanelSizeCurve(w, curve));
@@ -54,13 +88,12 @@ internal static class ScreenRun
         // The panel of the recommended size, locked for scoring new cohorts with `apply`.
         folder.WrittenFiles.Add(ApplyModelFile.LockInto(folder.Path, loaded, result));
         var finished = DateTimeOffset.UtcNow;
-        var report = ReportInput(options, loaded, result, folder, started, finished, loadSeconds);
+        var report = ReportInput(options, loaded, result, folder, started, finished, loadSeconds) with { MergedParts = mergedParts };
         folder.WriteText(ReportFileName, w => w.Write(ScreenReport.Render(report)));
-        var manifest = ScreenManifest.Build(options, loaded, result, started, finished, loadSeconds, folder.WrittenFiles);
+        var manifest = ScreenManifest.Build(options, loaded, result, started, finished, loadSeconds, folder.WrittenFiles, mergedParts);
         folder.WriteText(ResultsFolder.ManifestFileName, w => ManifestJson.Write(w, manifest));
 
         PrintSummary(console.Out, loaded, result, folder.Path);
-        return ExitCode.Success;
     }
 
     /// <summary>What the report shows: the run's provenance, with the SHA-256 of every table already written beside it.</summary>

@@ -1,3 +1,4 @@
+using OmicsScreen.Cli.Work;
 using OmicsScreen.Data;
 using OmicsScreen.Screening.Screen;
 
@@ -10,6 +11,12 @@ public sealed record ScreenRunOptions
     public required ScreenOptions Screen { get; init; }
     public string? OutputFolder { get; init; }
     public bool Force { get; init; }
+
+    /// <summary>Continue the unfinished run whose checkpoint is in the results folder (or the part folder).</summary>
+    public bool Resume { get; init; }
+
+    /// <summary>Run only this part of the work and write it as a part, for merging later; null runs everything.</summary>
+    public RunPart? Part { get; init; }
     public bool Quiet { get; init; }
 
     /// <summary>Let sample identifiers into the HTML report (as chart descriptions only); off by default, since identifiers can be personal data.</summary>

@@ -93,6 +93,7 @@ internal sealed class ProgressDisplay : IProgress<ScreenProgress>
         ScreenStage.OutcomePermutations => "outcome permutations",
         ScreenStage.PanelSizeCurve => "panel-size curve",
         ScreenStage.Cohorts => "cohort check",
+        ScreenStage.WorkUnits => "work units",
         _ => stage.ToString(),
     };
 }

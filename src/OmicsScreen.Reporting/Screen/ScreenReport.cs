@@ -169,6 +169,9 @@ public static class ScreenReport
         var settings = result.Settings;
         html.BeginSection("Reproducibility");
         html.Paragraph("Running this command with the same input files and the same software version gives the same tables, on any number of threads:");
+        if (input.MergedParts > 0)
+            html.Paragraph($"This run was split into {ReportNumber.Integer(input.MergedParts)} parts, each run as a separate process, and merged with `omicsscreen merge`; "
+                + "the tables are the same, byte for byte, as those of the single run below. Timings are those of the merge.");
         html.DefinitionList(
         [
             new("Command", input.CommandLine),

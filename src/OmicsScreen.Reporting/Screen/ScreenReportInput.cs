@@ -21,6 +21,7 @@ namespace OmicsScreen.Reporting.Screen;
 /// <param name="Cores">Logical processors of the machine.</param>
 /// <param name="Threads">Threads the forests used.</param>
 /// <param name="ShowSampleIds">When false (the default), no sample identifier appears anywhere in the report.</param>
+/// <param name="MergedParts">When above 0, the run was split into this many parts on separate processes and merged.</param>
 public sealed record ScreenReportInput(
     Panel Panel,
     ScreenResult Result,
@@ -34,7 +35,8 @@ public sealed record ScreenReportInput(
     double LoadSeconds,
     int Cores,
     int Threads,
-    bool ShowSampleIds = false)
+    bool ShowSampleIds = false,
+    int MergedParts = 0)
 {
     /// <summary>File name of the manifest the report points to; it sits beside the report.</summary>
     public const string ManifestFileName = "manifest.json";

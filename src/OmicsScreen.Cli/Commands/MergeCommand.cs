@@ -1,0 +1,53 @@
+using System.CommandLine;
+using OmicsScreen.Cli.Console;
+using OmicsScreen.Cli.Work;
+
+namespace OmicsScreen.Cli.Commands;
+
+/// <summary>`omicsscreen merge`: joins the parts of a split screen into the results folder a single run writes.</summary>
+public sealed class MergeCommand : Command
+{
+    public Argument<string[]> Parts { get; } = new("PARTS")
+    {
+        Description = "The part folders written by `screen --part I/N`, all N of them.",
+        Arity = ArgumentArity.OneOrMore,
+    };
+
+    public Option<string> Out { get; } = new("--out")
+    {
+        Description = "Results folder.",
+        HelpName = "DIR",
+        Required = true,
+    };
+
+    public Option<bool> Force { get; } = new("--force")
+    {
+        Description = "Write into a non-empty folder that does not hold an earlier screen's results.",
+    };
+
+    public Option<int> Threads { get; } = new("--threads")
+    {
+        HelpName = "N",
+        Description = "Threads to use for the work a merge does itself. Default: all cores.",
+    };
+
+    public Option<bool> Quiet { get; } = new("--quiet")
+    {
+        Description = "No progress display.",
+    };
+
+    public MergeCommand(CliConsole console)
+        : base("merge", "Merge the parts of a screen split with `screen --part I/N` into one results folder, the same as a single run's.")
+    {
+        Arguments.Add(Parts);
+        foreach (var option in new Option[] { Out, Force, Threads, Quiet }) Options.Add(option);
+        SetAction(parse => CommandRunner.Run(console, () => MergeRun.Execute(console, new MergeRunOptions
+        {
+            PartFolders = parse.GetValue(Parts) ?? [],
+            OutputFolder = parse.GetValue(Out)!,
+            Force = parse.GetValue(Force),
+            Quiet = parse.GetValue(Quiet),
+            ThreadCount = parse.GetValue(Threads),
+        })));
+    }
+}
