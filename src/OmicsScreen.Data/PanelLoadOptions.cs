@@ -35,6 +35,18 @@ public sealed record PanelLoadOptions
     /// <summary>Drop samples found in only one of matrix and sample sheet, with a warning, instead of stopping.</summary>
     public bool DropUnmatchedSamples { get; init; }
 
+    /// <summary>
+    /// Read only this block of the feature columns (samples-in-rows files): the rest are never
+    /// stored, so a node needs memory for its block alone.
+    /// </summary>
+    public FeatureBlock? FeatureBlock { get; init; }
+
+    /// <summary>
+    /// Read only the feature columns of these names (samples-in-rows files), for example the
+    /// candidates kept from the screens of all blocks; a name not in the file is an error.
+    /// </summary>
+    public IReadOnlyList<string>? KeepFeatures { get; init; }
+
     /// <summary>The columns that describe samples rather than measure them: outcome, cohort, subject and annotations.</summary>
     internal HashSet<string> SampleAttributeNames()
     {

@@ -24,6 +24,11 @@ public static class PanelLoader
         ArgumentNullException.ThrowIfNull(options);
         InputFilePath.EnsureFile(options.MatrixPath, "matrix");
         if (options.SampleSheetPath is { } sheetFile) InputFilePath.EnsureFile(sheetFile, "sample sheet");
+        if (options.Layout == PanelLayout.FeaturesInRows && (options.FeatureBlock is not null || options.KeepFeatures is not null))
+            throw PanelInputException.At(options.MatrixPath, null, null,
+                "is read with features in rows, where feature blocks and feature lists do not apply.",
+                "Each run of rows of such a file is a panel of its own: split it by rows, repeating the header line "
+                + "(for example with `split`), and screen the pieces; select rows by name with `grep -F -w -f` likewise.");
         var format = MatrixFormatDetector.Detect(options.MatrixPath);
         // Hashing is independent of parsing, so it runs on another core meanwhile.
         var matrixRecord = Task.Run(() => Record(options.MatrixPath), ct);

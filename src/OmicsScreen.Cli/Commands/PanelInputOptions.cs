@@ -68,6 +68,18 @@ public sealed class PanelInputOptions
         Description = "Drop samples found in only one of matrix and sample sheet (with a warning) instead of stopping.",
     };
 
+    public Option<string?> FeatureBlock { get; } = new("--feature-block")
+    {
+        HelpName = "I/N",
+        Description = "Read only block I of N equal blocks of the feature columns (samples in rows): for panels too wide for one machine's memory, screened a block at a time.",
+    };
+
+    public Option<string?> KeepFeatures { get; } = new("--keep-features")
+    {
+        HelpName = "FILE",
+        Description = "Read only the features named in FILE (one name per line; # starts a comment), for example the candidates of every block's screen.",
+    };
+
     public void AddTo(Command command)
     {
         command.Arguments.Add(Panel);
@@ -80,6 +92,8 @@ public sealed class PanelInputOptions
         command.Options.Add(Annotations);
         command.Options.Add(FeaturesInRows);
         command.Options.Add(DropUnmatched);
+        command.Options.Add(FeatureBlock);
+        command.Options.Add(KeepFeatures);
     }
 
     public PanelLoadOptions ToLoadOptions(ParseResult parse) => new()
@@ -94,5 +108,29 @@ public sealed class PanelInputOptions
         AnnotationColumns = parse.GetValue(Annotations) ?? [],
         Layout = parse.GetValue(FeaturesInRows) ? PanelLayout.FeaturesInRows : PanelLayout.SamplesInRows,
         DropUnmatchedSamples = parse.GetValue(DropUnmatched),
+        FeatureBlock = parse.GetValue(FeatureBlock) is { } block ? ParseBlock(block) : null,
+        KeepFeatures = parse.GetValue(KeepFeatures) is { } list ? ReadFeatureList(list) : null,
     };
+
+    private static FeatureBlock ParseBlock(string text)
+    {
+        var pieces = text.Split('/');
+        if (pieces.Length == 2
+            && int.TryParse(pieces[0], System.Globalization.NumberStyles.None, System.Globalization.CultureInfo.InvariantCulture, out int index)
+            && int.TryParse(pieces[1], System.Globalization.NumberStyles.None, System.Globalization.CultureInfo.InvariantCulture, out int count)
+            && count >= 1 && index >= 1 && index <= count)
+            return new FeatureBlock(index, count);
+        throw new CommandInputException($"--feature-block takes I/N with 1 <= I <= N (for example 2/8), not '{text}'.");
+    }
+
+    /// <summary>One feature name per line, surrounding spaces trimmed; blank lines and lines starting with # are skipped.</summary>
+    private static IReadOnlyList<string> ReadFeatureList(string path)
+    {
+        if (!File.Exists(path))
+            throw new CommandInputException($"{path}: the feature list given to --keep-features does not exist.", ExitCode.InputError);
+        var names = File.ReadLines(path).Select(line => line.Trim()).Where(line => line.Length > 0 && !line.StartsWith('#')).ToList();
+        if (names.Count == 0)
+            throw new CommandInputException($"{path}: the feature list given to --keep-features names no feature.", ExitCode.InputError);
+        return names;
+    }
 }

@@ -41,6 +41,8 @@ internal static class ScreenManifest
                 cohort_column = panel.Cohort?.ColumnName,
                 subject_column = panel.Subject?.ColumnName,
                 layout = options.Panel.Layout.ToString(),
+                feature_block = options.Panel.FeatureBlock?.ToString(),
+                features_kept_from_list = options.Panel.KeepFeatures?.Count,
                 dropped_samples = loaded.Inspection.DroppedSamples.Count,
             },
             parameters = settings.Options,

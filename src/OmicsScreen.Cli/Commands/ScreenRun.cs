@@ -38,6 +38,9 @@ internal static class ScreenRun
         var watch = Stopwatch.StartNew();
         var loaded = PanelLoader.Load(options.Panel).EnsureScreenable();
         double loadSeconds = watch.Elapsed.TotalSeconds;
+        if (options.Panel.KeepFeatures is not null)
+            console.Error.WriteLine("note: only the features of the --keep-features list were read. If the list was chosen on these same samples "
+                + "(a first-stage screen), q-values and the honest panel-size curve do not account for that choice: confirm in independent samples.");
         if (options.Part is { } part) return PartRun.Execute(console, options, loaded, part);
 
         var folder = ResultsFolder.Prepare(options.ResolveOutputFolder(), options.Force);
@@ -110,9 +113,20 @@ internal static class ScreenRun
             tables.Add(new ReportedFile("result table", name, Convert.ToHexStringLower(SHA256.HashData(stream))));
         }
         int threads = result.Settings.Options.ThreadCount > 0 ? result.Settings.Options.ThreadCount : Environment.ProcessorCount;
-        return new ScreenReportInput(loaded.Panel, result, inputs, options.Panel.Layout.ToString(), tables,
+        return new ScreenReportInput(loaded.Panel, result, inputs, LayoutText(options.Panel), tables,
             string.Join(' ', options.CommandLine.Select(ScreenManifest.ShellQuote)), ScreenManifest.Version(), started, finished, loadSeconds,
             Environment.ProcessorCount, threads, options.ShowSampleIds);
+    }
+
+    /// <summary>The layout, and any feature block or list the panel was narrowed to, with what that means for the error control.</summary>
+    internal static string LayoutText(PanelLoadOptions panel)
+    {
+        string text = panel.Layout.ToString();
+        if (panel.FeatureBlock is { } block) text += $"; feature block {block} only";
+        if (panel.KeepFeatures is { } keep)
+            text += $"; only {keep.Count} features from a list (when the list was chosen on these samples, "
+                + "the q-values and the honest curve do not account for that choice)";
+        return text;
     }
 
     private static void PrintSummary(TextWriter output, LoadedPanel loaded, ScreenResult result, string folder)
