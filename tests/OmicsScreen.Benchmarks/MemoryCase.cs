@@ -18,10 +18,10 @@ public sealed class MemoryCase(string name, int sampleCount, int featureCount) :
 {
     private static readonly ScreenOptions Settings = new()
     {
-        HalfSamplePairs = 5,
-        TreesPerForest = 200,
-        CurveFolds = 3,
-        CurveInnerPairs = 2,
+        HalfSamplePairs = 3,
+        TreesPerForest = 100,
+        CurveFolds = 2,
+        CurveInnerPairs = 1,
         CurveMaxPanelSize = 20,
     };
 

@@ -75,6 +75,8 @@ internal static class MemoryCheck
         };
         var largest = estimate.Largest(ShownTerms);
         foreach (var term in largest) lines.Add($"    {Describe(term.Component),-34} {ByteSize.Format(term.Bytes)}");
+        if (MemoryEstimate.RuntimeBaselineBytes > budget)
+            lines.Add($"  The program itself needs about {ByteSize.Format(MemoryEstimate.RuntimeBaselineBytes)}, so no setting brings a screen under this budget.");
         lines.Add("  Each of these alone would lower the estimate:");
         foreach (var (option, bytes) in Savings(dimensions, screen, threads, estimate))
         {
@@ -86,7 +88,7 @@ internal static class MemoryCheck
             ? Invariant($"    fewer features: a panel prefiltered to at most {fitting} features would fit (e.g. drop features missing in most samples, or keep the most variable).")
             : "    fewer features alone would not fit: even a one-feature panel of this many samples exceeds the budget.");
         long repeatMatrices = estimate.Bytes(MemoryComponent.RepeatImportances);
-        if (repeatMatrices >= SmallestSaving)
+        if (repeatMatrices > 0)
             lines.Add($"    --part I/N (split into parts): each part keeps only its share of the {ByteSize.Format(repeatMatrices)} of repeat matrices; each forest still needs its own memory.");
         lines.Add(limitGiven
             ? "  Or allow more with a larger --memory-limit; the estimate is approximate."

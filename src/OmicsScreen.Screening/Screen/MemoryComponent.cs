@@ -36,6 +36,6 @@ public enum MemoryComponent
     /// <summary>The inner screens' repeat matrices of the panel-size curve.</summary>
     PanelSizeCurve,
 
-    /// <summary>Garbage from earlier repeats that the collector has not yet reclaimed.</summary>
+    /// <summary>Dead objects the collector has not yet reclaimed: the heap grows past its live size between full collections.</summary>
     CollectorHeadroom,
 }
