@@ -11,8 +11,11 @@ namespace OmicsScreen.Screening.Screen;
 /// buffers) and screening (the raw matrix, its binned codes, forests, repeat matrices). The
 /// peak is the larger of the two; the terms kept in <see cref="Terms"/> are those of the phase
 /// that sets it. Tree sizes assume fully grown trees (minimum leaf 1, the default) on
-/// d = (1 - 1/e) n distinct in-bag samples of a bootstrap of n. The figures were calibrated against measured peaks (peak resident set, VmHWM) by the
-/// `memory` benchmark; they are an estimate, not a bound.
+/// d = (1 - 1/e) n distinct in-bag samples of a bootstrap of n. The baseline and the collector's
+/// growth were calibrated against measured peaks (peak resident set, VmHWM) by the `memory`
+/// benchmark with workstation, non-concurrent collection (the CLI's settings); the result is an
+/// estimate, not a bound. Cell states are assumed for every feature, since whether a panel has
+/// missing cells is unknown before it is read.
 /// </remarks>
 public sealed class MemoryEstimate
 {
