@@ -24,8 +24,9 @@ public static class PanelDimensionReader
         {
             return Read(options);
         }
-        catch (Exception e) when (e is PanelInputException or IOException or UnauthorizedAccessException
-                                       or InvalidDataException or ArgumentException or OverflowException or IndexOutOfRangeException)
+        // Sizing is advisory: whatever stops it, the loader reads the file next and reports the
+        // problem with its own, precise message.
+        catch (Exception e) when (e is not OutOfMemoryException and not OperationCanceledException)
         {
             return null;
         }
