@@ -12,6 +12,11 @@ public static class ExitCode
     public const int NotScreenable = 3;
     /// <summary>A result could not be written (permissions, disk full, folder not ours).</summary>
     public const int OutputError = 4;
+    /// <summary>
+    /// Refused before reading the panel: the estimated memory exceeds --memory-limit (or 90% of the
+    /// available memory); the message gives the estimate and what would lower it.
+    /// </summary>
+    public const int NotEnoughMemory = 5;
     /// <summary>A bug: the message asks the user to report it.</summary>
     public const int InternalError = 70;
     /// <summary>Stopped by Ctrl+C; nothing half-written is left.</summary>

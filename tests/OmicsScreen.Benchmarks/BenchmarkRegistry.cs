@@ -14,6 +14,11 @@ public static class BenchmarkRegistry
         cases.Add(("forest", new ForestTrainingCase("forest-4000x500", 4_000, 500)));
         cases.Add(("screen", new ScreenCase("screen-200x20000", 200, 20_000)));
         cases.Add(("screen", new ScreenCase("screen-1000x2000", 1_000, 2_000)));
+        // The runtime's own share: a panel too small to matter.
+        cases.Add(("memory-baseline", new MemoryCase("memory-60x100", 60, 100)));
+        cases.Add(("memory", new MemoryCase("memory-200x2000", 200, 2_000)));
+        cases.Add(("memory", new MemoryCase("memory-200x20000", 200, 20_000)));
+        cases.Add(("memory", new MemoryCase("memory-1000x5000", 1_000, 5_000)));
         return cases;
     }
 

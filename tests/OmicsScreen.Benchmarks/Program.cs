@@ -89,7 +89,7 @@ public static class Program
     }
 
     /// <summary>VmHWM from /proc (the true high-water mark); falls back to the runtime's figure elsewhere.</summary>
-    private static long PeakResidentBytes()
+    internal static long PeakResidentBytes()
     {
         const string status = "/proc/self/status";
         if (File.Exists(status))

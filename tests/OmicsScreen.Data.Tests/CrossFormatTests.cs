@@ -43,7 +43,7 @@ public class CrossFormatTests
     private const PanelLayout Features = PanelLayout.FeaturesInRows;
 
     /// <summary>Per encoding: file name, orientation, and the writer (panel, path, include sample attributes).</summary>
-    private static readonly Dictionary<string, (string File, PanelLayout Layout, Action<Panel, string, bool> Write)> Writers = new()
+    internal static readonly Dictionary<string, (string File, PanelLayout Layout, Action<Panel, string, bool> Write)> Writers = new()
     {
         ["csv-samples"] = ("panel.csv", Samples, (p, f, a) => DelimitedPanelWriter.Write(p, f, Samples, ',', includeSampleAttributes: a)),
         ["tsv-samples"] = ("panel.tsv", Samples, (p, f, a) => DelimitedPanelWriter.Write(p, f, Samples, '\t', includeSampleAttributes: a)),
@@ -64,7 +64,7 @@ public class CrossFormatTests
             (p, f, a) => ArrowPanelWriter.Write(p, f, Features, asStream: true, batchRows: 2, includeSampleAttributes: a)),
     };
 
-    private static (string Path, PanelLayout Layout) WriteAs(Panel panel, TempFolder folder, string encoding,
+    internal static (string Path, PanelLayout Layout) WriteAs(Panel panel, TempFolder folder, string encoding,
         bool includeSampleAttributes)
     {
         var (file, layout, write) = Writers[encoding];

@@ -168,6 +168,13 @@ public sealed class ScreenCommand : Command
         Description = "No progress display.",
     };
 
+    public Option<long?> MemoryLimit { get; } = new("--memory-limit")
+    {
+        HelpName = "SIZE",
+        Description = "Stop before loading if the estimated memory exceeds SIZE (bytes, or K, M, G, T in powers of 1024: 512M, 8G, 2.5G). Default: 90% of the available memory.",
+        CustomParser = Memory.ByteSize.ParseOption,
+    };
+
     public ScreenCommand(CliConsole console)
         : base("screen", "Screen a panel: repeated random forests on half-samples, a stability-ranked shortlist with error control, and the panel-size curve.")
     {
@@ -176,6 +183,7 @@ public sealed class ScreenCommand : Command
                      MinFrequency, MaxQ, Decoys, OutcomePermutations, RedundancyRho, CurveFolds, CurveRepeats, CurveInnerPairs,
                      MaxPanelSize, Seed, Threads, ShowSampleIds, Quiet })
             Options.Add(option);
+        Options.Add(MemoryLimit);
         SetAction(parse => CommandRunner.Run(console, () => ScreenRun.Execute(console, new ScreenRunOptions
         {
             Panel = Input.ToLoadOptions(parse),
@@ -184,6 +192,7 @@ public sealed class ScreenCommand : Command
             Resume = parse.GetValue(Resume),
             Part = parse.GetValue(Part) is { } part ? RunPart.Parse(part) : null,
             Quiet = parse.GetValue(Quiet),
+            MemoryLimit = parse.GetValue(MemoryLimit),
             ShowSampleIds = parse.GetValue(ShowSampleIds),
             CommandLine = ["omicsscreen", .. parse.Tokens.Select(t => t.Value)],
             Screen = new ScreenOptions

@@ -2,6 +2,7 @@ using System.Diagnostics;
 using System.Globalization;
 using System.Security.Cryptography;
 using OmicsScreen.Cli.Console;
+using OmicsScreen.Cli.Memory;
 using OmicsScreen.Cli.Work;
 using OmicsScreen.Data;
 using OmicsScreen.Reporting.Json;
@@ -34,6 +35,7 @@ internal static class ScreenRun
         {
             throw new CommandInputException(e.Message);
         }
+        if (!MemoryCheck.Passes(console, options)) return ExitCode.NotEnoughMemory;
         var started = DateTimeOffset.UtcNow;
         var watch = Stopwatch.StartNew();
         var loaded = PanelLoader.Load(options.Panel).EnsureScreenable();

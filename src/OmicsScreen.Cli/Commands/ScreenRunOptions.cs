@@ -19,6 +19,9 @@ public sealed record ScreenRunOptions
     public RunPart? Part { get; init; }
     public bool Quiet { get; init; }
 
+    /// <summary>Largest memory the run may plan to use, in bytes; null compares the estimate with 90% of the available memory.</summary>
+    public long? MemoryLimit { get; init; }
+
     /// <summary>Let sample identifiers into the HTML report (as chart descriptions only); off by default, since identifiers can be personal data.</summary>
     public bool ShowSampleIds { get; init; }
 

@@ -23,9 +23,7 @@ internal static class DelimitedMatrixReader
     {
         char delimiter = DelimiterDetector.Detect(path);
         using var text = DelimiterDetector.OpenText(path);
-        using var reader = Sep.New(delimiter)
-            .Reader(o => o with { HasHeader = false, Unescape = true, DisableColCountCheck = true })
-            .From(text);
+        using var reader = Open(text, delimiter);
         var source = new MatrixSource(path, MatrixFileFormat.DelimitedText, delimiter, options.Layout);
         var header = ReadHeader(reader, path);
         int rowBound = Math.Max(1, LineCounter.UpperBoundOfLines(path) - 1);
@@ -34,6 +32,19 @@ internal static class DelimitedMatrixReader
             ? ReadSamplesInRows(reader, header, slots, rowBound, source, options, ct)
             : ReadFeaturesInRows(reader, header, slots, rowBound, source, options, ct);
     }
+
+    /// <summary>The header's cells, trimmed, without reading any data row.</summary>
+    public static string[] ReadHeaderCells(string path)
+    {
+        using var text = DelimiterDetector.OpenText(path);
+        using var reader = Open(text, DelimiterDetector.Detect(path));
+        return ReadHeader(reader, path);
+    }
+
+    private static SepReader Open(TextReader text, char delimiter) =>
+        Sep.New(delimiter)
+            .Reader(o => o with { HasHeader = false, Unescape = true, DisableColCountCheck = true })
+            .From(text);
 
     private static RawMatrix ReadSamplesInRows(SepReader reader, string[] header, SlotCounter slots, int rowBound,
         MatrixSource source, PanelLoadOptions options, CancellationToken ct)

@@ -38,8 +38,7 @@ public sealed record ScreenSettings
         // Grouped sampling and class balance do not combine in the engine; subjects win, since
         // splitting a subject's replicates would flatter every estimate.
         if (panel.Subject is not null) balanced = false;
-        int decoys = options.DecoyCount >= 0 ? options.DecoyCount
-            : featureCount <= options.AutomaticDecoyFeatureLimit ? featureCount : 0;
+        int decoys = DecoyCountFor(options, featureCount);
         int tried = options.FeaturesPerSplit > 0 ? Math.Min(options.FeaturesPerSplit, featureCount)
             : Math.Max(1, (int)Math.Floor(Math.Sqrt(featureCount)));
         return new ScreenSettings
@@ -50,6 +49,14 @@ public sealed record ScreenSettings
             ClassBalanced = balanced,
             DecoyCount = decoys,
         };
+    }
+
+    /// <summary>Decoys per repeat: the number asked for, or automatically one per feature up to the feature limit and none above.</summary>
+    public static int DecoyCountFor(ScreenOptions options, int featureCount)
+    {
+        ArgumentNullException.ThrowIfNull(options);
+        return options.DecoyCount >= 0 ? options.DecoyCount
+            : featureCount <= options.AutomaticDecoyFeatureLimit ? featureCount : 0;
     }
 
     /// <summary>The engine options of every forest of this screen; seed and repeat are set per forest.</summary>
