@@ -80,11 +80,25 @@ echo "submitted parts 1-${part_count}: array job ${array_job}"
 merge_options=(--dependency="afterok:${array_job}" --kill-on-invalid-dep=yes
   --cpus-per-task="$merge_cpus" --output="${logs_dir}/merge.%j.out")
 $wait_for_merge && merge_options+=(--wait)
+wait_status=0
 merge_job=$(sbatch "${common[@]}" "${merge_options[@]}" "$here/merge.sbatch" \
-  "$part_count" "$parts_dir" "$results")
+  "$part_count" "$parts_dir" "$results") || wait_status=$?
 merge_job=${merge_job%%;*}
-if $wait_for_merge; then
-  echo "merge job ${merge_job} ended successfully -> ${results}"
-else
+if ! $wait_for_merge; then
+  [ "$wait_status" -eq 0 ] || exit "$wait_status"
   echo "submitted merge: job ${merge_job} (starts when array job ${array_job} succeeded) -> ${results}"
+  exit 0
 fi
+
+# sbatch --wait returns 0 for a job cancelled because a part failed, so ask Slurm how the merge
+# ended: scontrol while the controller still holds the job, else the accounting database.
+merge_state=$(scontrol show job -o "$merge_job" 2>/dev/null | grep -o 'JobState=[A-Z_]*' | cut -d= -f2 || true)
+if [ -z "$merge_state" ] && command -v sacct >/dev/null 2>&1; then
+  merge_state=$(sacct -n -X -P -j "$merge_job" -o State 2>/dev/null | head -n 1 | cut -d' ' -f1 || true)
+fi
+if [ "$wait_status" -ne 0 ] || [ "$merge_state" != COMPLETED ]; then
+  echo "submit.sh: merge job ${merge_job} ended as ${merge_state:-unknown} (sbatch status ${wait_status});" \
+    "see the logs in ${logs_dir}" >&2
+  exit 1
+fi
+echo "merge job ${merge_job} completed -> ${results}"
