@@ -21,18 +21,16 @@ public sealed class SlurmWorkflowTests : IDisposable
     {
         if (!OnCi) return;
         var deadline = DateTime.UtcNow + TimeBound;
-        var panel = WorkflowPanel.Write(_folder.Path);
-        string single = Path.Combine(_folder.Path, "single");
-        OmicsScreenProgram.ScreenOnce(panel, single, deadline);
+        var baseline = SingleScreenBaseline.Create(_folder.Path, deadline);
 
         string merged = Path.Combine(_folder.Path, "merged");
         var run = ChildProcess.Run("bash",
             [RepositoryFolder.Workflows("slurm", "ci_single_node.sh"), "--parts", "4", "--cpus", "1", "--merge-cpus", "2", "--mem", "1G",
-             "--out", merged, "--", .. OmicsScreenProgram.InputArguments(panel), .. OmicsScreenProgram.QuickSettings],
+             "--out", merged, "--", .. OmicsScreenProgram.InputArguments(baseline.Panel), .. OmicsScreenProgram.QuickSettings],
             _folder.Path, deadline, new Dictionary<string, string> { ["OMICSSCREEN"] = OmicsScreenProgram.AssemblyPath });
         Assert.True(run.Succeeded, run.Output + MergedResults.LogsIn(merged + ".logs"));
 
-        MergedResults.AssertSameAsSingleScreen(single, merged, 4);
+        MergedResults.AssertSameAsSingleScreen(baseline.Results, merged, 4);
     }
 
     [Fact]
@@ -41,20 +39,18 @@ public sealed class SlurmWorkflowTests : IDisposable
         if (!OnCi) return;
         Assert.True(SnakemakeTool.AvailableOrFailOnCi());
         var deadline = DateTime.UtcNow + TimeBound;
-        var panel = WorkflowPanel.Write(_folder.Path);
-        string single = Path.Combine(_folder.Path, "single");
-        OmicsScreenProgram.ScreenOnce(panel, single, deadline);
+        var baseline = SingleScreenBaseline.Create(_folder.Path, deadline);
 
         var workflow = new SnakemakeWorkflow(_folder.Path);
         string merged = Path.Combine(_folder.Path, "merged");
-        string[] snakemake = workflow.Arguments(workflow.WriteConfig(panel, merged),
+        string[] snakemake = workflow.Arguments(workflow.WriteConfig(baseline.Panel, merged),
             "--profile", RepositoryFolder.Workflows("snakemake", "profiles", "slurm"));
         var run = ChildProcess.Run("bash",
             [RepositoryFolder.Workflows("slurm", "ci_single_node.sh"), "--run", SnakemakeTool.Executable!, .. snakemake],
             _folder.Path, deadline, workflow.Environment);
         Assert.True(run.Succeeded, run.Output + MergedResults.LogsIn(merged + ".logs"));
 
-        MergedResults.AssertSameAsSingleScreen(single, merged, SnakemakeWorkflow.PartCount);
+        MergedResults.AssertSameAsSingleScreen(baseline.Results, merged, SnakemakeWorkflow.PartCount);
         // Each job went through sbatch: the profile's cluster line names Slurm's output file after the rule and job id.
         Assert.Equal(SnakemakeWorkflow.PartCount + 1, Directory.GetFiles(Path.Combine(_folder.Path, "logs", "slurm"), "*.out").Length);
     }

@@ -17,16 +17,14 @@ public sealed class WorkflowTests : IDisposable
     {
         if (!SnakemakeTool.AvailableOrFailOnCi()) return;
         var deadline = DateTime.UtcNow + TimeBound;
-        var panel = WorkflowPanel.Write(_folder.Path);
-        string single = Path.Combine(_folder.Path, "single");
-        OmicsScreenProgram.ScreenOnce(panel, single, deadline);
+        var baseline = SingleScreenBaseline.Create(_folder.Path, deadline);
 
         var workflow = new SnakemakeWorkflow(_folder.Path);
         string merged = Path.Combine(_folder.Path, "merged");
-        var run = workflow.Run(workflow.WriteConfig(panel, merged), deadline, "--cores", "2");
+        var run = workflow.Run(workflow.WriteConfig(baseline.Panel, merged), deadline, "--cores", "2");
         Assert.True(run.Succeeded, run.Output + MergedResults.LogsIn(merged + ".logs"));
 
-        MergedResults.AssertSameAsSingleScreen(single, merged, SnakemakeWorkflow.PartCount);
+        MergedResults.AssertSameAsSingleScreen(baseline.Results, merged, SnakemakeWorkflow.PartCount);
         for (int part = 1; part <= SnakemakeWorkflow.PartCount; part++)
         {
             string name = $"{part}-of-{SnakemakeWorkflow.PartCount}";
