@@ -21,7 +21,9 @@
 set -euo pipefail
 
 here=$(cd "$(dirname "${BASH_SOURCE[0]}")" && pwd)
-usage() { sed -n '2,22p' "${BASH_SOURCE[0]}" | sed 's/^# \{0,1\}//' >&2; exit 2; }
+# The help text is the comment block at the top of this file.
+help_text() { awk 'NR == 1 { next } /^#/ { sub(/^# ?/, ""); print; next } { exit }' "${BASH_SOURCE[0]}"; }
+usage() { help_text >&2; exit 2; }
 
 part_count=4
 results=results
@@ -46,7 +48,7 @@ while [ "$#" -gt 0 ]; do
     --sbatch) extra+=("${2:?--sbatch needs an argument}"); shift 2 ;;
     --wait) wait_for_merge=true; shift ;;
     --) shift; break ;;
-    -h|--help) usage ;;
+    -h|--help) help_text; exit 0 ;;
     *) echo "submit.sh: unknown option '$1' (screen options go after --)" >&2; usage ;;
   esac
 done
