@@ -1,3 +1,4 @@
+using System.Globalization;
 using System.Text;
 
 namespace OmicsScreen.Cli.Tests.Workflow;
@@ -18,7 +19,7 @@ internal static class MergedResults
         foreach (var file in singleFiles)
             Assert.True(File.ReadAllBytes(Path.Combine(single, file)).AsSpan().SequenceEqual(File.ReadAllBytes(Path.Combine(merged, file))),
                 file + " differs between the single screen and the merged parts");
-        Assert.Contains(partCount + " parts", File.ReadAllText(Path.Combine(merged, "report.html")));
+        Assert.Contains(partCount.ToString(CultureInfo.InvariantCulture) + " parts", File.ReadAllText(Path.Combine(merged, "report.html")));
     }
 
     /// <summary>The text of every log file in <paramref name="folder"/>, for a failure message.</summary>

@@ -1,3 +1,5 @@
+using System.Globalization;
+
 namespace OmicsScreen.Cli.Tests.Workflow;
 
 /// <summary>
@@ -27,7 +29,7 @@ public sealed class WorkflowTests : IDisposable
         MergedResults.AssertSameAsSingleScreen(baseline.Results, merged, SnakemakeWorkflow.PartCount);
         for (int part = 1; part <= SnakemakeWorkflow.PartCount; part++)
         {
-            string name = $"{part}-of-{SnakemakeWorkflow.PartCount}";
+            string name = string.Create(CultureInfo.InvariantCulture, $"{part}-of-{SnakemakeWorkflow.PartCount}");
             Assert.True(File.Exists(Path.Combine(merged + ".parts", name, "part.json")), "part folder " + name);
             Assert.True(File.Exists(Path.Combine(merged + ".logs", $"part-{name}.log")), "log of part " + name);
         }
@@ -45,7 +47,7 @@ public sealed class WorkflowTests : IDisposable
         // A dry run submits nothing: it proves Snakemake 7 accepts the profile and plans the jobs.
         var plan = workflow.Run(config, deadline, "--profile", RepositoryFolder.Workflows("snakemake", "profiles", "slurm"), "--dry-run");
         Assert.True(plan.Succeeded, plan.Output);
-        Assert.Matches(@"screen_part\s+" + SnakemakeWorkflow.PartCount + @"\s", plan.Output);
+        Assert.Matches(string.Create(CultureInfo.InvariantCulture, $@"screen_part\s+{SnakemakeWorkflow.PartCount}\s"), plan.Output);
         Assert.Matches(@"merge_parts\s+1\s", plan.Output);
     }
 
