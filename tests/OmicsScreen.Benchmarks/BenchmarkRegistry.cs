@@ -5,6 +5,9 @@ public static class BenchmarkRegistry
 {
     public static IReadOnlyList<(string Suite, IBenchmarkCase Case)> All { get; } = Build();
 
+    /// <summary>Summaries printed after their suite's cases have run.</summary>
+    public static IReadOnlyList<ISuiteReport> Reports { get; } = [new ScalingReport()];
+
     private static List<(string, IBenchmarkCase)> Build()
     {
         var cases = new List<(string, IBenchmarkCase)>();
@@ -14,6 +17,8 @@ public static class BenchmarkRegistry
         cases.Add(("forest", new ForestTrainingCase("forest-4000x500", 4_000, 500)));
         cases.Add(("screen", new ScreenCase("screen-200x20000", 200, 20_000)));
         cases.Add(("screen", new ScreenCase("screen-1000x2000", 1_000, 2_000)));
+        foreach (var point in ScalingPlan.Points) cases.Add(("scaling", point));
+        cases.Add(("scaling", ScalingPlan.ScreenCheck));
         return cases;
     }
 
