@@ -10,9 +10,11 @@ namespace OmicsScreen.Benchmarks;
 public sealed record ForestCostModel(ShapeCost TrainPerTree, ShapeCost PermutationPerTree, ShapeCost Binning,
     ShapeCost Shadows)
 {
-    public static ForestCostModel Fit(IReadOnlyList<ScalingPoint> samplesSeries, IReadOnlyList<ScalingPoint> featuresSeries) => new(
-        ShapeCost.Fit(samplesSeries, featuresSeries, p => p.TrainCpuSeconds / p.TreeCount),
-        ShapeCost.Fit(samplesSeries, featuresSeries, p => p.PermutationCpuSeconds / p.TreeCount),
+    /// <param name="oneOff">The per-process part taken out of every point's training and permutation time before fitting.</param>
+    public static ForestCostModel Fit(IReadOnlyList<ScalingPoint> samplesSeries, IReadOnlyList<ScalingPoint> featuresSeries,
+        OneOffCost oneOff) => new(
+        ShapeCost.Fit(samplesSeries, featuresSeries, oneOff.TrainPerTree),
+        ShapeCost.Fit(samplesSeries, featuresSeries, oneOff.PermutationPerTree),
         ShapeCost.Fit(samplesSeries, featuresSeries, p => p.BinCpuSeconds),
         ShapeCost.Fit(samplesSeries, featuresSeries, p => p.ShadowCpuSeconds));
 

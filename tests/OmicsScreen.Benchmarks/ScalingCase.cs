@@ -11,9 +11,9 @@ namespace OmicsScreen.Benchmarks;
 /// One point of a scaling series: bins a simulated panel with 10 planted markers, then grows one
 /// forest as the screen does (floor(sqrt(p)) features per split, leaves to purity, all cores)
 /// and measures its out-of-bag permutation importance and the building of one shadow column per
-/// feature. Generation, binning and a warm-up forest
-/// are not part of the training figures; the resident high-water mark is reset after them, so the peak covers
-/// the data held (raw and binned) plus what training adds.
+/// feature. Generation, binning and a warm-up forest are not part of the training figures; the
+/// resident high-water mark is reset after them, so the peak covers the data held (raw and
+/// binned) plus what training adds.
 /// </summary>
 public sealed class ScalingCase(ScalingSeries series, int sampleCount, int featureCount, int treeCount) : IBenchmarkCase
 {
@@ -24,14 +24,6 @@ public sealed class ScalingCase(ScalingSeries series, int sampleCount, int featu
     public int SampleCount => sampleCount;
     public int FeatureCount => featureCount;
     public int TreeCount => treeCount;
-
-    /// <summary>The value that varies along the series.</summary>
-    public int Variable => series switch
-    {
-        ScalingSeries.Samples => sampleCount,
-        ScalingSeries.Features => featureCount,
-        _ => treeCount,
-    };
 
     public string Name => string.Create(CultureInfo.InvariantCulture,
         $"scaling-{series.ToString().ToLowerInvariant()}-{sampleCount}x{featureCount}-t{treeCount}");
