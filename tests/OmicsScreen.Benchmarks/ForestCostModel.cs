@@ -14,7 +14,8 @@ public sealed record ForestCostModel(ShapeCost TrainPerTree, ShapeCost Permutati
     public static ForestCostModel Fit(IReadOnlyList<ScalingPoint> samplesSeries, IReadOnlyList<ScalingPoint> featuresSeries,
         OneOffCost oneOff) => new(
         ShapeCost.Fit(samplesSeries, featuresSeries, oneOff.TrainPerTree),
-        ShapeCost.Fit(samplesSeries, featuresSeries, oneOff.PermutationPerTree),
+        ShapeCost.FitFlatOverFeatures(samplesSeries, featuresSeries, oneOff.PermutationPerTree,
+            p => p.PermutationCpuSeconds / p.TreeCount),
         ShapeCost.Fit(samplesSeries, featuresSeries, p => p.BinCpuSeconds),
         ShapeCost.Fit(samplesSeries, featuresSeries, p => p.ShadowCpuSeconds));
 

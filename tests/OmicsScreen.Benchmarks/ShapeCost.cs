@@ -34,6 +34,28 @@ public sealed record ShapeCost(double Scale, double SampleExponent, double Featu
         return new ShapeCost(Math.Exp(logSum / count), sampleFit.Exponent, featureFit.Exponent, sampleFit, featureFit);
     }
 
+    /// <summary>
+    /// For a cost the features series shows flat (out-of-bag permutation importance permutes only
+    /// the features a tree splits on, so p hardly matters): exponent 0 over features, exponent and
+    /// scale from the samples series alone. The features fit is kept for display, on the raw cost.
+    /// </summary>
+    public static ShapeCost FitFlatOverFeatures(IReadOnlyList<ScalingPoint> samplesSeries,
+        IReadOnlyList<ScalingPoint> featuresSeries, Func<ScalingPoint, double> cost, Func<ScalingPoint, double> rawCost)
+    {
+        var sampleFit = FitSeries(samplesSeries, p => p.SampleCount, cost);
+        var featureFit = FitSeries(featuresSeries, p => p.FeatureCount, rawCost);
+        double logSum = 0;
+        int count = 0;
+        foreach (var point in samplesSeries)
+        {
+            double value = cost(point);
+            if (!(value > 0)) continue;
+            logSum += Math.Log(value) - sampleFit.Exponent * Math.Log(point.SampleCount);
+            count++;
+        }
+        return new ShapeCost(Math.Exp(logSum / count), sampleFit.Exponent, 0, sampleFit, featureFit);
+    }
+
     public static PowerLawFit FitSeries(IReadOnlyList<ScalingPoint> series, Func<ScalingPoint, double> variable,
         Func<ScalingPoint, double> value)
     {
