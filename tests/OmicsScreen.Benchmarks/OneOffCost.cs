@@ -1,5 +1,3 @@
-using MathNet.Numerics;
-
 namespace OmicsScreen.Benchmarks;
 
 /// <summary>

@@ -3,7 +3,6 @@ using System.Globalization;
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Screening.Importance;
-using OmicsScreen.TestSupport;
 
 namespace OmicsScreen.Benchmarks;
 
@@ -35,14 +34,7 @@ public sealed class ScalingCase(ScalingSeries series, int sampleCount, int featu
     public IReadOnlyList<string> Run(string workDirectory)
     {
         long startBytes = ProcessMemory.CurrentBytes();
-        var panel = SyntheticPanel.Generate(new SyntheticPanelSpec
-        {
-            SampleCount = sampleCount,
-            FeatureCount = featureCount,
-            InformativeCount = 10,
-            EffectSize = 1.0,
-            Seed = 42,
-        });
+        var panel = PlantedMarkerPanel.Generate(sampleCount, featureCount);
         var binClock = ProcessorClock.Start();
         var watch = Stopwatch.StartNew();
         var binned = new BinMapper().Bin(panel.Matrix);
