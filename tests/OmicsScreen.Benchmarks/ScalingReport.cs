@@ -18,6 +18,9 @@ public sealed class ScalingReport : ISuiteReport
 {
     private const double Mebibyte = 1048576.0;
 
+    /// <summary>Read when the program starts (the registry builds the reports first), so the summary shows the load before and after.</summary>
+    private readonly string _loadAtStart = LoadAverage();
+
     public string Suite => "scaling";
 
     public void Write(IReadOnlyList<BenchmarkMeasurement> measurements, TextWriter output)
@@ -33,7 +36,7 @@ public sealed class ScalingReport : ISuiteReport
         var features = Series(points, ScalingSeries.Features);
         var trees = Series(points, ScalingSeries.Trees);
         output.WriteLine();
-        output.WriteLine(Invariant($"# scaling: load average (1, 5, 15 min) at the end: {LoadAverage()}; {Environment.ProcessorCount} cores"));
+        output.WriteLine(Invariant($"# scaling: load average (1, 5, 15 min) at the start: {_loadAtStart}; at the end: {LoadAverage()}; {Environment.ProcessorCount} cores"));
         double bytesPerNode = BytesPerTreeNode(trees);
         WriteTable(points, bytesPerNode / Mebibyte, output);
         WriteFits(samples, features, trees, OneOffCost.Fit(trees), bytesPerNode / Mebibyte, output);
