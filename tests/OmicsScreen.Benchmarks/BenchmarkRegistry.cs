@@ -12,13 +12,13 @@ public static class BenchmarkRegistry
     {
         var cases = new List<(string, IBenchmarkCase)>();
         AddLoadCases(cases);
+        foreach (var point in ScalingPlan.Points) cases.Add(("scaling", point));
+        cases.Add(("scaling", ScalingPlan.ScreenCheck));
         cases.Add(("forest", new ForestTrainingCase("forest-200x20000", 200, 20_000)));
         cases.Add(("forest", new ForestTrainingCase("forest-1000x2000", 1_000, 2_000)));
         cases.Add(("forest", new ForestTrainingCase("forest-4000x500", 4_000, 500)));
         cases.Add(("screen", new ScreenCase("screen-200x20000", 200, 20_000)));
         cases.Add(("screen", new ScreenCase("screen-1000x2000", 1_000, 2_000)));
-        foreach (var point in ScalingPlan.Points) cases.Add(("scaling", point));
-        cases.Add(("scaling", ScalingPlan.ScreenCheck));
         return cases;
     }
 
