@@ -5,10 +5,15 @@ public static class BenchmarkRegistry
 {
     public static IReadOnlyList<(string Suite, IBenchmarkCase Case)> All { get; } = Build();
 
+    /// <summary>Summaries printed after their suite's cases have run.</summary>
+    public static IReadOnlyList<ISuiteReport> Reports { get; } = [new ScalingReport()];
+
     private static List<(string, IBenchmarkCase)> Build()
     {
         var cases = new List<(string, IBenchmarkCase)>();
         AddLoadCases(cases);
+        foreach (var point in ScalingPlan.Points) cases.Add(("scaling", point));
+        cases.Add(("scaling", ScalingPlan.ScreenCheck));
         cases.Add(("forest", new ForestTrainingCase("forest-200x20000", 200, 20_000)));
         cases.Add(("forest", new ForestTrainingCase("forest-1000x2000", 1_000, 2_000)));
         cases.Add(("forest", new ForestTrainingCase("forest-4000x500", 4_000, 500)));

@@ -2,7 +2,6 @@ using System.Diagnostics;
 using System.Globalization;
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
-using OmicsScreen.TestSupport;
 
 namespace OmicsScreen.Benchmarks;
 
@@ -24,14 +23,7 @@ public sealed class ForestTrainingCase(string name, int sampleCount, int feature
 
     public IReadOnlyList<string> Run(string workDirectory)
     {
-        var panel = SyntheticPanel.Generate(new SyntheticPanelSpec
-        {
-            SampleCount = sampleCount,
-            FeatureCount = featureCount,
-            InformativeCount = 10,
-            EffectSize = 1.0,
-            Seed = 42,
-        });
+        var panel = PlantedMarkerPanel.Generate(sampleCount, featureCount);
         var watch = Stopwatch.StartNew();
         var binned = new BinMapper().Bin(panel.Matrix);
         double binSeconds = watch.Elapsed.TotalSeconds;

@@ -37,23 +37,32 @@ public static class Program
         Directory.CreateDirectory(work);
         Console.WriteLine($"# machine: {Environment.ProcessorCount} cores, {Environment.OSVersion}, .NET {Environment.Version}");
         Console.WriteLine($"# median of {runs} runs, each in a fresh process; peak = peak resident set of that process");
+        var measurements = new List<BenchmarkMeasurement>();
         foreach (var (suite, c) in chosen)
         {
             c.Prepare(work);
             var seconds = new List<double>();
             long peak = 0;
             IReadOnlyList<string> extras = [];
+            var caseRuns = new List<BenchmarkRun>();
             for (int r = 0; r < runs; r++)
             {
                 var (s, p, e) = RunInChild(c.Name, work);
                 seconds.Add(s);
                 peak = Math.Max(peak, p);
                 extras = e;
+                caseRuns.Add(new BenchmarkRun(s, p, e));
             }
+            measurements.Add(new BenchmarkMeasurement(suite, c.Name, caseRuns));
             seconds.Sort();
             double median = seconds[seconds.Count / 2];
             Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
                 $"{suite,-8} {c.Name,-28} median_s={median:F3} min_s={seconds[0]:F3} peak_mb={peak / 1048576.0:F0} {string.Join(' ', extras)}"));
+        }
+        foreach (var report in BenchmarkRegistry.Reports)
+        {
+            var ofSuite = measurements.Where(m => m.Suite == report.Suite).ToList();
+            if (ofSuite.Count > 0) report.Write(ofSuite, Console.Out);
         }
         return 0;
     }
