@@ -112,15 +112,17 @@ public sealed class BinnedMatrix
     /// Shadow i is permuted by the generator of (runSeed, repeat, i, Shadow), so the same
     /// arguments always give the same shadows. Its name is the source name with a "shadow:" prefix.
     /// </remarks>
-    public BinnedMatrix WithShadowFeatures(ReadOnlySpan<int> sourceFeatures, ulong runSeed, int repeat)
+    /// <param name="threadCount">Threads that build the shadow columns; 0 means all cores. The result is the same for any count.</param>
+    public BinnedMatrix WithShadowFeatures(ReadOnlySpan<int> sourceFeatures, ulong runSeed, int repeat, int threadCount = 0)
     {
-        int total = FeatureCount + sourceFeatures.Length;
+        int original = FeatureCount;
+        int total = original + sourceFeatures.Length;
         var names = new string[total];
         var codes = new byte[total][];
         var bins = new FeatureBins[total];
         var sources = new int[total];
         var shadows = new bool[total];
-        for (int f = 0; f < FeatureCount; f++)
+        for (int f = 0; f < original; f++)
         {
             names[f] = FeatureNames[f];
             codes[f] = _codes[f];
@@ -128,19 +130,30 @@ public sealed class BinnedMatrix
             sources[f] = _sourceFeatures[f];
             shadows[f] = _isShadow[f];
         }
-        for (int i = 0; i < sourceFeatures.Length; i++)
+        var listed = sourceFeatures.ToArray();
+        // Each shadow has its own generator and its own slot, so columns are built in parallel
+        // (on a very wide panel this is most of a repeat's one-thread time) with the same result
+        // on any number of threads. Chunks of columns keep the per-task overhead small.
+        const int chunk = 256;
+        int chunkCount = (listed.Length + chunk - 1) / chunk;
+        var parallel = new ParallelOptions { MaxDegreeOfParallelism = threadCount > 0 ? threadCount : Environment.ProcessorCount };
+        Parallel.For(0, chunkCount, parallel, c =>
         {
-            int f = sourceFeatures[i];
-            int target = FeatureCount + i;
-            var permuted = (byte[])_codes[f].Clone();
-            var generator = SeedSchedule.Generator(runSeed, repeat, i, SeedPurpose.Shadow);
-            generator.Shuffle(permuted.AsSpan());
-            names[target] = "shadow:" + FeatureNames[f];
-            codes[target] = permuted;
-            bins[target] = _bins[f];
-            sources[target] = _sourceFeatures[f];
-            shadows[target] = true;
-        }
+            int end = Math.Min(listed.Length, (c + 1) * chunk);
+            for (int i = c * chunk; i < end; i++)
+            {
+                int f = listed[i];
+                int target = original + i;
+                var permuted = (byte[])_codes[f].Clone();
+                var generator = SeedSchedule.Generator(runSeed, repeat, i, SeedPurpose.Shadow);
+                generator.Shuffle(permuted.AsSpan());
+                names[target] = "shadow:" + FeatureNames[f];
+                codes[target] = permuted;
+                bins[target] = _bins[f];
+                sources[target] = _sourceFeatures[f];
+                shadows[target] = true;
+            }
+        });
         return new BinnedMatrix(names, SampleCount, codes, bins, sources, shadows);
     }
 

@@ -40,7 +40,7 @@ public static class CorrectedImpurityImportance
         foreach (int source in decoySources)
             if ((uint)source >= (uint)featureCount) throw new ArgumentException($"Decoy source {source} is out of range.");
 
-        var augmented = Augment(matrix, decoySources, options.Seed, options.Repeat);
+        var augmented = Augment(matrix, decoySources, options.Seed, options.Repeat, options.ThreadCount);
         var forest = ForestTrainer.Train(augmented, outcome, options, trainingRows);
         var decrease = ImpurityImportance.From(forest).MeanDecrease;
 
@@ -57,13 +57,13 @@ public static class CorrectedImpurityImportance
     /// are shadows made from a second seed, Derive(runSeed, repeat, 0, Shadow), so decoy i never
     /// reuses the permutation of shadow i.
     /// </summary>
-    internal static BinnedMatrix Augment(BinnedMatrix matrix, ReadOnlySpan<int> decoySources, ulong runSeed, int repeat)
+    internal static BinnedMatrix Augment(BinnedMatrix matrix, ReadOnlySpan<int> decoySources, ulong runSeed, int repeat, int threadCount = 0)
     {
         var allFeatures = new int[matrix.FeatureCount];
         for (int f = 0; f < allFeatures.Length; f++) allFeatures[f] = f;
-        var withShadows = matrix.WithShadowFeatures(allFeatures, runSeed, repeat);
+        var withShadows = matrix.WithShadowFeatures(allFeatures, runSeed, repeat, threadCount);
         if (decoySources.IsEmpty) return withShadows;
         ulong decoySeed = SeedSchedule.Derive(runSeed, repeat, 0, SeedPurpose.Shadow);
-        return withShadows.WithShadowFeatures(decoySources, decoySeed, repeat);
+        return withShadows.WithShadowFeatures(decoySources, decoySeed, repeat, threadCount);
     }
 }

@@ -91,6 +91,23 @@ public class BinMapperTests
     }
 
     [Fact]
+    public void Shadow_columns_are_the_same_whatever_the_thread_count()
+    {
+        // More columns than one building chunk (256), so several threads share the work.
+        var panel = SyntheticPanel.Generate(new SyntheticPanelSpec { SampleCount = 60, FeatureCount = 700 });
+        var binned = new BinMapper().Bin(panel.Matrix);
+        var all = Enumerable.Range(0, binned.FeatureCount).ToArray();
+        var one = binned.WithShadowFeatures(all, runSeed: 3, repeat: 2, threadCount: 1);
+        var four = binned.WithShadowFeatures(all, runSeed: 3, repeat: 2, threadCount: 4);
+        Assert.Equal(one.FeatureNames, four.FeatureNames);
+        for (int f = 0; f < one.FeatureCount; f++)
+        {
+            Assert.True(one.Codes(f).SequenceEqual(four.Codes(f)), $"column {f} differs");
+            Assert.Equal(one.SourceFeature(f), four.SourceFeature(f));
+        }
+    }
+
+    [Fact]
     public void Selecting_features_keeps_codes_bins_and_the_source_index()
     {
         var panel = SyntheticPanel.Generate(new SyntheticPanelSpec { SampleCount = 50, FeatureCount = 5 });
