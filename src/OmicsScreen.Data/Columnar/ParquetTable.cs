@@ -44,7 +44,9 @@ internal sealed class ParquetTable : IColumnarTable
         var stream = File.OpenRead(path);
         try
         {
+            ParquetLayoutCheck.EnsureFooter(path, stream);
             var reader = ParquetReader.CreateAsync(stream).GetAwaiter().GetResult();
+            ParquetLayoutCheck.EnsurePageHeaders(path, stream, reader.Metadata!);
             var fields = reader.Schema.GetDataFields();
             foreach (var field in fields)
                 if (field.IsArray || field.MaxRepetitionLevel > 0 || field.Path.ToList().Count > 1)
