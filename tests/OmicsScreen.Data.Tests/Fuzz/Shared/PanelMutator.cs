@@ -62,8 +62,7 @@ internal sealed class PanelMutator
             MutationKind.InsertBytes => InsertBytes(bytes, isText),
             MutationKind.DeleteLine => DeleteLine(bytes),
             MutationKind.DuplicateLine => DuplicateLine(bytes),
-            MutationKind.SwapDelimiterInLine => SwapDelimiter(bytes, delimiter, wholeFile: false),
-            MutationKind.SwapDelimiterInFile => SwapDelimiter(bytes, delimiter, wholeFile: true),
+            MutationKind.SwapDelimiterInLine or MutationKind.SwapDelimiterInFile => SwapDelimiter(bytes, delimiter, kind),
             MutationKind.InsertStrayQuote => InsertStrayQuote(bytes),
             MutationKind.EmptyCell => EmptyCell(bytes, delimiter),
             MutationKind.DuplicateHeaderName => DuplicateHeaderName(bytes, delimiter),
@@ -130,8 +129,9 @@ internal sealed class PanelMutator
         return Invariant($"DuplicateLine({line + 1} of {lines.Count})");
     }
 
-    private string SwapDelimiter(List<byte> bytes, byte delimiter, bool wholeFile)
+    private string SwapDelimiter(List<byte> bytes, byte delimiter, MutationKind kind)
     {
+        bool wholeFile = kind == MutationKind.SwapDelimiterInFile;
         // Mostly replace the file's own delimiter, which is what turns a CSV into a mixed file.
         byte from = _random.NextInt(4) < 3 ? delimiter : Delimiters[_random.NextInt(Delimiters.Length)];
         byte to;
@@ -151,8 +151,8 @@ internal sealed class PanelMutator
             bytes[i] = to;
             replaced++;
         }
-        string where = wholeFile ? "whole file" : Invariant($"line {line + 1}");
-        return Invariant($"SwapDelimiter({where}, {Name(from)}->{Name(to)}, {replaced} replaced)");
+        string where = wholeFile ? "" : Invariant($"line {line + 1}, ");
+        return Invariant($"{kind}({where}{Name(from)}->{Name(to)}, {replaced} replaced)");
     }
 
     private string InsertStrayQuote(List<byte> bytes)
