@@ -56,15 +56,13 @@ internal sealed class ArrowTable : IColumnarTable
                 batches.Add(batch);
             }
             var schema = reader.Schema;
-            for (int b = 0; b < batches.Count; b++) CheckShape(path, schema, batches[b], b);
+            for (int b = 0; b < batches.Count; b++) CheckShape(path, format, schema, batches[b], b);
             return new ArrowTable(path, format, schema, batches);
         }
         catch (Exception e) when (e is not PanelInputException and not OperationCanceledException)
         {
             foreach (var batch in batches) batch.Dispose();
-            throw PanelInputException.At(path, null, null,
-                $"starts like Arrow IPC ({(format == MatrixFileFormat.ArrowFile ? "file" : "stream")} format) but cannot be read: {e.Message}",
-                "The file is probably truncated or damaged; write it again (and check the copy finished).", e);
+            throw Damaged(path, format, e.Message, e);
         }
     }
 
@@ -72,23 +70,24 @@ internal sealed class ArrowTable : IColumnarTable
     /// A record batch that disagrees with the schema or with itself cannot be read column by
     /// column: the Arrow format requires one array per field, each of the batch's length.
     /// </summary>
-    private static void CheckShape(string path, Schema schema, RecordBatch batch, int batchIndex)
+    private static void CheckShape(string path, MatrixFileFormat format, Schema schema, RecordBatch batch, int batchIndex)
     {
         if (batch.Length < 0 || batch.ColumnCount != schema.FieldsList.Count)
-            throw Damaged(path, FormattableString.Invariant(
-                $"record batch {batchIndex + 1} holds {batch.ColumnCount} columns of {batch.Length} rows but the schema has {schema.FieldsList.Count} fields"));
+            throw Damaged(path, format, FormattableString.Invariant(
+                $"record batch {batchIndex + 1} holds {batch.ColumnCount} columns of {batch.Length} rows but the schema has {schema.FieldsList.Count} fields."));
         for (int c = 0; c < batch.ColumnCount; c++)
         {
             var array = batch.Column(c);
             if (array.Length != batch.Length || array.Offset < 0)
-                throw Damaged(path, FormattableString.Invariant(
-                    $"in record batch {batchIndex + 1}, column {c + 1} holds {array.Length} rows but the batch {batch.Length}"));
+                throw Damaged(path, format, FormattableString.Invariant(
+                    $"in record batch {batchIndex + 1}, column {c + 1} holds {array.Length} rows but the batch {batch.Length}."));
         }
     }
 
-    private static PanelInputException Damaged(string path, string problem) =>
-        PanelInputException.At(path, null, null, $"is a damaged Arrow IPC file: {problem}.",
-            "The file is probably truncated or damaged; write it again (and check the copy finished).");
+    private static PanelInputException Damaged(string path, MatrixFileFormat format, string problem, Exception? inner = null) =>
+        PanelInputException.At(path, null, null,
+            $"starts like Arrow IPC ({(format == MatrixFileFormat.ArrowFile ? "file" : "stream")} format) but cannot be read: {problem}",
+            "The file is probably truncated or damaged; write it again (and check the copy finished).", inner);
 
     public string?[] ReadText(int column) => Guard(column, () => ReadTextUnguarded(column));
 

@@ -89,6 +89,6 @@ internal static class ParquetLayoutCheck
     }
 
     private static PanelInputException Damaged(string path, string problem) =>
-        PanelInputException.At(path, null, null, $"starts like Parquet but is damaged: {problem}.",
+        PanelInputException.At(path, null, null, $"starts like Parquet but cannot be read: {problem}.",
             "The file is probably truncated or damaged; write it again (and check the copy finished).");
 }
