@@ -56,7 +56,16 @@ internal sealed class ArrowTable : IColumnarTable
                 batches.Add(batch);
             }
             var schema = reader.Schema;
-            for (int b = 0; b < batches.Count; b++) CheckShape(path, format, schema, batches[b], b);
+            long rows = 0;
+            for (int b = 0; b < batches.Count; b++)
+            {
+                CheckShape(path, format, schema, batches[b], b);
+                rows += batches[b].Length;
+            }
+            // A loadable table has a text id column, whose offsets take 4 bytes per row.
+            if (rows > stream.Length)
+                throw Damaged(path, format, FormattableString.Invariant(
+                    $"its record batches claim {rows} rows, more than its {stream.Length} bytes can hold."));
             return new ArrowTable(path, format, schema, batches);
         }
         catch (Exception e) when (e is not PanelInputException and not OperationCanceledException)

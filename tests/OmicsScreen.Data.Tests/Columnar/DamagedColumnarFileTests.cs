@@ -56,17 +56,36 @@ public sealed class DamagedColumnarFileTests : IDisposable
             0xD9, 0xFC, 0xFF, 0xFF, 0xFF, 0xFF, 0x07,             //     15: list of 2^31 - 1 structs
             0x00, 0x00, 0x00, 0x00,
         ];
-        string path = _folder.File("footer.parquet");
-        var file = new List<byte>("PAR1"u8.ToArray());
-        file.AddRange(metadata);
-        file.AddRange(BitConverter.GetBytes(metadata.Length));
-        file.AddRange("PAR1"u8.ToArray());
-        File.WriteAllBytes(path, [.. file]);
+        string path = WriteParquetFooterOnly("footer.parquet", metadata);
 
         var error = LoadFails(path);
 
         Assert.Contains("footer.parquet", error.Message);
         Assert.Contains("file metadata (the footer) is not well-formed", error.Message);
+    }
+
+    [Fact]
+    public void Parquet_row_group_claiming_more_rows_than_the_file_can_hold_is_refused_before_any_allocation()
+    {
+        // A schema with one text column "id" and one row group of no column chunks that claims
+        // 1,000,000,000 rows (zigzag varint 80 A8 D6 B9 07), hand-encoded as in the test above.
+        byte[] metadata =
+        [
+            0x15, 0x02,                                                     // 1: version = 1
+            0x19, 0x2C,                                                     // 2: schema, two elements:
+            0x48, 0x06, .. "schema"u8, 0x15, 0x02, 0x00,                    //   {4: name, 5: num_children = 1}
+            0x15, 0x0C, 0x25, 0x02, 0x18, 0x02, .. "id"u8, 0x25, 0x00, 0x00, //   {1: BYTE_ARRAY, 3: OPTIONAL, 4: "id", 6: UTF8}
+            0x16, 0x80, 0xA8, 0xD6, 0xB9, 0x07,                             // 3: num_rows
+            0x19, 0x1C,                                                     // 4: row_groups, one:
+            0x19, 0x0C, 0x16, 0x00, 0x16, 0x80, 0xA8, 0xD6, 0xB9, 0x07, 0x00, //   {1: no columns, 2: 0 bytes, 3: num_rows}
+            0x00,
+        ];
+        string path = WriteParquetFooterOnly("rows.parquet", metadata);
+
+        var error = LoadFails(path);
+
+        Assert.Contains("rows.parquet", error.Message);
+        Assert.Contains("row group 1 claims 1000000000 rows", error.Message);
     }
 
     [Fact]
@@ -111,6 +130,18 @@ public sealed class DamagedColumnarFileTests : IDisposable
         Assert.True(Task.WhenAny(load, Task.Delay(TimeBound)).GetAwaiter().GetResult() == load,
             $"loading {Path.GetFileName(path)} did not finish within {TimeBound.TotalSeconds:0} s");
         return Assert.IsType<PanelInputException>(load.Exception?.InnerException);
+    }
+
+    /// <summary>A Parquet file of no pages: the magic, the given file metadata, its length, the magic.</summary>
+    private string WriteParquetFooterOnly(string name, byte[] metadata)
+    {
+        string path = _folder.File(name);
+        var file = new List<byte>("PAR1"u8.ToArray());
+        file.AddRange(metadata);
+        file.AddRange(BitConverter.GetBytes(metadata.Length));
+        file.AddRange("PAR1"u8.ToArray());
+        File.WriteAllBytes(path, [.. file]);
+        return path;
     }
 
     /// <summary>Twelve samples with text ids "s01".."s12", a text outcome and one float feature.</summary>
