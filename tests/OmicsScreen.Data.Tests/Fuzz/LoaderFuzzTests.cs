@@ -1,5 +1,7 @@
+using System.Diagnostics;
 using System.Text;
 using OmicsScreen.Data.Tests.Support;
+using Xunit.Abstractions;
 
 namespace OmicsScreen.Data.Tests.Fuzz;
 
@@ -12,6 +14,9 @@ namespace OmicsScreen.Data.Tests.Fuzz;
 public sealed class LoaderFuzzTests : IDisposable
 {
     private readonly TempFolder _folder = new();
+    private readonly ITestOutputHelper _output;
+
+    public LoaderFuzzTests(ITestOutputHelper output) => _output = output;
 
     public void Dispose() => _folder.Dispose();
 
@@ -42,13 +47,16 @@ public sealed class LoaderFuzzTests : IDisposable
         ulong masterSeed = FuzzCorpus.MasterSeed;
         int caseCount = FuzzCorpus.CaseCount(FuzzCorpus.DefaultCaseCount);
         var problems = new string?[caseCount];
+        var milliseconds = new long[caseCount];
         // Cases are independent (own generator, own folder), so two run at once; problems are
         // gathered by case number, so the report does not depend on which finished first.
         Parallel.For(0, caseCount, new ParallelOptions { MaxDegreeOfParallelism = Math.Min(4, Environment.ProcessorCount) }, number =>
         {
             var fuzzCase = FuzzCorpus.Case(masterSeed, number, TextSeeds, BinarySeeds);
             string caseFolder = _folder.File(FormattableString.Invariant($"case-{number}"));
+            var clock = Stopwatch.StartNew();
             string? problem = FuzzCaseRunner.Run(fuzzCase, caseFolder);
+            milliseconds[number] = clock.ElapsedMilliseconds;
             if (problem is null)
             {
                 TryDelete(caseFolder);
@@ -57,6 +65,9 @@ public sealed class LoaderFuzzTests : IDisposable
             string kept = FuzzCaseRunner.Keep(fuzzCase);
             problems[number] = $"{fuzzCase.Describe()}{Environment.NewLine}  files kept in {kept}{Environment.NewLine}  {problem}";
         });
+        int slowest = Array.IndexOf(milliseconds, milliseconds.Max());
+        _output.WriteLine(FormattableString.Invariant(
+            $"{caseCount} cases of master seed {masterSeed}; slowest: case {slowest}, {milliseconds[slowest]} ms; mean {milliseconds.Average():0.0} ms"));
         var failures = problems.Where(p => p is not null).Select(p => p!).ToList();
         Assert.True(failures.Count == 0, Report(failures, caseCount));
     }
