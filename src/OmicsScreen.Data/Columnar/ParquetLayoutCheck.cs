@@ -19,7 +19,7 @@ internal static class ParquetLayoutCheck
     private const int MagicLength = 4;
     private const int FooterTailLength = 8;
     private const int CompressedPageSizeField = 3;
-    private const int FirstHeaderWindow = 1 << 16;
+    private const int FirstHeaderWindow = 1 << 10;
 
     public static void EnsureFooter(string path, FileStream stream)
     {
@@ -74,17 +74,20 @@ internal static class ParquetLayoutCheck
         stream.Position = 0;
     }
 
-    /// <summary>The length of the Thrift header at <paramref name="position"/>, read through a window that grows until it fits.</summary>
+    /// <summary>
+    /// The length of the Thrift header at <paramref name="position"/>, read through a window that
+    /// starts small (headers are usually tens of bytes) and doubles until the header fits.
+    /// </summary>
     private static int HeaderLength(FileStream stream, long position, long end, ref byte[] window, Span<long> integers)
     {
-        while (true)
+        for (int size = FirstHeaderWindow; ; size *= 2)
         {
-            int count = (int)Math.Min(window.Length, end - position);
+            int count = (int)Math.Min(size, end - position);
+            if (window.Length < count) window = new byte[count];
             stream.Position = position;
             stream.ReadExactly(window, 0, count);
             int length = ThriftCompactCheck.StructLength(window.AsSpan(0, count), integers);
-            if (length >= 0 || count == end - position || window.Length >= Array.MaxLength / 2) return length;
-            window = new byte[window.Length * 2];
+            if (length >= 0 || count == end - position || size >= Array.MaxLength / 2) return length;
         }
     }
 

@@ -55,12 +55,10 @@ public sealed class CheckVerbFuzzTests : IDisposable
         if (fuzzCase.Seed.CohortColumn is { } cohort) arguments.AddRange(["--cohort", cohort]);
         if (fuzzCase.Seed.Layout == Data.PanelLayout.FeaturesInRows) arguments.Add("--features-in-rows");
 
-        var check = Task.Run(() => CliHarness.Run([.. arguments]));
-        // WhenAny rather than Wait, so that a run that never ends is reported instead of awaited.
-        if (Task.WhenAny(check, Task.Delay(TimeBound)).GetAwaiter().GetResult() != check)
+        if (!BoundedCall.TryRun(() => CliHarness.Run([.. arguments]), TimeBound, out var outcome, out var error))
             return $"check did not finish within {TimeBound.TotalSeconds:0} s";
-        var outcome = check.GetAwaiter().GetResult();
-        string output = outcome.Out + outcome.Error;
+        if (error is not null) return $"check threw {error.GetType().FullName}: {error.Message}";
+        string output = outcome!.Out + outcome.Error;
         if (Array.IndexOf(AllowedExitCodes, outcome.ExitCode) < 0)
             return $"exit code {outcome.ExitCode}: {outcome.Error}";
         if (output.Contains("   at ", StringComparison.Ordinal)) return $"a stack trace was printed: {output}";

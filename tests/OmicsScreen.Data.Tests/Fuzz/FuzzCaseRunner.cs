@@ -27,15 +27,12 @@ internal static class FuzzCaseRunner
 
         using var cancel = new CancellationTokenSource();
         var options = fuzzCase.Seed.Options(matrixPath, sheetPath);
-        var load = Task.Run(() => PanelLoader.Load(options, cancel.Token).EnsureScreenable(), cancel.Token);
-        // WhenAny rather than Wait: Wait rethrows a fault, and the fault is what is judged below.
-        if (Task.WhenAny(load, Task.Delay(TimeBound)).GetAwaiter().GetResult() != load)
+        if (!BoundedCall.TryRun(() => PanelLoader.Load(options, cancel.Token).EnsureScreenable(), TimeBound, out var loaded, out var error))
         {
             cancel.Cancel();
             return $"did not finish within {TimeBound.TotalSeconds:0} s";
         }
-        if (load.IsCompletedSuccessfully) return FuzzVerdict.OfPanel(load.Result.Panel, fuzzCase);
-        var error = load.Exception!.InnerException!;
+        if (error is null) return FuzzVerdict.OfPanel(loaded!.Panel, fuzzCase);
         return error is PanelInputException refusal
             ? FuzzVerdict.OfRefusal(refusal, matrixPath, sheetPath)
             : $"threw {error.GetType().FullName}: {error.Message}{Environment.NewLine}{error.StackTrace}";
