@@ -59,13 +59,15 @@ internal static class ParquetLayoutCheck
                 long end = start + column.TotalCompressedSize;
                 if (start < MagicLength || column.TotalCompressedSize < 0 || end > dataEnd)
                     throw Damaged(path, "a column chunk lies outside the file");
-                // Invariant: the pages in [start, position) have well-formed headers and lie inside the chunk.
+                // Invariant: the pages in [start, position) have well-formed headers and lie inside
+                // the file. Only the file's end is enforced, not the chunk's: a writer that
+                // miscounts a chunk's size has written a readable file all the same.
                 for (long position = start; position < end;)
                 {
                     headerIntegers.Clear();
-                    int headerLength = HeaderLength(stream, position, end, ref window, headerIntegers);
+                    int headerLength = HeaderLength(stream, position, dataEnd, ref window, headerIntegers);
                     long pageLength = headerIntegers[CompressedPageSizeField];
-                    if (headerLength < 0 || pageLength < 0 || position + headerLength + pageLength > end)
+                    if (headerLength < 0 || pageLength < 0 || position + headerLength + pageLength > dataEnd)
                         throw Damaged(path, FormattableString.Invariant($"the page header at byte {position} is not well-formed"));
                     position += headerLength + pageLength;
                 }
