@@ -48,7 +48,6 @@ internal sealed class ParquetTable : IColumnarTable
         {
             ParquetLayoutCheck.EnsureFooter(path, stream);
             var reader = ParquetReader.CreateAsync(stream).GetAwaiter().GetResult();
-            ParquetLayoutCheck.EnsurePageHeaders(path, stream, reader.Metadata!);
             var fields = reader.Schema.GetDataFields();
             foreach (var field in fields)
                 if (field.IsArray || field.MaxRepetitionLevel > 0 || field.Path.ToList().Count > 1)

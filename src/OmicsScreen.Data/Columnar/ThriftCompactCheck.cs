@@ -25,34 +25,26 @@ internal static class ThriftCompactCheck
 
     /// <summary>
     /// The length in bytes of the struct that starts <paramref name="bytes"/>, or -1 when it is
-    /// malformed or runs past the end. Integer fields of the outer struct whose id is below the
-    /// length of <paramref name="outerIntegers"/> are stored there by id.
+    /// malformed or runs past the end.
     /// </summary>
-    public static int StructLength(ReadOnlySpan<byte> bytes, Span<long> outerIntegers)
+    public static int StructLength(ReadOnlySpan<byte> bytes)
     {
         int position = 0;
-        return SkipStruct(bytes, ref position, 0, outerIntegers) ? position : -1;
+        return SkipStruct(bytes, ref position, 0) ? position : -1;
     }
 
-    private static bool SkipStruct(ReadOnlySpan<byte> bytes, ref int position, int depth, Span<long> integers)
+    private static bool SkipStruct(ReadOnlySpan<byte> bytes, ref int position, int depth)
     {
         if (depth > MaxDepth) return false;
-        int fieldId = 0;
         // Invariant: bytes[..position] hold complete fields of this struct.
         while (position < bytes.Length)
         {
             byte header = bytes[position++];
             if (header == 0) return true;
             int type = header & 0x0F;
-            int delta = header >> 4;
-            if (delta != 0) fieldId += delta;
-            else if (TryReadVarint(bytes, ref position, out ulong id)) fieldId = (int)ZigZag(id);
-            else return false;
-            if (type is Int8 or Int16 or Int32 or Int64 && (uint)fieldId < (uint)integers.Length)
-            {
-                if (!TryReadInteger(bytes, ref position, type, out integers[fieldId])) return false;
-            }
-            else if (!SkipValue(bytes, ref position, type, depth, inCollection: false)) return false;
+            // A zero delta means the field id follows as a varint; only its length matters here.
+            if (header >> 4 == 0 && !TryReadVarint(bytes, ref position, out _)) return false;
+            if (!SkipValue(bytes, ref position, type, depth, inCollection: false)) return false;
         }
         return false;
     }
@@ -80,7 +72,7 @@ internal static class ThriftCompactCheck
             case Map:
                 return SkipMap(bytes, ref position, depth);
             case Struct:
-                return SkipStruct(bytes, ref position, depth + 1, []);
+                return SkipStruct(bytes, ref position, depth + 1);
             default:
                 return false;
         }
@@ -114,20 +106,6 @@ internal static class ThriftCompactCheck
         return true;
     }
 
-    private static bool TryReadInteger(ReadOnlySpan<byte> bytes, ref int position, int type, out long value)
-    {
-        value = 0;
-        if (type == Int8)
-        {
-            if (position >= bytes.Length) return false;
-            value = (sbyte)bytes[position++];
-            return true;
-        }
-        if (!TryReadVarint(bytes, ref position, out ulong raw)) return false;
-        value = ZigZag(raw);
-        return true;
-    }
-
     private static bool TryReadVarint(ReadOnlySpan<byte> bytes, ref int position, out ulong value)
     {
         value = 0;
@@ -139,8 +117,6 @@ internal static class ThriftCompactCheck
         }
         return false;
     }
-
-    private static long ZigZag(ulong raw) => (long)(raw >> 1) ^ -(long)(raw & 1);
 
     private static bool Advance(ReadOnlySpan<byte> bytes, ref int position, int count)
     {
