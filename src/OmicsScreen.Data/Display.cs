@@ -29,6 +29,21 @@ internal static class Display
         return builder.ToString();
     }
 
+    /// <summary>The text with each line break (and the spaces around it) replaced by one space.</summary>
+    public static string OneLine(string text)
+    {
+        if (text.AsSpan().IndexOfAny('\r', '\n') < 0) return text;
+        var builder = new StringBuilder(text.Length);
+        foreach (var line in text.AsSpan().EnumerateLines())
+        {
+            var trimmed = line.Trim();
+            if (trimmed.IsEmpty) continue;
+            if (builder.Length > 0) builder.Append(' ');
+            builder.Append(trimmed);
+        }
+        return builder.ToString();
+    }
+
     /// <summary>"'a', 'b', 'c' and 7 more" — the first few names, then a count.</summary>
     public static string List(IReadOnlyList<string> names, int shown = 5)
     {

@@ -27,6 +27,9 @@ public sealed class PanelInputException : Exception
     internal static PanelInputException At(string filePath, long? line, string? column, string problem, string fix,
         Exception? innerException = null, bool isTableRow = false)
     {
+        // A problem may quote a library's own message, which can run over several lines; the
+        // message is shown as one line, so line breaks become spaces.
+        problem = Display.OneLine(problem);
         var place = Path.GetFileName(filePath);
         if (line is { } l) place += FormattableString.Invariant($", {(isTableRow ? "row" : "line")} {l}");
         if (column is not null) place += $", column '{Display.Name(column)}'";

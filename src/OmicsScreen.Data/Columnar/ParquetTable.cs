@@ -15,6 +15,8 @@ namespace OmicsScreen.Data.Columnar;
 /// </remarks>
 internal sealed class ParquetTable : IColumnarTable
 {
+    private const long MaxRowsPerByte = 8;
+
     private readonly FileStream _stream;
     private readonly ParquetReader _reader;
     private readonly DataField[] _fields;
@@ -44,6 +46,7 @@ internal sealed class ParquetTable : IColumnarTable
         var stream = File.OpenRead(path);
         try
         {
+            ParquetLayoutCheck.EnsureFooter(path, stream);
             var reader = ParquetReader.CreateAsync(stream).GetAwaiter().GetResult();
             var fields = reader.Schema.GetDataFields();
             foreach (var field in fields)
@@ -53,7 +56,16 @@ internal sealed class ParquetTable : IColumnarTable
                         "Write one plain column per feature (or per sample) with a text id column.");
             var starts = new int[reader.RowGroupCount + 1];
             for (int g = 0; g < reader.RowGroupCount; g++)
-                starts[g + 1] = checked(starts[g] + (int)reader.RowGroups[g].RowCount);
+            {
+                long groupRows = reader.RowGroups[g].RowCount;
+                // Every row holds a distinct id (or feature name), and distinct values need at
+                // least one bit each in any encoding, so a file holds at most 8 rows per byte.
+                if (groupRows < 0 || starts[g] + groupRows > MaxRowsPerByte * stream.Length)
+                    throw PanelInputException.At(path, null, null, FormattableString.Invariant(
+                        $"starts like Parquet but cannot be read: row group {g + 1} claims {groupRows} rows, more than the file's {stream.Length} bytes can hold."),
+                        "The file is probably truncated or damaged; write it again (and check the copy finished).");
+                starts[g + 1] = checked((int)(starts[g] + groupRows));
+            }
             return new ParquetTable(path, stream, reader, fields, starts, starts[^1]);
         }
         catch (Exception e) when (e is not PanelInputException and not OperationCanceledException)

@@ -1,0 +1,52 @@
+namespace OmicsScreen.Data.Tests.Fuzz;
+
+/// <summary>
+/// Loads one fuzz case from files in its own folder on a worker, with a time bound, and judges
+/// the outcome with <see cref="FuzzVerdict"/>.
+/// </summary>
+internal static class FuzzCaseRunner
+{
+    /// <summary>
+    /// Far above the milliseconds a 30 x 12 panel takes to load, so that only a hang (or a
+    /// pathological slowdown) can reach it on a busy machine.
+    /// </summary>
+    public static readonly TimeSpan TimeBound = TimeSpan.FromSeconds(10);
+
+    /// <summary>Returns null when the case loaded soundly or was refused cleanly, otherwise what went wrong.</summary>
+    public static string? Run(FuzzCase fuzzCase, string folder)
+    {
+        Directory.CreateDirectory(folder);
+        string matrixPath = Path.Combine(folder, fuzzCase.Seed.MatrixFileName);
+        File.WriteAllBytes(matrixPath, fuzzCase.MatrixBytes);
+        string? sheetPath = null;
+        if (fuzzCase.SampleSheetBytes is { } sheet)
+        {
+            sheetPath = Path.Combine(folder, fuzzCase.Seed.SampleSheetFileName!);
+            File.WriteAllBytes(sheetPath, sheet);
+        }
+
+        using var cancel = new CancellationTokenSource();
+        var options = fuzzCase.Seed.Options(matrixPath, sheetPath);
+        if (!BoundedCall.TryRun(() => PanelLoader.Load(options, cancel.Token).EnsureScreenable(), TimeBound, out var loaded, out var error))
+        {
+            cancel.Cancel();
+            return $"did not finish within {TimeBound.TotalSeconds:0} s";
+        }
+        if (error is null) return FuzzVerdict.OfPanel(loaded!.Panel, fuzzCase);
+        return error is PanelInputException refusal
+            ? FuzzVerdict.OfRefusal(refusal, matrixPath, sheetPath)
+            : $"threw {error.GetType().FullName}: {error.Message}{Environment.NewLine}{error.StackTrace}";
+    }
+
+    /// <summary>Writes the damaged files beside the test binaries, named for the case, and returns the folder.</summary>
+    public static string Keep(FuzzCase fuzzCase)
+    {
+        string folder = Path.Combine(AppContext.BaseDirectory, "fuzz-failures");
+        Directory.CreateDirectory(folder);
+        string prefix = FormattableString.Invariant($"seed-{fuzzCase.MasterSeed}-case-{fuzzCase.Number:0000}-");
+        File.WriteAllBytes(Path.Combine(folder, prefix + fuzzCase.Seed.MatrixFileName), fuzzCase.MatrixBytes);
+        if (fuzzCase.SampleSheetBytes is { } sheet)
+            File.WriteAllBytes(Path.Combine(folder, prefix + fuzzCase.Seed.SampleSheetFileName), sheet);
+        return folder;
+    }
+}
