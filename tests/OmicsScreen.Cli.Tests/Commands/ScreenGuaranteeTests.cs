@@ -9,20 +9,11 @@ public sealed class ScreenGuaranteeTests : IDisposable
 
     public void Dispose() => _folder.Dispose();
 
-    /// <summary>Every results file except the ones that record timings and the machine.</summary>
-    private static readonly string[] Tables =
-    [
-        "shortlist.tsv", "features.tsv", "panel_size_curve.tsv", "marker_statistics.tsv",
-        "marker_statistics_by_cohort.tsv", "cohort_markers.tsv", "cohort_effects.tsv", "cohort_concordance.tsv",
-        "cohort_validation.tsv", "locked_panel.json",
-    ];
-
     [Fact]
     public void The_whole_screen_writes_byte_identical_tables_on_one_two_and_four_threads()
     {
         // Cohorts from a column of the open data, so the cohort check runs as well.
-        string sheet = _folder.File("sheet.csv", "sample_id,group\n" + string.Join("\n",
-            Enumerable.Range(1, 569).Select(i => $"S{i:D4},{(i % 3 == 0 ? "a" : i % 3 == 1 ? "b" : "c")}")) + "\n");
+        string sheet = ScreenFixtures.WdbcCohortSheet(_folder);
         var outputs = new List<string>();
         foreach (var threads in new[] { "1", "2", "4" })
         {
@@ -33,7 +24,7 @@ public sealed class ScreenGuaranteeTests : IDisposable
             Assert.True(run.ExitCode == ExitCode.Success, run.Error);
             outputs.Add(results);
         }
-        foreach (var table in Tables)
+        foreach (var table in ScreenFixtures.ComparedTables)
         {
             var first = File.ReadAllBytes(Path.Combine(outputs[0], table));
             Assert.Equal(first, File.ReadAllBytes(Path.Combine(outputs[1], table)));

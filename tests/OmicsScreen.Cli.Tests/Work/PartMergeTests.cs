@@ -13,16 +13,6 @@ public sealed class PartMergeTests : IDisposable
 
     public void Dispose() => _folder.Dispose();
 
-    private static readonly string[] Tables =
-    [
-        "shortlist.tsv", "features.tsv", "panel_size_curve.tsv", "marker_statistics.tsv",
-        "marker_statistics_by_cohort.tsv", "cohort_markers.tsv", "cohort_effects.tsv", "cohort_concordance.tsv",
-        "cohort_validation.tsv", "locked_panel.json",
-    ];
-
-    private string Sheet() => _folder.File("sheet.csv", "sample_id,group\n" + string.Join("\n",
-        Enumerable.Range(1, 569).Select(i => $"S{i:D4},{(i % 3 == 0 ? "a" : i % 3 == 1 ? "b" : "c")}")) + "\n");
-
     private static string[] ScreenArgs(string sheet, string output, params string[] extra) =>
     [
         "screen", ReferenceData.Wdbc("wdbc.csv"), "--outcome", "diagnosis", "--samples", sheet, "--cohort", "group",
@@ -45,7 +35,7 @@ public sealed class PartMergeTests : IDisposable
     [Fact]
     public void Four_parts_merged_write_the_tables_of_a_single_run_byte_for_byte()
     {
-        string sheet = Sheet();
+        string sheet = ScreenFixtures.WdbcCohortSheet(_folder);
         string single = Path.Combine(_folder.Path, "single");
         Assert.Equal(ExitCode.Success, CliHarness.Run(ScreenArgs(sheet, single)).ExitCode);
         // Parts on different thread counts, given to merge out of order.
@@ -54,7 +44,7 @@ public sealed class PartMergeTests : IDisposable
         var merge = CliHarness.Run("merge", parts[2], parts[0], parts[3], parts[1], "--out", merged, "--quiet", "--threads", "2");
         Assert.True(merge.ExitCode == ExitCode.Success, merge.Error);
         Assert.Contains("Merged 4 parts", merge.Out);
-        foreach (var table in Tables)
+        foreach (var table in ScreenFixtures.ComparedTables)
             Assert.True(File.ReadAllBytes(Path.Combine(single, table)).AsSpan().SequenceEqual(File.ReadAllBytes(Path.Combine(merged, table))),
                 $"{table} differs between the single run and the merge");
         Assert.Contains("split into 4 parts", File.ReadAllText(Path.Combine(merged, "report.html")));
@@ -68,7 +58,7 @@ public sealed class PartMergeTests : IDisposable
     [Fact]
     public void Every_unit_of_the_plan_is_in_exactly_one_part()
     {
-        string sheet = Sheet();
+        string sheet = ScreenFixtures.WdbcCohortSheet(_folder);
         var parts = RunParts(sheet, 3);
         var units = parts.SelectMany(p => Directory.GetFiles(p, "*.unit").Select(Path.GetFileName)).ToList();
         Assert.Equal(units.Count, units.Distinct().Count());
@@ -80,7 +70,7 @@ public sealed class PartMergeTests : IDisposable
     [Fact]
     public void Merge_refuses_a_missing_part_a_repeated_part_and_a_part_of_another_run()
     {
-        string sheet = Sheet();
+        string sheet = ScreenFixtures.WdbcCohortSheet(_folder);
         var parts = RunParts(sheet, 3);
         var other = RunParts(sheet, 3, "other", "--seed", "9");
         string output = Path.Combine(_folder.Path, "merged");
@@ -107,7 +97,7 @@ public sealed class PartMergeTests : IDisposable
     [Fact]
     public void Merge_refuses_a_damaged_unit_and_an_input_changed_since_the_parts_ran()
     {
-        string sheet = Sheet();
+        string sheet = ScreenFixtures.WdbcCohortSheet(_folder);
         var parts = RunParts(sheet, 2);
         string output = Path.Combine(_folder.Path, "merged");
         string unit = Directory.GetFiles(parts[1], "*.unit").Order(StringComparer.Ordinal).First();
@@ -129,7 +119,7 @@ public sealed class PartMergeTests : IDisposable
     [Fact]
     public void A_part_count_above_the_number_of_work_units_is_a_usage_error()
     {
-        string sheet = Sheet();
+        string sheet = ScreenFixtures.WdbcCohortSheet(_folder);
         var run = CliHarness.Run(ScreenArgs(sheet, Path.Combine(_folder.Path, "p"), "--part", "1/99"));
         Assert.Equal(ExitCode.Usage, run.ExitCode);
         Assert.Contains("at most 15 parts", run.Error);

@@ -13,16 +13,6 @@ public sealed class ResumeTests : IDisposable
 
     public void Dispose() => _folder.Dispose();
 
-    private static readonly string[] Tables =
-    [
-        "shortlist.tsv", "features.tsv", "panel_size_curve.tsv", "marker_statistics.tsv",
-        "marker_statistics_by_cohort.tsv", "cohort_markers.tsv", "cohort_effects.tsv", "cohort_concordance.tsv",
-        "cohort_validation.tsv", "locked_panel.json",
-    ];
-
-    private string Sheet() => _folder.File("sheet.csv", "sample_id,group\n" + string.Join("\n",
-        Enumerable.Range(1, 569).Select(i => $"S{i:D4},{(i % 3 == 0 ? "a" : i % 3 == 1 ? "b" : "c")}")) + "\n");
-
     /// <summary>The open WDBC panel with three cohorts, small settings; the same for every run of a test.</summary>
     private string[] ScreenArgs(string sheet, string results, params string[] extra) =>
     [
@@ -34,7 +24,7 @@ public sealed class ResumeTests : IDisposable
     [Fact]
     public void A_screen_killed_mid_run_resumes_to_byte_identical_tables()
     {
-        string sheet = Sheet();
+        string sheet = ScreenFixtures.WdbcCohortSheet(_folder);
         string reference = Path.Combine(_folder.Path, "uninterrupted");
         var whole = CliHarness.Run(ScreenArgs(sheet, reference));
         Assert.True(whole.ExitCode == ExitCode.Success, whole.Error);
@@ -64,7 +54,7 @@ public sealed class ResumeTests : IDisposable
         var resumed = CliHarness.Run(ScreenArgs(sheet, results, "--resume", "--threads", "1"));
         Assert.True(resumed.ExitCode == ExitCode.Success, resumed.Error);
         Assert.Matches(@"Resumed: ([3-9]|[12]\d) of \d+ work units came from the checkpoint", resumed.Out);
-        foreach (var table in Tables)
+        foreach (var table in ScreenFixtures.ComparedTables)
             Assert.True(File.ReadAllBytes(Path.Combine(reference, table)).AsSpan().SequenceEqual(File.ReadAllBytes(Path.Combine(results, table))),
                 $"{table} differs after resuming");
         Assert.False(Directory.Exists(checkpoint), "the checkpoint is removed once the results are complete");
@@ -73,7 +63,7 @@ public sealed class ResumeTests : IDisposable
     [Fact]
     public void A_checkpoint_of_other_settings_or_other_data_is_refused_with_the_reason()
     {
-        string sheet = Sheet();
+        string sheet = ScreenFixtures.WdbcCohortSheet(_folder);
         string results = Path.Combine(_folder.Path, "results");
         MakeCheckpoint(sheet, results);
 
@@ -98,7 +88,7 @@ public sealed class ResumeTests : IDisposable
     [Fact]
     public void A_damaged_checkpoint_unit_is_computed_again_and_the_tables_still_match()
     {
-        string sheet = Sheet();
+        string sheet = ScreenFixtures.WdbcCohortSheet(_folder);
         string reference = Path.Combine(_folder.Path, "reference");
         Assert.Equal(ExitCode.Success, CliHarness.Run(ScreenArgs(sheet, reference)).ExitCode);
         string results = Path.Combine(_folder.Path, "results");
@@ -111,7 +101,7 @@ public sealed class ResumeTests : IDisposable
         var resumed = CliHarness.Run(ScreenArgs(sheet, results, "--resume"));
         Assert.True(resumed.ExitCode == ExitCode.Success, resumed.Error);
         Assert.Contains("SHA-256", resumed.Error);
-        foreach (var table in Tables)
+        foreach (var table in ScreenFixtures.ComparedTables)
             Assert.Equal(File.ReadAllBytes(Path.Combine(reference, table)), File.ReadAllBytes(Path.Combine(results, table)));
     }
 

@@ -1,3 +1,5 @@
+using OmicsScreen.Data.Sizing;
+
 namespace OmicsScreen.Data.Tests.Fuzz;
 
 /// <summary>
@@ -27,12 +29,24 @@ internal static class FuzzCaseRunner
 
         using var cancel = new CancellationTokenSource();
         var options = fuzzCase.Seed.Options(matrixPath, sheetPath);
+        // The memory check sizes the file before any load: it must never throw or hang either.
+        if (!BoundedCall.TryRun(() => PanelDimensionReader.TryRead(options), TimeBound, out var dimensions, out var sizingError))
+            return $"sizing the file did not finish within {TimeBound.TotalSeconds:0} s";
+        if (sizingError is not null)
+            return $"sizing the file threw {sizingError.GetType().FullName}: {sizingError.Message}{Environment.NewLine}{sizingError.StackTrace}";
         if (!BoundedCall.TryRun(() => PanelLoader.Load(options, cancel.Token).EnsureScreenable(), TimeBound, out var loaded, out var error))
         {
             cancel.Cancel();
             return $"did not finish within {TimeBound.TotalSeconds:0} s";
         }
-        if (error is null) return FuzzVerdict.OfPanel(loaded!.Panel, fuzzCase);
+        if (error is null)
+        {
+            // Sizing gives upper bounds (blank lines and attribute rows count), never less than what loads.
+            var panel = loaded!.Panel;
+            if (dimensions is { } size && (size.SampleCount < panel.SampleCount || size.FeatureCount < panel.FeatureCount))
+                return $"sizing found {size.SampleCount} x {size.FeatureCount}, fewer than the {panel.SampleCount} x {panel.FeatureCount} loaded";
+            return FuzzVerdict.OfPanel(panel, fuzzCase);
+        }
         return error is PanelInputException refusal
             ? FuzzVerdict.OfRefusal(refusal, matrixPath, sheetPath)
             : $"threw {error.GetType().FullName}: {error.Message}{Environment.NewLine}{error.StackTrace}";
