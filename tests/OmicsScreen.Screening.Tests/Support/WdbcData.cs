@@ -4,8 +4,8 @@ using OmicsScreen.TestSupport;
 namespace OmicsScreen.Screening.Tests.Support;
 
 /// <summary>
-/// The Wisconsin breast cancer reference files parsed in double from their text (invariant culture),
-/// with the scipy/pandas per-feature statistics beside them.
+/// The Wisconsin breast cancer reference data in double precision (read by the shared test
+/// loader), with the scipy/pandas per-feature statistics beside them.
 /// </summary>
 internal sealed class WdbcData
 {
@@ -49,30 +49,14 @@ internal sealed class WdbcData
 
     private static WdbcData Load()
     {
-        var lines = File.ReadAllLines(ReferenceData.Wdbc("wdbc.csv"));
-        var header = lines[0].Split(',');
-        var featureNames = header[2..];
-        var diagnosis = new string[lines.Length - 1];
-        var columns = new double[featureNames.Length][];
-        for (int f = 0; f < featureNames.Length; f++) columns[f] = new double[lines.Length - 1];
-        for (int row = 1; row < lines.Length; row++)
-        {
-            var fields = lines[row].Split(',');
-            diagnosis[row - 1] = fields[1];
-            for (int f = 0; f < featureNames.Length; f++)
-                columns[f][row - 1] = double.Parse(fields[f + 2], NumberStyles.Float, CultureInfo.InvariantCulture);
-        }
-
-        var statLines = File.ReadAllLines(ReferenceData.Wdbc("feature_stats.csv"));
-        var statHeader = statLines[0].Split(',');
+        var (featureNames, diagnosis, columns) = TestSupport.WdbcData.LoadDoubles();
         var stats = new Dictionary<string, Dictionary<string, double>>(StringComparer.Ordinal);
-        foreach (var line in statLines.Skip(1))
+        foreach (var row in TestSupport.WdbcData.ReadTable("feature_stats.csv"))
         {
-            var fields = line.Split(',');
             var values = new Dictionary<string, double>(StringComparer.Ordinal);
-            for (int c = 1; c < fields.Length; c++)
-                values[statHeader[c]] = double.Parse(fields[c], NumberStyles.Float, CultureInfo.InvariantCulture);
-            stats[fields[0]] = values;
+            foreach (var (column, text) in row)
+                if (column != "feature") values[column] = double.Parse(text, NumberStyles.Float, CultureInfo.InvariantCulture);
+            stats[row["feature"]] = values;
         }
         return new WdbcData(featureNames, diagnosis, columns, stats);
     }
