@@ -160,7 +160,7 @@ public sealed class ScreenCommand : Command
 
     public Option<bool> ShowSampleIds { get; } = new("--show-sample-ids")
     {
-        Description = "Put sample identifiers in the report's charts (as accessible descriptions). Off by default: identifiers can be personal data.",
+        Description = "Put sample identifiers in the report's charts (chart descriptions and each point's hover title). Off by default: identifiers can be personal data.",
     };
 
     public Option<bool> Quiet { get; } = new("--quiet")

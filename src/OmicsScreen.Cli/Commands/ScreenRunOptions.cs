@@ -22,7 +22,7 @@ public sealed record ScreenRunOptions
     /// <summary>Largest memory the run may plan to use, in bytes; null compares the estimate with 90% of the available memory.</summary>
     public long? MemoryLimit { get; init; }
 
-    /// <summary>Let sample identifiers into the HTML report (as chart descriptions only); off by default, since identifiers can be personal data.</summary>
+    /// <summary>Let sample identifiers into the HTML report (chart descriptions and the hover title of each point); off by default, since identifiers can be personal data.</summary>
     public bool ShowSampleIds { get; init; }
 
     /// <summary>The command line as typed, recorded in the manifest so the run can be repeated.</summary>

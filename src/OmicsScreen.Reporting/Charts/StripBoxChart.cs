@@ -111,17 +111,20 @@ public static class StripBoxChart
 
         double stripWidth = groupWidth * 0.6;
         int pointIndex = 0;
+        var labels = group.PointLabels;
         for (int i = 0; i < group.MeasuredValues.Count; i++)
         {
             double value = group.MeasuredValues[i];
             if (!scale.CanShow(value)) continue;
-            svg.Circle(centre + Jitter(pointIndex++) * stripWidth, area.ClampedY(scale, value), 3.2, colour, ChartPalette.Black, 0.5, 0.75);
+            svg.Circle(centre + Jitter(pointIndex++) * stripWidth, area.ClampedY(scale, value), 3.2, colour, ChartPalette.Black, 0.5, 0.75,
+                labels?[i]);
         }
         if (group.BelowDetectionCount > 0)
         {
             double y = area.Y(scale, limitRow);
             for (int i = 0; i < group.BelowDetectionCount; i++)
-                svg.Circle(centre + Jitter(pointIndex++) * stripWidth, y, 3.2, "none", colour, 1.5);
+                svg.Circle(centre + Jitter(pointIndex++) * stripWidth, y, 3.2, "none", colour, 1.5,
+                    tooltip: labels?[group.MeasuredValues.Count + i]);
         }
 
         svg.Text(centre, area.Bottom + 17, ChartText.Shorten(group.Name, MaxGroupNameCharacters), TextAnchor.Middle, tooltip: group.Name);

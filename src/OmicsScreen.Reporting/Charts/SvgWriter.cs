@@ -74,9 +74,12 @@ internal sealed class SvgWriter
         _svg.Append("/>\n");
     }
 
-    /// <summary>A dot; <paramref name="fill"/> "none" gives a hollow marker.</summary>
+    /// <summary>
+    /// A dot; <paramref name="fill"/> "none" gives a hollow marker. <paramref name="tooltip"/> adds a
+    /// title child, shown on hover and read by screen readers.
+    /// </summary>
     public void Circle(double centreX, double centreY, double radius, string fill, string? stroke = null, double strokeWidth = 1,
-        double opacity = 1)
+        double opacity = 1, string? tooltip = null)
     {
         _svg.Append("<circle cx=\"");
         Number(centreX).Append("\" cy=\"");
@@ -86,7 +89,14 @@ internal sealed class SvgWriter
         _svg.Append('"');
         if (opacity < 1) Attribute("fill-opacity", opacity);
         if (stroke is not null) Stroke(stroke, strokeWidth, null);
-        _svg.Append("/>\n");
+        if (tooltip is null)
+        {
+            _svg.Append("/>\n");
+            return;
+        }
+        _svg.Append("><title>");
+        MarkupText.AppendEncoded(_svg, tooltip);
+        _svg.Append("</title></circle>\n");
     }
 
     /// <summary>An open line through the points (a polyline).</summary>

@@ -25,7 +25,8 @@ internal sealed class MarkerValues
     /// <summary>True when every measured value is above zero, so a log axis loses nothing.</summary>
     public bool AllMeasuredPositive { get; }
 
-    public static MarkerValues Of(Panel panel, int feature)
+    /// <param name="labelPoints">Label every point with its sample id and value (only when the user asked for sample ids).</param>
+    public static MarkerValues Of(Panel panel, int feature, bool labelPoints = false)
     {
         var outcome = panel.Outcome;
         var matrix = panel.Matrix;
@@ -35,6 +36,13 @@ internal sealed class MarkerValues
         var measured = new List<double>[outcome.ClassCount];
         var belowDetection = new int[outcome.ClassCount];
         for (int c = 0; c < measured.Length; c++) measured[c] = new List<double>(outcome.ClassCounts[c]);
+        var measuredLabels = labelPoints ? new List<string>[outcome.ClassCount] : null;
+        var censoredLabels = labelPoints ? new List<string>[outcome.ClassCount] : null;
+        for (int c = 0; labelPoints && c < measured.Length; c++)
+        {
+            measuredLabels![c] = [];
+            censoredLabels![c] = [];
+        }
         double limit = double.NaN;
         bool allPositive = true;
         int anyMeasured = 0;
@@ -45,17 +53,21 @@ internal sealed class MarkerValues
             if (state == CellState.BelowDetection)
             {
                 belowDetection[classes[sample]]++;
+                censoredLabels?[classes[sample]].Add(matrix.SampleIds[sample] + ": below detection");
                 // The stored value of a censored cell is its limit when the file gave one (FeatureMatrix).
                 if (double.IsFinite(value) && !(value <= limit)) limit = value;
                 continue;
             }
             if (state != CellState.Measured || !double.IsFinite(value)) continue;
             measured[classes[sample]].Add(value);
+            measuredLabels?[classes[sample]].Add(matrix.SampleIds[sample] + ": " + value.ToString("G6", System.Globalization.CultureInfo.InvariantCulture));
             anyMeasured++;
             if (value <= 0) allPositive = false;
         }
         var groups = new StripGroup[outcome.ClassCount];
-        for (int c = 0; c < groups.Length; c++) groups[c] = new StripGroup(outcome.ClassNames[c], measured[c], belowDetection[c]);
+        for (int c = 0; c < groups.Length; c++)
+            groups[c] = new StripGroup(outcome.ClassNames[c], measured[c], belowDetection[c],
+                measuredLabels is null ? null : [.. measuredLabels[c], .. censoredLabels![c]]);
         return new MarkerValues(groups, limit, allPositive && anyMeasured > 0 && !(limit <= 0));
     }
 }

@@ -15,7 +15,7 @@ namespace OmicsScreen.Reporting.Screen;
 /// charts as inline SVG, every user-provided name encoded. The page is a pure function of its
 /// <see cref="ScreenReportInput"/> (no clock, no machine name), so the same input gives the same bytes.
 /// Sample identifiers appear only when <see cref="ScreenReportInput.ShowSampleIds"/> is set, and then
-/// only inside the strip charts' accessible descriptions.
+/// only inside the strip charts' accessible descriptions and the hover titles of their points.
 /// </remarks>
 public static class ScreenReport
 {

@@ -132,7 +132,7 @@ internal static class ScreenReportCharts
 
     public static SvgImage MarkerByClass(Panel panel, FeatureSummary feature, bool showSampleIds)
     {
-        var values = MarkerValues.Of(panel, feature.FeatureIndex);
+        var values = MarkerValues.Of(panel, feature.FeatureIndex, labelPoints: showSampleIds);
         var scale = values.AllMeasuredPositive ? AxisScaleKind.Log10 : AxisScaleKind.Linear;
         string axis = scale == AxisScaleKind.Log10 ? "Value (log scale)" : "Value (linear scale)";
         string? description = showSampleIds ? DescribeWithSampleIds(panel, feature.FeatureIndex) : null;

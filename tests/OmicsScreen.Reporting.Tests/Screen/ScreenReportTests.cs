@@ -111,7 +111,7 @@ public sealed class ScreenReportTests
     }
 
     [Fact]
-    public void No_sample_id_appears_unless_asked_and_then_only_inside_chart_descriptions()
+    public void No_sample_id_appears_unless_asked_and_then_only_inside_chart_descriptions_and_point_titles()
     {
         foreach (var id in ScreenReportSample.SampleIds) Assert.DoesNotContain(id, DefaultReport.Value, StringComparison.Ordinal);
         Assert.DoesNotContain(ScreenReportSample.SampleIdPrefix, DefaultReport.Value, StringComparison.Ordinal);
@@ -123,8 +123,14 @@ public sealed class ScreenReportTests
         {
             string ownText = string.Concat(element.Nodes().OfType<XText>().Select(t => t.Value));
             if (ownText.Contains(ScreenReportSample.SampleIdPrefix, StringComparison.Ordinal))
-                Assert.Equal("desc", element.Name.LocalName);
+                Assert.True(element.Name.LocalName == "desc" || (element.Name.LocalName == "title" && element.Parent?.Name.LocalName == "circle"),
+                    $"a sample id appears in <{element.Name.LocalName}>");
         }
+        // Each point of a strip chart names its sample on hover: every sample of the panel once per chart.
+        var pointTitles = document.Descendants().Where(e => e.Name.LocalName == "title" && e.Parent?.Name.LocalName == "circle")
+            .Select(e => e.Value).ToList();
+        Assert.Contains(pointTitles, title => title.StartsWith(ScreenReportSample.SampleIds[0] + ": ", StringComparison.Ordinal));
+        Assert.DoesNotContain("</title></circle>", DefaultReport.Value, StringComparison.Ordinal);
     }
 
     [Fact]
