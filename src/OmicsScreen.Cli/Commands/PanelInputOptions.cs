@@ -114,13 +114,8 @@ public sealed class PanelInputOptions
 
     private static FeatureBlock ParseBlock(string text)
     {
-        var pieces = text.Split('/');
-        if (pieces.Length == 2
-            && int.TryParse(pieces[0], System.Globalization.NumberStyles.None, System.Globalization.CultureInfo.InvariantCulture, out int index)
-            && int.TryParse(pieces[1], System.Globalization.NumberStyles.None, System.Globalization.CultureInfo.InvariantCulture, out int count)
-            && count >= 1 && index >= 1 && index <= count)
-            return new FeatureBlock(index, count);
-        throw new CommandInputException($"--feature-block takes I/N with 1 <= I <= N (for example 2/8), not '{text}'.");
+        var (index, count) = IndexOfCount.Parse(text, "--feature-block", "2/8");
+        return new FeatureBlock(index, count);
     }
 
     /// <summary>One feature name per line, surrounding spaces trimmed; blank lines and lines starting with # are skipped.</summary>

@@ -49,4 +49,19 @@ public sealed class FeatureBlockScreenTests : IDisposable
         Assert.True(shortlist.Count(f => !planted.Contains(f)) <= 3, "shortlist: " + string.Join(", ", shortlist));
         Assert.Contains("features from a list", File.ReadAllText(Path.Combine(final, "report.html")));
     }
+
+    [Fact]
+    public void A_malformed_block_and_a_missing_feature_list_are_refused_with_the_fix()
+    {
+        string wdbc = OmicsScreen.TestSupport.ReferenceData.Wdbc("wdbc.csv");
+        var block = CliHarness.Run("check", wdbc, "--outcome", "diagnosis", "--feature-block", "0/4");
+        Assert.Equal(ExitCode.Usage, block.ExitCode);
+        Assert.Contains("--feature-block takes I/N", block.Error);
+        var list = CliHarness.Run("check", wdbc, "--outcome", "diagnosis", "--keep-features", Path.Combine(_folder.Path, "absent.txt"));
+        Assert.Equal(ExitCode.InputError, list.ExitCode);
+        Assert.Contains("does not exist", list.Error);
+        var kept = CliHarness.Run("check", wdbc, "--outcome", "diagnosis", "--feature-block", "2/3");
+        Assert.Equal(ExitCode.Success, kept.ExitCode);
+        Assert.Matches(@"features\s+10\n", kept.Out);
+    }
 }
