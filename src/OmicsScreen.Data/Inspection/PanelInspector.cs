@@ -28,6 +28,8 @@ internal static class PanelInspector
         AddClassFindings(outcome, options, findings);
         AddFeatureFindings(matrix, scan, findings);
         AddOrientationFinding(matrix, options.Layout, findings);
+        AddCaseOnlyDifferenceFinding(matrix.SampleIds, "sample ids", findings);
+        AddCaseOnlyDifferenceFinding(matrix.FeatureNames, "feature names", findings);
 
         long cellCount = (long)matrix.SampleCount * matrix.FeatureCount;
         return new PanelInspection
@@ -155,6 +157,28 @@ internal static class PanelInspector
         if (scan.BelowDetectionCells > 0)
             findings.Add(new InspectionFinding(FindingSeverity.Note, "below-detection", Invariant(
                 $"{scan.BelowDetectionCells} cells in {scan.BelowDetectionFeatures} features are below the detection limit; they are kept as censored values, not as missing.")));
+    }
+
+    /// <summary>
+    /// Names are compared exactly, so "P001" and "p001" are two samples; spreadsheets and some
+    /// instruments change case silently, so such pairs are pointed out (and kept apart).
+    /// </summary>
+    private static void AddCaseOnlyDifferenceFinding(IReadOnlyList<string> names, string what, List<InspectionFinding> findings)
+    {
+        var firstByFolded = new Dictionary<string, string>(StringComparer.OrdinalIgnoreCase);
+        var pairs = new List<string>();
+        int pairCount = 0;
+        foreach (var name in names)
+        {
+            if (!firstByFolded.TryAdd(name, name))
+            {
+                pairCount++;
+                if (pairs.Count < 3) pairs.Add($"'{Display.Name(firstByFolded[name])}' and '{Display.Name(name)}'");
+            }
+        }
+        if (pairCount == 0) return;
+        findings.Add(new InspectionFinding(FindingSeverity.Warning, "names-differ-only-by-case", Invariant(
+            $"{pairCount} {what} differ from another only by upper and lower case ({string.Join(", ", pairs)}{(pairCount > pairs.Count ? ", ..." : "")}); they are kept as different {what}. If they are the same, make them identical in the file.")));
     }
 
     private static void AddOrientationFinding(FeatureMatrix matrix, PanelLayout layout, List<InspectionFinding> findings)

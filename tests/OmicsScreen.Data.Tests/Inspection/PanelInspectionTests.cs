@@ -11,6 +11,23 @@ public sealed class PanelInspectionTests : IDisposable
     public void Dispose() => _folder.Dispose();
 
     [Fact]
+    public void Sample_ids_that_differ_only_by_case_are_kept_apart_and_pointed_out()
+    {
+        var path = _folder.File("cased.csv");
+        File.WriteAllText(path, "sample_id,status,M1,m1,M2\nP001,case,1,2,3\np001,control,2,3,4\nP002,case,3,1,5\nP003,control,4,2,6\n");
+        var loaded = PanelLoader.Load(new PanelLoadOptions { MatrixPath = path, OutcomeColumn = "status" });
+
+        Assert.Equal(4, loaded.Panel.SampleCount);
+        Assert.Equal(3, loaded.Panel.FeatureCount);
+        var findings = loaded.Inspection.Findings.Where(f => f.Code == "names-differ-only-by-case").ToList();
+        Assert.Equal(2, findings.Count);
+        Assert.Contains(findings, f => f.Message.Contains("sample ids") && f.Message.Contains("'P001' and 'p001'"));
+        Assert.Contains(findings, f => f.Message.Contains("feature names") && f.Message.Contains("'M1' and 'm1'"));
+        Assert.All(findings, f => Assert.Equal(FindingSeverity.Warning, f.Severity));
+        Assert.True(loaded.Inspection.CanScreen);
+    }
+
+    [Fact]
     public void Inspection_counts_classes_cohorts_and_the_class_by_cohort_table()
     {
         var path = _folder.File("panel.parquet");
@@ -35,6 +52,7 @@ public sealed class PanelInspectionTests : IDisposable
             inspection.MostMissingFeatures);
         Assert.Contains(inspection.Findings, f => f.Code == "small-class" && f.Message.Contains("'case'"));
         Assert.Contains(inspection.Findings, f => f.Code == "below-detection" && f.Severity == FindingSeverity.Note);
+        Assert.DoesNotContain(inspection.Findings, f => f.Code == "names-differ-only-by-case");
         Assert.True(inspection.CanScreen);
     }
 
