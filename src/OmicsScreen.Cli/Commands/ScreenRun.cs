@@ -47,15 +47,14 @@ internal static class ScreenRun
 
         var folder = ResultsFolder.Prepare(options.ResolveOutputFolder(), options.Force);
         var settings = ScreenSettings.Resolve(options.Screen, loaded.Panel);
-        var digest = PanelDigest.Compute(loaded.Panel);
-        var identity = RunIdentity.Compute(digest, options.Screen, ScreenManifest.Version());
+        var (identity, record) = RunIdentity.Of("checkpoint", loaded, options);
         var checkpoint = WorkFolder.Open(Path.Combine(folder.Path, CheckpointFolderName), CheckpointRecordName,
-            RunIdentity.Describe("checkpoint", loaded, digest, options, identity), identity, loaded.Panel.FeatureCount,
+            record, identity, loaded.Panel.FeatureCount,
             settings.DecoyCount, options.Resume, options.Force, "checkpoint",
             Path.Combine(options.ResolveOutputFolder(), CheckpointFolderName));
         var plan = WorkPlan.For(loaded.Panel, settings);
         if (options.Resume && !options.Quiet)
-            console.Error.WriteLine($"resume: {checkpoint.CountUsable(plan.Units.Select(u => u.Unit))} of {plan.Units.Count} work units are in the checkpoint.");
+            console.Error.WriteLine($"resume: {checkpoint.CountPresent(plan.Units.Select(u => u.Unit))} of {plan.Units.Count} work units are in the checkpoint.");
 
         var progress = new ProgressDisplay(console, options.Quiet);
         ScreenResult result;

@@ -26,9 +26,7 @@ internal static class MergeRun
         double loadSeconds = watch.Elapsed.TotalSeconds;
         CheckInputsUnchanged(first, loaded);
         var screen = first.ScreenOptions with { ThreadCount = options.ThreadCount };
-        var digest = PanelDigest.Compute(loaded.Panel);
-        var identity = RunIdentity.Compute(digest, screen, ScreenManifest.Version());
-        var now = RunIdentity.Describe("merge", loaded, digest, new ScreenRunOptions { Panel = first.LoadOptions, Screen = screen }, identity);
+        var (identity, now) = RunIdentity.Of("merge", loaded, new ScreenRunOptions { Panel = first.LoadOptions, Screen = screen });
         if (RunIdentity.Difference(first, now) is { } reason)
             throw new CommandInputException($"The parts cannot be merged by this program: {reason}.", ExitCode.InputError);
 

@@ -22,9 +22,8 @@ internal static class PartRun
             throw new CommandInputException(
                 $"This screen has {plan.Units.Count} work units, so it can be split into at most {plan.Units.Count} parts, not {part.Count}.");
         var units = plan.UnitsOfPart(part.Index, part.Count);
-        var digest = PanelDigest.Compute(panel);
-        var identity = RunIdentity.Compute(digest, options.Screen, ScreenManifest.Version());
-        var record = RunIdentity.Describe("part", loaded, digest, options, identity) with { Part = part.Index, Parts = part.Count };
+        var (identity, described) = RunIdentity.Of("part", loaded, options);
+        var record = described with { Part = part.Index, Parts = part.Count };
         var folder = WorkFolder.Open(shown, RecordFileName, record, identity, panel.FeatureCount, settings.DecoyCount,
             options.Resume, options.Force, "part", shown);
 

@@ -28,7 +28,15 @@ internal static class RunIdentity
     /// <summary>The options as they enter the identity: threads zeroed, since results do not depend on them.</summary>
     public static ScreenOptions Canonical(ScreenOptions options) => options with { ThreadCount = 0 };
 
-    public static byte[] Compute(byte[] panelDigest, ScreenOptions options, string softwareVersion)
+    /// <summary>The identity of a run of this program on a loaded panel, and the record that describes it.</summary>
+    public static (byte[] Identity, RunRecord Record) Of(string kind, LoadedPanel loaded, ScreenRunOptions options)
+    {
+        var digest = PanelDigest.Compute(loaded.Panel);
+        var identity = Compute(digest, options.Screen, ScreenManifest.Version());
+        return (identity, Describe(kind, loaded, digest, options, identity));
+    }
+
+    private static byte[] Compute(byte[] panelDigest, ScreenOptions options, string softwareVersion)
     {
         using var hash = IncrementalHash.CreateHash(HashAlgorithmName.SHA256);
         hash.AppendData(Encoding.UTF8.GetBytes($"omicsscreen run v{RunRecord.CurrentFormatVersion}\n{softwareVersion}\n"));
@@ -38,7 +46,7 @@ internal static class RunIdentity
     }
 
     /// <summary>A record describing this run; paths made absolute so another node can load the inputs again.</summary>
-    public static RunRecord Describe(string kind, LoadedPanel loaded, byte[] panelDigest, ScreenRunOptions options, byte[] identity)
+    private static RunRecord Describe(string kind, LoadedPanel loaded, byte[] panelDigest, ScreenRunOptions options, byte[] identity)
     {
         var load = options.Panel with
         {

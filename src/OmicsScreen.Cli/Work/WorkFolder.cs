@@ -83,14 +83,21 @@ internal sealed class WorkFolder : IWorkUnitStore
         return folder;
     }
 
-    /// <summary>Valid unit files present now (checked in full), for telling the user how much a resume saves.</summary>
-    public int CountUsable(IEnumerable<WorkUnit> units) => units.Count(u => TryLoadQuietly(u, out _));
+    /// <summary>
+    /// Unit files present now, for telling the user how much a resume may save; each is checked
+    /// in full only when the screen asks for it (an unusable one is then computed again, with a warning).
+    /// </summary>
+    public int CountPresent(IEnumerable<WorkUnit> units) => units.Count(u => File.Exists(UnitPath(u)));
 
     public bool TryLoad(WorkUnit unit, [NotNullWhen(true)] out WorkUnitResult? result)
     {
-        if (!TryLoadQuietly(unit, out result, out var problem))
+        result = null;
+        string file = UnitPath(unit);
+        if (!File.Exists(file)) return false;
+        result = WorkUnitCodec.Decode(File.ReadAllBytes(file), _identity, unit, _featureCount, _decoyCount, out var problem);
+        if (result is null)
         {
-            if (problem is not null) Discarded.Add($"{unit.Name}{UnitExtension} {problem}");
+            Discarded.Add($"{unit.Name}{UnitExtension} {problem}");
             return false;
         }
         ReusedCount++;
@@ -150,19 +157,6 @@ internal sealed class WorkFolder : IWorkUnitStore
     }
 
     internal string UnitPath(WorkUnit unit) => System.IO.Path.Combine(Path, unit.Name + UnitExtension);
-
-    private bool TryLoadQuietly(WorkUnit unit, [NotNullWhen(true)] out WorkUnitResult? result) =>
-        TryLoadQuietly(unit, out result, out _);
-
-    private bool TryLoadQuietly(WorkUnit unit, [NotNullWhen(true)] out WorkUnitResult? result, out string? problem)
-    {
-        result = null;
-        problem = null;
-        string file = UnitPath(unit);
-        if (!File.Exists(file)) return false;
-        result = WorkUnitCodec.Decode(File.ReadAllBytes(file), _identity, unit, _featureCount, _decoyCount, out problem);
-        return result is not null;
-    }
 
     private static void DeleteUnits(string folder)
     {

@@ -42,7 +42,7 @@ internal static class CohortAnalysis
         var levels = cohort.SampleLevels.ToArray();
         var rowsOf = RowsOfCohorts(panel);
         var screenable = ScreenableCohorts(panel, rowsOf);
-        var heldOutCohorts = HeldOutCohorts(panel, rowsOf);
+        var heldOutCohorts = HeldOutCohorts(panel, screenable);
         int steps = screenable.Length + heldOutCohorts.Length + 1, done = 0;
 
         // Each cohort's own screen.
@@ -117,8 +117,8 @@ internal static class CohortAnalysis
         Enumerable.Range(0, rowsOf.Length).Where(c => HasEnoughOfEachClass(rowsOf[c], panel.Outcome)).ToArray();
 
     /// <summary>Screenable cohorts whose complement also has enough of every class to be screened and scored on them.</summary>
-    internal static int[] HeldOutCohorts(Panel panel, int[][] rowsOf) =>
-        ScreenableCohorts(panel, rowsOf).Where(c => HasEnoughOfEachClass(TrainingRowsWithout(panel, c), panel.Outcome)).ToArray();
+    internal static int[] HeldOutCohorts(Panel panel, int[] screenable) =>
+        screenable.Where(c => HasEnoughOfEachClass(TrainingRowsWithout(panel, c), panel.Outcome)).ToArray();
 
     /// <summary>All samples outside cohort <paramref name="held"/>.</summary>
     internal static int[] TrainingRowsWithout(Panel panel, int held)

@@ -277,7 +277,6 @@ internal sealed class OutOfBagTreeScorer
     private struct PathFeatureEnumerator(OutOfBagTreeScorer scorer, DecisionTree tree, int row, int stamp)
     {
         private int _node;
-        private bool _started;
 
         public readonly PathFeatureEnumerator GetEnumerator() => this;
 
@@ -286,26 +285,16 @@ internal sealed class OutOfBagTreeScorer
         public bool MoveNext()
         {
             var features = tree.Features;
-            if (_started)
-            {
-                // Step from the node last yielded (or passed) towards the leaf.
-                int feature = features[_node];
-                byte code = scorer._matrix.Codes(feature)[row];
-                _node = tree.GoesLeft(_node, code) ? tree.LeftChildren[_node] : tree.RightChildren[_node];
-            }
-            _started = true;
             while (features[_node] >= 0)
             {
-                int local = scorer._localOfFeature[features[_node]];
-                if (scorer._rowStamp[local] != stamp)
-                {
-                    scorer._rowStamp[local] = stamp;
-                    Current = local;
-                    return true;
-                }
                 int feature = features[_node];
+                int local = scorer._localOfFeature[feature];
                 byte code = scorer._matrix.Codes(feature)[row];
                 _node = tree.GoesLeft(_node, code) ? tree.LeftChildren[_node] : tree.RightChildren[_node];
+                if (scorer._rowStamp[local] == stamp) continue;
+                scorer._rowStamp[local] = stamp;
+                Current = local;
+                return true;
             }
             return false;
         }

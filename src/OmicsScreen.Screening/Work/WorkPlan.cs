@@ -30,9 +30,10 @@ public sealed class WorkPlan
         if (panel.Cohort is { LevelCount: >= 2 })
         {
             var rows = CohortAnalysis.RowsOfCohorts(panel);
-            foreach (int c in CohortAnalysis.ScreenableCohorts(panel, rows))
+            var screenable = CohortAnalysis.ScreenableCohorts(panel, rows);
+            foreach (int c in screenable)
                 units.Add(new(new WorkUnit(WorkUnitKind.CohortScreen, c), innerForests * rows[c].Length / 2.0));
-            foreach (int c in CohortAnalysis.HeldOutCohorts(panel, rows))
+            foreach (int c in CohortAnalysis.HeldOutCohorts(panel, screenable))
                 units.Add(new(new WorkUnit(WorkUnitKind.HeldOutScreen, c), innerForests * (sampleCount - rows[c].Length) / 2.0));
         }
         return new WorkPlan(units);

@@ -31,15 +31,7 @@ public sealed class ResumeTests : IDisposable
 
         string results = Path.Combine(_folder.Path, "killed");
         string checkpoint = Path.Combine(results, "checkpoint");
-        using (var child = ChildProcess.Start(ScreenArgs(sheet, results)))
-        {
-            // Kill (SIGKILL on Linux: no handler runs) once a few units are on disk, long before the end.
-            var clock = Stopwatch.StartNew();
-            while (UnitCount(checkpoint) < 3 && !child.HasExited && clock.Elapsed < TimeSpan.FromMinutes(3)) Thread.Sleep(5);
-            Assert.False(child.HasExited, "The screen finished before it could be killed; the test needs a longer run.");
-            child.Kill(entireProcessTree: true);
-            child.WaitForExit();
-        }
+        KillOnceUnitsAreWritten(sheet, results, 3);
         int kept = UnitCount(checkpoint);
         Assert.InRange(kept, 3, 25);
         Assert.False(File.Exists(Path.Combine(results, "manifest.json")));
@@ -106,13 +98,19 @@ public sealed class ResumeTests : IDisposable
     }
 
     /// <summary>A checkpoint as a killed run leaves it: the part of this run's work, stored, and no results.</summary>
-    private void MakeCheckpoint(string sheet, string results)
+    private void MakeCheckpoint(string sheet, string results) => KillOnceUnitsAreWritten(sheet, results, 2);
+
+    /// <summary>
+    /// Runs the screen as a process of its own and kills it (SIGKILL on Linux: no handler runs)
+    /// once <paramref name="units"/> units are on disk, long before the end.
+    /// </summary>
+    private void KillOnceUnitsAreWritten(string sheet, string results, int units)
     {
         using var child = ChildProcess.Start(ScreenArgs(sheet, results));
         var clock = Stopwatch.StartNew();
         string checkpoint = Path.Combine(results, "checkpoint");
-        while (UnitCount(checkpoint) < 2 && !child.HasExited && clock.Elapsed < TimeSpan.FromMinutes(3)) Thread.Sleep(5);
-        Assert.False(child.HasExited, "The screen finished before it could be killed.");
+        while (UnitCount(checkpoint) < units && !child.HasExited && clock.Elapsed < TimeSpan.FromMinutes(3)) Thread.Sleep(5);
+        Assert.False(child.HasExited, "The screen finished before it could be killed; the test needs a longer run.");
         child.Kill(entireProcessTree: true);
         child.WaitForExit();
     }
