@@ -9,7 +9,7 @@ namespace OmicsScreen.Benchmarks;
 /// <summary>
 /// One point of a scaling series: bins a simulated panel with 10 planted markers, then grows one
 /// forest as the screen does (floor(sqrt(p)) features per split, leaves to purity, all cores)
-/// and measures its out-of-bag permutation importance and the building of one shadow column per
+/// and measures its out-of-bag permutation importance and the building of one permuted-copy column per
 /// feature. Generation, binning and a warm-up forest are not part of the training figures; the
 /// resident high-water mark is reset after them, so the peak covers the data held (raw and
 /// binned) plus what training adds.
@@ -65,12 +65,12 @@ public sealed class ScalingCase(ScalingSeries series, int sampleCount, int featu
         double permutationCpuSeconds = processor.Lap();
         GC.KeepAlive(permutation);
 
-        // The corrected-importance forest of every repeat first copies and shuffles one shadow
+        // The corrected-importance forest of every repeat first copies and shuffles one permuted copy
         // column per feature, on one thread.
         watch.Restart();
         var augmented = CorrectedImpurityImportance.Augment(binned, [], options.Seed, 0);
-        double shadowSeconds = watch.Elapsed.TotalSeconds;
-        double shadowCpuSeconds = processor.Lap();
+        double copySeconds = watch.Elapsed.TotalSeconds;
+        double copyCpuSeconds = processor.Lap();
         GC.KeepAlive(augmented);
         GC.KeepAlive(panel);
 
@@ -83,8 +83,8 @@ public sealed class ScalingCase(ScalingSeries series, int sampleCount, int featu
             F("train_cpu_s", trainCpuSeconds, "F3"),
             F("perm_s", permutationSeconds, "F3"),
             F("perm_cpu_s", permutationCpuSeconds, "F3"),
-            F("shadow_s", shadowSeconds, "F3"),
-            F("shadow_cpu_s", shadowCpuSeconds, "F3"),
+            F("copy_s", copySeconds, "F3"),
+            F("copy_cpu_s", copyCpuSeconds, "F3"),
             F("bin_s", binSeconds, "F3"),
             F("bin_cpu_s", binCpuSeconds, "F3"),
             F("train_peak_mb", trainPeakBytes / Megabyte, "F1"),

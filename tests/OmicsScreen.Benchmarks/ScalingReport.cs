@@ -63,11 +63,11 @@ public sealed class ScalingReport : ISuiteReport
     private static void WriteTable(List<ScalingPoint> points, double megabytesPerNode, TextWriter output)
     {
         output.WriteLine("# per point, medians of the runs; @500 = scaled to 500 trees (time linearly; memory by the stored trees' measured size)");
-        output.WriteLine("| series | samples | features | trees | train s | train cpu s | train s @500 | train cpu s @500 | perm cpu s @500 | shadow cpu s | bin cpu s | peak MiB | peak MiB @500 | data MiB | nodes/tree |");
+        output.WriteLine("| series | samples | features | trees | train s | train cpu s | train s @500 | train cpu s @500 | perm cpu s @500 | permuted-copy cpu s | bin cpu s | peak MiB | peak MiB @500 | data MiB | nodes/tree |");
         output.WriteLine("|---|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|");
         foreach (var p in points)
             output.WriteLine(Invariant(
-                $"| {p.Case.Series.ToString().ToLowerInvariant()} | {p.SampleCount} | {p.FeatureCount} | {p.TreeCount} | {p.TrainSeconds:F2} | {p.TrainCpuSeconds:F2} | {p.AtScreenTrees(p.TrainSeconds):F2} | {p.AtScreenTrees(p.TrainCpuSeconds):F2} | {p.AtScreenTrees(p.PermutationCpuSeconds):F2} | {p.ShadowCpuSeconds:F3} | {p.BinCpuSeconds:F2} | {p.PeakMegabytes:F0} | {p.PeakAtScreenTrees(megabytesPerNode):F0} | {p.DataMegabytes:F0} | {p.MeanNodes:F0} |"));
+                $"| {p.Case.Series.ToString().ToLowerInvariant()} | {p.SampleCount} | {p.FeatureCount} | {p.TreeCount} | {p.TrainSeconds:F2} | {p.TrainCpuSeconds:F2} | {p.AtScreenTrees(p.TrainSeconds):F2} | {p.AtScreenTrees(p.TrainCpuSeconds):F2} | {p.AtScreenTrees(p.PermutationCpuSeconds):F2} | {p.CopyCpuSeconds:F3} | {p.BinCpuSeconds:F2} | {p.PeakMegabytes:F0} | {p.PeakAtScreenTrees(megabytesPerNode):F0} | {p.DataMegabytes:F0} | {p.MeanNodes:F0} |"));
     }
 
     private static void WriteFits(List<ScalingPoint> samples, List<ScalingPoint> features, List<ScalingPoint> trees,
@@ -93,7 +93,7 @@ public sealed class ScalingReport : ISuiteReport
             if (ReferenceEquals(series, samples))
                 Row(output, label, "permutation cpu s per tree, one-off part out", ShapeCost.FitSeries(series, variable, oneOff.PermutationPerTree));
             Row(output, label, "binning cpu s", ShapeCost.FitSeries(series, variable, p => p.BinCpuSeconds));
-            Row(output, label, "shadow columns cpu s", ShapeCost.FitSeries(series, variable, p => p.ShadowCpuSeconds));
+            Row(output, label, "permuted-copy columns cpu s", ShapeCost.FitSeries(series, variable, p => p.CopyCpuSeconds));
             Row(output, label, "peak MiB (as grown)", ShapeCost.FitSeries(series, variable, p => p.PeakMegabytes));
             if (!double.IsNaN(megabytesPerNode))
             {
@@ -126,7 +126,7 @@ public sealed class ScalingReport : ISuiteReport
         WriteShape(output, "train", cost.TrainPerTree, "trees *");
         WriteShape(output, "out-of-bag permutation importance (flat over p, so p^0)", cost.PermutationPerTree, "trees *");
         WriteShape(output, "binning", cost.Binning, "");
-        WriteShape(output, "shadow columns (one thread)", cost.Shadows, "");
+        WriteShape(output, "permuted-copy columns (one thread)", cost.PermutedCopies, "");
         foreach (var p in trees)
         {
             double predicted = oneOff.TrainCpuSeconds + cost.Train(p.TreeCount, p.SampleCount, p.FeatureCount);
@@ -177,7 +177,7 @@ public sealed class ScalingReport : ISuiteReport
         return withoutRuntime with { RuntimeBytes = residuals[residuals.Length / 2] };
     }
 
-    /// <summary>What the memory model says one scaling point holds at its peak: one forest, no shadows.</summary>
+    /// <summary>What the memory model says one scaling point holds at its peak: one forest, no permuted copies.</summary>
     private static double PointBytes(ScreenMemoryModel memory, ScalingPoint point) =>
         memory.RuntimeBytes + memory.DataBytes(point.SampleCount, point.FeatureCount)
         + point.TreeCount * point.MeanNodes * memory.BytesPerTreeNode

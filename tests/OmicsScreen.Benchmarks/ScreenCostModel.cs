@@ -11,13 +11,13 @@ namespace OmicsScreen.Benchmarks;
 /// reference forest: all n rows, p columns.
 /// each of 2 x pairs repeats: a forest on the half (n/2 rows, p columns) with its out-of-bag
 /// permutation importance, and the corrected-importance forest on the same half with p real
-/// columns, p shadows and d decoys (d = p up to the automatic decoy limit, else 0), trying
+/// columns, p permuted copies and d decoys (d = p up to the automatic decoy limit, else 0), trying
 /// floor(sqrt(2p + d)) per split.
 /// each of folds x fold repeats outer folds (m = n (folds - 1) / folds training rows): an inner
 /// screen of 2 x inner pairs repeats like the above on m/2 rows without decoys, then for every
-/// panel size k on the grid two forests (honest and optimistic order) on m rows and k columns.
+/// panel size k on the grid two forests (selection-aware and optimistic order) on m rows and k columns.
 /// Binning and the univariate statistics run once per node; they are priced separately. Each
-/// corrected-importance forest first builds its shadow (and decoy) columns on one thread.
+/// corrected-importance forest first builds its permuted copy (and decoy) columns on one thread.
 /// </remarks>
 public static class ScreenCostModel
 {
@@ -32,8 +32,8 @@ public static class ScreenCostModel
         };
         double half = sampleCount / 2.0;
         double repeatCost = RepeatCost(cost, trees, half, featureCount, decoys);
-        // Shadows and decoys are copied over all n rows of the matrix, whatever rows the forest uses.
-        double repeatSerial = cost.Shadows.At(sampleCount, featureCount + (double)decoys);
+        // Permuted copies and decoys are copied over all n rows of the matrix, whatever rows the forest uses.
+        double repeatSerial = cost.PermutedCopies.At(sampleCount, featureCount + (double)decoys);
         for (int r = 0; r < 2 * options.HalfSamplePairs; r++) units.Add(new("repeat", 2, repeatCost, repeatSerial));
 
         if (options.CurveFolds > 0)
@@ -44,7 +44,7 @@ public static class ScreenCostModel
             var sizes = PanelSizeEstimator.SizeGrid(Math.Min(options.CurveMaxPanelSize, featureCount));
             foreach (int size in sizes) foldCost += 2 * cost.Train(trees, foldRows, size);
             int foldForests = 2 * innerRepeats + 2 * sizes.Length;
-            double foldSerial = innerRepeats * cost.Shadows.At(sampleCount, featureCount);
+            double foldSerial = innerRepeats * cost.PermutedCopies.At(sampleCount, featureCount);
             for (int f = 0; f < options.CurveFolds * options.CurveFoldRepeats; f++)
                 units.Add(new("curve fold", foldForests, foldCost, foldSerial));
         }

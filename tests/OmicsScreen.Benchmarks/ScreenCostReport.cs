@@ -11,7 +11,7 @@ namespace OmicsScreen.Benchmarks;
 /// <remarks>
 /// A node is assumed to turn core-seconds into wall seconds at its core count (trees are handed
 /// to threads one at a time, 500 per forest, so 32 threads stay busy), plus the one-thread
-/// seconds of building shadow columns; binning and univariate statistics run on every node,
+/// seconds of building permuted-copy columns; binning and univariate statistics run on every node,
 /// since every part needs the whole binned matrix.
 /// The univariate stage is not in the forest model: its core-seconds are taken from the check
 /// screen and scaled by n x p (one rank test per feature; the n log n of sorting is ignored).
@@ -73,7 +73,7 @@ public static class ScreenCostReport
         output.WriteLine(Invariant(
             $"#   parallel core-s: reference {Sum(units, "reference", u => u.CoreSeconds):E2}, repeats {Sum(units, "repeat", u => u.CoreSeconds):E2} (of which permutation importance {PermutationShare(cost, options, samples, features):P0}), curve {Sum(units, "curve fold", u => u.CoreSeconds):E2}, binning + univariate {shared:E2}"));
         output.WriteLine(Invariant(
-            $"#   one-thread s (shadow columns): repeats {Sum(units, "repeat", u => u.SerialSeconds):E2}, curve {Sum(units, "curve fold", u => u.SerialSeconds):E2}"));
+            $"#   one-thread s (permuted-copy columns): repeats {Sum(units, "repeat", u => u.SerialSeconds):E2}, curve {Sum(units, "curve fold", u => u.SerialSeconds):E2}"));
         output.WriteLine(Invariant(
             $"#   one {NodeCores}-core node: ({shared:E2} + {parallel:E2}) / {NodeCores} + {serial:E2} = {Hours(oneNode)}; x {checkRatio:F2} (check ratio) = {Hours(oneNode * checkRatio)}"));
         output.WriteLine(Invariant(

@@ -7,7 +7,7 @@ namespace OmicsScreen.Benchmarks;
 /// <remarks>
 /// Held throughout: the raw float32 matrix (4 n p bytes), the binned codes (n p bytes), each
 /// feature's bin upper bounds (4 bytes per value bin, at most min(n, 254) bins) and a fixed cost per
-/// feature (names, array headers, bin objects). During a repeat: the shadow and decoy codes of the
+/// feature (names, array headers, bin objects). During a repeat: the permuted-copy and decoy codes of the
 /// corrected forest (n bytes per added column, plus the per-feature cost), and up to two grown
 /// forests on the half; the reference forest on all rows is kept to the end. Per thread: the
 /// tree builder's buffers, 4 bytes per column and about 36 bytes per row.
@@ -35,7 +35,7 @@ public sealed record ScreenMemoryModel(double RuntimeBytes, double BytesPerFeatu
             new("raw float32 matrix", 4.0 * samples * features),
             new("binned codes", (double)samples * features),
             new("bin bounds and per-feature cost", features * (4 * Math.Min(samples, 254) + BytesPerFeature)),
-            new("shadow and decoy codes", added * (samples + BytesPerFeature)),
+            new("permuted-copy and decoy codes", added * (samples + BytesPerFeature)),
             new("reference forest (all rows)", trees * PureTreeNodes(samples) * BytesPerTreeNode),
             new("two forests on a half", 2.0 * trees * PureTreeNodes(half) * BytesPerTreeNode),
             new("thread buffers", threads * (4 * (features + added) + 36.0 * samples)),

@@ -5,7 +5,7 @@ namespace OmicsScreen.Benchmarks;
 /// reference forest, one half-sample repeat, or one outer fold of the panel-size curve.
 /// </summary>
 /// <param name="CoreSeconds">Work spread over all cores.</param>
-/// <param name="SerialSeconds">Work on one thread (building shadow columns), which more cores do not shorten.</param>
+/// <param name="SerialSeconds">Work on one thread (building permuted-copy columns), which more cores do not shorten.</param>
 public sealed record ScreenWorkUnit(string Stage, int ForestCount, double CoreSeconds, double SerialSeconds)
 {
     public double WallSeconds(int cores) => CoreSeconds / cores + SerialSeconds;

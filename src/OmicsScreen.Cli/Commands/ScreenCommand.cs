@@ -7,7 +7,7 @@ namespace OmicsScreen.Cli.Commands;
 
 /// <summary>
 /// `omicsscreen screen`: the main job. Repeated half-sample forests, corrected and permutation
-/// importance, a stability-ranked shortlist with error control, and the honest panel-size curve.
+/// importance, a stability-ranked shortlist with error control, and the selection-aware panel-size curve.
 /// </summary>
 public sealed class ScreenCommand : Command
 {

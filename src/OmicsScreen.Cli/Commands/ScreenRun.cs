@@ -42,7 +42,7 @@ internal static class ScreenRun
         double loadSeconds = watch.Elapsed.TotalSeconds;
         if (options.Panel.KeepFeatures is not null)
             console.Error.WriteLine("note: only the features of the --keep-features list were read. If the list was chosen on these same samples "
-                + "(a first-stage screen), q-values and the honest panel-size curve do not account for that choice: confirm in independent samples.");
+                + "(a first-stage screen), q-values and the selection-aware panel-size curve do not account for that choice: confirm in independent samples.");
         if (options.Part is { } part) return PartRun.Execute(console, options, loaded, part);
 
         var folder = ResultsFolder.Prepare(options.ResolveOutputFolder(), options.Force);
@@ -126,7 +126,7 @@ internal static class ScreenRun
         if (panel.FeatureBlock is { } block) text += $"; feature block {block} only";
         if (panel.KeepFeatures is { } keep)
             text += $"; only {keep.Count} features from a list (when the list was chosen on these samples, "
-                + "the q-values and the honest curve do not account for that choice)";
+                + "the q-values and the selection-aware curve do not account for that choice)";
         return text;
     }
 
@@ -174,7 +174,7 @@ internal static class ScreenRun
         {
             var point = curve.Points.First(p => p.PanelSize == curve.RecommendedSize);
             output.WriteLine(FormattableString.Invariant(
-                $"Recommended panel size: {curve.RecommendedSize} markers, honest {curve.Metric} {point.HonestAuc:0.000} +- {point.HonestAucStandardError:0.000} ({curve.FoldCount}-fold, selection inside each fold); optimistic {point.OptimisticAuc:0.000} if selection re-uses the samples."));
+                $"Recommended panel size: {curve.RecommendedSize} markers, selection-aware {curve.Metric} {point.SelectionAwareAuc:0.000} +- {point.SelectionAwareAucStandardError:0.000} ({curve.FoldCount}-fold, selection inside each fold); optimistic {point.OptimisticAuc:0.000} if selection re-uses the samples."));
         }
         if (result.Cohorts is { } cohorts) CohortOutput.PrintSummary(output, result, cohorts);
         output.WriteLine();

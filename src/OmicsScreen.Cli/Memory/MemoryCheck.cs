@@ -146,7 +146,7 @@ internal static class MemoryCheck
         MemoryComponent.FeatureTables => "per-feature result tables",
         MemoryComponent.ReferenceForest => "forest on all samples",
         MemoryComponent.RepeatForests => "a repeat's two forests",
-        MemoryComponent.ShadowAndDecoyColumns => "shadow and decoy columns",
+        MemoryComponent.PermutedCopyAndDecoyColumns => "permuted-copy and decoy columns",
         MemoryComponent.TreesInFlight => "trees being grown (per thread)",
         MemoryComponent.RepeatImportances => "repeat matrices",
         MemoryComponent.PanelSizeCurve => "panel-size curve",

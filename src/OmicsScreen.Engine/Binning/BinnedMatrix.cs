@@ -12,7 +12,7 @@ namespace OmicsScreen.Engine.Binning;
 /// </summary>
 /// <remarks>
 /// Columns are shared, never copied, between a matrix and the matrices derived from it
-/// (<see cref="SelectFeatures"/>, <see cref="WithShadowFeatures"/>), so screening can build many
+/// (<see cref="SelectFeatures"/>, <see cref="WithPermutedCopies"/>), so screening can build many
 /// views of one panel cheaply. <see cref="SourceFeature"/> maps each column back to the feature
 /// of the matrix originally binned.
 /// </remarks>
@@ -21,18 +21,18 @@ public sealed class BinnedMatrix
     private readonly byte[][] _codes;
     private readonly FeatureBins[] _bins;
     private readonly int[] _sourceFeatures;
-    private readonly bool[] _isShadow;
+    private readonly bool[] _isPermutedCopy;
     private readonly int[] _valueBinCounts;
 
     internal BinnedMatrix(IReadOnlyList<string> featureNames, int sampleCount, byte[][] codes,
-        FeatureBins[] bins, int[] sourceFeatures, bool[] isShadow)
+        FeatureBins[] bins, int[] sourceFeatures, bool[] isPermutedCopy)
     {
         FeatureNames = featureNames;
         SampleCount = sampleCount;
         _codes = codes;
         _bins = bins;
         _sourceFeatures = sourceFeatures;
-        _isShadow = isShadow;
+        _isPermutedCopy = isPermutedCopy;
         // Kept apart from the bins objects so split search reads one contiguous array, not one object per feature.
         _valueBinCounts = new int[bins.Length];
         for (int f = 0; f < bins.Length; f++) _valueBinCounts[f] = bins[f].ValueBinCount;
@@ -68,8 +68,8 @@ public sealed class BinnedMatrix
     /// <summary>The feature of the originally binned matrix this column holds (or permutes).</summary>
     public int SourceFeature(int feature) => _sourceFeatures[feature];
 
-    /// <summary>True for a column added by <see cref="WithShadowFeatures"/>.</summary>
-    public bool IsShadow(int feature) => _isShadow[feature];
+    /// <summary>True for a column added by <see cref="WithPermutedCopies"/>.</summary>
+    public bool IsPermutedCopy(int feature) => _isPermutedCopy[feature];
 
     /// <summary>The largest code count of any feature; sizes histogram buffers.</summary>
     public int MaxCodeCount
@@ -89,7 +89,7 @@ public sealed class BinnedMatrix
         var codes = new byte[features.Length][];
         var bins = new FeatureBins[features.Length];
         var sources = new int[features.Length];
-        var shadows = new bool[features.Length];
+        var copyFlags = new bool[features.Length];
         for (int i = 0; i < features.Length; i++)
         {
             int f = features[i];
@@ -97,23 +97,23 @@ public sealed class BinnedMatrix
             codes[i] = _codes[f];
             bins[i] = _bins[f];
             sources[i] = _sourceFeatures[f];
-            shadows[i] = _isShadow[f];
+            copyFlags[i] = _isPermutedCopy[f];
         }
-        return new BinnedMatrix(names, SampleCount, codes, bins, sources, shadows);
+        return new BinnedMatrix(names, SampleCount, codes, bins, sources, copyFlags);
     }
 
     /// <summary>
-    /// This matrix followed by one shadow column per listed feature: the feature's codes permuted
-    /// over samples, which keeps its distribution and destroys any link to the outcome. Shadow
+    /// This matrix followed by one permuted-copy column per listed feature: the feature's codes permuted
+    /// over samples, which keeps its distribution and destroys any link to the outcome. Copy
     /// features give a null for importance (Kursa &amp; Rudnicki 2010, J Stat Softw 36(11); the
     /// corrected impurity importance of Nembrini, König &amp; Wright 2018, Bioinformatics 34(21)).
     /// </summary>
     /// <remarks>
-    /// Shadow i is permuted by the generator of (runSeed, repeat, i, Shadow), so the same
-    /// arguments always give the same shadows. Its name is the source name with a "shadow:" prefix.
+    /// Copy i is permuted by the generator of (runSeed, repeat, i, PermutedCopy), so the same
+    /// arguments always give the same permuted copies. Its name is the source name with a "copy:" prefix.
     /// </remarks>
-    /// <param name="threadCount">Threads that build the shadow columns; 0 means all cores. The result is the same for any count.</param>
-    public BinnedMatrix WithShadowFeatures(ReadOnlySpan<int> sourceFeatures, ulong runSeed, int repeat, int threadCount = 0)
+    /// <param name="threadCount">Threads that build the permuted-copy columns; 0 means all cores. The result is the same for any count.</param>
+    public BinnedMatrix WithPermutedCopies(ReadOnlySpan<int> sourceFeatures, ulong runSeed, int repeat, int threadCount = 0)
     {
         int original = FeatureCount;
         int total = original + sourceFeatures.Length;
@@ -121,17 +121,17 @@ public sealed class BinnedMatrix
         var codes = new byte[total][];
         var bins = new FeatureBins[total];
         var sources = new int[total];
-        var shadows = new bool[total];
+        var copyFlags = new bool[total];
         for (int f = 0; f < original; f++)
         {
             names[f] = FeatureNames[f];
             codes[f] = _codes[f];
             bins[f] = _bins[f];
             sources[f] = _sourceFeatures[f];
-            shadows[f] = _isShadow[f];
+            copyFlags[f] = _isPermutedCopy[f];
         }
         var listed = sourceFeatures.ToArray();
-        // Each shadow has its own generator and its own slot, so columns are built in parallel
+        // Each permuted copy has its own generator and its own slot, so columns are built in parallel
         // (on a very wide panel this is most of a repeat's one-thread time) with the same result
         // on any number of threads. Chunks of columns keep the per-task overhead small.
         const int chunk = 256;
@@ -145,16 +145,16 @@ public sealed class BinnedMatrix
                 int f = listed[i];
                 int target = original + i;
                 var permuted = (byte[])_codes[f].Clone();
-                var generator = SeedSchedule.Generator(runSeed, repeat, i, SeedPurpose.Shadow);
+                var generator = SeedSchedule.Generator(runSeed, repeat, i, SeedPurpose.PermutedCopy);
                 generator.Shuffle(permuted.AsSpan());
-                names[target] = "shadow:" + FeatureNames[f];
+                names[target] = "copy:" + FeatureNames[f];
                 codes[target] = permuted;
                 bins[target] = _bins[f];
                 sources[target] = _sourceFeatures[f];
-                shadows[target] = true;
+                copyFlags[target] = true;
             }
         });
-        return new BinnedMatrix(names, SampleCount, codes, bins, sources, shadows);
+        return new BinnedMatrix(names, SampleCount, codes, bins, sources, copyFlags);
     }
 
     /// <summary>The codes of new samples measured on the same features, binned with this matrix's bins.</summary>
@@ -174,6 +174,6 @@ public sealed class BinnedMatrix
                 target[s] = bins.CodeOf(column[s], states.IsEmpty ? CellState.Measured : states[s]);
             codes[f] = target;
         }
-        return new BinnedMatrix(FeatureNames, matrix.SampleCount, codes, _bins, _sourceFeatures, _isShadow);
+        return new BinnedMatrix(FeatureNames, matrix.SampleCount, codes, _bins, _sourceFeatures, _isPermutedCopy);
     }
 }

@@ -6,7 +6,7 @@ namespace OmicsScreen.Engine.Forests;
 
 /// <summary>
 /// Out-of-bag votes of a forest (Breiman 1996, "Out-of-bag estimation"): each sample is voted on
-/// only by the trees not grown on it, which gives an honest error without a test set.
+/// only by the trees not grown on it, which gives an out-of-sample error without a test set.
 /// </summary>
 /// <remarks>
 /// Errors count only samples with at least one out-of-bag vote. The error curve is the error

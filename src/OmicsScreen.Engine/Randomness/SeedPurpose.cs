@@ -14,8 +14,8 @@ public enum SeedPurpose : ulong
     VoteTieBreak = 3,
     /// <summary>Permutations of one feature's codes (permutation importance).</summary>
     Permutation = 4,
-    /// <summary>Permutations that build shadow copies of features.</summary>
-    Shadow = 5,
+    /// <summary>Permutations that build permuted copies of features.</summary>
+    PermutedCopy = 5,
     /// <summary>Drawing resamples or folds in the screening layer.</summary>
     Resampling = 6,
     /// <summary>Permutations of the outcome labels that build an outcome-permutation null of importance.</summary>

@@ -3,7 +3,7 @@ namespace OmicsScreen.Reporting.Charts;
 /// <summary>
 /// Scatter and line chart with optional spread bands, reference lines and highlighted points:
 /// selection frequency against rank with the threshold line, out-of-bag error against the number
-/// of trees, and the panel-size curve (honest and optimistic lines with spread bands, a marker on
+/// of trees, and the panel-size curve (selection-aware and optimistic lines with spread bands, a marker on
 /// the recommended size).
 /// </summary>
 /// <remarks>

@@ -141,8 +141,8 @@ internal static class CohortReportSection
     }
 
     /// <summary>
-    /// One sentence setting the held-out cohorts beside the honest panel-size estimate at the
-    /// recommended size. A cohort counts as clearly worse only when the honest estimate lies outside
+    /// One sentence setting the held-out cohorts beside the selection-aware panel-size estimate at the
+    /// recommended size. A cohort counts as clearly worse only when the selection-aware estimate lies outside
     /// its own 95% interval (above it for the AUC), so a small cohort's wide interval is not read as a failure.
     /// </summary>
     public static string HeldOutComparison(PanelSizeCurve? curve, IReadOnlyList<HeldOutCohort> heldOut)
@@ -152,7 +152,7 @@ internal static class CohortReportSection
             foreach (var point in curve.Points)
                 if (point.PanelSize == curve.RecommendedSize) recommended = point;
         if (curve is null || recommended is null)
-            return "The panel-size curve was not computed for this run, so the held-out cohorts cannot be set beside its honest estimate.";
+            return "The panel-size curve was not computed for this run, so the held-out cohorts cannot be set beside its selection-aware estimate.";
 
         double lowestAuc = double.PositiveInfinity, highestAuc = double.NegativeInfinity;
         double lowestError = double.PositiveInfinity, highestError = double.NegativeInfinity;
@@ -164,14 +164,14 @@ internal static class CohortReportSection
             if (!double.IsFinite(held.Auc)) continue;
             lowestAuc = Math.Min(lowestAuc, held.Auc);
             highestAuc = Math.Max(highestAuc, held.Auc);
-            if (held.AucInterval.Upper < recommended.HonestAuc) worse.Add(held.Cohort);
+            if (held.AucInterval.Upper < recommended.SelectionAwareAuc) worse.Add(held.Cohort);
         }
         if (curve.Metric == "auc" && double.IsFinite(lowestAuc))
-            return Invariant($"Held-out-cohort AUCs run from {lowestAuc:0.000} to {highestAuc:0.000}, against the honest cross-validated AUC of {recommended.HonestAuc:0.000} at the recommended {curve.RecommendedSize} markers; ")
+            return Invariant($"Held-out-cohort AUCs run from {lowestAuc:0.000} to {highestAuc:0.000}, against the selection-aware cross-validated AUC of {recommended.SelectionAwareAuc:0.000} at the recommended {curve.RecommendedSize} markers; ")
                 + (worse.Count == 0
                     ? "no held-out cohort's 95% interval lies below that estimate, so the markers carry over to a centre they were not chosen on about as well as to new samples from the same centres."
                     : "the 95% interval of " + string.Join(", ", worse) + " lies below it, so the markers carry over less well to that centre than to new samples from the same centres.");
-        return Invariant($"Held-out-cohort errors run from {lowestError:0.000} to {highestError:0.000}, against the honest cross-validated error of {recommended.HonestError:0.000} at the recommended {curve.RecommendedSize} markers; ")
+        return Invariant($"Held-out-cohort errors run from {lowestError:0.000} to {highestError:0.000}, against the selection-aware cross-validated error of {recommended.SelectionAwareError:0.000} at the recommended {curve.RecommendedSize} markers; ")
             + "a clearly higher error in a cohort means the markers carry over less well to a new centre than to new samples from the same centres.";
     }
 

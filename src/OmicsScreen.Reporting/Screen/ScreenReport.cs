@@ -124,7 +124,7 @@ public static class ScreenReport
         {
             html.BeginSection("How many markers to measure");
             html.Figure(ScreenReportCharts.PanelSize(curve),
-                "Solid line: honest estimate, markers chosen afresh inside each outer training part (Ambroise & McLachlan 2002). "
+                "Solid line: selection-aware estimate, markers chosen afresh inside each outer training part (Ambroise & McLachlan 2002). "
                 + "Dashed line: optimistic estimate, markers chosen once on all samples. Shading: ± 1 SD over outer folds. "
                 + "The diamond marks the recommended size: the smallest within one standard error of the best (Breiman et al. 1984).");
             html.EndSection();

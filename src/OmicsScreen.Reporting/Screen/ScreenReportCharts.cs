@@ -99,9 +99,9 @@ internal static class ScreenReportCharts
     {
         int count = curve.Points.Count;
         var sizes = new double[count];
-        var honest = new double[count];
-        var honestLow = new double[count];
-        var honestHigh = new double[count];
+        var selectionAware = new double[count];
+        var selectionAwareLow = new double[count];
+        var selectionAwareHigh = new double[count];
         var optimistic = new double[count];
         var optimisticLow = new double[count];
         var optimisticHigh = new double[count];
@@ -110,21 +110,21 @@ internal static class ScreenReportCharts
         {
             var point = curve.Points[i];
             sizes[i] = point.PanelSize;
-            honest[i] = point.HonestAuc;
-            honestLow[i] = point.HonestAuc - point.HonestAucSd;
-            honestHigh[i] = point.HonestAuc + point.HonestAucSd;
+            selectionAware[i] = point.SelectionAwareAuc;
+            selectionAwareLow[i] = point.SelectionAwareAuc - point.SelectionAwareAucSd;
+            selectionAwareHigh[i] = point.SelectionAwareAuc + point.SelectionAwareAucSd;
             optimistic[i] = point.OptimisticAuc;
             optimisticLow[i] = point.OptimisticAuc - point.OptimisticAucSd;
             optimisticHigh[i] = point.OptimisticAuc + point.OptimisticAucSd;
-            if (point.PanelSize == curve.RecommendedSize) recommendedScore = point.HonestAuc;
+            if (point.PanelSize == curve.RecommendedSize) recommendedScore = point.SelectionAwareAuc;
         }
         var markers = double.IsFinite(recommendedScore)
             ? new[] { new PointMarker(curve.RecommendedSize, recommendedScore, Invariant($"Recommended size: {curve.RecommendedSize}")) }
             : [];
         return XYChart.Render(
-            new XYChartOptions("Panel-size curve: honest and optimistic estimates", PanelSizeAxisLabel, PanelSizeScoreLabel(curve), Width: 820),
+            new XYChartOptions("Panel-size curve: selection-aware and optimistic estimates", PanelSizeAxisLabel, PanelSizeScoreLabel(curve), Width: 820),
             [
-                new XYSeries("Honest (markers chosen inside each training part)", sizes, honest, XYSeriesStyle.LineAndPoints, honestLow, honestHigh),
+                new XYSeries("Selection-aware (markers chosen inside each training part)", sizes, selectionAware, XYSeriesStyle.LineAndPoints, selectionAwareLow, selectionAwareHigh),
                 new XYSeries("Optimistic (markers chosen once on all samples)", sizes, optimistic, XYSeriesStyle.DashedLine, optimisticLow, optimisticHigh),
             ],
             markers: markers);

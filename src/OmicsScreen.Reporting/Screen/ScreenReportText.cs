@@ -32,7 +32,7 @@ internal static class ScreenReportText
         "What noise looks like. Importances at or below zero are mirrored to form a null distribution (Janitza, Celik & Boulesteix 2018), augmented with decoys: copies of real features whose values were shuffled, so they cannot carry signal. In each repeat a feature is selected when its importance exceeds that null's upper quantile.",
         "False discoveries. p-values against that null are adjusted for the number of features with the Benjamini & Hochberg (1995) procedure (q-values). The share of decoys that would pass the shortlist rule gives a second, direct estimate of the false discovery rate.",
         "Stability. The selection frequency over repeats drives the shortlist (Meinshausen & Bühlmann 2010, with their bound on the expected number of noise features reaching the threshold). Agreement between repeats is summarised by the estimator of Nogueira, Sechidis & Brown (2018) with its 95% interval.",
-        "Panel size. The whole selection is rerun inside each outer training part and judged on the held-out part, so the estimate is honest; choosing markers on all samples first and then testing them is optimistic (Ambroise & McLachlan 2002). The recommended size is the smallest within one standard error of the best (the one-SE rule, Breiman, Friedman, Olshen & Stone 1984).",
+        "Panel size. The whole selection is rerun inside each outer training part and judged on the held-out part, so the estimate is selection-aware; choosing markers on all samples first and then testing them is optimistic (Ambroise & McLachlan 2002). The recommended size is the smallest within one standard error of the best (the one-SE rule, Breiman, Friedman, Olshen & Stone 1984).",
         "Single-marker statistics. Direction, median ratio and the Mann-Whitney AUC compare the positive class with the rest; the AUC's 95% interval uses DeLong, DeLong & Clarke-Pearson (1988).",
     ];
 
@@ -57,10 +57,10 @@ internal static class ScreenReportText
             if (point.PanelSize == curve.RecommendedSize) recommended = point;
         if (recommended is null) return Invariant($"The recommended panel size is {curve.RecommendedSize} markers.");
         // A normal 95% interval from the standard error over folds: mean ± 1.96 SE (common practice).
-        double low = recommended.HonestAuc - 1.96 * recommended.HonestAucStandardError;
-        double high = recommended.HonestAuc + 1.96 * recommended.HonestAucStandardError;
+        double low = recommended.SelectionAwareAuc - 1.96 * recommended.SelectionAwareAucStandardError;
+        double high = recommended.SelectionAwareAuc + 1.96 * recommended.SelectionAwareAucStandardError;
         string folds = curve.FoldRepeats > 1 ? Invariant($"{curve.FoldCount}-fold, repeated {curve.FoldRepeats} times") : Invariant($"{curve.FoldCount}-fold");
-        return Invariant($"Recommended panel size: {curve.RecommendedSize} markers, with an honest held-out {metric} of {recommended.HonestAuc:0.000} (95% interval about {low:0.000} to {high:0.000}; {folds} cross-validation with the markers chosen afresh in each training part). ")
+        return Invariant($"Recommended panel size: {curve.RecommendedSize} markers, with a selection-aware held-out {metric} of {recommended.SelectionAwareAuc:0.000} (95% interval about {low:0.000} to {high:0.000}; {folds} cross-validation with the markers chosen afresh in each training part). ")
             + Invariant($"Choosing the markers once on all samples would suggest {recommended.OptimisticAuc:0.000}: that figure is optimistic and should not be quoted.");
     }
 

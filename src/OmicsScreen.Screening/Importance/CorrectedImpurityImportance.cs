@@ -8,15 +8,15 @@ namespace OmicsScreen.Screening.Importance;
 /// <summary>
 /// Corrected impurity importance, the "actual impurity reduction" (AIR) of Nembrini, König &amp;
 /// Wright (2018, Bioinformatics 34(21):3711-3718): grow one forest on the real features, one
-/// shadow (permuted) copy of every real feature and any decoys, then AIR_j = MDI(j) - MDI(shadow j).
+/// permuted copy of every real feature and any decoys, then AIR_j = MDI(j) - MDI(permuted copy j).
 /// </summary>
 /// <remarks>
-/// A shadow has its feature's values, so it has the same chances to be picked and the same
+/// A permuted copy has its feature's values, so it has the same chances to be picked and the same
 /// number of candidate cut points, but no link to the outcome; subtracting its MDI removes the
 /// bias of impurity importance toward features with many distinct values (Strobl et al. 2007,
 /// BMC Bioinformatics 8:25). AIR of a noise feature is then centred on 0 and often negative,
 /// which is what <see cref="JanitzaNull"/> uses. A decoy is a second, differently permuted copy
-/// of a real feature, scored the same way against its source's shadow: a known-null feature for
+/// of a real feature, scored the same way against its source's permuted copy: a known-null feature for
 /// checking error control. The forest is used for these importances only.
 /// MDI is the engine's <see cref="ImpurityImportance.MeanDecrease"/>: per tree, the sum of
 /// (W_t G_t - W_L G_L - W_R G_R)/W_root over the feature's splits, averaged over trees.
@@ -53,17 +53,17 @@ public static class CorrectedImpurityImportance
     }
 
     /// <summary>
-    /// Columns [real 0..p-1, shadow of each real feature, one decoy per listed source]. The decoys
-    /// are shadows made from a second seed, Derive(runSeed, repeat, 0, Shadow), so decoy i never
-    /// reuses the permutation of shadow i.
+    /// Columns [real 0..p-1, permuted copy of each real feature, one decoy per listed source]. The decoys
+    /// are permuted copies made from a second seed, Derive(runSeed, repeat, 0, PermutedCopy), so decoy i never
+    /// reuses the permutation of copy i.
     /// </summary>
     internal static BinnedMatrix Augment(BinnedMatrix matrix, ReadOnlySpan<int> decoySources, ulong runSeed, int repeat, int threadCount = 0)
     {
         var allFeatures = new int[matrix.FeatureCount];
         for (int f = 0; f < allFeatures.Length; f++) allFeatures[f] = f;
-        var withShadows = matrix.WithShadowFeatures(allFeatures, runSeed, repeat, threadCount);
-        if (decoySources.IsEmpty) return withShadows;
-        ulong decoySeed = SeedSchedule.Derive(runSeed, repeat, 0, SeedPurpose.Shadow);
-        return withShadows.WithShadowFeatures(decoySources, decoySeed, repeat, threadCount);
+        var withCopies = matrix.WithPermutedCopies(allFeatures, runSeed, repeat, threadCount);
+        if (decoySources.IsEmpty) return withCopies;
+        ulong decoySeed = SeedSchedule.Derive(runSeed, repeat, 0, SeedPurpose.PermutedCopy);
+        return withCopies.WithPermutedCopies(decoySources, decoySeed, repeat, threadCount);
     }
 }

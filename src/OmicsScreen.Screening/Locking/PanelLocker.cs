@@ -23,7 +23,7 @@ public static class PanelLocker
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(options);
         options.Validate();
-        int size = options.PanelSize ?? result.PanelSize?.RecommendedSize ?? result.Shortlist.Count;
+        int size = options.PanelSize ?? result.LockedPanelSize;
         size = Math.Clamp(size, 1, result.Order.Count);
         var markers = new int[size];
         for (int i = 0; i < size; i++) markers[i] = result.Order[i];

@@ -5,7 +5,7 @@ namespace OmicsScreen.Screening.Resampling;
 
 /// <summary>
 /// Repeated K-fold splits, stratified by class and grouped by subject, for the outer loop of an
-/// honest estimate: each fold's test part is never seen by the screen that is scored on it
+/// selection-aware estimate: each fold's test part is never seen by the screen that is scored on it
 /// (Ambroise &amp; McLachlan 2002, PNAS 99(10)).
 /// </summary>
 public static class StratifiedFolds

@@ -24,8 +24,8 @@ public enum MemoryComponent
     /// <summary>A repeat's two forests (importance forest and corrected-importance forest) with their out-of-bag rows.</summary>
     RepeatForests,
 
-    /// <summary>A repeat's shadow copy of every feature and its decoys: the widened matrix of the corrected-importance forest.</summary>
-    ShadowAndDecoyColumns,
+    /// <summary>A repeat's permuted copy of every feature and its decoys: the widened matrix of the corrected-importance forest.</summary>
+    PermutedCopyAndDecoyColumns,
 
     /// <summary>Each thread's tree-growing buffers and the tree it is building.</summary>
     TreesInFlight,

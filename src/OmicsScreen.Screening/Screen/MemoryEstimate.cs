@@ -112,8 +112,8 @@ public sealed class MemoryEstimate
         long correctedRows = options.OutcomePermutations > 0 ? samples : half;
         long repeatForests = ForestBytes(half, trees, classCount) + ForestBytes(correctedRows, trees, classCount);
         long widened = features + decoys;
-        // Shadow and decoy codes, their "shadow:" names, and the widened matrix's per-column arrays.
-        long shadows = ColumnBytes(widened, samples) + widened * (NameBytes + 14) + (features + widened) * (3 * Reference + 9);
+        // Permuted-copy and decoy codes, their "copy:" names, and the widened matrix's per-column arrays.
+        long copies = ColumnBytes(widened, samples) + widened * (NameBytes + 14) + (features + widened) * (3 * Reference + 9);
         long inFlight = threadCount * WorkerBytes(samples, features + widened, classCount);
         long repeatMatrices = repeats * features * RepeatCellBytes + repeats * decoys * (sizeof(double) + sizeof(bool));
         long curve = options.CurveFolds > 0 ? 2L * options.CurveInnerPairs * features * RepeatCellBytes : 0;
@@ -123,7 +123,7 @@ public sealed class MemoryEstimate
             new(MemoryComponent.FeatureTables, tables),
             new(MemoryComponent.ReferenceForest, reference),
             new(MemoryComponent.RepeatForests, repeatForests),
-            new(MemoryComponent.ShadowAndDecoyColumns, shadows),
+            new(MemoryComponent.PermutedCopyAndDecoyColumns, copies),
             new(MemoryComponent.TreesInFlight, inFlight),
             new(MemoryComponent.RepeatImportances, repeatMatrices),
             new(MemoryComponent.PanelSizeCurve, curve),

@@ -47,8 +47,8 @@ internal static class PanelSizeEstimator
         bool binary = outcome.ClassCount == 2;
         var folds = work.CurveFolds;
         var sizes = SizeGrid(Math.Min(options.CurveMaxPanelSize, matrix.FeatureCount));
-        var honest = new double[folds.Count, sizes.Length];
-        var honestError = new double[folds.Count, sizes.Length];
+        var selectionAware = new double[folds.Count, sizes.Length];
+        var selectionAwareError = new double[folds.Count, sizes.Length];
         var optimistic = new double[folds.Count, sizes.Length];
         var optimisticError = new double[folds.Count, sizes.Length];
         for (int i = 0; i < folds.Count; i++)
@@ -59,7 +59,7 @@ internal static class PanelSizeEstimator
             var innerOrder = work.CurveFoldScreen(i, cancellation).Order;
             for (int s = 0; s < sizes.Length; s++)
             {
-                (honest[i, s], honestError[i, s]) = Score(matrix, panel, settings, innerOrder.AsSpan(0, sizes[s]), fold, innerSeed, s, binary);
+                (selectionAware[i, s], selectionAwareError[i, s]) = Score(matrix, panel, settings, innerOrder.AsSpan(0, sizes[s]), fold, innerSeed, s, binary);
                 (optimistic[i, s], optimisticError[i, s]) = Score(matrix, panel, settings, fullOrder.AsSpan(0, sizes[s]), fold, innerSeed, s, binary);
             }
             foldDone?.Invoke(i + 1, folds.Count);
@@ -70,10 +70,10 @@ internal static class PanelSizeEstimator
         var errors = new double[sizes.Length];
         for (int s = 0; s < sizes.Length; s++)
         {
-            var (hMean, hSd) = MeanAndSd(honest, s);
+            var (hMean, hSd) = MeanAndSd(selectionAware, s);
             var (oMean, oSd) = MeanAndSd(optimistic, s);
             double se = hSd / Math.Sqrt(folds.Count);
-            points[s] = new PanelSizePoint(sizes[s], hMean, hSd, se, MeanAndSd(honestError, s).Mean, oMean, oSd,
+            points[s] = new PanelSizePoint(sizes[s], hMean, hSd, se, MeanAndSd(selectionAwareError, s).Mean, oMean, oSd,
                 MeanAndSd(optimisticError, s).Mean, folds.Count);
             means[s] = hMean;
             errors[s] = se;

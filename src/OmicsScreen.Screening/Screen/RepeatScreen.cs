@@ -10,11 +10,11 @@ namespace OmicsScreen.Screening.Screen;
 
 /// <summary>
 /// The repeated core of a screen: on each half-sample, one forest for the out-of-bag
-/// permutation and impurity importances, and one forest carrying shadow copies and decoys for
+/// permutation and impurity importances, and one forest carrying permuted copies and decoys for
 /// the corrected importance; then each repeat's selection and combined rank.
 /// </summary>
 /// <remarks>
-/// Two forests per repeat, because the shadow columns compete for splits: the forest that carries
+/// Two forests per repeat, because the permuted-copy columns compete for splits: the forest that carries
 /// them is used for corrected importances only, never for errors, votes or permutation importance.
 /// </remarks>
 internal static class RepeatScreen

@@ -26,4 +26,14 @@ public sealed record ScreenResult(
     IReadOnlyList<int> UnivariateRanks,
     PanelSizeCurve? PanelSize,
     IReadOnlyDictionary<ScreenStage, double> StageSeconds,
-    CohortResult? Cohorts);
+    CohortResult? Cohorts)
+{
+    /// <summary>How many markers, from the top of the shortlist, the screen locks into a panel; 0 when none.</summary>
+    public int LockedPanelSize { get; init; }
+
+    /// <summary>
+    /// The selection-aware estimate (AUC for two classes, accuracy otherwise) of the panel that is
+    /// locked; NaN when no panel is locked or the curve was skipped.
+    /// </summary>
+    public double LockedPanelEstimate { get; init; } = double.NaN;
+}

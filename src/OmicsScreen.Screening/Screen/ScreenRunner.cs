@@ -13,7 +13,7 @@ namespace OmicsScreen.Screening.Screen;
 /// <summary>
 /// Runs a whole screen on a panel: bin once, univariate statistics, a reference forest, the
 /// repeated half-sample forests, aggregation into a stability-ranked shortlist with error
-/// control, redundancy groups, and the honest panel-size curve.
+/// control, redundancy groups, and the selection-aware panel-size curve.
 /// </summary>
 public static class ScreenRunner
 {
@@ -112,8 +112,16 @@ public static class ScreenRunner
             Finish(ScreenStage.Cohorts);
         }
 
+        int lockedSize = Math.Clamp(curve?.RecommendedSize ?? shortlist.Count, 1, order.Length);
+        double lockedEstimate = double.NaN;
+        if (curve is not null)
+            foreach (var point in curve.Points) if (point.PanelSize == lockedSize) lockedEstimate = point.SelectionAwareAuc;
         return new ScreenResult(settings, repeats, features, order, shortlist, correlations, stability, decoys, reference,
-            univariate, univariateRanks, curve, seconds, cohorts);
+            univariate, univariateRanks, curve, seconds, cohorts)
+        {
+            LockedPanelSize = lockedSize,
+            LockedPanelEstimate = lockedEstimate,
+        };
     }
 
     /// <summary>

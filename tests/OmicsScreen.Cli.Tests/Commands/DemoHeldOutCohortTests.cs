@@ -31,7 +31,7 @@ public sealed class DemoHeldOutCohortTests : IDisposable
         using var evaluation = JsonDocument.Parse(File.ReadAllText(Path.Combine(applied, "evaluation.json")));
         var text = evaluation.RootElement.ToString();
         // The planted markers act the same in every centre, so the held-out centre is classified
-        // about as well as the honest estimate of the discovery screen (about 0.95 for the demo).
+        // about as well as the selection-aware estimate of the discovery screen (about 0.95 for the demo).
         double auc = FindNumber(evaluation.RootElement, "auc");
         Assert.True(auc > 0.85, $"held-out AUC {auc:0.000}: {text}");
         Assert.Equal(91, File.ReadAllLines(Path.Combine(applied, "scores.tsv")).Length);

@@ -73,32 +73,32 @@ public class BinMapperTests
     }
 
     [Fact]
-    public void Shadow_columns_are_seeded_permutations_of_their_source_codes()
+    public void Permuted_copy_columns_are_seeded_permutations_of_their_source_codes()
     {
         var panel = SyntheticPanel.Generate(new SyntheticPanelSpec { SampleCount = 300, FeatureCount = 6 });
         var binned = new BinMapper().Bin(panel.Matrix);
-        var withShadows = binned.WithShadowFeatures([1, 4], runSeed: 9, repeat: 0);
-        Assert.Equal(8, withShadows.FeatureCount);
-        Assert.True(withShadows.IsShadow(7) && !withShadows.IsShadow(4));
-        Assert.Equal(4, withShadows.SourceFeature(7));
-        Assert.Equal("shadow:" + binned.FeatureNames[4], withShadows.FeatureNames[7]);
+        var withCopies = binned.WithPermutedCopies([1, 4], runSeed: 9, repeat: 0);
+        Assert.Equal(8, withCopies.FeatureCount);
+        Assert.True(withCopies.IsPermutedCopy(7) && !withCopies.IsPermutedCopy(4));
+        Assert.Equal(4, withCopies.SourceFeature(7));
+        Assert.Equal("copy:" + binned.FeatureNames[4], withCopies.FeatureNames[7]);
         var source = binned.Codes(4).ToArray();
-        var shadow = withShadows.Codes(7).ToArray();
-        Assert.Equal(source.Order(), shadow.Order());
-        Assert.NotEqual(source, shadow);
-        Assert.Equal(shadow, binned.WithShadowFeatures([1, 4], 9, 0).Codes(7).ToArray());
-        Assert.NotEqual(shadow, binned.WithShadowFeatures([1, 4], 10, 0).Codes(7).ToArray());
+        var permutedCopy = withCopies.Codes(7).ToArray();
+        Assert.Equal(source.Order(), permutedCopy.Order());
+        Assert.NotEqual(source, permutedCopy);
+        Assert.Equal(permutedCopy, binned.WithPermutedCopies([1, 4], 9, 0).Codes(7).ToArray());
+        Assert.NotEqual(permutedCopy, binned.WithPermutedCopies([1, 4], 10, 0).Codes(7).ToArray());
     }
 
     [Fact]
-    public void Shadow_columns_are_the_same_whatever_the_thread_count()
+    public void Permuted_copy_columns_are_the_same_whatever_the_thread_count()
     {
         // More columns than one building chunk (256), so several threads share the work.
         var panel = SyntheticPanel.Generate(new SyntheticPanelSpec { SampleCount = 60, FeatureCount = 700 });
         var binned = new BinMapper().Bin(panel.Matrix);
         var all = Enumerable.Range(0, binned.FeatureCount).ToArray();
-        var one = binned.WithShadowFeatures(all, runSeed: 3, repeat: 2, threadCount: 1);
-        var four = binned.WithShadowFeatures(all, runSeed: 3, repeat: 2, threadCount: 4);
+        var one = binned.WithPermutedCopies(all, runSeed: 3, repeat: 2, threadCount: 1);
+        var four = binned.WithPermutedCopies(all, runSeed: 3, repeat: 2, threadCount: 4);
         Assert.Equal(one.FeatureNames, four.FeatureNames);
         for (int f = 0; f < one.FeatureCount; f++)
         {

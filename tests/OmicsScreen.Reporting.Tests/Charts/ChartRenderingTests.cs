@@ -60,8 +60,8 @@ public class ChartRenderingTests
     public void Line_chart_has_a_legend_entry_per_series_band_reference_line_and_marker()
     {
         var panelSize = Markup.Texts(Markup.Parse(SampleReport.Charts()[3].Markup), "text");
-        Assert.Contains("Honest (outer resamples)", panelSize);
-        Assert.Contains("Honest (outer resamples) (spread)", panelSize);
+        Assert.Contains("Selection-aware (outer resamples)", panelSize);
+        Assert.Contains("Selection-aware (outer resamples) (spread)", panelSize);
         Assert.Contains("Optimistic (same data)", panelSize);
         Assert.Contains("Recommended: 3 markers", panelSize);
         var frequency = Markup.Texts(Markup.Parse(SampleReport.Charts()[1].Markup), "text");

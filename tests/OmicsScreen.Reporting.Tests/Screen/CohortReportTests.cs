@@ -158,7 +158,7 @@ public sealed class CohortReportTests
         Assert.Equal(result.Cohorts!.HeldOut.Count, rows.Count);
         Assert.Equal(result.Cohorts.HeldOut.Select(h => h.Cohort), rows.Select(r => r[0]));
         Assert.NotNull(result.PanelSize);
-        Assert.Contains("honest cross-validated", Report.Value);
+        Assert.Contains("selection-aware cross-validated", Report.Value);
     }
 
     [Fact]
@@ -211,13 +211,13 @@ public sealed class CohortReportTests
     private static HeldOutCohort Held(string cohort, double auc, double low, double high) =>
         new(cohort, 50, 5, auc, new ConfidenceInterval(low, high, 0.95), 0.2);
 
-    private static PanelSizeCurve Curve(double honestAuc) =>
-        new("auc", [new PanelSizePoint(5, honestAuc, 0.02, 0.01, 0.15, honestAuc + 0.02, 0.02, 0.1, 5)], 5, 5, 1);
+    private static PanelSizeCurve Curve(double selectionAwareAuc) =>
+        new("auc", [new PanelSizePoint(5, selectionAwareAuc, 0.02, 0.01, 0.15, selectionAwareAuc + 0.02, 0.02, 0.1, 5)], 5, 5, 1);
 
     [Fact]
-    public void Held_out_comparison_names_only_cohorts_whose_interval_lies_below_the_honest_estimate()
+    public void Held_out_comparison_names_only_cohorts_whose_interval_lies_below_the_selection_aware_estimate()
     {
-        // Hand-built: honest AUC 0.90; "far" has interval [0.70, 0.85] wholly below it, "near" [0.80, 0.95] spans it.
+        // Hand-built: selection-aware AUC 0.90; "far" has interval [0.70, 0.85] wholly below it, "near" [0.80, 0.95] spans it.
         string sentence = CohortReportSection.HeldOutComparison(Curve(0.90), [Held("near", 0.88, 0.80, 0.95), Held("far", 0.78, 0.70, 0.85)]);
 
         Assert.Contains("from 0.780 to 0.880", sentence);

@@ -47,7 +47,7 @@ internal static class SampleReport
         var panelSize = XYChart.Render(
             new XYChartOptions("Panel-size curve", AxisLabels[6], AxisLabels[7], YMinimum: 0.5, YMaximum: 1),
             [
-                new XYSeries("Honest (outer resamples)", [1.0, 2, 3, 5, 8], [0.7, 0.78, 0.82, 0.83, 0.83], XYSeriesStyle.LineAndPoints,
+                new XYSeries("Selection-aware (outer resamples)", [1.0, 2, 3, 5, 8], [0.7, 0.78, 0.82, 0.83, 0.83], XYSeriesStyle.LineAndPoints,
                     [0.64, 0.72, 0.77, 0.78, 0.77], [0.76, 0.84, 0.87, 0.88, 0.89]),
                 new XYSeries("Optimistic (same data)", [1.0, 2, 3, 5, 8], [0.75, 0.85, 0.9, 0.93, 0.95], XYSeriesStyle.DashedLine),
             ],

@@ -89,10 +89,10 @@ public class CohortAnalysisTests
     }
 
     [Fact]
-    public void With_exchangeable_cohorts_held_out_aucs_scatter_around_the_honest_estimate()
+    public void With_exchangeable_cohorts_held_out_aucs_scatter_around_the_selection_aware_estimate()
     {
         // Cohort labels assigned at random: every cohort is a random third of one population, so a
-        // panel chosen on two thirds should score on the last third as the honest cross-validated
+        // panel chosen on two thirds should score on the last third as the selection-aware cross-validated
         // estimate predicts (common practice; the spread allowed is the held-out AUC's own DeLong
         // interval widened by the curve's fold SD).
         var (panel, _) = CausalBlockPanel.Generate(new CausalBlockPanel.Design { SampleCount = 240, FeatureCount = 300, Seed = 21 });
@@ -110,11 +110,11 @@ public class CohortAnalysisTests
         Assert.Equal(3, heldOut.Count);
         foreach (var h in heldOut)
         {
-            double halfWidth = (h.AucInterval.Upper - h.AucInterval.Lower) / 2 + point.HonestAucSd;
-            Assert.True(Math.Abs(h.Auc - point.HonestAuc) <= halfWidth,
-                $"{h.Cohort}: held-out AUC {h.Auc:0.000} vs honest {point.HonestAuc:0.000} (allowed {halfWidth:0.000})");
+            double halfWidth = (h.AucInterval.Upper - h.AucInterval.Lower) / 2 + point.SelectionAwareAucSd;
+            Assert.True(Math.Abs(h.Auc - point.SelectionAwareAuc) <= halfWidth,
+                $"{h.Cohort}: held-out AUC {h.Auc:0.000} vs selection-aware {point.SelectionAwareAuc:0.000} (allowed {halfWidth:0.000})");
         }
-        Assert.InRange(heldOut.Average(h => h.Auc), point.HonestAuc - 0.08, point.HonestAuc + 0.08);
+        Assert.InRange(heldOut.Average(h => h.Auc), point.SelectionAwareAuc - 0.08, point.SelectionAwareAuc + 0.08);
     }
 
     [Fact]

@@ -64,7 +64,7 @@ public class CorrectedImpurityImportanceTests(ITestOutputHelper output)
     }
 
     [Fact]
-    public void Decoys_never_repeat_the_permutation_of_their_sources_shadow()
+    public void Decoys_never_repeat_the_permutation_of_their_sources_permuted_copy()
     {
         var (matrix, _) = ImportanceTestPanels.Binned(100, 6, 1, 1.0, seed: 2);
         var augmented = CorrectedImpurityImportance.Augment(matrix, [0, 3, 5], runSeed: 9, repeat: 1);
@@ -73,10 +73,10 @@ public class CorrectedImpurityImportanceTests(ITestOutputHelper output)
         for (int i = 0; i < sources.Length; i++)
         {
             var decoy = augmented.Codes(12 + i);
-            var shadow = augmented.Codes(6 + sources[i]);
-            Assert.True(augmented.IsShadow(12 + i));
+            var permutedCopy = augmented.Codes(6 + sources[i]);
+            Assert.True(augmented.IsPermutedCopy(12 + i));
             Assert.Equal(sources[i], augmented.SourceFeature(12 + i));
-            Assert.False(decoy.SequenceEqual(shadow), $"decoy {i} equals the shadow of feature {sources[i]}");
+            Assert.False(decoy.SequenceEqual(permutedCopy), $"decoy {i} equals the permuted copy of feature {sources[i]}");
         }
     }
 

@@ -31,8 +31,8 @@ public class MemoryEstimateTests
         Assert.Equal(40_240, estimate.Bytes(MemoryComponent.ReferenceForest));
         // Two forests on 50 rows: d = 32, 32 nodes x 51 + 376, 18 out-of-bag rows 2 x (24 + 72) + 32, + 16: 2,248 a tree.
         Assert.Equal(2 * 22_480, estimate.Bytes(MemoryComponent.RepeatForests));
-        // 1000 shadow codes x 132, their names 1000 x (80 + 14), 2000 widened columns x (3 x 8 + 9).
-        Assert.Equal(132_000 + 94_000 + 66_000, estimate.Bytes(MemoryComponent.ShadowAndDecoyColumns));
+        // 1000 permuted-copy codes x 132, their names 1000 x (80 + 14), 2000 widened columns x (3 x 8 + 9).
+        Assert.Equal(132_000 + 94_000 + 66_000, estimate.Bytes(MemoryComponent.PermutedCopyAndDecoyColumns));
         // Draw and row buffers 100 x 20 x 2, feature order 4 x 2000, histogram 256 x 3 x 8, node store 2 x 200 x 51.
         Assert.Equal(4_000 + 8_000 + 6_144 + 20_400, estimate.Bytes(MemoryComponent.TreesInFlight));
         // 4 repeats x 1000 features x (4 doubles + 1 bool).
@@ -86,9 +86,9 @@ public class MemoryEstimateTests
         var above = MemoryEstimate.ForScreen(100, 5001, automatic, 1);
         var aboveWithout = MemoryEstimate.ForScreen(100, 5001, automatic with { DecoyCount = 0 }, 1);
 
-        // One decoy per feature: 5000 more shadow-like columns, as ScreenSettings resolves it.
+        // One decoy per feature: 5000 more permuted-copy-like columns, as ScreenSettings resolves it.
         Assert.Equal(5000, ScreenSettings.DecoyCountFor(automatic, 5000));
-        Assert.True(below.Bytes(MemoryComponent.ShadowAndDecoyColumns) > belowWithout.Bytes(MemoryComponent.ShadowAndDecoyColumns) * 3 / 2);
+        Assert.True(below.Bytes(MemoryComponent.PermutedCopyAndDecoyColumns) > belowWithout.Bytes(MemoryComponent.PermutedCopyAndDecoyColumns) * 3 / 2);
         Assert.Equal(aboveWithout.TotalBytes, above.TotalBytes);
     }
 
@@ -112,7 +112,7 @@ public class MemoryEstimateTests
         var eight = MemoryEstimate.ForScreen(200, 2000, Small, 8);
 
         Assert.Equal(8 * one.Bytes(MemoryComponent.TreesInFlight), eight.Bytes(MemoryComponent.TreesInFlight));
-        Assert.Equal(one.Bytes(MemoryComponent.ShadowAndDecoyColumns), eight.Bytes(MemoryComponent.ShadowAndDecoyColumns));
+        Assert.Equal(one.Bytes(MemoryComponent.PermutedCopyAndDecoyColumns), eight.Bytes(MemoryComponent.PermutedCopyAndDecoyColumns));
         Assert.True(eight.TotalBytes > one.TotalBytes);
     }
 
