@@ -7,6 +7,8 @@ namespace OmicsScreen.Benchmarks;
 /// Runs each benchmark case several times, each time in a fresh child process so that the peak
 /// resident memory reported belongs to that case alone, and prints the median time.
 /// Usage: omicsscreen-bench [SUITE|CASE ...] [--runs N] [--work DIR]
+/// or: omicsscreen-bench calibration [--seeds N] [--quick] [--threads T] [--only NAME]
+/// (the calibration suite measures error control, not time, so it runs in this process).
 /// </summary>
 public static class Program
 {
@@ -15,6 +17,7 @@ public static class Program
         CultureInfo.DefaultThreadCurrentCulture = CultureInfo.InvariantCulture;
         CultureInfo.CurrentCulture = CultureInfo.InvariantCulture;
         if (args.Length >= 3 && args[0] == "--child") return RunChild(args[1], args[2]);
+        if (args.Length >= 1 && args[0] == "calibration") return Calibration.CalibrationSuite.Run(args[1..], Console.Out);
 
         int runs = 3;
         string work = Path.Combine(Path.GetTempPath(), "omicsscreen-bench");

@@ -1,0 +1,94 @@
+using System.Diagnostics;
+using System.Globalization;
+using OmicsScreen.TestSupport.Calibration;
+
+namespace OmicsScreen.Benchmarks.Calibration;
+
+/// <summary>
+/// The calibration suite of issue 12 (item 7): screens every shape and design of
+/// <see cref="CalibrationCatalogue"/> for each seed with the default screen, in this process
+/// (it measures error control, not time), prints each panel as it finishes and then the table,
+/// the goals and the p-value uniformity.
+/// Usage: calibration [--seeds N] [--quick] [--threads T] [--only NAME[,NAME...]]
+/// </summary>
+public static class CalibrationSuite
+{
+    public static int Run(IReadOnlyList<string> args, TextWriter output)
+    {
+        ArgumentNullException.ThrowIfNull(args);
+        ArgumentNullException.ThrowIfNull(output);
+        CalibrationSettings settings;
+        try
+        {
+            settings = CalibrationSettings.Parse(args);
+            foreach (var name in settings.Only)
+                if (!CalibrationCatalogue.All.Contains(name))
+                    throw new ArgumentException($"No calibration shape or design is called '{name}'. Known: {string.Join(", ", CalibrationCatalogue.All)}.");
+        }
+        catch (ArgumentException error)
+        {
+            Console.Error.WriteLine(error.Message);
+            Console.Error.WriteLine("Usage: calibration [--seeds N] [--quick] [--threads T] [--only NAME[,NAME...]]");
+            return 2;
+        }
+
+        var designs = CalibrationCatalogue.All.Where(d => settings.Only.Count == 0 || settings.Only.Contains(d)).ToList();
+        var defaults = new Screening.Screen.ScreenOptions();
+        output.WriteLine(Invariant($"# calibration: {designs.Count} shapes/designs x {settings.SeedCount} seeds = {designs.Count * settings.SeedCount} panels; threads {(settings.ThreadCount == 0 ? "all" : settings.ThreadCount.ToString(CultureInfo.InvariantCulture))}"));
+        output.WriteLine(Invariant($"# machine: {Environment.ProcessorCount} cores, load average {LoadAverage()}"));
+        output.WriteLine(settings.Quick
+            ? Invariant($"# QUICK run: {CalibrationSettings.QuickHalfSamplePairs} half-sample pairs (default {defaults.HalfSamplePairs}), {CalibrationSettings.QuickTreesPerForest} trees per forest (default {defaults.TreesPerForest}); every other option at its default. Quick figures show the suite works; judge the goals on a full run.")
+            : "# full run: every screen option at its default");
+        output.WriteLine();
+
+        var watch = Stopwatch.StartNew();
+        var panels = new List<PanelCalibration>();
+        for (int seedNumber = 1; seedNumber <= settings.SeedCount; seedNumber++)
+            foreach (var design in designs)
+            {
+                var model = CalibrationCatalogue.Create(design, seedNumber);
+                var panel = PanelMeasurer.Measure(model, settings);
+                panels.Add(panel);
+                output.WriteLine(ProgressLine(panel, panels.Count, designs.Count * settings.SeedCount, watch.Elapsed.TotalSeconds));
+                output.Flush();
+            }
+        double wall = watch.Elapsed.TotalSeconds;
+        output.WriteLine();
+        // Group rows in catalogue order, whatever order the panels ran in.
+        var ordered = panels.OrderBy(p => designs.IndexOf(p.Design)).ThenBy(p => p.Seed).ToList();
+        CalibrationReport.Write(ordered, output);
+        output.WriteLine();
+        output.WriteLine(Invariant($"Wall time: {wall:F0} s for {panels.Count} panels ({wall / Math.Max(1, panels.Count):F1} s per panel){(settings.Quick ? ", quick settings" : "")}; load average at the end {LoadAverage()}."));
+        return 0;
+    }
+
+    private static string ProgressLine(PanelCalibration p, int done, int total, double elapsed)
+    {
+        string estimate = p.LockedPanelSize == 0
+            ? "no panel locked"
+            : Invariant($"locked {p.LockedPanelSize}, {(p.ClassCount == 2 ? "AUC" : "accuracy")} selection-aware {Number(p.SelectionAwareEstimate)} fresh {Number(p.FreshEstimate)}");
+        string found = p.IsNull ? "" : Invariant($", true {p.TrueDiscoveries}/{p.RelatedCount} (baseline {p.BaselineTrueDiscoveries})");
+        if (p.PairFound is { } pair) found += pair ? ", pair found" : ", pair missed";
+        if (p.ThresholdFound is { } threshold) found += threshold ? ", threshold found" : ", threshold missed";
+        return Invariant(
+            $"[{done}/{total}] {p.Design} seed {p.Seed}: shortlist {p.Shortlisted} (false {p.FalseDiscoveries}, FDP {p.FalseDiscoveryProportion:F3}, decoy estimate {Number(p.DecoyEstimate)}){found}; {estimate}; {p.Seconds:F1} s (total {elapsed:F0} s)");
+    }
+
+    /// <summary>The 1-minute load average from /proc/loadavg, for reading wall times on a shared machine; "n/a" elsewhere.</summary>
+    private static string LoadAverage()
+    {
+        const string path = "/proc/loadavg";
+        try
+        {
+            return File.Exists(path) ? File.ReadAllText(path).Split(' ')[0] : "n/a";
+        }
+        catch (IOException)
+        {
+            return "n/a";
+        }
+    }
+
+    private static string Number(double value) => double.IsNaN(value) ? "n/a" : value.ToString("F3", CultureInfo.InvariantCulture);
+
+    private static string Invariant(FormattableString text) => FormattableString.Invariant(text);
+}

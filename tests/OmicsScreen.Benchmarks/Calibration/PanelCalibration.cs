@@ -1,0 +1,43 @@
+namespace OmicsScreen.Benchmarks.Calibration;
+
+/// <summary>What the calibration suite measured on one panel.</summary>
+/// <param name="Design">The shape or design (see <see cref="TestSupport.Calibration.CalibrationCatalogue"/>).</param>
+/// <param name="FalseDiscoveryProportion">False / max(1, shortlisted).</param>
+/// <param name="DecoyEstimate">The screen's target-decoy estimate of its false discovery rate; NaN without decoys.</param>
+/// <param name="PairFound">Both of the interacting pair shortlisted; null when the design has no pair.</param>
+/// <param name="BaselinePairFound">Both of the pair found by the univariate baseline; null without a pair.</param>
+/// <param name="ThresholdFound">The threshold marker shortlisted; null when the design has none.</param>
+/// <param name="BaselineThresholdFound">The threshold marker found by the baseline; null without one.</param>
+/// <param name="LockedPanelSize">0 when no panel was locked.</param>
+/// <param name="SelectionAwareEstimate">The screen's selection-aware estimate of the locked panel (AUC, or accuracy for more than two classes); NaN when none.</param>
+/// <param name="FreshEstimate">The locked panel's AUC (accuracy for more classes) on a fresh cohort of the same model; NaN when no panel was locked.</param>
+/// <param name="NullFeaturePValues">The screen's p-value of every feature not related to the outcome.</param>
+public sealed record PanelCalibration(
+    string Design,
+    ulong Seed,
+    bool IsNull,
+    int ClassCount,
+    int RelatedCount,
+    int Shortlisted,
+    int TrueDiscoveries,
+    int FalseDiscoveries,
+    double FalseDiscoveryProportion,
+    double DecoyEstimate,
+    int BaselineDiscoveries,
+    int BaselineTrueDiscoveries,
+    bool? PairFound,
+    bool? BaselinePairFound,
+    bool? ThresholdFound,
+    bool? BaselineThresholdFound,
+    int LockedPanelSize,
+    double SelectionAwareEstimate,
+    double FreshEstimate,
+    double[] NullFeaturePValues,
+    double Seconds)
+{
+    /// <summary>|selection-aware estimate - fresh estimate|; NaN when either is missing.</summary>
+    public double EstimateError => Math.Abs(SelectionAwareEstimate - FreshEstimate);
+
+    /// <summary>Both estimates exist, so the selection-aware one can be judged.</summary>
+    public bool HasEstimatePair => double.IsFinite(SelectionAwareEstimate) && double.IsFinite(FreshEstimate);
+}

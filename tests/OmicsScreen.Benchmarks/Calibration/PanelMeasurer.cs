@@ -1,0 +1,105 @@
+using System.Diagnostics;
+using OmicsScreen.Engine.Metrics;
+using OmicsScreen.Engine.Panels;
+using OmicsScreen.Screening.Locking;
+using OmicsScreen.Screening.Screen;
+using OmicsScreen.TestSupport.Calibration;
+
+namespace OmicsScreen.Benchmarks.Calibration;
+
+/// <summary>
+/// Screens one calibration panel with the default options and measures the result against the
+/// model's truth: discoveries, the decoy estimate, the univariate baseline, and the locked
+/// panel's selection-aware estimate against its performance on a fresh cohort.
+/// </summary>
+/// <remarks>
+/// Reads only <see cref="ScreenResult.Shortlist"/>, <see cref="ScreenResult.Decoys"/>,
+/// <see cref="ScreenResult.LockedPanelSize"/>, <see cref="ScreenResult.LockedPanelEstimate"/> and
+/// the features' p-values, so it keeps measuring while the screen's error control changes.
+/// </remarks>
+public static class PanelMeasurer
+{
+    /// <summary>Fresh cohort number 1 of the model: never the discovery samples (cohort 0).</summary>
+    private const int FreshCohortNumber = 1;
+
+    public static PanelCalibration Measure(CalibrationModel model, CalibrationSettings settings)
+    {
+        ArgumentNullException.ThrowIfNull(model);
+        ArgumentNullException.ThrowIfNull(settings);
+        var watch = Stopwatch.StartNew();
+        var panel = model.Discovery();
+        var truth = model.Truth;
+        var result = ScreenRunner.Run(panel, settings.ScreenOptions(model.Seed));
+
+        var shortlisted = new HashSet<int>();
+        foreach (var entry in result.Shortlist) shortlisted.Add(entry.Forest.FeatureIndex);
+        int trueDiscoveries = shortlisted.Count(f => truth[f]);
+        int falseDiscoveries = shortlisted.Count - trueDiscoveries;
+
+        var baseline = UnivariateBaseline.Discoveries(panel);
+        int baselineDiscoveries = 0, baselineTrue = 0;
+        for (int f = 0; f < baseline.Length; f++)
+        {
+            if (!baseline[f]) continue;
+            baselineDiscoveries++;
+            if (truth[f]) baselineTrue++;
+        }
+
+        bool? pairFound = null, baselinePairFound = null, thresholdFound = null, baselineThresholdFound = null;
+        if (model.InteractingPair.Count > 0)
+        {
+            pairFound = model.InteractingPair.All(shortlisted.Contains);
+            baselinePairFound = model.InteractingPair.All(f => baseline[f]);
+        }
+        if (model.ThresholdMarker >= 0)
+        {
+            thresholdFound = shortlisted.Contains(model.ThresholdMarker);
+            baselineThresholdFound = baseline[model.ThresholdMarker];
+        }
+
+        var nullPValues = new List<double>(panel.FeatureCount);
+        foreach (var feature in result.Features)
+            if (!truth[feature.FeatureIndex]) nullPValues.Add(feature.PValue);
+
+        int lockedSize = result.LockedPanelSize;
+        double fresh = double.NaN;
+        if (lockedSize > 0)
+        {
+            var locked = PanelLocker.Lock(panel, result, new PanelLockOptions { Seed = model.Seed, ThreadCount = settings.ThreadCount });
+            var cohort = model.DrawFreshCohort(CalibrationSettings.FreshCohortSize, FreshCohortNumber);
+            fresh = FreshEstimate(locked, cohort);
+        }
+        double estimate = lockedSize > 0 ? result.LockedPanelEstimate : double.NaN;
+
+        return new PanelCalibration(model.Name, model.Seed, model.IsNull, model.ClassCount, model.RelatedCount,
+            shortlisted.Count, trueDiscoveries, falseDiscoveries, (double)falseDiscoveries / Math.Max(1, shortlisted.Count),
+            result.Decoys.EstimatedFalseDiscoveryRate, baselineDiscoveries, baselineTrue,
+            pairFound, baselinePairFound, thresholdFound, baselineThresholdFound,
+            lockedSize, estimate, fresh, nullPValues.ToArray(), watch.Elapsed.TotalSeconds);
+    }
+
+    /// <summary>
+    /// The locked panel on a fresh cohort, in the measure of the selection-aware estimate: the AUC of
+    /// the positive class's vote share for two classes (Mann-Whitney form), else the share of
+    /// samples whose called class is right.
+    /// </summary>
+    private static double FreshEstimate(LockedPanel locked, Panel cohort)
+    {
+        var scores = LockedPanelScorer.Score(locked, cohort.Matrix);
+        var truth = cohort.Outcome.SampleClasses;
+        if (locked.IsBinary)
+        {
+            var probability = new double[scores.SampleCount];
+            var positive = new bool[scores.SampleCount];
+            for (int s = 0; s < probability.Length; s++)
+            {
+                probability[s] = scores.Probability(s, scores.PositiveClass);
+                positive[s] = truth[s] == scores.PositiveClass;
+            }
+            return MannWhitneyAuc.Compute(probability, positive);
+        }
+        int right = 0;
+        for (int s = 0; s < scores.SampleCount; s++) if (scores.PredictedClasses[s] == truth[s]) right++;
+        return (double)right / scores.SampleCount;
+    }
+}
