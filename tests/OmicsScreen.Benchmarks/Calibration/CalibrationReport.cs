@@ -73,7 +73,7 @@ public static class CalibrationReport
         else
         {
             double fdp = planted.Average(p => p.FalseDiscoveryProportion);
-            Goal(output, fdp <= FalseDiscoveryProportionGoal, "planted: mean FDP <= 0.10", Invariant($"mean FDP {fdp:F3} over {planted.Count} panels"));
+            Goal(output, fdp <= FalseDiscoveryProportionGoal, "planted: mean FDP <= 0.10", Invariant($"mean FDP {fdp:F3} over {Panels(planted.Count)}"));
 
             var withDecoys = planted.Where(p => double.IsFinite(p.DecoyEstimate)).ToList();
             if (withDecoys.Count == 0) Goal(output, null, "planted: mean decoy estimate within 0.05 of mean FDP", "no decoy estimate");
@@ -81,7 +81,7 @@ public static class CalibrationReport
             {
                 double decoy = withDecoys.Average(p => p.DecoyEstimate), trueFdp = withDecoys.Average(p => p.FalseDiscoveryProportion);
                 Goal(output, Math.Abs(decoy - trueFdp) <= DecoyAgreementGoal, "planted: mean decoy estimate within 0.05 of mean FDP",
-                    Invariant($"decoy {decoy:F3} vs FDP {trueFdp:F3} over {withDecoys.Count} panels"));
+                    Invariant($"decoy {decoy:F3} vs FDP {trueFdp:F3} over {Panels(withDecoys.Count)}"));
             }
 
             double ours = planted.Sum(p => p.TrueDiscoveries), baseline = planted.Sum(p => p.BaselineTrueDiscoveries);
@@ -104,12 +104,12 @@ public static class CalibrationReport
             double error = binaryPairs.Average(p => p.EstimateError);
             double bias = binaryPairs.Average(p => p.SelectionAwareEstimate - p.FreshEstimate);
             Goal(output, error <= MeanEstimateErrorGoal, "locked panel: mean |selection-aware - fresh AUC| <= 0.03",
-                Invariant($"{error:F3} over {binaryPairs.Count} panels (mean signed difference {bias:+0.000;-0.000})"));
+                Invariant($"{error:F3} over {Panels(binaryPairs.Count)} (mean signed difference {bias:+0.000;-0.000})"));
         }
         foreach (var s in summaries.Where(s => !s.IsNull))
             if (s.EstimatePairs == 0) Goal(output, null, $"locked panel on {s.Design}: mean |difference| <= 0.05", "no panel with both estimates");
             else Goal(output, s.MeanEstimateError <= DesignEstimateErrorGoal, $"locked panel on {s.Design}: mean |difference| <= 0.05",
-                Invariant($"{s.MeanEstimateError:F3} over {s.EstimatePairs} panels (max {s.MaxEstimateError:F3})"));
+                Invariant($"{s.MeanEstimateError:F3} over {Panels(s.EstimatePairs)} (max {s.MaxEstimateError:F3})"));
 
         var nullLocked = panels.Where(p => p.IsNull && p.ClassCount == 2 && p.LockedPanelSize > 0 && double.IsFinite(p.SelectionAwareEstimate)).ToList();
         int nullTwoClass = panels.Count(p => p.IsNull && p.ClassCount == 2);
@@ -147,6 +147,8 @@ public static class CalibrationReport
         string status = passed switch { true => "PASS", false => "FAIL", null => "NOT RUN" };
         output.WriteLine($"- {status}: {goal}: {detail}");
     }
+
+    private static string Panels(int count) => count == 1 ? "1 panel" : count.ToString(CultureInfo.InvariantCulture) + " panels";
 
     private static string Number(double value, string format) =>
         double.IsNaN(value) ? "n/a" : value.ToString(format, CultureInfo.InvariantCulture);

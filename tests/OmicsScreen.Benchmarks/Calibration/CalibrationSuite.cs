@@ -34,7 +34,7 @@ public static class CalibrationSuite
 
         var designs = CalibrationCatalogue.All.Where(d => settings.Only.Count == 0 || settings.Only.Contains(d)).ToList();
         var defaults = new Screening.Screen.ScreenOptions();
-        output.WriteLine(Invariant($"# calibration: {designs.Count} shapes/designs x {settings.SeedCount} seeds = {designs.Count * settings.SeedCount} panels; threads {(settings.ThreadCount == 0 ? "all" : settings.ThreadCount.ToString(CultureInfo.InvariantCulture))}"));
+        output.WriteLine(Invariant($"# calibration: {designs.Count} shapes/designs x {settings.SeedCount} seed{(settings.SeedCount == 1 ? "" : "s")} = {designs.Count * settings.SeedCount} panels; threads {(settings.ThreadCount == 0 ? "all" : settings.ThreadCount.ToString(CultureInfo.InvariantCulture))}"));
         output.WriteLine(Invariant($"# machine: {Environment.ProcessorCount} cores, load average {LoadAverage()}"));
         output.WriteLine(settings.Quick
             ? Invariant($"# QUICK run: {CalibrationSettings.QuickHalfSamplePairs} half-sample pairs (default {defaults.HalfSamplePairs}), {CalibrationSettings.QuickTreesPerForest} trees per forest (default {defaults.TreesPerForest}); every other option at its default. Quick figures show the suite works; judge the goals on a full run.")
@@ -58,7 +58,7 @@ public static class CalibrationSuite
         var ordered = panels.OrderBy(p => designs.IndexOf(p.Design)).ThenBy(p => p.Seed).ToList();
         CalibrationReport.Write(ordered, output);
         output.WriteLine();
-        output.WriteLine(Invariant($"Wall time: {wall:F0} s for {panels.Count} panels ({wall / Math.Max(1, panels.Count):F1} s per panel){(settings.Quick ? ", quick settings" : "")}; load average at the end {LoadAverage()}."));
+        output.WriteLine(Invariant($"Wall time: {wall:F0} s for {panels.Count} panel{(panels.Count == 1 ? "" : "s")} ({wall / Math.Max(1, panels.Count):F1} s per panel){(settings.Quick ? ", quick settings" : "")}; load average at the end {LoadAverage()}."));
         return 0;
     }
 

@@ -34,10 +34,10 @@ public static class KruskalWallis
             occupied++;
             sum += rankSums[c] * rankSums[c] / counts[c];
         }
-        double n = total;
-        double correction = 1 - tieTerm / (n * n * n - n);
+        double sampleCount = total;
+        double correction = 1 - tieTerm / (sampleCount * sampleCount * sampleCount - sampleCount);
         if (occupied < 2 || !(correction > 0)) return double.NaN;
-        double h = (12 / (n * (n + 1)) * sum - 3 * (n + 1)) / correction;
+        double h = (12 / (sampleCount * (sampleCount + 1)) * sum - 3 * (sampleCount + 1)) / correction;
         return ChiSquareUpperTail(Math.Max(0, h), occupied - 1);
     }
 
