@@ -128,17 +128,17 @@ public static class CalibrationReport
     {
         output.WriteLine("Uniformity of the screen's p-values (`Features[i].PValue`) on features unrelated to the outcome, pooled over seeds:");
         output.WriteLine();
-        output.WriteLine("| shape or design | null p-values | KS distance to U(0,1) | 5% critical value if independent | share p <= 0.01 | share p <= 0.001 |");
-        output.WriteLine("| --- | ---: | ---: | ---: | ---: | ---: |");
+        output.WriteLine("| shape or design | null p-values | KS distance to U(0,1) | 5% critical value if independent | median p | share p <= 0.01 | share p <= 0.001 |");
+        output.WriteLine("| --- | ---: | ---: | ---: | ---: | ---: | ---: |");
         foreach (var group in panels.GroupBy(p => p.Design))
         {
             var pValues = group.SelectMany(p => p.NullFeaturePValues).ToList();
             int tested = pValues.Count(p => !double.IsNaN(p));
             output.WriteLine(Invariant(
-                $"| {group.Key} | {tested} | {Number(PValueUniformity.KolmogorovSmirnovDistance(pValues), "F3")} | {(tested == 0 ? "-" : Number(PValueUniformity.CriticalDistance(tested), "F3"))} | {Number(PValueUniformity.ShareAtOrBelow(pValues, 0.01), "F4")} | {Number(PValueUniformity.ShareAtOrBelow(pValues, 0.001), "F4")} |"));
+                $"| {group.Key} | {tested} | {Number(PValueUniformity.KolmogorovSmirnovDistance(pValues), "F3")} | {(tested == 0 ? "-" : Number(PValueUniformity.CriticalDistance(tested), "F3"))} | {Number(PValueUniformity.Median(pValues), "F3")} | {Number(PValueUniformity.ShareAtOrBelow(pValues, 0.01), "F4")} | {Number(PValueUniformity.ShareAtOrBelow(pValues, 0.001), "F4")} |"));
         }
         output.WriteLine();
-        output.WriteLine("Under a valid null the shares are about 0.01 and 0.001. Features in correlated blocks are not independent, so a pooled distance may exceed the critical value without the p-values being wrong; a distance well above it, or a share of small p-values above the level, is a miscalibrated null.");
+        output.WriteLine("Under a valid null the median is about 0.5 and the shares about 0.01 and 0.001; a median well above 0.5 with a large distance means p-values piled near 1 (a conservative null, which costs power), shares above the levels a liberal one (false discoveries). Features in correlated blocks are not independent, so a pooled distance may exceed the critical value without the p-values being wrong; a distance well above it, or a share of small p-values above the level, is a miscalibrated null.");
     }
 
     /// <summary>One goal line; <paramref name="passed"/> null means the goal could not be judged on this run.</summary>

@@ -39,4 +39,13 @@ public static class PValueUniformity
         }
         return tested == 0 ? double.NaN : (double)below / tested;
     }
+
+    /// <summary>The median of the p-values (mean of the two middle values for an even count); NaN for none.</summary>
+    public static double Median(IReadOnlyList<double> pValues)
+    {
+        var sorted = pValues.Where(p => !double.IsNaN(p)).Order().ToArray();
+        if (sorted.Length == 0) return double.NaN;
+        int middle = sorted.Length / 2;
+        return sorted.Length % 2 == 1 ? sorted[middle] : 0.5 * (sorted[middle - 1] + sorted[middle]);
+    }
 }
