@@ -51,10 +51,8 @@ public static class ScreenCostModel
         return units;
     }
 
-    /// <summary>Decoys per repeat, as ScreenSettings resolves them: one per feature up to the automatic limit, else none.</summary>
-    public static int Decoys(int featureCount, ScreenOptions options) =>
-        options.DecoyCount >= 0 ? options.DecoyCount
-            : featureCount <= options.AutomaticDecoyFeatureLimit ? featureCount : 0;
+    /// <summary>Decoys of the run, as ScreenSettings resolves them.</summary>
+    public static int Decoys(int featureCount, ScreenOptions options) => ScreenSettings.DecoyCountFor(options, featureCount);
 
     /// <summary>One half-sample repeat: the plain forest with its permutation importance, and the corrected-importance forest.</summary>
     private static double RepeatCost(ForestCostModel cost, int trees, double rows, int featureCount, int decoys) =>

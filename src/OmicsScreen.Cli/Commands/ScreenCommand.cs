@@ -85,7 +85,7 @@ public sealed class ScreenCommand : Command
 
     public Option<double> MinFrequency { get; } = new("--min-frequency")
     {
-        Description = "Selection frequency a marker needs for the shortlist, in (0.5, 1].",
+        Description = "Selection frequency a marker needs for the shortlist, in (0.5, 1]; 0 (the default) leaves the list to the q-values.",
         DefaultValueFactory = _ => Defaults.FrequencyThreshold,
         HelpName = "F",
     };
@@ -99,9 +99,16 @@ public sealed class ScreenCommand : Command
 
     public Option<int> Decoys { get; } = new("--decoys")
     {
-        Description = "Decoys (permuted copies of features) per repeat for the target-decoy error estimate; -1: one per feature up to 5,000 features, none above.",
+        Description = "Decoys: copies of features permuted once per run and screened beside them; they give the p-values' null and the estimate of false markers. -1: one per feature, at least 1,000 and at most 5,000; 0 turns them off.",
         DefaultValueFactory = _ => Defaults.DecoyCount,
         HelpName = "N",
+    };
+
+    public Option<string> Rule { get; } = new("--shortlist-rule")
+    {
+        Description = "How the list is cut: q-value (Benjamini-Hochberg on the decoy-calibrated p-values) or decoy-bound (the longest list whose decoy estimate, with the +1 correction, stays at or under --max-q).",
+        DefaultValueFactory = _ => "q-value",
+        HelpName = "RULE",
     };
 
     public Option<int> OutcomePermutations { get; } = new("--outcome-permutations")
@@ -180,7 +187,7 @@ public sealed class ScreenCommand : Command
     {
         Input.AddTo(this);
         foreach (var option in new Option[] { Out, Force, Resume, Part, Pairs, Trees, FeaturesPerSplit, MinLeaf, Balance, RepeatLevel, PerRepeat,
-                     MinFrequency, MaxQ, Decoys, OutcomePermutations, RedundancyRho, CurveFolds, CurveRepeats, CurveInnerPairs,
+                     MinFrequency, MaxQ, Rule, Decoys, OutcomePermutations, RedundancyRho, CurveFolds, CurveRepeats, CurveInnerPairs,
                      MaxPanelSize, Seed, Threads, ShowSampleIds, Quiet })
             Options.Add(option);
         Options.Add(MemoryLimit);
@@ -208,6 +215,7 @@ public sealed class ScreenCommand : Command
                 FrequencyThreshold = parse.GetValue(MinFrequency),
                 QValueThreshold = parse.GetValue(MaxQ),
                 DecoyCount = parse.GetValue(Decoys),
+                Rule = ParseRule(parse.GetValue(Rule)),
                 OutcomePermutations = parse.GetValue(OutcomePermutations),
                 RedundancyCorrelation = parse.GetValue(RedundancyRho),
                 CurveFolds = parse.GetValue(CurveFolds),
@@ -218,4 +226,12 @@ public sealed class ScreenCommand : Command
             },
         })));
     }
+
+    /// <summary>The rule's name as the user writes it.</summary>
+    internal static ShortlistRule ParseRule(string? name) => name?.Trim().ToLowerInvariant() switch
+    {
+        "q-value" or "qvalue" or null or "" => ShortlistRule.QValue,
+        "decoy-bound" or "decoybound" => ShortlistRule.DecoyBound,
+        _ => throw new CommandInputException($"--shortlist-rule: '{name}' is not a rule; use q-value or decoy-bound."),
+    };
 }

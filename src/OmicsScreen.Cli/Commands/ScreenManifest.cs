@@ -58,10 +58,17 @@ internal static class ScreenManifest
             results = new
             {
                 shortlisted = result.Shortlist.Count,
+                shortlist_rule = settings.Options.Rule == ShortlistRule.QValue ? "q-value" : "decoy-bound",
                 recommended_panel_size = result.PanelSize?.RecommendedSize,
+                locked_panel_size = result.LockedPanelSize,
+                locked_panel_selection_aware_estimate = double.IsNaN(result.LockedPanelEstimate) ? (double?)null : result.LockedPanelEstimate,
+                decoys_passing = result.Decoys.DecoysPassing,
+                expected_false_markers = double.IsNaN(result.Decoys.ExpectedFalseMarkers) ? (double?)null : result.Decoys.ExpectedFalseMarkers,
+                decoy_false_discovery_rate = double.IsNaN(result.Decoys.EstimatedFalseDiscoveryRate) ? (double?)null : result.Decoys.EstimatedFalseDiscoveryRate,
+                decoy_false_discovery_bound = double.IsNaN(result.Decoys.FalseDiscoveryBound) ? (double?)null : result.Decoys.FalseDiscoveryBound,
                 expected_false_selections_bound = result.Stability.ExpectedFalseSelectionsBound,
-                decoy_false_discovery_rate = result.Decoys.EstimatedFalseDiscoveryRate,
                 selection_stability = result.Stability.Stability.Stability,
+                shortlist_length_stability = double.IsNaN(result.Stability.ListStability.Stability) ? (double?)null : result.Stability.ListStability.Stability,
                 reference_out_of_bag_error = result.ReferenceForest.OutOfBagError,
                 reference_out_of_bag_auc = result.ReferenceForest.OutOfBagAuc,
             },

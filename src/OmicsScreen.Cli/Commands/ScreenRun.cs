@@ -89,8 +89,9 @@ internal static class ScreenRun
         if (result.Univariate.PerCohort.Count > 0)
             folder.WriteText("marker_statistics_by_cohort.tsv", w => UnivariateTableWriter.WritePerCohort(w, result.Univariate));
         if (result.Cohorts is { } cohorts) CohortOutput.Write(folder, cohorts);
-        // The panel of the recommended size, locked for scoring new cohorts with `apply`.
-        folder.WrittenFiles.Add(ApplyModelFile.LockInto(folder.Path, loaded, result));
+        // The shortlist (or its prefix the curve recommends), locked for scoring new cohorts with
+        // `apply`; an empty shortlist locks nothing.
+        if (result.LockedPanelSize > 0) folder.WrittenFiles.Add(ApplyModelFile.LockInto(folder.Path, loaded, result));
         var finished = DateTimeOffset.UtcNow;
         var report = ReportInput(options, loaded, result, folder, started, finished, loadSeconds) with { MergedParts = mergedParts };
         folder.WriteText(ReportFileName, w => w.Write(ScreenReport.Render(report)));
@@ -142,11 +143,11 @@ internal static class ScreenRun
         output.WriteLine();
         if (result.Shortlist.Count == 0)
         {
-            output.WriteLine($"Shortlist: empty. No feature was selected in at least {o.FrequencyThreshold * 100:0}% of repeats with q <= {o.QValueThreshold}.");
+            output.WriteLine($"Shortlist: empty. No feature reached q <= {o.QValueThreshold}{FrequencyClause(o)}.");
         }
         else
         {
-            output.WriteLine($"Shortlist: {result.Shortlist.Count} markers (selected in >= {o.FrequencyThreshold * 100:0}% of repeats, q <= {o.QValueThreshold})"
+            output.WriteLine($"Shortlist: {result.Shortlist.Count} markers (q <= {o.QValueThreshold}{FrequencyClause(o)})"
                 + (result.Shortlist.Count > PrintedMarkers ? $", top {PrintedMarkers} shown" : ""));
             var table = new TextTable("rank", "marker", "frequency", "median rank", "q", "direction", "AUC", "group").AlignRight(0, 2, 3, 4, 6, 7);
             foreach (var e in result.Shortlist.Take(PrintedMarkers))
@@ -160,27 +161,24 @@ internal static class ScreenRun
             table.WriteTo(output);
         }
         output.WriteLine();
-        var s = result.Stability;
         output.WriteLine("Error control:");
-        output.WriteLine(FormattableString.Invariant($"  q-values: Benjamini-Hochberg over {panel.FeatureCount} features; shortlisted markers have q <= {o.QValueThreshold}."));
-        if (result.Decoys.DecoyCount > 0)
-            output.WriteLine(FormattableString.Invariant(
-                $"  decoys: {result.Decoys.DecoysPassing} of {result.Decoys.DecoyCount} permuted copies passed the shortlist rule; estimated false discovery rate {result.Decoys.EstimatedFalseDiscoveryRate:0.###}."));
-        output.WriteLine(FormattableString.Invariant(
-            $"  stability selection: repeats selected {s.MeanSelectedPerRepeat:0.#} features on average, so at most {s.ExpectedFalseSelectionsBound:0.##} noise features are expected to reach {o.FrequencyThreshold * 100:0}% (Meinshausen-Buhlmann bound; loose when repeats select many)."));
-        output.WriteLine(FormattableString.Invariant(
-            $"  agreement between repeats (Nogueira et al. 2018): {s.Stability.Stability:0.00} [{s.Stability.Interval.Lower:0.00}, {s.Stability.Interval.Upper:0.00}], over everything each repeat selected."));
+        foreach (string line in ErrorControlText.Lines(result)) output.WriteLine("  " + line);
         if (result.PanelSize is { } curve)
         {
             var point = curve.Points.First(p => p.PanelSize == curve.RecommendedSize);
             output.WriteLine(FormattableString.Invariant(
-                $"Recommended panel size: {curve.RecommendedSize} markers, selection-aware {curve.Metric} {point.SelectionAwareAuc:0.000} +- {point.SelectionAwareAucStandardError:0.000} ({curve.FoldCount}-fold, selection inside each fold); optimistic {point.OptimisticAuc:0.000} if selection re-uses the samples."));
+                $"Panel-size curve: {curve.RecommendedSize} markers recommended over the whole grid, selection-aware {curve.Metric} {point.SelectionAwareAuc:0.000} +- {point.SelectionAwareAucStandardError:0.000} ({curve.FoldCount}-fold, selection inside each fold); optimistic {point.OptimisticAuc:0.000} if selection re-uses the samples."));
         }
+        output.WriteLine(ErrorControlText.LockedPanelSentence(result));
         if (result.Cohorts is { } cohorts) CohortOutput.PrintSummary(output, result, cohorts);
         output.WriteLine();
         output.WriteLine($"Results: {folder}");
         output.WriteLine($"Report: {Path.Combine(folder, ReportFileName)}");
-        output.WriteLine($"Locked panel for `omicsscreen apply`: {Path.Combine(folder, Data.Models.LockedPanelFile.DefaultFileName)}");
+        if (result.LockedPanelSize > 0)
+            output.WriteLine($"Locked panel for `omicsscreen apply`: {Path.Combine(folder, Data.Models.LockedPanelFile.DefaultFileName)}");
         output.WriteLine("A screen is not a diagnostic test: confirm every marker in independent cohorts before any use.");
     }
+
+    private static string FrequencyClause(ScreenOptions options) =>
+        options.FrequencyThreshold > 0 ? FormattableString.Invariant($" and selected in >= {options.FrequencyThreshold * 100:0}% of repeats") : "";
 }

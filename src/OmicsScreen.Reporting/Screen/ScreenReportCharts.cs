@@ -73,7 +73,7 @@ internal static class ScreenReportCharts
             new XYChartOptions(Invariant($"Selection frequency of the first {count} features"), OrderAxisLabel, FrequencyAxisLabel,
                 YMinimum: 0, YMaximum: 1),
             [new XYSeries("Feature", positions, frequencies, XYSeriesStyle.Points)],
-            [new ReferenceLine(ChartAxis.Y, threshold, Invariant($"Shortlist threshold {threshold:0.##}"))]);
+            threshold > 0 ? [new ReferenceLine(ChartAxis.Y, threshold, Invariant($"Shortlist threshold {threshold:0.##}"))] : []);
     }
 
     public static SvgImage OutOfBagError(ReferenceForestSummary forest)

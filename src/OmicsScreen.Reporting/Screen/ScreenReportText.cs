@@ -29,17 +29,19 @@ internal static class ScreenReportText
         "Repeats. The samples are split many times into two halves of equal size (complementary pairs), and forests are grown on each half (Shah & Samworth 2013). A marker that matters should be found again and again across halves.",
         "Corrected impurity importance. Each forest measures how much a feature's splits reduce Gini impurity, corrected so that features with many distinct values or none of the signal are not favoured (Nembrini, König & Wright 2018).",
         "Permutation importance. The accuracy lost on the samples a tree did not see (out-of-bag) when one feature's values are shuffled (Breiman 2001).",
-        "What noise looks like. Importances at or below zero are mirrored to form a null distribution (Janitza, Celik & Boulesteix 2018), augmented with decoys: copies of real features whose values were shuffled, so they cannot carry signal. In each repeat a feature is selected when its importance exceeds that null's upper quantile.",
-        "False discoveries. p-values against that null are adjusted for the number of features with the Benjamini & Hochberg (1995) procedure (q-values). The share of decoys that would pass the shortlist rule gives a second, direct estimate of the false discovery rate.",
-        "Stability. The selection frequency over repeats drives the shortlist (Meinshausen & Bühlmann 2010, with their bound on the expected number of noise features reaching the threshold). Agreement between repeats is summarised by the estimator of Nogueira, Sechidis & Brown (2018) with its 95% interval.",
-        "Panel size. The whole selection is rerun inside each outer training part and judged on the held-out part, so the estimate is selection-aware; choosing markers on all samples first and then testing them is optimistic (Ambroise & McLachlan 2002). The recommended size is the smallest within one standard error of the best (the one-SE rule, Breiman, Friedman, Olshen & Stone 1984).",
+        "What noise looks like. Decoys are copies of real features whose values were permuted once for the whole run and kept in every repeat: like a real marker unrelated to the outcome, a decoy keeps whatever chance association it has with the outcome in every half-sample, so its importance averaged over repeats follows the same law. In each repeat a feature is selected when its importance exceeds the upper decile of that repeat's decoys.",
+        "False discoveries. Each feature's averaged importance gets a p-value against the decoys' averaged importances; beyond the few largest decoys the tail is a generalized Pareto fit (Knijnenburg et al. 2009), so small p-values keep their resolution. The p-values are adjusted for the number of features with the Benjamini & Hochberg (1995) procedure (q-values). The decoys that pass the same rule, scaled from decoys to features, estimate how many listed markers are false (target-decoy reasoning; the +1 form of Barber & Candès 2015 gives an upper figure).",
+        "Stability. The selection frequency over repeats is part of the shortlist rule. How much a list of the shortlist's length changes between half-samples is summarised by the estimator of Nogueira, Sechidis & Brown (2018) with its 95% interval; the Meinshausen & Bühlmann (2010) bound is quoted only where it is smaller than the list.",
+        "Panel size. The whole selection is rerun inside each outer training part and judged on the held-out part, so the estimate is selection-aware; choosing markers on all samples first and then testing them is optimistic (Ambroise & McLachlan 2002). The recommended size is the smallest within one standard error of the best (the one-SE rule, Breiman, Friedman, Olshen & Stone 1984). The locked panel is the shortlist or its prefix chosen by that rule among sizes no longer than the list; its estimate repeats the screen, the rule and the size choice inside every fold, with the size chosen on the other folds' scores only.",
         "Single-marker statistics. Direction, median ratio and the Mann-Whitney AUC compare the positive class with the rest; the AUC's 95% interval uses DeLong, DeLong & Clarke-Pearson (1988).",
     ];
 
     public static string Answer(Panel panel, ScreenResult result)
     {
         var options = result.Settings.Options;
-        string rule = Invariant($"selected in at least {options.FrequencyThreshold * 100:0.#}% of {result.Settings.RepeatCount} half-sample repeats with q ≤ {options.QValueThreshold:0.###}");
+        string rule = options.FrequencyThreshold > 0
+            ? Invariant($"selected in at least {options.FrequencyThreshold * 100:0.#}% of {result.Settings.RepeatCount} half-sample repeats with q ≤ {options.QValueThreshold:0.###}")
+            : Invariant($"q ≤ {options.QValueThreshold:0.###}");
         string forest = result.ReferenceForest.OutOfBagAuc is { } auc
             ? Invariant($" A forest on all samples and features has out-of-bag error {result.ReferenceForest.OutOfBagError:0.000} and AUC {auc:0.000}.")
             : Invariant($" A forest on all samples and features has out-of-bag error {result.ReferenceForest.OutOfBagError:0.000}.");
@@ -64,21 +66,8 @@ internal static class ScreenReportText
             + Invariant($"Choosing the markers once on all samples would suggest {recommended.OptimisticAuc:0.000}: that figure is optimistic and should not be quoted.");
     }
 
-    public static string Confidence(ScreenResult result)
-    {
-        var options = result.Settings.Options;
-        var decoys = result.Decoys;
-        var stability = result.Stability;
-        string decoyText = decoys.DecoyCount > 0
-            ? double.IsFinite(decoys.EstimatedFalseDiscoveryRate)
-                ? Invariant($"{decoys.DecoysPassing} of {decoys.DecoyCount} decoys (shuffled copies of real features) passed the shortlist rule, which puts the estimated false discovery rate of the shortlist at {decoys.EstimatedFalseDiscoveryRate * 100:0.#}%.")
-                : Invariant($"{decoys.DecoysPassing} of {decoys.DecoyCount} decoys passed the shortlist rule.")
-            : "No decoys were used (the panel has too many features for automatic decoys), so there is no decoy estimate of the false discovery rate.";
-        return "How confident the screen is: " + decoyText
-            + Invariant($" Every shortlisted marker has a Benjamini-Hochberg q-value of at most {options.QValueThreshold:0.###} and a selection frequency of at least {options.FrequencyThreshold:0.##}.")
-            + Invariant($" Repeats selected {stability.MeanSelectedPerRepeat:0.#} features on average; at most {stability.ExpectedFalseSelectionsBound:0.##} noise features are expected to reach that frequency (Meinshausen-Bühlmann bound). ")
-            + Invariant($"Agreement between repeats (Nogueira stability) is {stability.Stability.Stability:0.00} [95% interval {stability.Stability.Interval.Lower:0.00} to {stability.Stability.Interval.Upper:0.00}] on a scale where 1 means every repeat chose the same features.");
-    }
+    public static string Confidence(ScreenResult result) =>
+        "How confident the screen is: " + string.Join(" ", ErrorControlText.Lines(result)) + " " + ErrorControlText.LockedPanelSentence(result);
 
     /// <summary>Every screen parameter in plain words, with the values resolved for this panel.</summary>
     public static IReadOnlyList<KeyValuePair<string, string>> Parameters(ScreenSettings settings)
@@ -94,9 +83,9 @@ internal static class ScreenReportText
             new("Class-balanced trees", Invariant($"{(settings.ClassBalanced ? "yes" : "no")} (setting: {o.Balance})")),
             new("Per-repeat selection level", Invariant($"{o.RepeatSelectionLevel:0.###}")),
             new("Cap on features selected per repeat", o.SelectedPerRepeat > 0 ? Integer(o.SelectedPerRepeat) : "none"),
-            new("Selection frequency threshold", Invariant($"{o.FrequencyThreshold:0.###}")),
+            new("Selection frequency threshold", o.FrequencyThreshold > 0 ? Invariant($"{o.FrequencyThreshold:0.###}") : "none (frequency orders the list)"),
             new("q-value threshold", Invariant($"{o.QValueThreshold:0.###}")),
-            new("Decoys per repeat", o.DecoyCount >= 0 ? Integer(settings.DecoyCount) : Invariant($"{settings.DecoyCount} (automatic; off above {o.AutomaticDecoyFeatureLimit} features)")),
+            new("Decoys (each permuted once per run)", o.DecoyCount >= 0 ? Integer(settings.DecoyCount) : Invariant($"{settings.DecoyCount} (automatic: one per feature, {o.AutomaticDecoyFloor} to {o.AutomaticDecoyCeiling})")),
             new("Outcome permutations", o.OutcomePermutations > 0 ? Integer(o.OutcomePermutations) : "none"),
             new("Redundancy correlation (Spearman |rho|)", Invariant($"{o.RedundancyCorrelation:0.###}")),
             new("Panel-size curve", o.CurveFolds > 0

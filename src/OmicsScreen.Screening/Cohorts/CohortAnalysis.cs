@@ -23,7 +23,15 @@ internal static class CohortAnalysis
     /// <summary>One-cohort-against-the-rest AUC from which a marker counts as separating cohorts.</summary>
     private const double StrongCohortSeparation = 0.75;
 
-    private const double HeterogeneityFlagI2 = 0.75;
+    /// <summary>
+    /// Smallest spread of within-cohort AUCs (largest minus smallest) a heterogeneity flag needs
+    /// besides a significant Cochran's Q: with many samples a tiny difference is significant and
+    /// of no consequence to a lab (common practice: a test and an effect size together).
+    /// </summary>
+    private const double HeterogeneityMinimumAucSpread = 0.10;
+
+    /// <summary>Repeat coordinate of the forests that score a held-out cohort: clear of the held-out screen's own repeats.</summary>
+    private const int HeldOutScoringRepeat = 1 << 20;
     private const double ConfoundingCramersV = 0.5;
 
     // Index slots of SeedSchedule for the cohort check's streams, clear of the screen's own.
@@ -32,7 +40,7 @@ internal static class CohortAnalysis
     private const int CohortForestRepeat = int.MaxValue - 1;
 
     public static CohortResult Run(Panel panel, BinnedMatrix matrix, ScreenSettings settings, IReadOnlyList<int> order,
-        UnivariateTable univariate, int panelSize, ScreenWork work, Action<int, int>? progress,
+        UnivariateTable univariate, ScreenWork work, Action<int, int>? progress,
         CancellationToken cancellation)
     {
         var cohort = panel.Cohort ?? throw new ArgumentException("The panel names no cohort.");
@@ -85,6 +93,7 @@ internal static class CohortAnalysis
         var markers = new MarkerHeterogeneity[featureCount];
         Parallel.For(0, featureCount, new ParallelOptions { MaxDegreeOfParallelism = ThreadCount(options) },
             i => markers[i] = Heterogeneity(panel, univariate, order[i], positiveContrast, cohortImportanceRank[order[i]]));
+        FlagHeterogeneity(markers, options.QValueThreshold);
 
         // Leave one cohort out: screen the others, score the held-out one.
         var heldOut = new List<HeldOutCohort>();
@@ -92,8 +101,13 @@ internal static class CohortAnalysis
         {
             cancellation.ThrowIfCancellationRequested();
             var training = TrainingRowsWithout(panel, c);
-            var top = work.HeldOutScreen(c).Order.AsSpan(0, Math.Min(panelSize, featureCount)).ToArray();
-            heldOut.Add(ScoreHeldOut(matrix, panel, settings, top, training, rowsOf[c], cohort.LevelNames[c], HeldOutSeed(options, c)));
+            // The panel is what the procedure locks when the held-out cohort is not there: the other
+            // cohorts' own shortlist, up to the curve's size limit; their size choice never sees it.
+            var shortlist = work.HeldOutScreen(c).Shortlist;
+            var panelFeatures = shortlist.AsSpan(0, Math.Min(shortlist.Length, options.CurveMaxPanelSize)).ToArray();
+            heldOut.Add(panelFeatures.Length == 0
+                ? new HeldOutCohort(cohort.LevelNames[c], rowsOf[c].Length, 0, double.NaN, ConfidenceInterval.Undefined(0.95), double.NaN)
+                : ScoreHeldOut(matrix, panel, settings, panelFeatures, training, rowsOf[c], cohort.LevelNames[c], HeldOutSeed(options, c)));
             progress?.Invoke(++done, steps);
         }
 
@@ -191,9 +205,8 @@ internal static class CohortAnalysis
         // cohorts there is no consistent effect (the pooled within-cohort interval spans 0.5).
         bool pooledEffect = !(pooled.AucInterval.Lower <= 0.5 && pooled.AucInterval.Upper >= 0.5);
         bool noWithinEffect = within is not null && within.RandomInterval.Lower <= 0.5 && within.RandomInterval.Upper >= 0.5;
-        var flag = pooledEffect && noWithinEffect && separation >= StrongCohortSeparation ? CohortFlag.CohortArtefact
-            : within is not null && within.I2 >= HeterogeneityFlagI2 ? CohortFlag.Heterogeneous
-            : CohortFlag.None;
+        // Heterogeneity is flagged afterwards, across all features at once (FlagHeterogeneity).
+        var flag = pooledEffect && noWithinEffect && separation >= StrongCohortSeparation ? CohortFlag.CohortArtefact : CohortFlag.None;
         return new MarkerHeterogeneity(feature, panel.Matrix.FeatureNames[feature], effects, within, pooled.Auc, pooled.AucInterval,
             separation, separated, cohortRank, flag);
     }
@@ -261,7 +274,7 @@ internal static class CohortAnalysis
     {
         var outcome = panel.Outcome;
         var selected = matrix.SelectFeatures(features);
-        var forestOptions = settings.ForestOptions(panel.Subject, seed, 0);
+        var forestOptions = settings.ForestOptions(panel.Subject, seed, HeldOutScoringRepeat);
         forestOptions = forestOptions with { Tree = forestOptions.Tree with { FeaturesPerSplit = null } };
         var forest = ForestTrainer.Train(selected, outcome, forestOptions, training);
         var prediction = forest.Predict(selected);
@@ -283,6 +296,40 @@ internal static class CohortAnalysis
             interval = AucInterval.Compute(estimate.Auc, estimate.StandardError);
         }
         return new HeldOutCohort(cohortName, test.Length, features.Length, auc, interval, (double)wrong / test.Length);
+    }
+
+    /// <summary>
+    /// Flags a marker as heterogeneous when Cochran's Q test of its within-cohort AUCs survives
+    /// Benjamini-Hochberg (1995) adjustment across all features at the screen's level, and its
+    /// within-cohort AUCs spread by at least <see cref="HeterogeneityMinimumAucSpread"/>. An
+    /// artefact flag is kept as it is. Every marker gets its Q test's q-value.
+    /// </summary>
+    internal static void FlagHeterogeneity(MarkerHeterogeneity[] markers, double level)
+    {
+        var pValues = new double[markers.Length];
+        for (int i = 0; i < markers.Length; i++)
+        {
+            double p = markers[i].WithinCohort?.QPValue ?? double.NaN;
+            pValues[i] = double.IsNaN(p) ? 1 : p;
+        }
+        var qValues = BenjaminiHochberg.Adjust(pValues);
+        for (int i = 0; i < markers.Length; i++)
+        {
+            var marker = markers[i];
+            double low = double.PositiveInfinity, high = double.NegativeInfinity;
+            foreach (var effect in marker.Effects)
+                if (double.IsFinite(effect.Auc))
+                {
+                    low = Math.Min(low, effect.Auc);
+                    high = Math.Max(high, effect.Auc);
+                }
+            bool heterogeneous = marker.WithinCohort is not null && qValues[i] <= level && high - low >= HeterogeneityMinimumAucSpread;
+            markers[i] = marker with
+            {
+                HeterogeneityQValue = marker.WithinCohort is null ? double.NaN : qValues[i],
+                Flag = marker.Flag == CohortFlag.None && heterogeneous ? CohortFlag.Heterogeneous : marker.Flag,
+            };
+        }
     }
 
     private static int[] RankDescending(ReadOnlySpan<double> values)

@@ -6,6 +6,9 @@ public enum CohortFlag
     None,
     /// <summary>Differs between cohorts but not between classes within them: the signal is explained by cohort.</summary>
     CohortArtefact,
-    /// <summary>The within-cohort effect varies between cohorts far more than chance allows (I^2 at or above 0.75).</summary>
+    /// <summary>
+    /// The within-cohort effect varies between cohorts more than chance allows: Cochran's Q test
+    /// significant after Benjamini-Hochberg across features, and within-cohort AUCs 0.10 or more apart.
+    /// </summary>
     Heterogeneous,
 }

@@ -19,4 +19,8 @@ public sealed record MarkerHeterogeneity(
     double CohortSeparation,
     string SeparatedCohort,
     int CohortImportanceRank,
-    CohortFlag Flag);
+    CohortFlag Flag)
+{
+    /// <summary>Benjamini-Hochberg q-value of Cochran's Q test across all features; NaN with fewer than two usable cohorts.</summary>
+    public double HeterogeneityQValue { get; init; } = double.NaN;
+}

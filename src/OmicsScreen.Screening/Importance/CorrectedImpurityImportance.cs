@@ -16,8 +16,8 @@ namespace OmicsScreen.Screening.Importance;
 /// bias of impurity importance toward features with many distinct values (Strobl et al. 2007,
 /// BMC Bioinformatics 8:25). AIR of a noise feature is then centred on 0 and often negative,
 /// which is what <see cref="JanitzaNull"/> uses. A decoy is a second, differently permuted copy
-/// of a real feature, scored the same way against its source's permuted copy: a known-null feature for
-/// checking error control. The forest is used for these importances only.
+/// of a real feature, permuted once per run and scored the same way against its source's permuted
+/// copy: a known-null feature whose statistics give the screen's null (<see cref="DecoyNull"/>). The forest is used for these importances only.
 /// MDI is the engine's <see cref="ImpurityImportance.MeanDecrease"/>: per tree, the sum of
 /// (W_t G_t - W_L G_L - W_R G_R)/W_root over the feature's splits, averaged over trees.
 /// </remarks>
@@ -53,9 +53,12 @@ public static class CorrectedImpurityImportance
     }
 
     /// <summary>
-    /// Columns [real 0..p-1, permuted copy of each real feature, one decoy per listed source]. The decoys
-    /// are permuted copies made from a second seed, Derive(runSeed, repeat, 0, PermutedCopy), so decoy i never
-    /// reuses the permutation of copy i.
+    /// Columns [real 0..p-1, permuted copy of each real feature, one decoy per listed source]. The
+    /// permuted copies are drawn afresh for each repeat: they only correct the bias of impurity
+    /// importance. The decoys are permuted once per run, from Derive(runSeed, DecoyPlan.DecoyRepeat,
+    /// 0, PermutedCopy) (<see cref="DecoyPlan"/>), and every repeat reuses them: like a real null feature, a decoy then keeps
+    /// its chance association with the outcome in every repeat, so its averaged importance and its
+    /// selection frequency follow the law of a null feature's. Decoy i never reuses the permutation of copy i.
     /// </summary>
     internal static BinnedMatrix Augment(BinnedMatrix matrix, ReadOnlySpan<int> decoySources, ulong runSeed, int repeat, int threadCount = 0)
     {
@@ -63,7 +66,7 @@ public static class CorrectedImpurityImportance
         for (int f = 0; f < allFeatures.Length; f++) allFeatures[f] = f;
         var withCopies = matrix.WithPermutedCopies(allFeatures, runSeed, repeat, threadCount);
         if (decoySources.IsEmpty) return withCopies;
-        ulong decoySeed = SeedSchedule.Derive(runSeed, repeat, 0, SeedPurpose.PermutedCopy);
-        return withCopies.WithPermutedCopies(decoySources, decoySeed, repeat, threadCount);
+        ulong decoySeed = SeedSchedule.Derive(runSeed, DecoyPlan.DecoyRepeat, 0, SeedPurpose.PermutedCopy);
+        return withCopies.WithPermutedCopies(decoySources, decoySeed, 0, threadCount);
     }
 }

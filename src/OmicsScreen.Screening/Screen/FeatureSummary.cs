@@ -7,8 +7,8 @@ namespace OmicsScreen.Screening.Screen;
 /// <param name="MedianRank">Median over repeats of the combined rank (mean of corrected-importance and permutation ranks; 1 = best).</param>
 /// <param name="RankLowerQuartile">25th percentile of the combined rank over repeats (Hyndman-Fan type 7).</param>
 /// <param name="RankUpperQuartile">75th percentile of the combined rank over repeats.</param>
-/// <param name="NullP">p-value of the mean corrected importance against the mirrored-and-decoy null (<see cref="Importance.DecoyAugmentedNull"/>).</param>
-/// <param name="PValue"><paramref name="NullP"/>, or the Altmann et al. (2010) p-value when outcome permutations ran.</param>
+/// <param name="NullP">p-value of the mean corrected importance against the decoys' means (<see cref="Importance.DecoyNull"/>), or against the mirrored null when the run has no decoys.</param>
+/// <param name="PValue">The forest's p-value (<see cref="ForestP"/>) combined with the rank test's (<see cref="RankTestP"/>) by the Cauchy combination test (Liu &amp; Xie 2020), then calibrated against the decoys' combinations (<see cref="Importance.DecoyNull"/>).</param>
 /// <param name="QValue">Benjamini-Hochberg (1995) adjusted <paramref name="PValue"/> across all features.</param>
 /// <param name="Order">1-based position in the screen's final order (frequency, then median rank).</param>
 public sealed record FeatureSummary(
@@ -28,4 +28,14 @@ public sealed record FeatureSummary(
     double OutcomePermutationP,
     double PValue,
     double QValue,
-    int Order);
+    int Order)
+{
+    /// <summary><see cref="NullP"/>, or the Altmann et al. (2010) p-value when outcome permutations ran.</summary>
+    public double ForestP { get; init; } = double.NaN;
+
+    /// <summary>The rank test's p-value on the same samples; NaN when the screen used the forest's evidence alone.</summary>
+    public double RankTestP { get; init; } = double.NaN;
+
+    /// <summary>The Cauchy combination of <see cref="ForestP"/> and <see cref="RankTestP"/>, before its calibration against the decoys.</summary>
+    public double CombinedP { get; init; } = double.NaN;
+}

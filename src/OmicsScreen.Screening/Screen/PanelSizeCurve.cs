@@ -1,6 +1,29 @@
 namespace OmicsScreen.Screening.Screen;
 
-/// <summary>The panel-size curve and the size it recommends.</summary>
+/// <summary>The panel-size curve, the size it recommends, and the selection-aware estimate of the panel that is locked.</summary>
 /// <param name="Metric">"auc" for a binary outcome, "accuracy" for more classes.</param>
-/// <param name="RecommendedSize">Smallest size whose selection-aware score is within one standard error of the best (Breiman et al. 1984).</param>
-public sealed record PanelSizeCurve(string Metric, IReadOnlyList<PanelSizePoint> Points, int RecommendedSize, int FoldCount, int FoldRepeats);
+/// <param name="RecommendedSize">Smallest size whose selection-aware score is within one standard error of the best (Breiman et al. 1984), over the whole grid.</param>
+public sealed record PanelSizeCurve(string Metric, IReadOnlyList<PanelSizePoint> Points, int RecommendedSize, int FoldCount, int FoldRepeats)
+{
+    /// <summary>
+    /// Markers locked: the one-standard-error choice among sizes no longer than the shortlist, so
+    /// the locked panel is always the shortlist or a prefix of it; 0 when the shortlist is empty.
+    /// </summary>
+    public int LockedSize { get; init; }
+
+    /// <summary>
+    /// The selection-aware estimate of the locking procedure itself: in each outer fold the inner
+    /// screen's own shortlist is cut by the same rule, with the size chosen on the other folds'
+    /// scores only, and scored on the held-out part (chance where the fold's list is empty).
+    /// </summary>
+    public double LockedEstimate { get; init; } = double.NaN;
+
+    /// <summary>SD of the folds' locked-panel scores / sqrt(folds).</summary>
+    public double LockedEstimateStandardError { get; init; } = double.NaN;
+
+    /// <summary>Outer folds whose inner screen shortlisted nothing, so their procedure locked no panel.</summary>
+    public int FoldsWithoutPanel { get; init; }
+
+    /// <summary>Mean number of markers the folds' procedure locked (folds without a panel count 0).</summary>
+    public double MeanFoldPanelSize { get; init; }
+}

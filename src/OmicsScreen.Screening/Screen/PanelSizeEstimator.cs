@@ -35,32 +35,63 @@ internal static class PanelSizeEstimator
         return sizes.ToArray();
     }
 
-    /// <summary>Seed of the inner screen (and the scoring forests) of an outer fold.</summary>
+    /// <summary>Seed of the inner screen of an outer fold.</summary>
     internal static ulong InnerSeed(ScreenOptions options, OuterFold fold) =>
         SeedSchedule.Derive(options.Seed, fold.Repeat, InnerSeedSlot + fold.Fold, SeedPurpose.Resampling);
 
+    /// <summary>
+    /// Repeat coordinate of the scoring forests of a fold (one per panel size, then one for the
+    /// fold's locked panel): far above any inner-screen repeat, whose streams share the fold's seed.
+    /// </summary>
+    private const int ScoringRepeatBase = 1 << 20;
+
+    /// <summary>The sizes on the curve: the Fibonacci grid up to the limit, and the shortlist's length if it is within it.</summary>
+    public static int[] SizesFor(int limit, int shortlistLength)
+    {
+        var sizes = new SortedSet<int>(SizeGrid(limit));
+        if (shortlistLength >= 1 && shortlistLength <= limit) sizes.Add(shortlistLength);
+        return sizes.ToArray();
+    }
+
+    /// <summary>
+    /// The lock rule: the one-standard-error choice among sizes no longer than the list; 0 for an
+    /// empty list. Points with NaN means are skipped.
+    /// </summary>
+    public static int LockedSize(ReadOnlySpan<int> sizes, ReadOnlySpan<double> means, ReadOnlySpan<double> standardErrors, int listLength)
+    {
+        if (listLength < 1) return 0;
+        int allowed = 0;
+        while (allowed < sizes.Length && sizes[allowed] <= listLength) allowed++;
+        if (allowed == 0) return Math.Min(listLength, sizes.Length > 0 ? sizes[0] : listLength);
+        int chosen = OneStandardErrorRule.Choose(sizes[..allowed], means[..allowed], standardErrors[..allowed], ScoreDirection.HigherIsBetter);
+        return chosen >= 0 ? sizes[chosen] : Math.Min(listLength, sizes[allowed - 1]);
+    }
+
     public static PanelSizeCurve Estimate(BinnedMatrix matrix, Panel panel, ScreenSettings settings, int[] fullOrder,
-        ScreenWork work, Action<int, int>? foldDone, CancellationToken cancellation)
+        int shortlistLength, ScreenWork work, Action<int, int>? foldDone, CancellationToken cancellation)
     {
         var options = settings.Options;
         var outcome = panel.Outcome;
         bool binary = outcome.ClassCount == 2;
         var folds = work.CurveFolds;
-        var sizes = SizeGrid(Math.Min(options.CurveMaxPanelSize, matrix.FeatureCount));
+        int limit = Math.Min(options.CurveMaxPanelSize, matrix.FeatureCount);
+        var sizes = SizesFor(limit, shortlistLength);
         var selectionAware = new double[folds.Count, sizes.Length];
         var selectionAwareError = new double[folds.Count, sizes.Length];
         var optimistic = new double[folds.Count, sizes.Length];
         var optimisticError = new double[folds.Count, sizes.Length];
+        var innerScreens = new InnerScreenResult[folds.Count];
         for (int i = 0; i < folds.Count; i++)
         {
             cancellation.ThrowIfCancellationRequested();
             var fold = folds[i];
             ulong innerSeed = InnerSeed(options, fold);
-            var innerOrder = work.CurveFoldScreen(i, cancellation).Order;
+            innerScreens[i] = work.CurveFoldScreen(i, cancellation);
+            var innerOrder = innerScreens[i].Order;
             for (int s = 0; s < sizes.Length; s++)
             {
-                (selectionAware[i, s], selectionAwareError[i, s]) = Score(matrix, panel, settings, innerOrder.AsSpan(0, sizes[s]), fold, innerSeed, s, binary);
-                (optimistic[i, s], optimisticError[i, s]) = Score(matrix, panel, settings, fullOrder.AsSpan(0, sizes[s]), fold, innerSeed, s, binary);
+                (selectionAware[i, s], selectionAwareError[i, s]) = Score(matrix, panel, settings, innerOrder.AsSpan(0, sizes[s]), fold, innerSeed, ScoringRepeatBase + s, binary);
+                (optimistic[i, s], optimisticError[i, s]) = Score(matrix, panel, settings, fullOrder.AsSpan(0, sizes[s]), fold, innerSeed, ScoringRepeatBase + s, binary);
             }
             foldDone?.Invoke(i + 1, folds.Count);
         }
@@ -79,18 +110,76 @@ internal static class PanelSizeEstimator
             errors[s] = se;
         }
         int chosen = OneStandardErrorRule.Choose(sizes, means, errors, ScoreDirection.HigherIsBetter);
+        int lockedSize = LockedSize(sizes, means, errors, Math.Min(shortlistLength, limit));
+
+        // The estimate of the locked panel repeats the lock rule inside every fold: the inner
+        // screen's shortlist, cut at the size the same rule picks from the OTHER folds' scores, so
+        // no fold's held-out part takes part in choosing the size it is scored at.
+        var lockedScores = new double[folds.Count];
+        int withoutPanel = 0;
+        double sizeSum = 0;
+        for (int i = 0; i < folds.Count; i++)
+        {
+            var fold = folds[i];
+            var inner = innerScreens[i];
+            int listLength = Math.Min(inner.Shortlist.Length, limit);
+            if (listLength == 0)
+            {
+                withoutPanel++;
+                lockedScores[i] = ChanceScore(outcome, fold, binary);
+                continue;
+            }
+            var otherMeans = new double[sizes.Length];
+            var otherErrors = new double[sizes.Length];
+            for (int s = 0; s < sizes.Length; s++)
+            {
+                var (mean, sd) = MeanAndSdWithout(selectionAware, s, i);
+                otherMeans[s] = mean;
+                otherErrors[s] = sd / Math.Sqrt(Math.Max(1, folds.Count - 1));
+            }
+            int size = LockedSize(sizes, otherMeans, otherErrors, listLength);
+            sizeSum += size;
+            var panelFeatures = inner.Shortlist.AsSpan(0, size);
+            int onGrid = Array.IndexOf(sizes, size);
+            lockedScores[i] = onGrid >= 0 && panelFeatures.SequenceEqual(inner.Order.AsSpan(0, size))
+                ? selectionAware[i, onGrid]
+                : Score(matrix, panel, settings, panelFeatures, fold, InnerSeed(options, fold), ScoringRepeatBase + sizes.Length, binary).Score;
+        }
+        double lockedMean = lockedScores.Average();
+        double lockedSd = lockedScores.Length < 2 ? double.NaN
+            : Math.Sqrt(lockedScores.Sum(v => (v - lockedMean) * (v - lockedMean)) / (lockedScores.Length - 1));
         return new PanelSizeCurve(binary ? "auc" : "accuracy", points, chosen >= 0 ? sizes[chosen] : sizes[^1],
-            options.CurveFolds, options.CurveFoldRepeats);
+            options.CurveFolds, options.CurveFoldRepeats)
+        {
+            LockedSize = lockedSize,
+            LockedEstimate = lockedMean,
+            LockedEstimateStandardError = lockedSd / Math.Sqrt(lockedScores.Length),
+            FoldsWithoutPanel = withoutPanel,
+            MeanFoldPanelSize = sizeSum / folds.Count,
+        };
+    }
+
+    /// <summary>What a fold scores when its procedure locks nothing: AUC 0.5, or the accuracy of always calling the training part's largest class.</summary>
+    private static double ChanceScore(ClassOutcome outcome, OuterFold fold, bool binary)
+    {
+        if (binary) return 0.5;
+        var counts = new int[outcome.ClassCount];
+        foreach (int row in fold.TrainingRows) counts[outcome.SampleClasses[row]]++;
+        int largest = 0;
+        for (int c = 1; c < counts.Length; c++) if (counts[c] > counts[largest]) largest = c;
+        int right = 0;
+        foreach (int row in fold.TestRows) if (outcome.SampleClasses[row] == largest) right++;
+        return (double)right / fold.TestRows.Length;
     }
 
     /// <summary>Grows a forest on the fold's training rows using the given features and scores the test rows.</summary>
     private static (double Score, double Error) Score(BinnedMatrix matrix, Panel panel, ScreenSettings settings,
-        ReadOnlySpan<int> features, OuterFold fold, ulong seed, int sizeIndex, bool binary)
+        ReadOnlySpan<int> features, OuterFold fold, ulong seed, int scoringRepeat, bool binary)
     {
         var outcome = panel.Outcome;
         var selected = matrix.SelectFeatures(features);
         // The panel forest tries floor(sqrt(k)) features per split of its own k, whatever the screen used.
-        var forestOptions = settings.ForestOptions(panel.Subject, seed, sizeIndex);
+        var forestOptions = settings.ForestOptions(panel.Subject, seed, scoringRepeat);
         forestOptions = forestOptions with { Tree = forestOptions.Tree with { FeaturesPerSplit = null } };
         var forest = ForestTrainer.Train(selected, outcome, forestOptions, fold.TrainingRows);
         var prediction = forest.Predict(selected);
@@ -108,6 +197,20 @@ internal static class PanelSizeEstimator
         double error = (double)wrong / fold.TestRows.Length;
         double score = binary ? MannWhitneyAuc.Compute(scores, positive) : 1 - error;
         return (score, error);
+    }
+
+    private static (double Mean, double Sd) MeanAndSdWithout(double[,] values, int column, int skippedRow)
+    {
+        int count = values.GetLength(0);
+        double sum = 0;
+        int used = 0;
+        for (int i = 0; i < count; i++) if (i != skippedRow) { sum += values[i, column]; used++; }
+        if (used == 0) return (double.NaN, double.NaN);
+        double mean = sum / used;
+        if (used < 2) return (mean, 0);
+        double squares = 0;
+        for (int i = 0; i < count; i++) if (i != skippedRow) squares += (values[i, column] - mean) * (values[i, column] - mean);
+        return (mean, Math.Sqrt(squares / (used - 1)));
     }
 
     private static (double Mean, double Sd) MeanAndSd(double[,] values, int column)

@@ -11,7 +11,9 @@ namespace OmicsScreen.Screening.Screen;
 /// <summary>
 /// The repeated core of a screen: on each half-sample, one forest for the out-of-bag
 /// permutation and impurity importances, and one forest carrying permuted copies and decoys for
-/// the corrected importance; then each repeat's selection and combined rank.
+/// the corrected importance; then each repeat's selection and combined rank. The two forests of a
+/// repeat draw the same bootstrap samples (the same (seed, repeat) streams), so the repeat's
+/// importances differ only by the added columns, not by the samples.
 /// </summary>
 /// <remarks>
 /// Two forests per repeat, because the permuted-copy columns compete for splits: the forest that carries
@@ -19,9 +21,6 @@ namespace OmicsScreen.Screening.Screen;
 /// </remarks>
 internal static class RepeatScreen
 {
-    /// <summary>Index slot of the decoy-source draw in the resampling streams.</summary>
-    private const int DecoyStream = 2;
-
     public static RepeatImportances Run(BinnedMatrix matrix, ClassOutcome outcome, SampleGrouping? subject,
         ReadOnlySpan<int> eligibleRows, ScreenSettings settings, ulong runSeed, int pairCount, int decoyCount,
         Action<int>? repeatDone, CancellationToken cancellation)
@@ -54,7 +53,7 @@ internal static class RepeatScreen
         var permutation = OutOfBagPermutationImportance.Measure(forest, matrix, outcome, settings.Options.ThreadCount);
         permutation.MeanAccuracyDrop.CopyTo(result.Row(result.Permutation, row));
 
-        var decoySources = DecoySources(featureCount, decoyCount, runSeed, repeat);
+        var decoySources = DecoyPlan.For(featureCount, decoyCount, runSeed).Sources;
         var corrected = CorrectedImpurityImportance.Measure(matrix, outcome, rows, decoySources, options);
         corrected.Features.CopyTo(result.Row(result.Corrected, row));
         corrected.Decoys.CopyTo(result.DecoyCorrected.AsSpan(row * decoyCount, decoyCount));
@@ -76,17 +75,19 @@ internal static class RepeatScreen
 
     /// <summary>
     /// A repeat selects the features (and decoys) whose corrected importance is above zero and
-    /// above the (1 - level) quantile of the repeat's own null sample: the mirrored non-positive
-    /// importances and the decoys with their mirror images (<see cref="DecoyAugmentedNull"/>).
-    /// Real features and decoys face the same rule, so the decoys' selection rate estimates the
-    /// noise that gets through (target-decoy reasoning). An optional cap keeps the best ones.
+    /// above the (1 - level) quantile of the repeat's decoys: a test per repeat against known-null
+    /// features that carry the same persistent chance association as null features do. Real
+    /// features and decoys face the same rule, so the decoys' selection frequencies follow the law
+    /// of a null feature's (target-decoy reasoning). Without decoys the repeat's null is the mirrored
+    /// non-positive importances (Janitza et al. 2018), which is narrower than the truth. An optional
+    /// cap keeps the best ones.
     /// </summary>
     internal static void Select(RepeatImportances result, int repeat, double level, int cap)
     {
         int featureCount = result.FeatureCount, decoyCount = result.DecoyCount;
         var features = result.Row(result.Corrected, repeat);
         var decoys = result.DecoyCorrected.AsSpan(repeat * decoyCount, decoyCount);
-        var nullSample = DecoyAugmentedNull.NullSample(features, decoys);
+        var nullSample = decoyCount > 0 ? decoys.ToArray() : JanitzaNull.NullSample(features);
         double threshold = 0;
         if (nullSample.Length > 0)
         {
@@ -107,24 +108,6 @@ internal static class RepeatScreen
             if (index < featureCount) result.Selected[repeat * featureCount + index] = true;
             else result.DecoySelected[repeat * decoyCount + index - featureCount] = true;
         }
-    }
-
-    /// <summary>Every feature gets a decoy when there are as many decoys as features; otherwise a fresh random subset per repeat.</summary>
-    internal static int[] DecoySources(int featureCount, int decoyCount, ulong runSeed, int repeat)
-    {
-        var all = new int[featureCount];
-        for (int f = 0; f < featureCount; f++) all[f] = f;
-        if (decoyCount >= featureCount) return decoyCount == featureCount ? all : Enumerable.Range(0, decoyCount).Select(i => i % featureCount).ToArray();
-        var random = SeedSchedule.Generator(runSeed, repeat, DecoyStream, SeedPurpose.Resampling);
-        // Partial Fisher-Yates: the first decoyCount entries are a uniform random subset.
-        for (int i = 0; i < decoyCount; i++)
-        {
-            int j = i + random.NextInt(featureCount - i);
-            (all[i], all[j]) = (all[j], all[i]);
-        }
-        var chosen = all.AsSpan(0, decoyCount).ToArray();
-        Array.Sort(chosen);
-        return chosen;
     }
 
     private static void Negate(ReadOnlySpan<double> values, Span<double> negated)

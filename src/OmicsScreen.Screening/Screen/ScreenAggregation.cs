@@ -6,8 +6,9 @@ namespace OmicsScreen.Screening.Screen;
 /// <summary>Turns the repeats x features matrices into per-feature summaries and the screen's order.</summary>
 internal static class ScreenAggregation
 {
+    /// <param name="rankTestP">Each feature's rank-test p-value (<see cref="Univariate.UnivariateScreen.RankTestPValues"/>); empty to use the forest's evidence alone.</param>
     public static FeatureSummary[] Summarise(RepeatImportances repeats, IReadOnlyList<string> featureNames,
-        ReadOnlySpan<double> decoyMeans, ReadOnlySpan<double> outcomePermutationP)
+        DecoyEvidence decoys, ReadOnlySpan<double> outcomePermutationP, ReadOnlySpan<double> rankTestP)
     {
         int featureCount = repeats.FeatureCount, repeatCount = repeats.RepeatCount;
         var frequency = SelectionStability.SelectionFrequencies(repeats.Selected, featureCount);
@@ -28,12 +29,25 @@ internal static class ScreenAggregation
             summaries[f] = (median, q1, q3, cMean, cSd, pMean, pSd, iMean, iSd);
         }
 
-        // Janitza et al. (2018): the null is built from the non-positive mean corrected
-        // importances and their mirror images, here joined by the decoys'; averaging over repeats
-        // keeps noise symmetric about 0.
-        var nullP = DecoyAugmentedNull.PValues(correctedMean, decoyMeans, correctedMean);
+        // With decoys, each feature's mean corrected importance is compared with the decoys' means:
+        // a decoy is permuted once per run, so its mean carries a persistent chance association as
+        // a null feature's does, and the two share one law (DecoyNull). Without decoys the only
+        // null at hand is the mirrored non-positive means (Janitza et al. 2018), which understates
+        // the right-skewed tail of a null feature's mean: the tool warns that such p-values are
+        // approximate.
+        var nullP = decoys.DecoyCount > 0 ? DecoyNull.PValues(decoys.Means, correctedMean) : JanitzaNull.PValues(correctedMean);
         bool permuted = outcomePermutationP.Length == featureCount;
-        var pValues = permuted ? outcomePermutationP.ToArray() : nullP;
+        var forestP = permuted ? outcomePermutationP.ToArray() : nullP;
+        // The forest's evidence and the rank test's, combined by the Cauchy combination test (Liu &
+        // Xie 2020): the rank test is the most powerful screen for a monotone shift, the forest finds
+        // thresholds, interactions and shapes a rank test misses; either can carry a marker.
+        bool combined = rankTestP.Length == featureCount;
+        var combinedP = new double[featureCount];
+        for (int f = 0; f < featureCount; f++) combinedP[f] = combined ? CauchyCombination.Combine(forestP[f], rankTestP[f]) : forestP[f];
+        // The combination is then calibrated against the decoys' combinations, computed the same
+        // way: whatever the rank test's normal approximation or the combination's tail gets wrong
+        // on this panel, it gets wrong for the decoys too.
+        var pValues = decoys.DecoyCount > 0 ? DecoyNull.PValues(decoys.CombinedP.Length > 0 ? DecoyEvidence.Surprise(decoys.CombinedP) : [], DecoyEvidence.Surprise(combinedP)) : combinedP;
         var qValues = BenjaminiHochberg.Adjust(pValues);
 
         var order = FinalOrder(frequency, summaries.Select(s => s.Median).ToArray(), correctedMean);
@@ -46,27 +60,22 @@ internal static class ScreenAggregation
             var s = summaries[f];
             result[f] = new FeatureSummary(f, featureNames[f], frequency[f], s.Median, s.Q1, s.Q3, s.CMean, s.CSd,
                 s.PMean, s.PSd, s.IMean, s.ISd, nullP[f], permuted ? outcomePermutationP[f] : double.NaN,
-                pValues[f], qValues[f], position[f]);
+                pValues[f], qValues[f], position[f])
+            {
+                ForestP = forestP[f],
+                CombinedP = combinedP[f],
+                RankTestP = combined ? rankTestP[f] : double.NaN,
+            };
         }
         return result;
     }
 
-    /// <summary>The order of a screen's features without the p-values: what the panel-size curve's inner screens need.</summary>
-    public static int[] OrderOf(RepeatImportances repeats)
+    /// <summary>Feature indices in the screen's final order (<see cref="FeatureSummary.Order"/>).</summary>
+    public static int[] OrderOf(IReadOnlyList<FeatureSummary> features)
     {
-        int featureCount = repeats.FeatureCount, repeatCount = repeats.RepeatCount;
-        var frequency = SelectionStability.SelectionFrequencies(repeats.Selected, featureCount);
-        var median = new double[featureCount];
-        var correctedMean = new double[featureCount];
-        var column = new double[repeatCount];
-        for (int f = 0; f < featureCount; f++)
-        {
-            for (int r = 0; r < repeatCount; r++) column[r] = repeats.CombinedRank[r * featureCount + f];
-            Array.Sort(column);
-            median[f] = Quantile.OfSorted(column, 0.5, QuantileDefinition.Linear);
-            correctedMean[f] = MeanAndSd(repeats.Corrected, f, featureCount, repeatCount).Mean;
-        }
-        return FinalOrder(frequency, median, correctedMean);
+        var order = new int[features.Count];
+        foreach (var feature in features) order[feature.Order - 1] = feature.FeatureIndex;
+        return order;
     }
 
     /// <summary>Selection frequency (high first), then median combined rank (low first), then mean corrected importance, then feature order.</summary>

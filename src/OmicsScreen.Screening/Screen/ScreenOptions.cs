@@ -35,17 +35,37 @@ public sealed record ScreenOptions
     /// <summary>Most features a repeat may select (its best ones); 0 sets no cap.</summary>
     public int SelectedPerRepeat { get; init; }
 
-    /// <summary>Selection frequency a feature needs to enter the shortlist; in (0.5, 1].</summary>
-    public double FrequencyThreshold { get; init; } = 0.6;
+    /// <summary>
+    /// Selection frequency a feature needs to enter the shortlist, in (0.5, 1]; 0 (the default)
+    /// leaves the list to the q-values alone. Frequency always orders the list. A filter costs
+    /// recall of modest markers (selected in 40-60% of repeats) and buys nothing the q-values do not
+    /// already control; decoys face the same filter, so the decoy estimate stays comparable.
+    /// </summary>
+    public double FrequencyThreshold { get; init; }
 
     /// <summary>False discovery rate level for the importance q-values of shortlisted features.</summary>
     public double QValueThreshold { get; init; } = 0.10;
 
-    /// <summary>Decoys (permuted copies of real features) per repeat; -1 means automatic.</summary>
+    /// <summary>How the shortlist's cut is placed: q-values (default) or the decoy bound.</summary>
+    public ShortlistRule Rule { get; init; } = ShortlistRule.QValue;
+
+    /// <summary>
+    /// Decoys (copies of real features, each permuted once per run and grown in every repeat);
+    /// -1 means automatic: one per feature, at least <see cref="AutomaticDecoyFloor"/> and at most
+    /// <see cref="AutomaticDecoyCeiling"/>.
+    /// </summary>
     public int DecoyCount { get; init; } = -1;
 
-    /// <summary>Above this many features, automatic decoys are off (they would widen every forest).</summary>
-    public int AutomaticDecoyFeatureLimit { get; init; } = 5000;
+    /// <summary>
+    /// Fewest automatic decoys: the p-values' tail fit needs a few hundred decoys above its
+    /// threshold (<see cref="Importance.DecoyNull"/>), and narrow panels need the resolution most.
+    /// </summary>
+    public int AutomaticDecoyFloor { get; init; } = 1000;
+
+    /// <summary>
+    /// Most automatic decoys: past this the tail fit gains little while every forest keeps widening.
+    /// </summary>
+    public int AutomaticDecoyCeiling { get; init; } = 5000;
 
     /// <summary>Outcome permutations for Altmann et al. (2010) p-values; 0 turns them off.</summary>
     public int OutcomePermutations { get; init; }
@@ -74,9 +94,10 @@ public sealed record ScreenOptions
         Require(MinLeafSize >= 1, "The minimum leaf size must be at least 1.");
         Require(RepeatSelectionLevel > 0 && RepeatSelectionLevel < 0.5, "The per-repeat selection level must lie in (0, 0.5).");
         Require(SelectedPerRepeat >= 0, "The cap on features selected per repeat must be positive (or 0 for none).");
-        Require(FrequencyThreshold > 0.5 && FrequencyThreshold <= 1, "The frequency threshold must lie in (0.5, 1].");
+        Require(FrequencyThreshold == 0 || (FrequencyThreshold > 0.5 && FrequencyThreshold <= 1), "The frequency threshold must be 0 (no filter) or lie in (0.5, 1].");
         Require(QValueThreshold > 0 && QValueThreshold <= 1, "The q-value threshold must lie in (0, 1].");
         Require(DecoyCount >= -1, "The decoy count must be 0 or more (or -1 for automatic).");
+        Require(AutomaticDecoyFloor >= 0 && AutomaticDecoyCeiling >= AutomaticDecoyFloor, "The automatic decoy floor must lie between 0 and the ceiling.");
         Require(OutcomePermutations >= 0, "Outcome permutations must be 0 or more.");
         Require(RedundancyCorrelation > 0 && RedundancyCorrelation <= 1, "The redundancy correlation must lie in (0, 1].");
         Require(CurveFolds == 0 || CurveFolds >= 2, "The panel-size curve needs at least 2 folds (or 0 to skip it).");

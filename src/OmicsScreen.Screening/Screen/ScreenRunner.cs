@@ -70,17 +70,25 @@ public static class ScreenRunner
             Finish(ScreenStage.OutcomePermutations);
         }
 
-        var decoyMeans = DecoyMeans(repeats);
-        var features = ScreenAggregation.Summarise(repeats, panel.Matrix.FeatureNames, decoyMeans, outcomePermutationP);
-        var order = Enumerable.Range(0, features.Length).OrderBy(f => features[f].Order).ToArray();
-        var shortlisted = order.Where(f => Passes(features[f], options)).ToList();
-        var decoys = EstimateDecoys(repeats, features, decoyMeans, shortlisted.Count, options);
+        var allRows = Enumerable.Range(0, panel.SampleCount).ToArray();
+        var plan = DecoyPlan.For(panel.FeatureCount, settings.DecoyCount, options.Seed);
+        var (featureRankP, decoyRankP) = RankTestEvidence.Compute(panel, allRows, plan, options.ThreadCount);
+        var decoyEvidence = DecoyEvidence.From(repeats, decoyRankP);
+        var features = ScreenAggregation.Summarise(repeats, panel.Matrix.FeatureNames, decoyEvidence, outcomePermutationP, featureRankP);
+        var order = ScreenAggregation.OrderOf(features);
+        var (shortlistedFeatures, decoys) = ShortlistSelection.Apply(features, order, decoyEvidence, options);
+        var shortlisted = shortlistedFeatures.ToList();
         double meanSelected = SelectionStability.MeanSelectedCount(repeats.Selected, repeats.FeatureCount);
         var stability = new StabilitySummary(
             SelectionStability.Nogueira(repeats.Selected, repeats.FeatureCount),
             meanSelected,
             options.FrequencyThreshold,
-            StabilitySelectionBound.ExpectedFalseSelections(meanSelected, options.FrequencyThreshold, repeats.FeatureCount));
+            options.FrequencyThreshold > 0.5
+                ? StabilitySelectionBound.ExpectedFalseSelections(meanSelected, options.FrequencyThreshold, repeats.FeatureCount)
+                : double.NaN)
+        {
+            ListStability = ListStability(repeats, shortlisted.Count),
+        };
 
         var groups = RedundancyGroups.Assign(panel.Matrix, shortlisted, options.RedundancyCorrelation, out var correlations);
         var groupMembers = new List<int[]>();
@@ -97,7 +105,7 @@ public static class ScreenRunner
         {
             int foldTotal = options.CurveFolds * options.CurveFoldRepeats;
             progress?.Report(new ScreenProgress(ScreenStage.PanelSizeCurve, 0, foldTotal));
-            curve = PanelSizeEstimator.Estimate(matrix, panel, settings, order, work,
+            curve = PanelSizeEstimator.Estimate(matrix, panel, settings, order, shortlisted.Count, work,
                 (done, total) => progress?.Report(new ScreenProgress(ScreenStage.PanelSizeCurve, done, total)), cancellation);
             Finish(ScreenStage.PanelSizeCurve);
         }
@@ -106,16 +114,15 @@ public static class ScreenRunner
         if (panel.Cohort is { LevelCount: >= 2 })
         {
             progress?.Report(new ScreenProgress(ScreenStage.Cohorts, 0, 1));
-            int panelSize = curve?.RecommendedSize ?? Math.Max(1, shortlist.Count);
-            cohorts = CohortAnalysis.Run(panel, matrix, settings, order, univariate, panelSize, work,
+            cohorts = CohortAnalysis.Run(panel, matrix, settings, order, univariate, work,
                 (done, total) => progress?.Report(new ScreenProgress(ScreenStage.Cohorts, done, total)), cancellation);
             Finish(ScreenStage.Cohorts);
         }
 
-        int lockedSize = Math.Clamp(curve?.RecommendedSize ?? shortlist.Count, 1, order.Length);
-        double lockedEstimate = double.NaN;
-        if (curve is not null)
-            foreach (var point in curve.Points) if (point.PanelSize == lockedSize) lockedEstimate = point.SelectionAwareAuc;
+        // The locked panel is the shortlist or a prefix of it, never padded with markers that
+        // failed error control; without the curve it is the whole list, up to the curve's size limit.
+        int lockedSize = curve?.LockedSize ?? Math.Min(shortlist.Count, options.CurveMaxPanelSize);
+        double lockedEstimate = curve?.LockedEstimate ?? double.NaN;
         return new ScreenResult(settings, repeats, features, order, shortlist, correlations, stability, decoys, reference,
             univariate, univariateRanks, curve, seconds, cohorts)
         {
@@ -145,44 +152,27 @@ public static class ScreenRunner
         progress?.Report(new ScreenProgress(ScreenStage.WorkUnits, units.Count, units.Count));
     }
 
-    /// <summary>The shortlist rule: selected often enough, and a q-value at the false discovery rate level.</summary>
-    internal static bool Passes(FeatureSummary feature, ScreenOptions options) =>
-        feature.SelectionFrequency >= options.FrequencyThreshold && feature.QValue <= options.QValueThreshold;
-
     /// <summary>
-    /// Applies the shortlist rule to the decoys: a decoy passes when its selection frequency
-    /// reaches the threshold and its p-value (against the same null) is no larger than the
-    /// largest p-value of a real feature the q-value rule accepts.
+    /// Nogueira et al. (2018) stability of the list a repeat would give at the shortlist's length:
+    /// each repeat's top <paramref name="listLength"/> features by combined rank. It says how much
+    /// a list of this length changes from one half of the samples to another; NaN for an empty list.
     /// </summary>
-    private static DecoyEstimate EstimateDecoys(RepeatImportances repeats, FeatureSummary[] features, double[] decoyMeans,
-        int shortlisted, ScreenOptions options)
+    internal static StabilityEstimate ListStability(RepeatImportances repeats, int listLength)
     {
-        int decoyCount = repeats.DecoyCount;
-        if (decoyCount == 0) return new DecoyEstimate(0, 0, shortlisted, double.NaN);
-        double pCutoff = double.NegativeInfinity;
-        foreach (var f in features) if (f.QValue <= options.QValueThreshold) pCutoff = Math.Max(pCutoff, f.PValue);
-        var decoyFrequency = new double[decoyCount];
-        for (int r = 0; r < repeats.RepeatCount; r++)
-            for (int d = 0; d < decoyCount; d++)
-                if (repeats.DecoySelected[r * decoyCount + d]) decoyFrequency[d] += 1.0 / repeats.RepeatCount;
-        var featureMeans = features.Select(f => f.CorrectedMean).ToArray();
-        var decoyP = DecoyAugmentedNull.PValues(featureMeans, decoyMeans, decoyMeans);
-        int passing = 0;
-        for (int d = 0; d < decoyCount; d++)
-            if (decoyFrequency[d] >= options.FrequencyThreshold && decoyP[d] <= pCutoff) passing++;
-        double fdr = shortlisted == 0 ? (passing == 0 ? 0 : 1)
-            : Math.Min(1.0, (double)passing / decoyCount * features.Length / shortlisted);
-        return new DecoyEstimate(decoyCount, passing, shortlisted, fdr);
-    }
-
-    /// <summary>Each decoy's corrected importance averaged over repeats.</summary>
-    private static double[] DecoyMeans(RepeatImportances repeats)
-    {
-        int decoyCount = repeats.DecoyCount;
-        var means = new double[decoyCount];
-        for (int r = 0; r < repeats.RepeatCount; r++)
-            for (int d = 0; d < decoyCount; d++) means[d] += repeats.DecoyCorrected[r * decoyCount + d] / repeats.RepeatCount;
-        return means;
+        int featureCount = repeats.FeatureCount, repeatCount = repeats.RepeatCount;
+        if (listLength < 1 || listLength >= featureCount || repeatCount < 2)
+            return new StabilityEstimate(double.NaN, double.NaN, ConfidenceInterval.Undefined(0.95), listLength, repeatCount, featureCount);
+        var selections = new bool[repeatCount * featureCount];
+        var order = new int[featureCount];
+        for (int r = 0; r < repeatCount; r++)
+        {
+            var ranks = repeats.Row(repeats.CombinedRank, r).ToArray();
+            for (int f = 0; f < featureCount; f++) order[f] = f;
+            // Best combined rank first; ties by feature index so the list never depends on sort stability.
+            Array.Sort(order, (a, b) => ranks[a] != ranks[b] ? ranks[a].CompareTo(ranks[b]) : a.CompareTo(b));
+            for (int i = 0; i < listLength; i++) selections[r * featureCount + order[i]] = true;
+        }
+        return SelectionStability.Nogueira(selections, featureCount);
     }
 
     private static int ContrastOfPositiveClass(UnivariateTable univariate, Panel panel)

@@ -51,12 +51,12 @@ public sealed record ScreenSettings
         };
     }
 
-    /// <summary>Decoys per repeat: the number asked for, or automatically one per feature up to the feature limit and none above.</summary>
+    /// <summary>Decoys of the run: the number asked for, or automatically one per feature within the floor and the ceiling.</summary>
     public static int DecoyCountFor(ScreenOptions options, int featureCount)
     {
         ArgumentNullException.ThrowIfNull(options);
         return options.DecoyCount >= 0 ? options.DecoyCount
-            : featureCount <= options.AutomaticDecoyFeatureLimit ? featureCount : 0;
+            : Math.Clamp(featureCount, options.AutomaticDecoyFloor, options.AutomaticDecoyCeiling);
     }
 
     /// <summary>The engine options of every forest of this screen; seed and repeat are set per forest.</summary>

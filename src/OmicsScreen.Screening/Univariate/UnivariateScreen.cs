@@ -58,6 +58,39 @@ public static class UnivariateScreen
         return new UnivariateTable(contrastNames, overall, perCohort);
     }
 
+    /// <summary>
+    /// Each feature's rank-test p-value on the given samples, as the screen combines it with the
+    /// forest's: the Mann-Whitney test of the positive class against the other (two classes), or
+    /// the smallest p over the class-against-rest contrasts times their number (Bonferroni) with
+    /// more classes. Missing and below-detection cells are handled as in <see cref="Compute"/>.
+    /// </summary>
+    public static double[] RankTestPValues(FeatureMatrix matrix, ClassOutcome outcome, int[] samples, int threadCount = 0)
+    {
+        ArgumentNullException.ThrowIfNull(matrix);
+        ArgumentNullException.ThrowIfNull(outcome);
+        ArgumentNullException.ThrowIfNull(samples);
+        int[] contrastClasses = outcome.ClassCount == 2 ? [outcome.PositiveClass] : Enumerable.Range(0, outcome.ClassCount).ToArray();
+        var pValues = new double[matrix.FeatureCount];
+        var parallel = new ParallelOptions { MaxDegreeOfParallelism = threadCount > 0 ? threadCount : Environment.ProcessorCount };
+        Parallel.For(0, matrix.FeatureCount, parallel,
+            () => new FeatureRankWorkspace(samples.Length, outcome.ClassCount),
+            (feature, _, workspace) =>
+            {
+                workspace.Load(matrix.Column(feature), matrix.States(feature), outcome.SampleClasses, samples);
+                double smallest = double.NaN;
+                foreach (int contrast in contrastClasses)
+                {
+                    var summary = workspace.Contrast(contrast);
+                    double p = MannWhitney.FromRankSum(summary.ClassRankSum, summary.ClassCount, summary.RestCount, workspace.TieTerm).PValue;
+                    if (!double.IsNaN(p) && !(p >= smallest)) smallest = p;
+                }
+                pValues[feature] = double.IsNaN(smallest) ? 1 : Math.Min(1, smallest * contrastClasses.Length);
+                return workspace;
+            },
+            _ => { });
+        return pValues;
+    }
+
     private static MarkerStatistics[] ComputeScope(Panel panel, int[] scopeSamples, string? cohortName,
         int[] contrastClasses, string[] contrastNames, string[] referenceNames, UnivariateOptions options)
     {

@@ -1,6 +1,7 @@
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Screening.Cohorts;
+using OmicsScreen.Screening.Importance;
 using OmicsScreen.Screening.Resampling;
 using OmicsScreen.Screening.Screen;
 
@@ -113,11 +114,21 @@ internal sealed class ScreenWork
         }
     }
 
-    /// <summary>A small screen without decoys on some of the samples: the building block of the curve and the cohort check.</summary>
+    /// <summary>
+    /// A smaller screen on some of the samples, with the same decoys and shortlist rule as the main
+    /// screen (fewer repeats): the building block of the curve and the cohort checks, so what they
+    /// measure is the procedure whose panel is locked.
+    /// </summary>
     private InnerScreenResult InnerScreen(int[] rows, ulong seed, CancellationToken cancellation)
     {
         var repeats = RepeatScreen.Run(_matrix, _panel.Outcome, _panel.Subject, rows, _settings, seed,
-            _settings.Options.CurveInnerPairs, decoyCount: 0, repeatDone: null, cancellation);
-        return new InnerScreenResult(ScreenAggregation.OrderOf(repeats), CohortAnalysis.MeanCorrected(repeats));
+            _settings.Options.CurveInnerPairs, _settings.DecoyCount, repeatDone: null, cancellation);
+        var plan = DecoyPlan.For(_matrix.FeatureCount, _settings.DecoyCount, seed);
+        var (featureRankP, decoyRankP) = RankTestEvidence.Compute(_panel, rows, plan, _settings.Options.ThreadCount);
+        var decoys = DecoyEvidence.From(repeats, decoyRankP);
+        var features = ScreenAggregation.Summarise(repeats, _matrix.FeatureNames, decoys, [], featureRankP);
+        var order = ScreenAggregation.OrderOf(features);
+        var (shortlist, _) = ShortlistSelection.Apply(features, order, decoys, _settings.Options);
+        return new InnerScreenResult(order, CohortAnalysis.MeanCorrected(repeats), shortlist);
     }
 }

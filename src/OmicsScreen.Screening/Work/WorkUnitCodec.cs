@@ -11,8 +11,8 @@ namespace OmicsScreen.Screening.Work;
 /// </summary>
 public static class WorkUnitCodec
 {
-    /// <summary>"OSUNIT" and format version 1.</summary>
-    private static ReadOnlySpan<byte> Magic => "OSUNIT\0\u0001"u8;
+    /// <summary>"OSUNIT" and format version 2 (inner screens carry their shortlist).</summary>
+    private static ReadOnlySpan<byte> Magic => "OSUNIT\0\u0002"u8;
 
     public const int RunIdentityLength = 32;
     private const int HeaderLength = 8 + RunIdentityLength + 4 + 4 + 8;
@@ -42,6 +42,8 @@ public static class WorkUnitCodec
                 payload.Int(inner.Order.Length);
                 foreach (int f in inner.Order) payload.Int(f);
                 payload.Doubles(inner.MeanCorrected);
+                payload.Int(inner.Shortlist.Length);
+                foreach (int f in inner.Shortlist) payload.Int(f);
                 break;
             default:
                 throw new ArgumentException($"A {result.GetType().Name} is not the result of {unit.Name}.");
@@ -82,9 +84,20 @@ public static class WorkUnitCodec
         if (kind != unit.Kind || index != unit.Index)
             return Fail($"holds {new WorkUnit(kind, index)}, not {unit.Name}", out problem);
         // Sizes follow from the panel: 3 ints, 4 doubles and a flag per feature, a double and a
-        // flag per decoy for a repeat; the count, then an int and a double per feature otherwise.
-        long expected = unit.Kind == WorkUnitKind.Repeat ? 12L + 33L * featureCount + 9L * decoyCount : 4L + 12L * featureCount;
-        if (bodyLength != expected) return Fail("has a different number of features or decoys", out problem);
+        // flag per decoy for a repeat; otherwise the count, an int and a double per feature, then
+        // the shortlist's length and an int per shortlisted feature.
+        if (unit.Kind == WorkUnitKind.Repeat)
+        {
+            if (bodyLength != 12L + 33L * featureCount + 9L * decoyCount) return Fail("has a different number of features or decoys", out problem);
+        }
+        else
+        {
+            long fixedPart = 4L + 12L * featureCount + 4L;
+            if (bodyLength < fixedPart || (bodyLength - fixedPart) % 4 != 0 || (bodyLength - fixedPart) / 4 > featureCount)
+                return Fail("has a different number of features or decoys", out problem);
+            int statedLength = BinaryPrimitives.ReadInt32LittleEndian(bytes.Slice(HeaderLength + (int)fixedPart - 4, 4));
+            if (statedLength != (bodyLength - fixedPart) / 4) return Fail("has a shortlist of impossible length", out problem);
+        }
         var reader = new PayloadReader(bytes.Slice(HeaderLength, (int)bodyLength).ToArray());
         if (unit.Kind == WorkUnitKind.Repeat)
         {
@@ -111,7 +124,14 @@ public static class WorkUnitCodec
         }
         var mean = new double[count];
         reader.Doubles(mean);
-        return reader.AtEnd ? new InnerScreenResult(order, mean) : Fail("has trailing values", out problem);
+        int listed = reader.Int();
+        var shortlist = new int[listed];
+        for (int i = 0; i < listed; i++)
+        {
+            shortlist[i] = reader.Int();
+            if ((uint)shortlist[i] >= (uint)count) return Fail("names a feature outside the panel", out problem);
+        }
+        return reader.AtEnd ? new InnerScreenResult(order, mean, shortlist) : Fail("has trailing values", out problem);
     }
 
     private static WorkUnitResult? Fail(string reason, out string? problem)

@@ -10,6 +10,7 @@ public sealed record RepeatUnitResult(RepeatImportances Row) : WorkUnitResult;
 
 /// <summary>
 /// An inner screen (a curve fold, a cohort, or all cohorts but one): its final feature order,
-/// and each feature's corrected importance averaged over its repeats.
+/// each feature's corrected importance averaged over its repeats, and the features its own
+/// shortlist rule passed, in order.
 /// </summary>
-public sealed record InnerScreenResult(int[] Order, double[] MeanCorrected) : WorkUnitResult;
+public sealed record InnerScreenResult(int[] Order, double[] MeanCorrected, int[] Shortlist) : WorkUnitResult;

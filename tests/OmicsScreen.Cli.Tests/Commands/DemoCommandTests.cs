@@ -19,7 +19,8 @@ public sealed class DemoCommandTests : IDisposable
         Assert.True(File.Exists(Path.Combine(reports, "shortlist.tsv")));
         Assert.True(File.Exists(Path.Combine(reports, "manifest.json")));
         Assert.Contains("can be screened", run.Out);
-        Assert.Contains("Recommended panel size", run.Out);
+        Assert.Contains("Panel-size curve:", run.Out);
+        Assert.Contains("Locked panel:", run.Out);
 
         // Every planted marker of the demo study is a true marker; the screen must find most of
         // them and nothing that is pure noise (the truth table written beside the panel).

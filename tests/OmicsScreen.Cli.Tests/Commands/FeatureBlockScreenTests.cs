@@ -46,7 +46,12 @@ public sealed class FeatureBlockScreenTests : IDisposable
         Assert.Contains("do not account for that choice", second.Error);
         var shortlist = File.ReadLines(Path.Combine(final, "shortlist.tsv")).Skip(1).Select(l => l.Split('\t')[1]).ToList();
         Assert.True(shortlist.Count(planted.Contains) >= 15, $"planted markers shortlisted: {shortlist.Count(planted.Contains)} of 17");
-        Assert.True(shortlist.Count(f => !planted.Contains(f)) <= 3, "shortlist: " + string.Join(", ", shortlist));
+        // The second stage screens candidates that the first stage chose on the same samples, so its
+        // q-values cannot account for that choice (the tool says so, above): noise that won the first
+        // stage looks associated in the second. What the two stages promise is the order: the
+        // planted markers lead it.
+        var top = shortlist.Take(17).ToList();
+        Assert.True(top.Count(planted.Contains) >= 15, "first 17 of the shortlist: " + string.Join(", ", top));
         Assert.Contains("features from a list", File.ReadAllText(Path.Combine(final, "report.html")));
     }
 

@@ -28,7 +28,8 @@ public sealed class ScreenCommandTests : IDisposable
             Assert.True(File.Exists(Path.Combine(results, file)), file);
         Assert.Equal(31, File.ReadAllLines(Path.Combine(results, "features.tsv")).Length);
         Assert.Contains("Shortlist:", run.Out);
-        Assert.Contains("Recommended panel size", run.Out);
+        Assert.Contains("Panel-size curve:", run.Out);
+        Assert.Contains("Locked panel:", run.Out);
         Assert.Contains("not a diagnostic test", run.Out);
 
         using var manifest = JsonDocument.Parse(File.ReadAllText(Path.Combine(results, "manifest.json")));

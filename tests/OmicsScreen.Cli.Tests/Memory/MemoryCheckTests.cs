@@ -29,8 +29,8 @@ public class MemoryCheckTests
         var estimate = MemoryCheck.Estimate(Wide, options, 2);
         var lines = MemoryCheck.Refusal(Wide, options, 2, estimate, 1L << 30, limitGiven: true, available: null);
 
-        // 50,000 features: automatic decoys are off, so --decoys 0 would save nothing and is not offered.
-        Assert.DoesNotContain(lines, l => l.Contains("--decoys 0"));
+        // 50,000 features: automatic decoys stop at 5,000, and --decoys 0 is offered with what it saves.
+        Assert.Contains(lines, l => l.Contains("--decoys 0") && l.Contains("saves about"));
         long fewerTrees = estimate.TotalBytes - MemoryCheck.Estimate(Wide, options with { TreesPerForest = 250 }, 2).TotalBytes;
         Assert.Contains(lines, l => l.Contains("--trees 250") && l.Contains("saves about " + ByteSize.Format(fewerTrees)));
         Assert.Contains(lines, l => l.Contains("--part I/N (split into parts)"));

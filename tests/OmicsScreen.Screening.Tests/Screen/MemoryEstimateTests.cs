@@ -78,18 +78,20 @@ public class MemoryEstimateTests
     }
 
     [Fact]
-    public void Automatic_decoys_widen_the_corrected_forest_only_up_to_the_feature_limit()
+    public void Automatic_decoys_widen_the_corrected_forest_by_one_column_per_decoy_up_to_the_ceiling()
     {
         var automatic = Small with { DecoyCount = -1 };
         var below = MemoryEstimate.ForScreen(100, 5000, automatic, 1);
         var belowWithout = MemoryEstimate.ForScreen(100, 5000, automatic with { DecoyCount = 0 }, 1);
-        var above = MemoryEstimate.ForScreen(100, 5001, automatic, 1);
-        var aboveWithout = MemoryEstimate.ForScreen(100, 5001, automatic with { DecoyCount = 0 }, 1);
+        var above = MemoryEstimate.ForScreen(100, 20000, automatic, 1);
+        var aboveFixed = MemoryEstimate.ForScreen(100, 20000, automatic with { DecoyCount = 5000 }, 1);
 
         // One decoy per feature: 5000 more permuted-copy-like columns, as ScreenSettings resolves it.
         Assert.Equal(5000, ScreenSettings.DecoyCountFor(automatic, 5000));
         Assert.True(below.Bytes(MemoryComponent.PermutedCopyAndDecoyColumns) > belowWithout.Bytes(MemoryComponent.PermutedCopyAndDecoyColumns) * 3 / 2);
-        Assert.Equal(aboveWithout.TotalBytes, above.TotalBytes);
+        // Past the ceiling the decoys stay at 5000.
+        Assert.Equal(5000, ScreenSettings.DecoyCountFor(automatic, 20000));
+        Assert.Equal(aboveFixed.TotalBytes, above.TotalBytes);
     }
 
     [Fact]
@@ -101,7 +103,7 @@ public class MemoryEstimateTests
             var options = new ScreenOptions { DecoyCount = decoys };
             Assert.Equal(ScreenSettings.Resolve(options, panel).DecoyCount, ScreenSettings.DecoyCountFor(options, panel.FeatureCount));
         }
-        var few = new ScreenOptions { DecoyCount = -1, AutomaticDecoyFeatureLimit = 100 };
+        var few = new ScreenOptions { DecoyCount = -1, AutomaticDecoyFloor = 10, AutomaticDecoyCeiling = 100 };
         Assert.Equal(ScreenSettings.Resolve(few, panel).DecoyCount, ScreenSettings.DecoyCountFor(few, panel.FeatureCount));
     }
 

@@ -43,21 +43,6 @@ public class ScreenRunnerTests
     }
 
     [Fact]
-    public void On_a_null_panel_the_shortlist_is_empty_or_within_the_nominal_level()
-    {
-        int acceptable = 0;
-        const int seeds = 10;
-        for (ulong seed = 1; seed <= seeds; seed++)
-        {
-            var (panel, _) = CausalBlockPanel.Generate(new CausalBlockPanel.Design { Null = true, SampleCount = 60, FeatureCount = 300, Seed = 100 + seed });
-            var result = ScreenRunner.Run(panel, QuickOptions(seed) with { HalfSamplePairs = 5, TreesPerForest = 100 });
-            // Every shortlisted feature is a false discovery here, so the proportion is 1 unless the list is empty.
-            if (result.Shortlist.Count == 0) acceptable++;
-        }
-        Assert.True(acceptable >= 9, $"{seeds - acceptable} of {seeds} null panels gave a non-empty shortlist");
-    }
-
-    [Fact]
     public void The_selection_aware_panel_size_curve_stays_at_chance_on_a_null_panel_while_the_optimistic_one_does_not()
     {
         // Ambroise & McLachlan (2002): selecting features on all samples and then cross-validating
@@ -98,25 +83,35 @@ public class ScreenRunnerTests
         Assert.Equal(2000, settings.DecoyCount);
         Assert.Equal(44, settings.FeaturesPerSplit);
         Assert.True(settings.ClassBalanced);
-        var wide = ScreenSettings.Resolve(new ScreenOptions { AutomaticDecoyFeatureLimit = 1000 }, panel);
-        Assert.Equal(0, wide.DecoyCount);
+        // One decoy per feature within the automatic floor and ceiling.
+        var capped = ScreenSettings.Resolve(new ScreenOptions { AutomaticDecoyCeiling = 1000 }, panel);
+        Assert.Equal(1000, capped.DecoyCount);
+        var (narrow, _) = CausalBlockPanel.Generate(new CausalBlockPanel.Design { SampleCount = 20, FeatureCount = 80 });
+        Assert.Equal(1000, ScreenSettings.Resolve(new ScreenOptions(), narrow).DecoyCount);
     }
 
     [Fact]
-    public void A_repeat_selects_features_above_the_upper_quantile_of_its_null()
+    public void A_repeat_selects_features_above_the_upper_quantile_of_its_decoys()
     {
-        // Null sample: mirrored non-positive importances {-0.2, 0.2, -0.1, 0.1} and decoys with
-        // mirrors {0.05, -0.05, -0.3, 0.3}: sorted, its 0.75 quantile (type 1) is the 6th of 8, 0.1.
-        var repeats = new RepeatImportances(1, 5, 2);
+        // Decoys {0.05, -0.3, 0.12, 0}: sorted, the 0.75 quantile (Hyndman-Fan type 1, the
+        // ceil(0.75 x 4) = 3rd value) is 0.05, so features and decoys above 0.05 are selected.
+        var repeats = new RepeatImportances(1, 5, 4);
         double[] features = [0.5, 0.15, 0.1, -0.2, -0.1];
         features.CopyTo(repeats.Corrected, 0);
-        repeats.DecoyCorrected[0] = 0.05;
-        repeats.DecoyCorrected[1] = -0.3;
+        double[] decoys = [0.05, -0.3, 0.12, 0];
+        decoys.CopyTo(repeats.DecoyCorrected, 0);
         RepeatScreen.Select(repeats, 0, level: 0.25, cap: 0);
-        Assert.Equal([true, true, false, false, false], repeats.Selected);
-        Assert.Equal([false, false], repeats.DecoySelected);
+        Assert.Equal([true, true, true, false, false], repeats.Selected);
+        Assert.Equal([false, false, true, false], repeats.DecoySelected);
 
-        var capped = new RepeatImportances(1, 5, 2);
+        // Without decoys the null is the mirrored non-positive importances {-0.2, 0.2, -0.1, 0.1}
+        // (Janitza et al. 2018): its 0.75 quantile is 0.1.
+        var alone = new RepeatImportances(1, 5, 0);
+        features.CopyTo(alone.Corrected, 0);
+        RepeatScreen.Select(alone, 0, level: 0.25, cap: 0);
+        Assert.Equal([true, true, false, false, false], alone.Selected);
+
+        var capped = new RepeatImportances(1, 5, 0);
         features.CopyTo(capped.Corrected, 0);
         RepeatScreen.Select(capped, 0, level: 0.25, cap: 1);
         Assert.Equal([true, false, false, false, false], capped.Selected);

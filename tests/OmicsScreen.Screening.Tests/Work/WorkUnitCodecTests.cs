@@ -45,10 +45,11 @@ public sealed class WorkUnitCodecTests
     public void An_inner_screen_round_trips()
     {
         var unit = new WorkUnit(WorkUnitKind.CurveFold, 2);
-        var original = new InnerScreenResult([2, 0, 1], [0.5, -1, 3]);
+        var original = new InnerScreenResult([2, 0, 1], [0.5, -1, 3], [2, 0]);
         var decoded = Assert.IsType<InnerScreenResult>(WorkUnitCodec.Decode(WorkUnitCodec.Encode(Identity, unit, original), Identity, unit, 3, 0, out _));
         Assert.Equal(original.Order, decoded.Order);
         Assert.Equal(original.MeanCorrected, decoded.MeanCorrected);
+        Assert.Equal(original.Shortlist, decoded.Shortlist);
     }
 
     [Fact]

@@ -18,6 +18,7 @@ import scipy.special as sp
 import scipy.stats as st
 import statsmodels
 from statsmodels.stats.meta_analysis import combine_effects
+from statsmodels.stats.multitest import multipletests
 
 HERE = os.path.dirname(os.path.abspath(__file__))
 
@@ -115,6 +116,34 @@ def main():
         mw.append(dict(name=label, positive=x1.tolist(), negative=x0.tolist(),
                        u=float(r.statistic), p=float(r.pvalue)))
     out["mann_whitney"] = mw
+
+    # Heterogeneity flags: Cochran's Q p-value per marker (statsmodels combine_effects, chi-square
+    # tail from scipy), then Benjamini-Hochberg across markers (statsmodels multipletests fdr_bh).
+    markers = []
+    for m in range(12):
+        cohorts = 3
+        spread = 0.0 if m < 6 else 0.04 * (m - 5)
+        aucs = np.clip(0.7 + spread * np.array([-1.0, 0.2, 1.0]) + rng.normal(0, 0.01, cohorts), 0.05, 0.95)
+        variances = rng.uniform(0.0006, 0.0025, cohorts)
+        r = combine_effects(aucs, variances, method_re="dl")
+        markers.append(dict(aucs=aucs.tolist(), variances=variances.tolist(), q=float(r.q),
+                            q_p=float(st.chi2.sf(r.q, cohorts - 1))))
+    adjusted = multipletests([mk["q_p"] for mk in markers], alpha=0.1, method="fdr_bh")[1]
+    for mk, q in zip(markers, adjusted):
+        mk["bh_q"] = float(q)
+    out["heterogeneity_bh"] = markers
+
+    # Cauchy combination of two p-values with equal weights (Liu & Xie 2020):
+    # T = 0.5 tan((0.5 - p1) pi) + 0.5 tan((0.5 - p2) pi), p = P(Cauchy >= T) = scipy cauchy.sf(T).
+    cauchy = []
+    for p1, p2 in [(0.5, 0.5), (0.01, 0.5), (0.03, 0.04), (1e-6, 0.9), (0.2, 0.99), (1e-12, 1e-9), (0.7, 0.95)]:
+        t = 0.5 * np.tan((0.5 - p1) * np.pi) + 0.5 * np.tan((0.5 - p2) * np.pi)
+        cauchy.append(dict(p1=p1, p2=p2, p=float(st.cauchy.sf(t))))
+    out["cauchy_combination"] = cauchy
+
+    # Generalized Pareto survival, scipy genpareto(c=shape, scale=scale).sf(y).
+    out["generalized_pareto"] = [dict(shape=c, scale=s_, y=y, survival=float(st.genpareto.sf(y, c, scale=s_)))
+                                 for c, s_, y in [(0.0, 1.0, 2.0), (0.3, 0.5, 1.7), (0.8, 2.0, 40.0), (0.1, 0.05, 0.9)]]
 
     with open(os.path.join(HERE, "stats_reference.json"), "w") as f:
         json.dump(out, f, indent=1)

@@ -1,0 +1,37 @@
+using OmicsScreen.Screening.Importance;
+using OmicsScreen.Screening.Statistics;
+
+namespace OmicsScreen.Screening.Screen;
+
+/// <summary>
+/// The decoys' evidence, computed exactly as the real features' is: mean corrected importance and
+/// selection frequency over the repeats, the forest's p-value against the other decoys, the rank
+/// test on the decoy's permuted values, the two combined (<see cref="CombinedP"/>), and that
+/// combination calibrated against the other decoys' (<see cref="PValues"/>).
+/// </summary>
+internal sealed record DecoyEvidence(double[] Means, double[] Frequencies, double[] CombinedP, double[] PValues)
+{
+    public int DecoyCount => Means.Length;
+
+    public static DecoyEvidence None { get; } = new([], [], [], []);
+
+    /// <param name="rankTestP">Each decoy's rank-test p-value; empty when the screen uses the forest's evidence alone.</param>
+    public static DecoyEvidence From(RepeatImportances repeats, ReadOnlySpan<double> rankTestP)
+    {
+        var means = ShortlistSelection.DecoyMeans(repeats);
+        var frequencies = ShortlistSelection.DecoyFrequencies(repeats);
+        var forestP = DecoyNull.DecoyPValues(means);
+        var combinedP = new double[means.Length];
+        bool combined = rankTestP.Length == means.Length;
+        for (int d = 0; d < means.Length; d++) combinedP[d] = combined ? CauchyCombination.Combine(forestP[d], rankTestP[d]) : forestP[d];
+        return new DecoyEvidence(means, frequencies, combinedP, DecoyNull.DecoyPValues(Surprise(combinedP)));
+    }
+
+    /// <summary>-ln p: a statistic that grows with the evidence, whose tail the decoys' calibration fits (exponential for a uniform p).</summary>
+    public static double[] Surprise(ReadOnlySpan<double> pValues)
+    {
+        var surprise = new double[pValues.Length];
+        for (int i = 0; i < pValues.Length; i++) surprise[i] = double.IsNaN(pValues[i]) ? double.NaN : -Math.Log(Math.Max(pValues[i], 1e-300));
+        return surprise;
+    }
+}
