@@ -53,7 +53,8 @@ public static class ErrorControlText
         var stability = result.Stability;
         int listed = result.Shortlist.Count;
         string list = double.IsNaN(stability.ListStability.Stability)
-            ? "Stability of the list: not defined for an empty list."
+            ? listed == 0 ? "Stability of the list: not defined for an empty list."
+                : "Stability of the list: not defined when the list holds every feature (or with a single repeat)."
             : Invariant($"Stability of a list of {listed}: {stability.ListStability.Stability:0.00} [95% interval {stability.ListStability.Interval.Lower:0.00} to {stability.ListStability.Interval.Upper:0.00}] (Nogueira, Sechidis & Brown 2018, over each repeat's top {listed}; 1 means every half-sample gives the same list).");
         if (listed > 0 && stability.BoundIsInformative(listed))
             list += Invariant($" Meinshausen & Bühlmann (2010) bound: at most {stability.ExpectedFalseSelectionsBound:0.##} noise features expected at this frequency.");
