@@ -23,12 +23,12 @@ public sealed record GrowRunOptions
 
     public void Validate()
     {
-        if (TreeCount < 1) throw new CommandInputException("--trees must be at least 1.");
-        if (FeaturesPerSplit < 0) throw new CommandInputException("--features-per-split must be at least 1.");
-        if (MinLeafSize < 1) throw new CommandInputException("--min-leaf must be at least 1.");
-        if (MaxDepth is < 0) throw new CommandInputException("--max-depth cannot be negative.");
-        if (SampleFraction is { } f && !(f > 0 && f <= 1)) throw new CommandInputException("--sample-fraction must lie in (0, 1].");
-        if (ThreadCount < 0) throw new CommandInputException("--threads cannot be negative (0 means all cores).");
+        if (TreeCount < 1) throw new CommandInputException("--trees: the value must be at least 1.");
+        if (FeaturesPerSplit < 0) throw new CommandInputException("--features-per-split: the value must be at least 1 (leave it out for the square root of the feature count).");
+        if (MinLeafSize < 1) throw new CommandInputException("--min-leaf: the value must be at least 1.");
+        if (MaxDepth is < 0) throw new CommandInputException("--max-depth: the value cannot be negative.");
+        if (SampleFraction is { } f && !(f > 0 && f <= 1)) throw new CommandInputException("--sample-fraction: the value must be above 0 and at most 1 (for example 0.632).");
+        if (ThreadCount < 0) throw new CommandInputException("--threads: the value must be at least 1 (leave it out to use all cores).");
     }
 
     /// <summary>The engine's options; samples of one subject are drawn together when the panel names subjects.</summary>
