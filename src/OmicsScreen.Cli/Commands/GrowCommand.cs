@@ -1,6 +1,7 @@
 using System.CommandLine;
 using OmicsScreen.Cli.Console;
 using OmicsScreen.Cli.Help;
+using OmicsScreen.Screening.Screen;
 
 namespace OmicsScreen.Cli.Commands;
 
@@ -44,10 +45,15 @@ public sealed class GrowCommand : Command, IHelpLayout
         HelpName = "F",
     };
 
-    public Option<bool> Balanced { get; } = new("--balanced")
+    public Option<BalanceMode> Balance { get; } = new("--balance")
     {
-        Description = "Draw the same number of samples from each class for every tree (for imbalanced outcomes).",
+        Description = "Class-balanced drawing for each tree, as in `screen`: on, off, or auto (on when the smallest class is under 2/3 of the largest).",
+        HelpName = "auto|on|off",
+        DefaultValueFactory = _ => BalanceMode.Off,
     };
+
+    /// <summary>The earlier spelling of --balance on, kept working but not shown.</summary>
+    public Option<bool> Balanced { get; } = new("--balanced") { Hidden = true };
 
     public Option<ulong> Seed { get; } = new("--seed")
     {
@@ -77,7 +83,7 @@ public sealed class GrowCommand : Command, IHelpLayout
     [
         new("Input", [Input.SampleSheet, Input.Outcome, Input.PositiveClass, Input.Subject, Input.SampleIdColumn, Input.Annotations,
             Input.FeaturesInRows, Input.DropUnmatched, Input.FeatureBlock, Input.KeepFeatures]),
-        new("Forest", [Trees, FeaturesPerSplit, MinLeaf, MaxDepth, SampleFraction, Balanced]),
+        new("Forest", [Trees, FeaturesPerSplit, MinLeaf, MaxDepth, SampleFraction, Balance]),
         new("Cohorts", [Input.Cohort]),
         new("Run", [Seed, Threads, ImportanceFile, Json]),
     ];
@@ -99,6 +105,7 @@ public sealed class GrowCommand : Command, IHelpLayout
         Options.Add(MinLeaf);
         Options.Add(MaxDepth);
         Options.Add(SampleFraction);
+        Options.Add(Balance);
         Options.Add(Balanced);
         Options.Add(Seed);
         Options.Add(Threads);
@@ -112,7 +119,7 @@ public sealed class GrowCommand : Command, IHelpLayout
             MinLeafSize = parse.GetValue(MinLeaf),
             MaxDepth = parse.GetValue(MaxDepth),
             SampleFraction = parse.GetValue(SampleFraction),
-            Balanced = parse.GetValue(Balanced),
+            Balance = parse.GetValue(Balanced) ? BalanceMode.On : parse.GetValue(Balance),
             Seed = parse.GetValue(Seed),
             ThreadCount = parse.GetValue(Threads),
             ImportanceFile = parse.GetValue(ImportanceFile),

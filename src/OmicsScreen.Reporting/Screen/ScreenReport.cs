@@ -57,7 +57,7 @@ public static class ScreenReport
         html.BeginSection("Input and settings");
         var facts = new List<KeyValuePair<string, string>>();
         foreach (var file in input.Inputs) facts.Add(new(Capitalised(file.Role), file.Name));
-        facts.Add(new("Matrix layout", input.PanelLayout));
+        facts.Add(new("Layout", input.PanelLayout));
         facts.Add(new("Samples", ReportNumber.Integer(panel.SampleCount)));
         facts.Add(new("Features", ReportNumber.Integer(panel.FeatureCount)));
         facts.Add(new("Outcome column", panel.Outcome.ColumnName));
@@ -69,7 +69,7 @@ public static class ScreenReport
         facts.Add(new("Missing cells", ReportNumber.Percent(missingShare, 2)));
         facts.Add(new("Below-detection cells", ReportNumber.Percent(belowDetectionShare, 2)));
         html.DefinitionList(facts);
-        html.Paragraph("Screen parameters (every one; the defaults are included):");
+        html.Paragraph("Settings (every one, defaults included; each with the option that sets it):");
         html.DefinitionList(ScreenReportText.Parameters(settings));
         html.EndSection();
     }
@@ -183,8 +183,8 @@ public static class ScreenReport
             new("Cores", ReportNumber.Integer(input.Cores)),
             new("Threads", ReportNumber.Integer(input.Threads)),
         ]);
-        html.Paragraph("Every parameter as the program holds it:");
-        html.DefinitionList(ScreenReportText.RawParameters(settings));
+        html.Paragraph("The manifest records every setting listed under Input and settings, under its option's name without the dashes ("
+            + string.Join(", ", ScreenParameters.All.Take(3).Select(p => p.Key)) + ", ...).");
         html.Table(ScreenReportTables.Files("Input files", input.Inputs));
         html.Table(ScreenReportTables.Files("Result tables beside this report", input.Tables));
         var timings = new List<KeyValuePair<string, string>> { new("Reading and checking the inputs", ReportNumber.Seconds(input.LoadSeconds)) };

@@ -16,7 +16,7 @@ internal static class ScreenReportTables
         var table = new HtmlTable(ShortlistCaption,
         [
             new("Rank", ColumnAlignment.Numeric),
-            new("Marker"),
+            new("Feature"),
             new("Group", ColumnAlignment.Numeric),
             new("Selection frequency"),
             new("Median rank [IQR]"),

@@ -168,11 +168,17 @@ public sealed class ScreenReportTests
     }
 
     [Fact]
-    public void Every_screen_option_is_listed_under_its_manifest_name()
+    public void Every_screen_option_is_listed_under_its_label_and_option()
     {
+        // A setting added to ScreenOptions later must join the vocabulary (ScreenParameters), or it would
+        // be left out of the report and the manifest. The automatic decoy floor and ceiling are constants shown with --decoys.
         var terms = Markup.Elements(Markup.Parse(DefaultReport.Value), "dt").Select(e => e.Value).ToHashSet();
+        var covered = ScreenParameters.All.Select(p => p.Property).ToHashSet();
         foreach (var property in typeof(ScreenOptions).GetProperties())
-            Assert.Contains(JsonNamingPolicy.SnakeCaseLower.ConvertName(property.Name), terms);
+            if (property.Name is not (nameof(ScreenOptions.AutomaticDecoyFloor) or nameof(ScreenOptions.AutomaticDecoyCeiling)))
+                Assert.Contains(property.Name, covered);
+        foreach (var parameter in ScreenParameters.All)
+            Assert.Contains(parameter.Label + " (" + parameter.Option + ")", terms);
     }
 
     [Fact]
