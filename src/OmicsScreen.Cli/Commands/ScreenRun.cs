@@ -63,6 +63,7 @@ internal static class ScreenRun
         try
         {
             result = ScreenRunner.Run(loaded.Panel, options.Screen, progress, default, checkpoint);
+            progress.Finish();
         }
         finally
         {

@@ -27,8 +27,10 @@ public static class ScreenReport
         var html = new HtmlBuilder().BeginDocument(Title);
         WriteAnswer(html, input);
         html.Caution("Cautions", ScreenReportText.Cautions(input.Result.Cohorts is not null));
+        html.TableOfContents();
         WriteInputs(html, input);
         WriteShortlist(html, input.Result);
+        WriteLockedPanel(html, input.Result);
         WriteFigures(html, input);
         if (input.Result.Cohorts is { } cohorts) CohortReportSection.Write(html, input.Result, cohorts);
         WriteReproducibility(html, input);
@@ -86,13 +88,34 @@ public static class ScreenReport
         }
         else
         {
-            html.Paragraph("One row per shortlisted marker, best first. Markers sharing a redundancy group (Group) are strongly correlated "
-                + "and can stand in for one another. Direction, log2 median ratio and AUC compare the positive class with the rest; "
-                + "the AUC interval is DeLong's. Univariate rank is the marker's position by rank-test p-value among all features.");
+            html.Paragraph("One row per shortlisted marker, best first, in two tables: the forest evidence, then each marker on its own.");
             html.Table(ScreenReportTables.Shortlist(result));
+            html.Legend("Group: markers sharing a redundancy group are strongly correlated and can stand in for one another. "
+                + "Selection frequency: share of repeats that selected the marker. Median rank [IQR]: its rank over repeats, with quartiles.");
+            html.Table(ScreenReportTables.ShortlistStatistics(result));
+            html.Legend("Direction, log2 ratio (of class medians) and AUC compare the positive class with the rest; the AUC interval is DeLong's. "
+                + "Univariate rank: the marker's position by rank-test p-value among all features.");
         }
         html.EndSection();
     }
+
+    private static void WriteLockedPanel(HtmlBuilder html, ScreenResult result)
+    {
+        html.BeginSection("The locked panel");
+        if (result.LockedPanelSize > 0)
+        {
+            html.Paragraph(string.Create(CultureInfo.InvariantCulture,
+                $"The panel locked for `omicsscreen apply` ({LockedPanelFileName}) holds these {result.LockedPanelSize} markers, the first of the screen order."));
+            html.Table(ScreenReportTables.LockedPanel(result));
+        }
+        else
+        {
+            html.Paragraph("No panel was locked in this run.");
+        }
+        html.EndSection();
+    }
+
+    private const string LockedPanelFileName = "locked_panel.json";
 
     private static void WriteFigures(HtmlBuilder html, ScreenReportInput input)
     {
@@ -123,10 +146,11 @@ public static class ScreenReport
         if (result.PanelSize is { } curve)
         {
             html.BeginSection("How many markers to measure");
-            html.Figure(ScreenReportCharts.PanelSize(curve),
+            html.Figure(ScreenReportCharts.PanelSize(curve, input.Panel.Outcome, result.LockedPanelSize),
                 "Solid line: selection-aware estimate, markers chosen afresh inside each outer training part (Ambroise & McLachlan 2002). "
                 + "Dashed line: optimistic estimate, markers chosen once on all samples. Shading: ± 1 SD over outer folds. "
-                + "The diamond marks the recommended size: the smallest within one standard error of the best (Breiman et al. 1984).");
+                + "The diamond marks the recommended size: the smallest within one standard error of the best (Breiman et al. 1984). "
+                + "The size axis is log-spaced, as the sizes tried grow roughly geometrically; the horizontal reference line is chance and the vertical one the locked panel's size.");
             html.EndSection();
         }
 
@@ -136,8 +160,8 @@ public static class ScreenReport
         if (markers.Count > 0)
         {
             html.BeginSection("Values of the top markers by class");
-            html.Paragraph("Each dot is one sample; boxes show quartiles and the median. Hollow markers on the dashed row are samples below the "
-                + "detection limit. Missing values are left out. A log axis is used when every measured value is positive.");
+            html.Paragraph("Each dot is one sample; boxes show quartiles and the median. Hollow markers are samples below the detection limit: "
+                + "on the dashed row at the limit when the file gives it (<0.05), on a row of their own under the axis when it does not (<LOD). Missing values are left out. A log axis is used when every measured value is positive.");
             foreach (var feature in markers)
                 html.Figure(ScreenReportCharts.MarkerByClass(input.Panel, feature, input.ShowSampleIds),
                     "Values of " + feature.Feature + " by class.");

@@ -95,7 +95,12 @@ internal static class ScreenReportCharts
     public static string PanelSizeScoreLabel(PanelSizeCurve curve) =>
         curve.Metric == "auc" ? "Held-out AUC (mean over outer folds)" : "Held-out accuracy (mean over outer folds)";
 
-    public static SvgImage PanelSize(PanelSizeCurve curve)
+    /// <summary>
+    /// The panel-size curve on a log-spaced size axis (the sizes grow roughly geometrically), with
+    /// the level a panel without information reaches (AUC 0.5, or the largest class's share for
+    /// accuracy) and the size of the locked panel.
+    /// </summary>
+    public static SvgImage PanelSize(PanelSizeCurve curve, ClassOutcome outcome, int lockedPanelSize)
     {
         int count = curve.Points.Count;
         var sizes = new double[count];
@@ -121,14 +126,31 @@ internal static class ScreenReportCharts
         var markers = double.IsFinite(recommendedScore)
             ? new[] { new PointMarker(curve.RecommendedSize, recommendedScore, Invariant($"Recommended size: {curve.RecommendedSize}")) }
             : [];
+        var lines = new List<ReferenceLine> { new(ChartAxis.Y, ChanceLevel(curve, outcome), ChanceLabel(curve)) };
+        if (lockedPanelSize > 0)
+            lines.Add(new ReferenceLine(ChartAxis.X, lockedPanelSize, Invariant($"Locked panel: {lockedPanelSize} markers")));
         return XYChart.Render(
-            new XYChartOptions("Panel-size curve: selection-aware and optimistic estimates", PanelSizeAxisLabel, PanelSizeScoreLabel(curve), Width: 820),
+            new XYChartOptions("Panel-size curve: selection-aware and optimistic estimates", PanelSizeAxisLabel, PanelSizeScoreLabel(curve), Width: 820,
+                XScale: AxisScaleKind.Log10, YMaximum: 1),
             [
                 new XYSeries("Selection-aware (markers chosen inside each training part)", sizes, selectionAware, XYSeriesStyle.LineAndPoints, selectionAwareLow, selectionAwareHigh),
                 new XYSeries("Optimistic (markers chosen once on all samples)", sizes, optimistic, XYSeriesStyle.DashedLine, optimisticLow, optimisticHigh),
             ],
-            markers: markers);
+            lines,
+            markers);
     }
+
+    /// <summary>What guessing scores: AUC 0.5, or for accuracy the share of the largest class (always calling it).</summary>
+    public static double ChanceLevel(PanelSizeCurve curve, ClassOutcome outcome)
+    {
+        if (curve.Metric == "auc") return 0.5;
+        int largest = 0;
+        foreach (int count in outcome.ClassCounts) largest = Math.Max(largest, count);
+        return (double)largest / outcome.SampleCount;
+    }
+
+    public static string ChanceLabel(PanelSizeCurve curve) =>
+        curve.Metric == "auc" ? "Chance (AUC 0.5)" : "Chance (always the largest class)";
 
     public static SvgImage MarkerByClass(Panel panel, FeatureSummary feature, bool showSampleIds)
     {
