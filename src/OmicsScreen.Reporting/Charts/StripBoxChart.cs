@@ -146,7 +146,9 @@ public static class StripBoxChart
         int sampleCount = group.MeasuredValues.Count + group.BelowDetectionCount;
         string counts = group.BelowDetectionCount > 0
             ? string.Create(CultureInfo.InvariantCulture, $"n = {sampleCount}, {group.BelowDetectionCount} below limit")
-            : string.Create(CultureInfo.InvariantCulture, $"n = {sampleCount}");
+            : group.DrawnFrom is { } total && total > sampleCount
+                ? string.Create(CultureInfo.InvariantCulture, $"n = {total} ({sampleCount} quantiles drawn)")
+                : string.Create(CultureInfo.InvariantCulture, $"n = {sampleCount}");
         svg.Text(centre, area.Bottom + apartHeight + 32, counts, TextAnchor.Middle, 11, fill: ChartPalette.Axis);
         svg.EndGroup();
     }

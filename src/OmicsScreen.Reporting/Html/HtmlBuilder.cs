@@ -155,6 +155,7 @@ public sealed class HtmlBuilder
                 _html.Append('<').Append(tag);
                 if (rowHeader) _html.Append(" scope=\"row\"");
                 if (columns[c].Alignment == ColumnAlignment.Numeric) _html.Append(" class=\"num\"");
+                else if (columns[c].Alignment == ColumnAlignment.Unbroken) _html.Append(" class=\"unbroken\"");
                 _html.Append('>');
                 MarkupText.AppendEncoded(_html, row[c]);
                 _html.Append("</").Append(tag).Append('>');

@@ -28,6 +28,7 @@ internal static class ReportStyleSheet
         thead th { background: #f0f0f0; border-bottom: 2px solid #9a9a9a; }
         tbody th { font-weight: 600; }
         .num { text-align: right; font-variant-numeric: tabular-nums; white-space: nowrap; }
+        .unbroken { overflow-wrap: anywhere; word-break: break-all; }
         dl { display: grid; grid-template-columns: max-content 1fr; gap: 0.25rem 1.25rem; margin: 0.75rem 0; }
         dt { font-weight: 600; }
         .legend { font-size: 0.85rem; color: #333333; }

@@ -168,6 +168,8 @@ public static class ScreenReport
             html.EndSection();
         }
 
+        WriteStatisticianFigures(html, input);
+
         if (result.Shortlist.Count > 0)
         {
             html.BeginSection("Redundancy");
@@ -185,6 +187,43 @@ public static class ScreenReport
             html.EndSection();
         }
         html.EndSection();
+    }
+
+    /// <summary>The figures a statistician checks first: a map of the samples, forest against single-marker evidence, and the decoys.</summary>
+    private static void WriteStatisticianFigures(HtmlBuilder html, ScreenReportInput input)
+    {
+        var result = input.Result;
+        var panel = input.Panel;
+        if (SamplePrincipalComponents.Of(panel.Matrix) is { } components)
+        {
+            html.BeginSection("Samples on their first two principal components");
+            string features = components.FeaturesUsed < panel.FeatureCount
+                ? string.Create(CultureInfo.InvariantCulture, $"the {components.FeaturesUsed} features of largest variance")
+                : "all features";
+            html.Figure(ScreenReportCharts.SampleMap(components, "Samples by class", panel.Outcome.ClassNames, panel.Outcome.SampleClasses),
+                "Each dot is one sample, placed by the first two principal components of " + features + " (each standardised; a missing cell at the feature's mean, "
+                + "a below-detection cell at its smallest measured value), coloured by class. Classes apart here differ in many features at once.");
+            if (panel.Cohort is { } cohort)
+                html.Figure(ScreenReportCharts.SampleMap(components, "Samples by cohort", cohort.LevelNames, cohort.SampleLevels),
+                    "The same map coloured by cohort: cohorts apart here differ in many features at once (a batch or centre effect), whatever the class.");
+            html.EndSection();
+        }
+
+        html.BeginSection("Forest order against single-marker AUC");
+        html.Figure(ScreenReportCharts.RankAgainstAuc(result),
+            "Every feature (up to " + ReportNumber.Integer(ScreenReportCharts.RankAucFeatureLimit) + ") by its position in the screen order (log axis) and its single-marker AUC. "
+            + "Features far from 0.5 near the top agree with a one-marker test; features near 0.5 high in the order carry signal only together with others.");
+        html.EndSection();
+
+        if (ScreenReportCharts.ImportanceAgainstDecoys(result) is { } decoys)
+        {
+            html.BeginSection("Observed importances against the decoys");
+            html.Figure(decoys,
+                "Corrected impurity importance, mean over repeats, of the decoys (permuted copies of real features, so unrelated to the outcome by construction), "
+                + "of the features not shortlisted and of the shortlisted markers. Groups above " + ReportNumber.Integer(ScreenReportCharts.DistributionPointLimit)
+                + " values are drawn as that many evenly spaced quantiles.");
+            html.EndSection();
+        }
     }
 
     private static void WriteReproducibility(HtmlBuilder html, ScreenReportInput input)

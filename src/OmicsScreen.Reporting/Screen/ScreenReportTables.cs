@@ -179,7 +179,7 @@ internal static class ScreenReportTables
 
     public static HtmlTable Files(string caption, IReadOnlyList<ReportedFile> files)
     {
-        var table = new HtmlTable(caption, [new("File"), new("Role"), new("SHA-256")]);
+        var table = new HtmlTable(caption, [new("File", ColumnAlignment.Unbroken), new("Role"), new("SHA-256", ColumnAlignment.Unbroken)]);
         foreach (var file in files) table.AddRow(file.Name, file.Role, file.Sha256);
         return table;
     }

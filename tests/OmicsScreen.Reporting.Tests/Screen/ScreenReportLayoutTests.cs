@@ -73,7 +73,13 @@ public sealed partial class ScreenReportLayoutTests : IDisposable
     public void No_table_is_wider_than_a_1280_pixel_window()
     {
         if (!HeadlessChromium.AvailableOrFailOnCi()) return;
-        string wide = WideTables(ScreenReport.Render(ScreenReportSample.Input()), "report");
+        // Real paths and digests are long unbroken strings: the file tables must wrap them.
+        var input = ScreenReportSample.Input() with
+        {
+            Inputs = [new ReportedFile("matrix", "/data/projects/plasma-discovery-2026/exports/olink_explore_3072_normalised_npx_matrix_v2.csv",
+                "3f8a0c2e9b1d4f6a8c0e2b4d6f8a0c2e9b1d4f6a8c0e2b4d6f8a0c2e9b1d4f6a")],
+        };
+        string wide = WideTables(ScreenReport.Render(input), "report");
         Assert.True(wide.Length == 0, "Tables wider than the page: " + wide);
     }
 

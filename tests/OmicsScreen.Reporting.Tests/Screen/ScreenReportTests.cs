@@ -122,7 +122,7 @@ public sealed class ScreenReportTests
         // then the cohort section: one forest plot per top marker and, from three screened cohorts, the agreement map
         int forests = result.Cohorts is null ? 0 : Math.Min(CohortReportCharts.ForestPlotMarkerLimit, result.Shortlist.Count);
         int cohortMap = result.Cohorts is { ScreenedCohorts.Count: >= CohortReportCharts.HeatMapMinimumCohorts } ? 1 : 0;
-        int expected = 5 + strips + (result.Shortlist.Count >= 2 ? 1 : 0) + forests + cohortMap;
+        int expected = 5 + strips + (result.Shortlist.Count >= 2 ? 1 : 0) + forests + cohortMap + StatisticianCharts(result);
         Assert.Equal(expected, charts.Count);
 
         foreach (var chart in charts)
@@ -196,9 +196,13 @@ public sealed class ScreenReportTests
         var rows = BodyRows(fallback);
         Assert.Equal(ScreenReportTables.FallbackFeatureCount, rows.Count);
         Assert.Equal(empty.Features[empty.Order[0]].Feature, rows[0].Elements().ElementAt(1).Value);
-        // No strip charts or correlation map without markers; the five screen-wide charts stay.
-        Assert.Equal(5, Markup.Elements(document, "svg").Count());
+        // No strip charts or correlation map without markers; the screen-wide charts stay.
+        Assert.Equal(5 + StatisticianCharts(empty), Markup.Elements(document, "svg").Count());
     }
+
+    /// <summary>The sample maps (by class, and by cohort when there is one), screen order against AUC, and the decoys when there are any.</summary>
+    private static int StatisticianCharts(ScreenResult result) =>
+        2 + (ScreenReportSample.Panel.Cohort is null ? 0 : 1) + (result.Repeats.DecoyCount > 0 ? 1 : 0);
 
     [Fact]
     public void Every_screen_option_is_listed_under_its_label_and_option()
