@@ -87,7 +87,7 @@ public sealed class ScreenCommand : Command, IHelpLayout
 
     public Option<double> MinFrequency { get; } = new("--min-frequency")
     {
-        Description = "Selection frequency a marker needs for the shortlist: above 0.5 and at most 1, or 0 (the default) to leave the list to the q-values.",
+        Description = "Selection frequency a marker needs for the shortlist: above 0.5 and at most 1; 0 leaves the list to the q-values.",
         DefaultValueFactory = _ => Defaults.FrequencyThreshold,
         HelpName = "F",
     };
@@ -109,7 +109,7 @@ public sealed class ScreenCommand : Command, IHelpLayout
     {
         Description = "How the list is cut: q-value (Benjamini-Hochberg on the decoy-calibrated p-values) or decoy-bound (the longest list whose decoy estimate, with the +1 correction, stays at or under --max-q).",
         DefaultValueFactory = _ => "q-value",
-        HelpName = "q-value|decoy-bound",
+        HelpName = "RULE",
     };
 
     public Option<int> OutcomePermutations { get; } = new("--outcome-permutations")

@@ -46,7 +46,7 @@ public sealed class JsonOutputTests : IClassFixture<JsonOutputTests.Discovery>
         var json = JsonNode.Parse(run.Out)!.AsObject();
         Assert.Equal(300, json["samples"]!.GetValue<int>());
         Assert.Equal(30, json["features"]!.GetValue<int>());
-        Assert.Equal(0.6, json["min_frequency"]!.GetValue<double>());
+        Assert.Equal(0, json["min_frequency"]!.GetValue<double>()); // the default: no frequency filter, q-values alone
         var shortlist = json["shortlist"]!.AsArray();
         Assert.NotEmpty(shortlist);
         Assert.Equal(1, shortlist[0]!["rank"]!.GetValue<int>());
