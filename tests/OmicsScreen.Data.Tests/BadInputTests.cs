@@ -70,7 +70,7 @@ public sealed class BadInputTests : IDisposable
     public void Non_numeric_cell_names_line_feature_and_text_found()
     {
         var error = Fails(Options(_folder.Write("text.csv", GoodHeader + "s1,x,1,2\ns2,y,3,high\n")),
-            "text.csv, line 3, column 'b'", "found 'high'", "not a number", "annotation column");
+            "text.csv, line 3, column 'b'", "found 'high'", "not a number", "--annotation");
         Assert.Equal("b", error.Column);
     }
 
@@ -106,14 +106,14 @@ public sealed class BadInputTests : IDisposable
     public void Outcome_read_as_a_feature_because_of_its_case_is_explained()
     {
         Fails(Options(_folder.Write("coded.csv", "id,Group,a\ns1,0,1\ns2,1,2\n")),
-            "coded.csv", "outcome column 'group' is not in the matrix", "feature column 'Group'", "name it exactly");
+            "coded.csv", "no column 'group' (named by --outcome); did you mean 'Group'?", "use --outcome Group");
     }
 
     [Fact]
     public void Outcome_name_found_as_a_row_label_suggests_the_other_layout()
     {
         Fails(Options(_folder.Write("rows.csv", "feature,s1,s2\ngroup,x,y\na,1,2\n")),
-            "rows.csv, line 2", "'group' is a sample attribute name", "FeaturesInRows");
+            "rows.csv, line 2", "'group' is a sample attribute name", "--features-in-rows");
     }
 
     [Fact]

@@ -1,5 +1,6 @@
 using System.CommandLine;
 using OmicsScreen.Cli.Console;
+using OmicsScreen.Cli.Help;
 using OmicsScreen.Data;
 
 namespace OmicsScreen.Cli.Commands;
@@ -8,7 +9,7 @@ namespace OmicsScreen.Cli.Commands;
 /// `omicsscreen apply MODEL PANEL`: scores a new cohort with a locked panel and, when its outcome
 /// is known, measures how well the panel does on it.
 /// </summary>
-public sealed class ApplyCommand : Command
+public sealed class ApplyCommand : Command, IHelpLayout
 {
     public Argument<string> Model { get; } = new("MODEL")
     {
@@ -42,6 +43,24 @@ public sealed class ApplyCommand : Command
         Description = "List every sample's score with its id in the HTML report (scores.tsv always has them).",
     };
 
+    public Option<bool> Json { get; } = new("--json")
+    {
+        Description = "Print the headline results (calls per class, AUC, error, warnings, files written) as JSON on standard output instead of the text summary.",
+    };
+
+    public IReadOnlyList<HelpSection> HelpSections =>
+    [
+        new("Input", [Input.SampleSheet, Outcome, Input.SampleIdColumn, Input.Annotations, Input.FeaturesInRows, Input.DropUnmatched]),
+        new("Run", [Out, Force, ShowSampleIds, Json]),
+    ];
+
+    public IReadOnlyList<HelpExample> Examples =>
+    [
+        new("Score a validation cohort whose outcome is known: AUC, error and calibration",
+            "omicsscreen apply reports/plasma/locked_panel.json validation.csv --samples validation_sheet.tsv --outcome status --out reports/validation"),
+        new("Score samples whose outcome is not known yet", "omicsscreen apply reports/plasma/locked_panel.json new_samples.csv --out reports/new_samples"),
+    ];
+
     public ApplyCommand(CliConsole console)
         : base("apply", "Score a new cohort with a locked panel; with a known outcome, report AUC, error and calibration.")
     {
@@ -56,6 +75,7 @@ public sealed class ApplyCommand : Command
         Options.Add(Out);
         Options.Add(Force);
         Options.Add(ShowSampleIds);
+        Options.Add(Json);
         SetAction(parse => CommandRunner.Run(console, () => ApplyRun.Execute(console, new ApplyRunOptions
         {
             ModelPath = parse.GetValue(Model)!,
@@ -69,6 +89,7 @@ public sealed class ApplyCommand : Command
             OutputFolder = parse.GetValue(Out)!,
             Force = parse.GetValue(Force),
             ShowSampleIds = parse.GetValue(ShowSampleIds),
+            Json = parse.GetValue(Json),
             CommandLine = ["omicsscreen", .. parse.Tokens.Select(t => t.Value)],
         })));
     }

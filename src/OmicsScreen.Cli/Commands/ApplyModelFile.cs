@@ -44,7 +44,9 @@ public static class ApplyModelFile
             ToolVersion = ToolVersion(),
             InputSha256 = inputs,
         });
-        WriteInto(resultsFolder, locked);
+        var content = LockedPanelJson.ToJson(locked);
+        content[DiscoveryOverlap.SampleIdHashesKey] = DiscoveryOverlap.SampleIdHashes(loaded.Panel.Matrix.SampleIds);
+        LockedPanelFile.Write(Path.Combine(resultsFolder, LockedPanelFile.DefaultFileName), content);
         return LockedPanelFile.DefaultFileName;
     }
 
@@ -56,6 +58,10 @@ public static class ApplyModelFile
 
     /// <exception cref="Data.PanelInputException">The file is missing, not ours, changed, truncated or structurally invalid; the message names it.</exception>
     public static LockedPanel Read(string path) => LockedPanelFile.Read(path, LockedPanelJson.FromJson);
+
+    /// <summary>The panel and, when the screen recorded them, the SHA-256 of each discovery sample id.</summary>
+    public static (LockedPanel Panel, HashSet<string>? DiscoverySampleIdHashes) ReadWithDiscoveryIds(string path) =>
+        LockedPanelFile.Read(path, content => (LockedPanelJson.FromJson(content), DiscoveryOverlap.ReadSampleIdHashes(content)));
 
     /// <summary>SHA-256 (lower-case hex) of a model file's bytes, for manifests.</summary>
     public static string FileSha256(string path)

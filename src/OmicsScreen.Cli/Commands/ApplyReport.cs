@@ -10,10 +10,11 @@ namespace OmicsScreen.Cli.Commands;
 /// </summary>
 internal static class ApplyReport
 {
-    public static string Build(LockedPanel model, LockedPanelScores scores, LockedPanelPerformance? performance, ApplyRunOptions options)
+    public static string Build(LockedPanel model, LockedPanelScores scores, LockedPanelPerformance? performance, ApplyRunOptions options,
+        IReadOnlyList<string> discoveryOverlap)
     {
         var html = new HtmlBuilder().BeginDocument($"Locked panel applied to {Path.GetFileName(options.MatrixPath)}");
-        html.Caution("Read before using these scores", Cautions(model, scores, performance));
+        html.Caution("Read before using these scores", [.. discoveryOverlap, .. Cautions(model, scores, performance)]);
 
         html.BeginSection("The locked panel");
         var rule = model.Threshold is { } threshold

@@ -20,8 +20,9 @@ internal static class ApplyRun
     {
         options.Validate();
         var started = DateTimeOffset.UtcNow;
-        var model = ApplyModelFile.Read(options.ModelPath);
+        var (model, discoveryIds) = ApplyModelFile.ReadWithDiscoveryIds(options.ModelPath);
         var (matrix, outcome, inputs) = LoadCohort(options);
+        var overlap = DiscoveryOverlap.Warnings(model, discoveryIds, inputs, matrix.SampleIds);
         LockedPanelScores scores;
         try
         {
@@ -49,11 +50,11 @@ internal static class ApplyRun
         folder.WriteText(ScoresFileName, w => ApplyTables.WriteScores(w, scores, knownClasses));
         if (performance is not null)
         {
-            folder.WriteText(EvaluationFileName, w => ManifestJson.Write(w, EvaluationDocument(model, scores, performance)));
+            folder.WriteText(EvaluationFileName, w => ManifestJson.Write(w, EvaluationDocument(model, scores, performance, overlap)));
             folder.WriteText(CalibrationFileName, w => ApplyTables.WriteCalibration(w, performance));
             folder.WriteText(ConfusionFileName, w => ApplyTables.WriteConfusion(w, performance));
         }
-        folder.WriteText(ReportFileName, w => w.Write(ApplyReport.Build(model, scores, performance, options)));
+        folder.WriteText(ReportFileName, w => w.Write(ApplyReport.Build(model, scores, performance, options, overlap)));
         var manifest = new
         {
             tool = "omicsscreen",
@@ -68,7 +69,13 @@ internal static class ApplyRun
         };
         folder.WriteText(ResultsFolder.ManifestFileName, w => ManifestJson.Write(w, manifest));
 
-        PrintSummary(console, model, scores, performance, folder.Path);
+        foreach (var warning in overlap) console.Error.WriteLine($"warning: {TextTable.Printable(warning)}");
+        if (options.Json)
+        {
+            foreach (var warning in scores.Warnings) console.Error.WriteLine($"warning: {TextTable.Printable(warning.Message)}");
+            ManifestJson.Write(console.Out, ApplyHeadline.Of(model, scores, performance, folder.Path, overlap));
+        }
+        else PrintSummary(console, model, scores, performance, folder.Path);
         return ExitCode.Success;
     }
 
@@ -92,7 +99,8 @@ internal static class ApplyRun
         return names;
     }
 
-    private static object EvaluationDocument(LockedPanel model, LockedPanelScores scores, LockedPanelPerformance performance) => new
+    private static object EvaluationDocument(LockedPanel model, LockedPanelScores scores, LockedPanelPerformance performance,
+        IReadOnlyList<string> overlap) => new
     {
         tool = "omicsscreen",
         samples = performance.SampleCount,
@@ -112,6 +120,7 @@ internal static class ApplyRun
         calibration = performance.Calibration,
         discovery_out_of_bag_auc = model.OutOfBagAuc,
         scale_warnings = scores.Warnings.Select(w => new { marker = w.Marker, message = w.Message }).ToArray(),
+        discovery_overlap_warnings = overlap,
     };
 
     private static void PrintSummary(CliConsole console, LockedPanel model, LockedPanelScores scores, LockedPanelPerformance? performance, string folder)

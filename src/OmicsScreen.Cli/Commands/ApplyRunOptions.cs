@@ -31,6 +31,9 @@ public sealed record ApplyRunOptions
     /// <summary>Show per-sample scores with their ids in the HTML report (they are always in scores.tsv).</summary>
     public bool ShowSampleIds { get; init; }
 
+    /// <summary>Print the headline results as JSON on standard output instead of the text summary.</summary>
+    public bool Json { get; init; }
+
     /// <summary>The arguments as typed, for the manifest.</summary>
     public IReadOnlyList<string> CommandLine { get; init; } = [];
 

@@ -1,5 +1,6 @@
 using System.CommandLine;
 using OmicsScreen.Cli.Console;
+using OmicsScreen.Cli.Help;
 
 namespace OmicsScreen.Cli.Commands;
 
@@ -7,7 +8,7 @@ namespace OmicsScreen.Cli.Commands;
 /// `omicsscreen check`: reads a panel and says what it found and whether it can be screened,
 /// before anyone spends an hour of compute on it.
 /// </summary>
-public sealed class CheckCommand : Command
+public sealed class CheckCommand : Command, IHelpLayout
 {
     public PanelInputOptions Input { get; } = new();
 
@@ -15,6 +16,21 @@ public sealed class CheckCommand : Command
     {
         Description = "Print the findings as JSON instead of a table.",
     };
+
+    public IReadOnlyList<HelpSection> HelpSections =>
+    [
+        new("Input", [Input.SampleSheet, Input.Outcome, Input.PositiveClass, Input.Subject, Input.SampleIdColumn, Input.Annotations,
+            Input.FeaturesInRows, Input.DropUnmatched, Input.FeatureBlock, Input.KeepFeatures]),
+        new("Cohorts", [Input.Cohort]),
+        new("Run", [Json]),
+    ];
+
+    public IReadOnlyList<HelpExample> Examples =>
+    [
+        new("Check a matrix whose outcome is a text column of the same file", "omicsscreen check wdbc.csv --outcome diagnosis"),
+        new("Check a matrix with its sample sheet and cohort column", "omicsscreen check plasma.csv --samples sheet.tsv --outcome status --cohort centre"),
+        new("The findings as JSON, for a pipeline", "omicsscreen check plasma.csv --samples sheet.tsv --outcome status --json"),
+    ];
 
     public CheckCommand(CliConsole console)
         : base("check", "Read a panel and report samples, features, classes, cohorts, missingness, below-detection cells and problems. Exit 0 when it can be screened.")

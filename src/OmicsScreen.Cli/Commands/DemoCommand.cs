@@ -1,5 +1,6 @@
 using System.CommandLine;
 using OmicsScreen.Cli.Console;
+using OmicsScreen.Cli.Help;
 using OmicsScreen.Data.Demo;
 
 namespace OmicsScreen.Cli.Commands;
@@ -8,23 +9,26 @@ namespace OmicsScreen.Cli.Commands;
 /// `omicsscreen demo`: writes the invented demo study and runs the main job on it, so a new
 /// user sees the whole tool work on a fresh machine with one command.
 /// </summary>
-public sealed class DemoCommand : Command
+public sealed class DemoCommand : Command, IHelpLayout
 {
     public Option<string> PanelFolder { get; } = new("--panel-dir")
     {
         Description = "Folder for the generated demo panel.",
+        HelpName = "DIR",
         DefaultValueFactory = _ => Path.Combine("panels", "demo"),
     };
 
     public Option<string> ReportFolder { get; } = new("--out")
     {
         Description = "Folder for the demo's results and report.",
+        HelpName = "DIR",
         DefaultValueFactory = _ => Path.Combine("reports", "demo"),
     };
 
     public Option<ulong> Seed { get; } = new("--seed")
     {
         Description = "Seed of the simulated study (the same seed gives byte-identical files).",
+        HelpName = "S",
         DefaultValueFactory = _ => new DemoStudyOptions().Seed,
     };
 
@@ -37,6 +41,14 @@ public sealed class DemoCommand : Command
     {
         Description = "No progress display.",
     };
+
+    public IReadOnlyList<HelpSection> HelpSections => [new("Run", [PanelFolder, ReportFolder, Seed, PanelOnly, Quiet])];
+
+    public IReadOnlyList<HelpExample> Examples =>
+    [
+        new("Write the invented Marrowfen study to panels/demo and screen it into reports/demo", "omicsscreen demo"),
+        new("Only write the demo panel, to try the other commands on it", "omicsscreen demo --panel-only --panel-dir panels/demo"),
+    ];
 
     public DemoCommand(CliConsole console) : base("demo", "Write the invented demo panel and run the main job on it.")
     {

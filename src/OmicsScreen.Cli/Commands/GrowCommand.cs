@@ -1,5 +1,7 @@
 using System.CommandLine;
 using OmicsScreen.Cli.Console;
+using OmicsScreen.Cli.Help;
+using OmicsScreen.Screening.Screen;
 
 namespace OmicsScreen.Cli.Commands;
 
@@ -7,13 +9,14 @@ namespace OmicsScreen.Cli.Commands;
 /// `omicsscreen grow`: one random forest on the whole panel, with its out-of-bag error and
 /// impurity decrease per feature. A quick look; the screen is what ranks markers.
 /// </summary>
-public sealed class GrowCommand : Command
+public sealed class GrowCommand : Command, IHelpLayout
 {
     public PanelInputOptions Input { get; } = new();
 
     public Option<int> Trees { get; } = new("--trees")
     {
         Description = "Trees in the forest.",
+        HelpName = "N",
         DefaultValueFactory = _ => 500,
     };
 
@@ -26,12 +29,14 @@ public sealed class GrowCommand : Command
     public Option<int> MinLeaf { get; } = new("--min-leaf")
     {
         Description = "Fewest samples a leaf may hold (1 grows leaves to purity).",
+        HelpName = "N",
         DefaultValueFactory = _ => 1,
     };
 
     public Option<int?> MaxDepth { get; } = new("--max-depth")
     {
         Description = "Deepest level a split may sit at (the root is level 0). Default: no limit.",
+        HelpName = "N",
     };
 
     public Option<double?> SampleFraction { get; } = new("--sample-fraction")
@@ -40,20 +45,27 @@ public sealed class GrowCommand : Command
         HelpName = "F",
     };
 
-    public Option<bool> Balanced { get; } = new("--balanced")
+    public Option<BalanceMode> Balance { get; } = new("--balance")
     {
-        Description = "Draw the same number of samples from each class for every tree (for imbalanced outcomes).",
+        Description = "Class-balanced drawing for each tree, as in `screen`: on, off, or auto (on when the smallest class is under 2/3 of the largest).",
+        HelpName = "auto|on|off",
+        DefaultValueFactory = _ => BalanceMode.Off,
     };
+
+    /// <summary>The earlier spelling of --balance on, kept working but not shown.</summary>
+    public Option<bool> Balanced { get; } = new("--balanced") { Hidden = true };
 
     public Option<ulong> Seed { get; } = new("--seed")
     {
         Description = "Seed of every random draw; the same seed gives the same forest on any number of threads.",
+        HelpName = "S",
         DefaultValueFactory = _ => 1,
     };
 
     public Option<int> Threads { get; } = new("--threads")
     {
         Description = "Threads to grow trees on. Default: all cores.",
+        HelpName = "N",
     };
 
     public Option<string?> ImportanceFile { get; } = new("--importance-out")
@@ -67,6 +79,23 @@ public sealed class GrowCommand : Command
         Description = "Print the summary as JSON instead of text.",
     };
 
+    public IReadOnlyList<HelpSection> HelpSections =>
+    [
+        new("Input", [Input.SampleSheet, Input.Outcome, Input.PositiveClass, Input.Subject, Input.SampleIdColumn, Input.Annotations,
+            Input.FeaturesInRows, Input.DropUnmatched, Input.FeatureBlock, Input.KeepFeatures]),
+        new("Forest", [Trees, FeaturesPerSplit, MinLeaf, MaxDepth, SampleFraction, Balance]),
+        new("Cohorts", [Input.Cohort]),
+        new("Run", [Seed, Threads, ImportanceFile, Json]),
+    ];
+
+    public IReadOnlyList<HelpExample> Examples =>
+    [
+        new("One forest of 500 trees: out-of-bag error, AUC and the top features", "omicsscreen grow wdbc.csv --outcome diagnosis"),
+        new("More trees, every feature's impurity decrease in a table",
+            "omicsscreen grow plasma.csv --samples sheet.tsv --outcome status --trees 2000 --importance-out importance.tsv"),
+        new("The summary as JSON for a pipeline", "omicsscreen grow wdbc.csv --outcome diagnosis --json"),
+    ];
+
     public GrowCommand(CliConsole console)
         : base("grow", "Grow one random forest on a panel and report its out-of-bag error, AUC and impurity decrease per feature.")
     {
@@ -76,6 +105,7 @@ public sealed class GrowCommand : Command
         Options.Add(MinLeaf);
         Options.Add(MaxDepth);
         Options.Add(SampleFraction);
+        Options.Add(Balance);
         Options.Add(Balanced);
         Options.Add(Seed);
         Options.Add(Threads);
@@ -89,7 +119,7 @@ public sealed class GrowCommand : Command
             MinLeafSize = parse.GetValue(MinLeaf),
             MaxDepth = parse.GetValue(MaxDepth),
             SampleFraction = parse.GetValue(SampleFraction),
-            Balanced = parse.GetValue(Balanced),
+            Balance = parse.GetValue(Balanced) ? BalanceMode.On : parse.GetValue(Balance),
             Seed = parse.GetValue(Seed),
             ThreadCount = parse.GetValue(Threads),
             ImportanceFile = parse.GetValue(ImportanceFile),

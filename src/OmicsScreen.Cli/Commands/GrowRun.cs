@@ -37,7 +37,7 @@ internal static class GrowRun
         if (options.ImportanceFile is { } path)
             AtomicFile.WriteText(path, writer => ImportanceWriter.Write(writer, panel.Matrix.FeatureNames, ranked, result));
 
-        if (options.Json) WriteJson(console.Out, loaded, result, ranked, loadTime);
+        if (options.Json) WriteJson(console.Out, options, loaded, result, ranked, loadTime);
         else WriteText(console.Out, loaded, result, ranked, loadTime);
         return ExitCode.Success;
     }
@@ -95,7 +95,7 @@ internal static class GrowRun
             if (seen.Add(trees)) yield return (label, trees);
     }
 
-    private static void WriteJson(TextWriter output, LoadedPanel loaded, ForestResult result, int[] ranked, TimeSpan loadTime)
+    private static void WriteJson(TextWriter output, GrowRunOptions options, LoadedPanel loaded, ForestResult result, int[] ranked, TimeSpan loadTime)
     {
         var panel = loaded.Panel;
         var document = new
@@ -117,6 +117,7 @@ internal static class GrowRun
                 max_depth = result.Options.Tree.MaxDepth == int.MaxValue ? (int?)null : result.Options.Tree.MaxDepth,
                 drawing = result.Options.Sampling.Drawing.ToString().ToLowerInvariant(),
                 sample_fraction = result.Options.Sampling.Drawing == Engine.Sampling.SampleDrawing.Subsample ? result.Options.Sampling.SubsampleFraction : (double?)null,
+                balance = options.Balance.ToString().ToLowerInvariant(),
                 class_balanced = result.Options.Sampling.ClassBalanced,
                 seed = result.Options.Seed,
             },
@@ -136,7 +137,7 @@ internal static class GrowRun
             impurity_decrease = ranked.Select(f => new
             {
                 feature = panel.Matrix.FeatureNames[f],
-                mean_decrease = result.MeanDecreaseImpurity[f],
+                mean_gini_decrease = result.MeanDecreaseImpurity[f],
                 share = result.NormalisedDecreaseImpurity[f],
             }).ToArray(),
         };

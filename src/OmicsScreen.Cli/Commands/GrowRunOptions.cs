@@ -3,6 +3,7 @@ using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Engine.Sampling;
 using OmicsScreen.Engine.Trees;
+using OmicsScreen.Screening.Screen;
 
 namespace OmicsScreen.Cli.Commands;
 
@@ -15,7 +16,8 @@ public sealed record GrowRunOptions
     public int MinLeafSize { get; init; } = 1;
     public int? MaxDepth { get; init; }
     public double? SampleFraction { get; init; }
-    public bool Balanced { get; init; }
+    /// <summary>Class-balanced drawing, spelt as for `screen`; off by default for a single forest.</summary>
+    public BalanceMode Balance { get; init; } = BalanceMode.Off;
     public ulong Seed { get; init; } = 1;
     public int ThreadCount { get; init; }
     public string? ImportanceFile { get; init; }
@@ -23,12 +25,28 @@ public sealed record GrowRunOptions
 
     public void Validate()
     {
-        if (TreeCount < 1) throw new CommandInputException("--trees must be at least 1.");
-        if (FeaturesPerSplit < 0) throw new CommandInputException("--features-per-split must be at least 1.");
-        if (MinLeafSize < 1) throw new CommandInputException("--min-leaf must be at least 1.");
-        if (MaxDepth is < 0) throw new CommandInputException("--max-depth cannot be negative.");
-        if (SampleFraction is { } f && !(f > 0 && f <= 1)) throw new CommandInputException("--sample-fraction must lie in (0, 1].");
-        if (ThreadCount < 0) throw new CommandInputException("--threads cannot be negative (0 means all cores).");
+        if (TreeCount < 1) throw new CommandInputException("--trees: the value must be at least 1.");
+        if (FeaturesPerSplit < 0) throw new CommandInputException("--features-per-split: the value must be at least 1 (leave it out for the square root of the feature count).");
+        if (MinLeafSize < 1) throw new CommandInputException("--min-leaf: the value must be at least 1.");
+        if (MaxDepth is < 0) throw new CommandInputException("--max-depth: the value cannot be negative.");
+        if (SampleFraction is { } f && !(f > 0 && f <= 1)) throw new CommandInputException("--sample-fraction: the value must be above 0 and at most 1 (for example 0.632).");
+        if (ThreadCount < 0) throw new CommandInputException("--threads: the value must be at least 1 (leave it out to use all cores).");
+    }
+
+    /// <summary>
+    /// Auto balances when the smallest class is under 2/3 of the largest: the rule `screen`
+    /// applies (ScreenSettings.Resolve), so the option means the same in both commands.
+    /// </summary>
+    internal static bool IsBalanced(BalanceMode mode, ClassOutcome outcome)
+    {
+        if (mode != BalanceMode.Auto) return mode == BalanceMode.On;
+        int smallest = int.MaxValue, largest = 0;
+        foreach (int count in outcome.ClassCounts)
+        {
+            smallest = Math.Min(smallest, count);
+            largest = Math.Max(largest, count);
+        }
+        return smallest * 3 < largest * 2;
     }
 
     /// <summary>The engine's options; samples of one subject are drawn together when the panel names subjects.</summary>
@@ -47,7 +65,7 @@ public sealed record GrowRunOptions
         {
             Drawing = SampleFraction is null ? SampleDrawing.Bootstrap : SampleDrawing.Subsample,
             SubsampleFraction = SampleFraction ?? SamplingOptions.Default.SubsampleFraction,
-            ClassBalanced = Balanced,
+            ClassBalanced = IsBalanced(Balance, panel.Outcome),
             Groups = panel.Subject,
         },
     };

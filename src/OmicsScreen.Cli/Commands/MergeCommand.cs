@@ -1,11 +1,12 @@
 using System.CommandLine;
 using OmicsScreen.Cli.Console;
+using OmicsScreen.Cli.Help;
 using OmicsScreen.Cli.Work;
 
 namespace OmicsScreen.Cli.Commands;
 
 /// <summary>`omicsscreen merge`: joins the parts of a split screen into the results folder a single run writes.</summary>
-public sealed class MergeCommand : Command
+public sealed class MergeCommand : Command, IHelpLayout
 {
     public Argument<string[]> Parts { get; } = new("PARTS")
     {
@@ -35,6 +36,16 @@ public sealed class MergeCommand : Command
     {
         Description = "No progress display.",
     };
+
+    public IReadOnlyList<HelpSection> HelpSections => [new("Run", [Out, Force, Threads, Quiet])];
+
+    public IReadOnlyList<HelpExample> Examples =>
+    [
+        new("Join the four parts of a split screen into one results folder",
+            "omicsscreen merge parts/1 parts/2 parts/3 parts/4 --out reports/plasma"),
+        new("The same on a busy node, with two threads and no progress display",
+            "omicsscreen merge parts/* --out reports/plasma --threads 2 --quiet"),
+    ];
 
     public MergeCommand(CliConsole console)
         : base("merge", "Merge the parts of a screen split with `screen --part I/N` into one results folder, the same as a single run's.")

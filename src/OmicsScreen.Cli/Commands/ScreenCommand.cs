@@ -1,5 +1,6 @@
 using System.CommandLine;
 using OmicsScreen.Cli.Console;
+using OmicsScreen.Cli.Help;
 using OmicsScreen.Cli.Work;
 using OmicsScreen.Screening.Screen;
 
@@ -9,7 +10,7 @@ namespace OmicsScreen.Cli.Commands;
 /// `omicsscreen screen`: the main job. Repeated half-sample forests, corrected and permutation
 /// importance, a stability-ranked shortlist with error control, and the selection-aware panel-size curve.
 /// </summary>
-public sealed class ScreenCommand : Command
+public sealed class ScreenCommand : Command, IHelpLayout
 {
     private static readonly ScreenOptions Defaults = new();
 
@@ -17,7 +18,7 @@ public sealed class ScreenCommand : Command
 
     public Option<string?> Out { get; } = new("--out")
     {
-        Description = "Results folder. Default: reports/<panel file name>.",
+        Description = "Results folder. Default: a folder named after the panel file in reports/.",
         HelpName = "DIR",
     };
 
@@ -67,6 +68,7 @@ public sealed class ScreenCommand : Command
     public Option<BalanceMode> Balance { get; } = new("--balance")
     {
         Description = "Class-balanced drawing for each tree: auto (when the smallest class is under 2/3 of the largest), on or off.",
+        HelpName = "auto|on|off",
         DefaultValueFactory = _ => Defaults.Balance,
     };
 
@@ -85,7 +87,7 @@ public sealed class ScreenCommand : Command
 
     public Option<double> MinFrequency { get; } = new("--min-frequency")
     {
-        Description = "Selection frequency a marker needs for the shortlist, in (0.5, 1]; 0 (the default) leaves the list to the q-values.",
+        Description = "Selection frequency a marker needs for the shortlist: above 0.5 and at most 1; 0 leaves the list to the q-values.",
         DefaultValueFactory = _ => Defaults.FrequencyThreshold,
         HelpName = "F",
     };
@@ -97,10 +99,9 @@ public sealed class ScreenCommand : Command
         HelpName = "Q",
     };
 
-    public Option<int> Decoys { get; } = new("--decoys")
+    public Option<int?> Decoys { get; } = new("--decoys")
     {
-        Description = "Decoys: copies of features permuted once per run and screened beside them; they give the p-values' null and the estimate of false markers. -1: one per feature, at least 1,000 and at most 5,000; 0 turns them off.",
-        DefaultValueFactory = _ => Defaults.DecoyCount,
+        Description = "Decoys: copies of features permuted once per run and screened beside them; they give the p-values' null and the estimate of false markers. 0 turns them off. Default: one per feature, at least 1,000 and at most 5,000.",
         HelpName = "N",
     };
 
@@ -121,6 +122,7 @@ public sealed class ScreenCommand : Command
     public Option<double> RedundancyRho { get; } = new("--redundancy-rho")
     {
         Description = "Spearman |rho| at which shortlisted markers share a redundancy group.",
+        HelpName = "RHO",
         DefaultValueFactory = _ => Defaults.RedundancyCorrelation,
     };
 
@@ -175,6 +177,11 @@ public sealed class ScreenCommand : Command
         Description = "No progress display.",
     };
 
+    public Option<bool> Json { get; } = new("--json")
+    {
+        Description = "Print the headline results (shortlist, locked panel, files written) as JSON on standard output instead of the text summary; messages stay on standard error.",
+    };
+
     public Option<long?> MemoryLimit { get; } = new("--memory-limit")
     {
         HelpName = "SIZE",
@@ -182,13 +189,33 @@ public sealed class ScreenCommand : Command
         CustomParser = Memory.ByteSize.ParseOption,
     };
 
+    public IReadOnlyList<HelpSection> HelpSections =>
+    [
+        new("Input", [Input.SampleSheet, Input.Outcome, Input.PositiveClass, Input.Subject, Input.SampleIdColumn, Input.Annotations,
+            Input.FeaturesInRows, Input.DropUnmatched, Input.FeatureBlock, Input.KeepFeatures]),
+        new("Forest", [Trees, FeaturesPerSplit, MinLeaf, Balance]),
+        new("Selection and error control", [Pairs, RepeatLevel, PerRepeat, MinFrequency, MaxQ, Rule, Decoys, OutcomePermutations, RedundancyRho]),
+        new("Panel-size curve", [CurveFolds, CurveRepeats, CurveInnerPairs, MaxPanelSize]),
+        new("Cohorts", [Input.Cohort]),
+        new("Run", [Out, Force, Resume, Part, Seed, Threads, MemoryLimit, ShowSampleIds, Quiet, Json]),
+    ];
+
+    public IReadOnlyList<HelpExample> Examples =>
+    [
+        new("Screen a matrix whose outcome is a text column of the same file", "omicsscreen screen wdbc.csv --outcome diagnosis --out reports/wdbc"),
+        new("Screen with a sample sheet and three recruitment centres, then check the cohorts",
+            "omicsscreen screen plasma.csv --samples sheet.tsv --outcome status --cohort centre --out reports/plasma"),
+        new("A stricter shortlist with more repeats, repeatable with its seed",
+            "omicsscreen screen plasma.csv --samples sheet.tsv --outcome status --pairs 50 --min-frequency 0.8 --max-q 0.05 --seed 7"),
+    ];
+
     public ScreenCommand(CliConsole console)
         : base("screen", "Screen a panel: repeated random forests on half-samples, a stability-ranked shortlist with error control, and the panel-size curve.")
     {
         Input.AddTo(this);
         foreach (var option in new Option[] { Out, Force, Resume, Part, Pairs, Trees, FeaturesPerSplit, MinLeaf, Balance, RepeatLevel, PerRepeat,
                      MinFrequency, MaxQ, Rule, Decoys, OutcomePermutations, RedundancyRho, CurveFolds, CurveRepeats, CurveInnerPairs,
-                     MaxPanelSize, Seed, Threads, ShowSampleIds, Quiet })
+                     MaxPanelSize, Seed, Threads, ShowSampleIds, Quiet, Json })
             Options.Add(option);
         Options.Add(MemoryLimit);
         SetAction(parse => CommandRunner.Run(console, () => ScreenRun.Execute(console, new ScreenRunOptions
@@ -199,6 +226,7 @@ public sealed class ScreenCommand : Command
             Resume = parse.GetValue(Resume),
             Part = parse.GetValue(Part) is { } part ? RunPart.Parse(part) : null,
             Quiet = parse.GetValue(Quiet),
+            Json = parse.GetValue(Json),
             MemoryLimit = parse.GetValue(MemoryLimit),
             ShowSampleIds = parse.GetValue(ShowSampleIds),
             CommandLine = ["omicsscreen", .. parse.Tokens.Select(t => t.Value)],
@@ -214,7 +242,7 @@ public sealed class ScreenCommand : Command
                 SelectedPerRepeat = parse.GetValue(PerRepeat),
                 FrequencyThreshold = parse.GetValue(MinFrequency),
                 QValueThreshold = parse.GetValue(MaxQ),
-                DecoyCount = parse.GetValue(Decoys),
+                DecoyCount = parse.GetValue(Decoys) ?? Defaults.DecoyCount,
                 Rule = ParseRule(parse.GetValue(Rule)),
                 OutcomePermutations = parse.GetValue(OutcomePermutations),
                 RedundancyCorrelation = parse.GetValue(RedundancyRho),

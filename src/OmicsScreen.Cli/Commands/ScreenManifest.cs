@@ -1,5 +1,6 @@
 using System.Reflection;
 using OmicsScreen.Data;
+using OmicsScreen.Reporting.Screen;
 using OmicsScreen.Screening.Screen;
 
 namespace OmicsScreen.Cli.Commands;
@@ -40,20 +41,18 @@ internal static class ScreenManifest
                 positive_class = panel.Outcome.ClassNames[panel.Outcome.PositiveClass],
                 cohort_column = panel.Cohort?.ColumnName,
                 subject_column = panel.Subject?.ColumnName,
-                layout = options.Panel.Layout.ToString(),
+                features_in_rows = options.Panel.Layout == PanelLayout.FeaturesInRows,
                 feature_block = options.Panel.FeatureBlock?.ToString(),
                 features_kept_from_list = options.Panel.KeepFeatures?.Count,
                 dropped_samples = loaded.Inspection.DroppedSamples.Count,
             },
-            parameters = settings.Options,
+            // One key per option of `screen` (the option without its dashes), with automatic values resolved.
+            parameters = ScreenParameters.All.ToDictionary(p => p.Key, p => p.Value(settings), StringComparer.Ordinal),
             resolved = new
             {
-                features_per_split = settings.FeaturesPerSplit,
                 class_balanced = settings.ClassBalanced,
-                decoys = settings.DecoyCount,
                 mean_selected_per_repeat = result.Stability.MeanSelectedPerRepeat,
                 repeats = settings.RepeatCount,
-                run_seed = settings.Options.Seed,
             },
             results = new
             {

@@ -27,8 +27,10 @@ internal static class ScreenRun
 
     public static int Execute(CliConsole console, ScreenRunOptions options)
     {
+        ScreenOptionChecks.Check(options.Screen);
         try
         {
+            // A rule the option checks do not know yet still stops the run as a usage error.
             options.Screen.Validate();
         }
         catch (ArgumentException e)
@@ -61,6 +63,7 @@ internal static class ScreenRun
         try
         {
             result = ScreenRunner.Run(loaded.Panel, options.Screen, progress, default, checkpoint);
+            progress.Finish();
         }
         finally
         {
@@ -71,7 +74,7 @@ internal static class ScreenRun
         WriteResults(console, options, loaded, result, folder, started, loadSeconds, mergedParts: 0);
         checkpoint.Delete();
         if (options.Resume)
-            console.Out.WriteLine($"Resumed: {checkpoint.ReusedCount} of {plan.Units.Count} work units came from the checkpoint.");
+            (options.Json ? console.Error : console.Out).WriteLine($"Resumed: {checkpoint.ReusedCount} of {plan.Units.Count} work units came from the checkpoint.");
         return ExitCode.Success;
     }
 
@@ -98,7 +101,8 @@ internal static class ScreenRun
         var manifest = ScreenManifest.Build(options, loaded, result, started, finished, loadSeconds, folder.WrittenFiles, mergedParts);
         folder.WriteText(ResultsFolder.ManifestFileName, w => ManifestJson.Write(w, manifest));
 
-        PrintSummary(console.Out, loaded, result, folder.Path);
+        if (options.Json) ManifestJson.Write(console.Out, ScreenHeadline.Of(loaded, result, folder.Path));
+        else PrintSummary(console.Out, loaded, result, folder.Path);
     }
 
     /// <summary>What the report shows: the run's provenance, with the SHA-256 of every table already written beside it.</summary>
@@ -123,7 +127,7 @@ internal static class ScreenRun
     /// <summary>The layout, and any feature block or list the panel was narrowed to, with what that means for the error control.</summary>
     internal static string LayoutText(PanelLoadOptions panel)
     {
-        string text = panel.Layout.ToString();
+        string text = panel.Layout == PanelLayout.SamplesInRows ? "samples in rows" : "features in rows (--features-in-rows)";
         if (panel.FeatureBlock is { } block) text += $"; feature block {block} only";
         if (panel.KeepFeatures is { } keep)
             text += $"; only {keep.Count} features from a list (when the list was chosen on these samples, "

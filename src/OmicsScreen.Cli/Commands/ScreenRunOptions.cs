@@ -19,6 +19,9 @@ public sealed record ScreenRunOptions
     public RunPart? Part { get; init; }
     public bool Quiet { get; init; }
 
+    /// <summary>Print the headline results as JSON on standard output instead of the text summary.</summary>
+    public bool Json { get; init; }
+
     /// <summary>Largest memory the run may plan to use, in bytes; null compares the estimate with 90% of the available memory.</summary>
     public long? MemoryLimit { get; init; }
 

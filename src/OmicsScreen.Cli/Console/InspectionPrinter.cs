@@ -66,7 +66,7 @@ internal static class InspectionPrinter
         var options = new JsonSerializerOptions
         {
             WriteIndented = true,
-            PropertyNamingPolicy = JsonNamingPolicy.SnakeCaseLower,
+            PropertyNamingPolicy = new CountsAsPluralsNamingPolicy(),
             Converters = { new JsonStringEnumConverter(JsonNamingPolicy.SnakeCaseLower) },
             NumberHandling = JsonNumberHandling.AllowNamedFloatingPointLiterals,
         };

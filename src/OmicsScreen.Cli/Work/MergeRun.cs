@@ -61,6 +61,7 @@ internal static class MergeRun
         try
         {
             result = ScreenRunner.Run(loaded.Panel, screen, progress, default, store, computeMissing: false);
+            progress.Finish();
         }
         finally
         {

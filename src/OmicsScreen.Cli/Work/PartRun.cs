@@ -31,6 +31,7 @@ internal static class PartRun
         try
         {
             ScreenRunner.RunUnits(panel, options.Screen, units, folder, progress);
+            progress.Finish();
         }
         finally
         {

@@ -95,7 +95,8 @@ internal sealed class PanelAssembler
         if (Find(name) is { } found) return found;
         var available = new List<string>();
         if (_sheet is not null) available.AddRange(_sheet.ColumnNames);
-        available.AddRange(_raw.OtherColumns);
+        foreach (var column in _raw.OtherColumns)
+            if (!available.Contains(column, StringComparer.Ordinal)) available.Add(column);
         string where = _sheet is null
             ? $"the matrix {Path.GetFileName(_raw.Source.Path)}"
             : $"the sample sheet {Path.GetFileName(_sheet.Path)} or the matrix {Path.GetFileName(_raw.Source.Path)}";
@@ -108,8 +109,8 @@ internal sealed class PanelAssembler
         foreach (var sample in _raw.Matrix.SampleIds)
             if (string.Equals(sample, name, StringComparison.OrdinalIgnoreCase))
                 hint += _options.Layout == PanelLayout.SamplesInRows
-                    ? " It is a row label here, so the file may be oriented the other way: try the layout FeaturesInRows."
-                    : " It is a column name here, so the file may be oriented the other way: try the layout SamplesInRows.";
+                    ? " It is a row label here, so the file may be oriented the other way: try --features-in-rows."
+                    : " It is a column name here, so the file may be oriented the other way: try without --features-in-rows.";
         string columns = available.Count == 0 ? "no text columns" : $"the columns {Display.List(available, 12)}";
         var path = _sheet?.Path ?? _raw.Source.Path;
         return ThrowMissing(path, name, role, where, columns, hint);

@@ -30,8 +30,9 @@ internal sealed class SampleColumnRoles
             if (idColumn < 0)
                 throw PanelInputException.At(filePath, isTableRow ? null : 1, null,
                     $"has no sample id column '{Display.Name(idName)}'; its columns start {Display.List(header)}.",
-                    "Name an existing column as the sample id column, or leave it unset to use the first column.");
+                    "Give --id-column an existing column (names are case-sensitive), or leave it out to use the first column.");
         }
+        if (options.SampleSheetPath is null) CheckRoleColumnsSpelling(header, options, filePath, isTableRow);
         var attributeNames = options.SampleAttributeNames();
         var attributes = new List<int>();
         var features = new List<int>(header.Count);
@@ -56,7 +57,7 @@ internal sealed class SampleColumnRoles
         if (features.Count == 0)
             throw PanelInputException.At(filePath, isTableRow ? null : 1, null,
                 "has no feature columns: every column is the sample id or a sample attribute.",
-                "Check the delimiter and the layout; with features in rows, set the layout to FeaturesInRows.");
+                "Check the delimiter; if the file has one feature per row, add --features-in-rows.");
         NameRules.CheckUnique(featureNames, "feature name", filePath,
             "Make feature names unique (for example add the assay or isoform to the name) and load again.");
         if (options.KeepFeatures is { } keep) KeepNamed(keep, features, featureNames, filePath, isTableRow);
@@ -95,6 +96,38 @@ internal sealed class SampleColumnRoles
         features.AddRange(keptColumns);
         featureNames.Clear();
         featureNames.AddRange(keptNames);
+    }
+
+    /// <summary>
+    /// Without a sample sheet every named column must be in the matrix. A name that differs only by
+    /// case would otherwise be read as a feature and fail on its first text cell, which names the
+    /// wrong column; this names the option and the column the user meant.
+    /// </summary>
+    private static void CheckRoleColumnsSpelling(IReadOnlyList<string> header, PanelLoadOptions options, string filePath, bool isTableRow)
+    {
+        var roles = new List<(string Option, string Name)> { ("--outcome", options.OutcomeColumn) };
+        if (options.CohortColumn is { } cohort) roles.Add(("--cohort", cohort));
+        if (options.SubjectColumn is { } subject) roles.Add(("--subject", subject));
+        foreach (var annotation in options.AnnotationColumns) roles.Add(("--annotation", annotation));
+        var declared = options.SampleAttributeNames();
+        foreach (var (option, name) in roles)
+        {
+            if (IndexOf(header, name) >= 0) continue;
+            foreach (var column in header)
+                // A column declared under its own spelling is read as text anyway; the assembler names the mismatch.
+                if (string.Equals(column, name, StringComparison.OrdinalIgnoreCase) && !declared.Contains(column))
+                    throw PanelInputException.At(filePath, isTableRow ? null : 1, null,
+                        $"no column '{Display.Name(name)}' (named by {option}); did you mean '{Display.Name(column)}'?",
+                        $"Column names are case-sensitive: use {option} {Display.Name(column)}.");
+        }
+    }
+
+    /// <summary>The fix for a text cell in a feature column, when the outcome column named is not in the file at all.</summary>
+    internal static string? OutcomeNotInHeaderFix(IReadOnlyList<string> header, PanelLoadOptions options, string textColumn)
+    {
+        if (options.SampleSheetPath is not null || IndexOf(header, options.OutcomeColumn) >= 0) return null;
+        return $"The file has no column '{Display.Name(options.OutcomeColumn)}' named by --outcome. If '{Display.Name(textColumn)}' holds each sample's class, use --outcome {Display.Name(textColumn)}; "
+            + "if it describes samples in another way, name it with --annotation.";
     }
 
     private static int IndexOf(IReadOnlyList<string> header, string name)

@@ -74,12 +74,11 @@ internal sealed class SampleJoin
         string matrixName = Path.GetFileName(matrixPath);
         if (kept.Count == 0)
         {
-            string fix = "Check that the sample id column is the right one (set the sample id column), and that ids are spelt the same way in both files.";
+            string fix = "Check that the sample id column is the right one (name it with --id-column), and that ids are spelt the same way in both files.";
             if (LooksTransposed(sheetIds, matrixFeatureNames))
             {
                 bool readAsSamplesInRows = options.Layout == PanelLayout.SamplesInRows;
-                var otherLayout = readAsSamplesInRows ? PanelLayout.FeaturesInRows : PanelLayout.SamplesInRows;
-                fix = $"The sheet's ids are column names of {matrixName}, so the matrix holds one row per {(readAsSamplesInRows ? "feature" : "sample")}: load it with the layout {otherLayout}.";
+                fix = $"The sheet's ids are column names of {matrixName}, so the matrix holds one row per {(readAsSamplesInRows ? "feature" : "sample")}: load it {(readAsSamplesInRows ? "with" : "without")} --features-in-rows.";
             }
             throw PanelInputException.At(sheet.Path, null, sheet.ColumnNames[idColumn],
                 $"no sample id matches the matrix {matrixName}: the sheet has {Display.List(sheetIds)}; the matrix has {Display.List(matrixIds)}.",
@@ -91,7 +90,7 @@ internal sealed class SampleJoin
         string unmatched = Unmatched(matrixOnly, matrixName, sheetName) + Unmatched(sheetOnly, sheetName, matrixName);
         if (!options.DropUnmatchedSamples)
             throw PanelInputException.At(sheet.Path, null, sheet.ColumnNames[idColumn], $"samples do not match:{unmatched}",
-                "Fix the ids, or allow dropping unmatched samples (DropUnmatchedSamples) to continue without them.");
+                "Fix the ids, or add --drop-unmatched to continue without them.");
         findings.Add(new InspectionFinding(FindingSeverity.Warning, "unmatched-samples-dropped",
             $"{matrixOnly.Count + sheetOnly.Count} samples were dropped because they are in only one file:{unmatched}"));
         return new SampleJoin(kept.ToArray(), rows.ToArray(), [.. matrixOnly, .. sheetOnly]);

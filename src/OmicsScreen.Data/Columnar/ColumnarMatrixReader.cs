@@ -39,7 +39,7 @@ internal static class ColumnarMatrixReader
             if (attributeNames.Contains(sampleIds[s]))
                 throw PanelInputException.At(path, s + 1, header[roles.IdColumn],
                     $"the row label '{Display.Name(sampleIds[s])}' is a sample attribute name, so the table looks like features in rows.",
-                    "Load it with the layout FeaturesInRows.", isTableRow: true);
+                    "Load it with --features-in-rows.", isTableRow: true);
         }
         NameRules.CheckUnique(sampleIds, "sample id", path,
             "Make sample ids unique (technical replicates need their own ids; name their subject in a subject column).");
@@ -60,7 +60,8 @@ internal static class ColumnarMatrixReader
             ct.ThrowIfCancellationRequested();
             string name = roles.FeatureNames[f];
             if (!table.TryReadCells(roles.FeatureColumns[f], columns.Values(f), states, default, out var failure))
-                throw CellErrors.NotAMeasurement(path, failure.Row + 1, name, name, failure.Text, failure.Kind, isTableRow: true);
+                throw CellErrors.NotAMeasurement(path, failure.Row + 1, name, name, failure.Text, failure.Kind, isTableRow: true,
+                    textColumnFix: SampleColumnRoles.OutcomeNotInHeaderFix(header, options, name));
             columns.SetStates(f, states);
         }
         var lines = new long[sampleCount];
@@ -75,7 +76,7 @@ internal static class ColumnarMatrixReader
         var header = table.ColumnNames;
         if (header.Count < 2)
             throw PanelInputException.At(path, null, null, "has a single column, so there are no sample columns.",
-                "Load the table with the layout SamplesInRows, or add one column per sample.");
+                "Load the table without --features-in-rows, or add one column per sample.");
         var sampleIds = new string[header.Count - 1];
         for (int s = 0; s < sampleIds.Length; s++)
         {

@@ -103,6 +103,22 @@ internal static class PanelInspector
         return new FeatureScan(missingPerFeature, missingCells, belowCells, belowFeatures, constant, allMissing);
     }
 
+    /// <summary>
+    /// True when every class label is a number and most samples are alone in their class: a
+    /// continuous variable (an age, a concentration) named as the outcome.
+    /// </summary>
+    private static bool LooksLikeMeasurement(ClassOutcome outcome)
+    {
+        int singletons = 0;
+        for (int c = 0; c < outcome.ClassCount; c++)
+        {
+            if (!double.TryParse(outcome.ClassNames[c], System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out _))
+                return false;
+            if (outcome.ClassCounts[c] == 1) singletons++;
+        }
+        return outcome.ClassCount > 10 && singletons * 4 > outcome.ClassCount;
+    }
+
     private static bool SameValue(float a, float b) => a == b || (float.IsNaN(a) && float.IsNaN(b));
 
     private static void AddClassFindings(ClassOutcome outcome, PanelLoadOptions options, List<InspectionFinding> findings)
@@ -112,6 +128,13 @@ internal static class PanelInspector
         {
             findings.Add(new InspectionFinding(FindingSeverity.Error, "single-class", Invariant(
                 $"The outcome '{column}' has a single class '{outcome.ClassNames[0]}' ({outcome.SampleCount} samples); a screen needs at least two classes. Check that the outcome column is the right one and that no class was dropped by the sample-sheet join.")));
+            return;
+        }
+        if (LooksLikeMeasurement(outcome))
+        {
+            // One sentence instead of one error per value: a numeric column was named as the outcome.
+            findings.Add(new InspectionFinding(FindingSeverity.Error, "outcome-not-classes", Invariant(
+                $"The outcome '{column}' holds {outcome.ClassCount} different numbers for {outcome.SampleCount} samples, so it looks like a measurement, not classes. Give --outcome the column that names each sample's class (such as case/control), or group the values into a few classes in the sample sheet.")));
             return;
         }
         for (int c = 0; c < outcome.ClassCount; c++)
@@ -185,9 +208,9 @@ internal static class PanelInspector
     {
         if (matrix.SampleCount < OrientationMinimumSamples || matrix.SampleCount < OrientationRatio * matrix.FeatureCount) return;
         string rows = layout == PanelLayout.SamplesInRows ? "rows" : "columns";
-        string other = layout == PanelLayout.SamplesInRows ? nameof(PanelLayout.FeaturesInRows) : nameof(PanelLayout.SamplesInRows);
+        string other = layout == PanelLayout.SamplesInRows ? "with --features-in-rows" : "without --features-in-rows";
         findings.Add(new InspectionFinding(FindingSeverity.Warning, "orientation-suspect", Invariant(
-            $"The panel has {matrix.SampleCount} samples but only {matrix.FeatureCount} features; omics panels usually have more features than samples. If the file's {rows} are features, load it with the layout {other}.")));
+            $"The panel has {matrix.SampleCount} samples but only {matrix.FeatureCount} features; omics panels usually have more features than samples. If the file's {rows} are features, load it {other}.")));
     }
 
     private static LevelCount[] Levels(SampleGrouping grouping)

@@ -4,7 +4,7 @@ namespace OmicsScreen.Data.Text;
 internal static class CellErrors
 {
     public static PanelInputException NotAMeasurement(string filePath, long line, string column, string feature,
-        ReadOnlySpan<char> text, CellKind kind, bool isTableRow = false)
+        ReadOnlySpan<char> text, CellKind kind, bool isTableRow = false, string? textColumnFix = null)
     {
         string shown = Display.Name(text);
         string where = column == feature ? "" : $" (feature '{Display.Name(feature)}')";
@@ -13,8 +13,10 @@ internal static class CellErrors
                 $"found '{shown}'{where}, an infinite value or a number beyond the float32 range (about ±3.4e38).",
                 "Infinity is not a measurement: put the measured value, NA when it is missing, or a below-detection token such as <LOD.",
                 isTableRow: isTableRow);
-        string fix = "Correct the cell. If this column describes samples rather than measuring them, name it as an annotation column (or as the outcome, cohort or subject column).";
-        if (text.Contains('\uFFFD'))
+        string fix = "Correct the cell. If this column describes samples rather than measuring them, name it with --annotation COLUMN (or with --outcome, --cohort or --subject).";
+        if (textColumnFix is not null && column == feature && double.IsNaN(LeadingNumber(text)))
+            fix = textColumnFix;
+        else if (text.Contains('\uFFFD'))
             fix = "The cell holds bytes that are not valid UTF-8 (the file is probably Latin-1 or Windows-1252): save the file again as UTF-8.";
         else if (text.Contains(',') && !text.Contains('.'))
             fix = "Write decimals with a point (1.5, not 1,5) and load again.";
@@ -23,5 +25,12 @@ internal static class CellErrors
         return PanelInputException.At(filePath, line, column,
             $"found '{shown}'{where}, which is not a number, a missing-value token (empty, NA, NaN, N/A, null) or a below-detection token (<LOD, <LLOQ, <LOQ, <0.05, BLQ, BLOD).",
             fix, isTableRow: isTableRow);
+    }
+
+    /// <summary>NaN when the cell does not start like a number, so a mistyped number is not taken for a text column.</summary>
+    private static double LeadingNumber(ReadOnlySpan<char> text)
+    {
+        var trimmed = text.Trim();
+        return trimmed.Length > 0 && (char.IsAsciiDigit(trimmed[0]) || trimmed[0] is '-' or '+' or '.') ? 0 : double.NaN;
     }
 }

@@ -70,11 +70,12 @@ internal static class DelimitedMatrixReader
             if (attributeNames.Contains(row.Label))
                 throw PanelInputException.At(path, row.Line, header[roles.IdColumn],
                     $"the row label '{Display.Name(row.Label)}' is a sample attribute name, so the file looks like features in rows.",
-                    "Load it with the layout FeaturesInRows.");
+                    "Load it with --features-in-rows.");
             if (row.FailedIndex >= 0)
             {
                 string feature = roles.FeatureNames[row.FailedIndex];
-                throw CellErrors.NotAMeasurement(path, row.Line, feature, feature, row.FailedText, row.FailedKind);
+                throw CellErrors.NotAMeasurement(path, row.Line, feature, feature, row.FailedText, row.FailedKind,
+                    textColumnFix: SampleColumnRoles.OutcomeNotInHeaderFix(header, options, feature));
             }
             for (int a = 0; a < attributes.Length; a++) attributes[a].Add(row.Texts![a]);
             sampleIds.Add(row.Label);
@@ -131,7 +132,7 @@ internal static class DelimitedMatrixReader
         string path = source.Path;
         if (header.Length < 2)
             throw PanelInputException.At(path, 1, null, "has a single column, so there are no sample columns.",
-                "Check the delimiter, or load the file with the layout SamplesInRows.");
+                "Check the delimiter, or load the file without --features-in-rows.");
         var sampleIds = header[1..];
         for (int s = 0; s < sampleIds.Length; s++)
             NameRules.Check(sampleIds[s], "sample id", path, 1, FormattableString.Invariant($"#{s + 2}"));
@@ -227,7 +228,7 @@ internal static class DelimitedMatrixReader
         while (reader.MoveNext())
         {
             var row = reader.Current;
-            if (IsBlank(row)) continue;
+            if (IsBlank(row) || DelimiterDetector.IsCommentAboveHeader(row[0].Span)) continue;
             var header = new string[row.ColCount];
             for (int c = 0; c < header.Length; c++) header[c] = row[c].Span.Trim().ToString();
             return header;

@@ -16,11 +16,20 @@ internal static class DelimiterDetector
         using var reader = OpenText(path);
         int tabs = 0, commas = 0, semicolons = 0;
         bool inQuotes = false;
+        bool lineStart = true;
         for (int read = 0; read < MaxHeaderChars; read++)
         {
             int next = reader.Read();
             if (next < 0) break;
             char c = (char)next;
+            // Comment lines above the header (an export's date, an instrument's name) say nothing of the delimiter.
+            if (lineStart && c == '#')
+            {
+                reader.ReadLine();
+                continue;
+            }
+            if (lineStart && c is '\n' or '\r') continue;
+            lineStart = false;
             if (c == '"') inQuotes = !inQuotes;
             else if (inQuotes) continue;
             else if (c is '\n' or '\r') break;
@@ -37,6 +46,12 @@ internal static class DelimiterDetector
     }
 
     /// <summary>Opens UTF-8 text, skipping a byte-order mark when there is one.</summary>
+    /// <summary>
+    /// True for a line above the header that starts with '#': exports from laboratory systems put
+    /// their date or instrument there. Such lines are skipped, so a header may not itself start with '#'.
+    /// </summary>
+    public static bool IsCommentAboveHeader(ReadOnlySpan<char> firstCell) => firstCell.TrimStart().StartsWith('#');
+
     public static StreamReader OpenText(string path) =>
         new(path, new UTF8Encoding(encoderShouldEmitUTF8Identifier: false), detectEncodingFromByteOrderMarks: true,
             new FileStreamOptions { Access = FileAccess.Read, BufferSize = 1 << 16, Options = FileOptions.SequentialScan });

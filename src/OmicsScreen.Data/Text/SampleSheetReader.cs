@@ -27,6 +27,7 @@ internal static class SampleSheetReader
         foreach (var row in reader)
         {
             if (row.ColCount == 1 && row[0].Span.Trim().IsEmpty) continue;
+            if (header is null && DelimiterDetector.IsCommentAboveHeader(row[0].Span)) continue;
             if (header is null)
             {
                 header = new string[row.ColCount];

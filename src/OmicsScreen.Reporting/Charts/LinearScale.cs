@@ -27,12 +27,11 @@ public sealed class LinearScale : IAxisScale
         if (!double.IsFinite(dataMinimum) || !double.IsFinite(dataMaximum)) (dataMinimum, dataMaximum) = (0, 1);
         var range = NiceNumbers.LooseTicks(dataMinimum, dataMaximum, targetTickCount);
         int count = range.TickCount;
+        var values = new double[count];
+        for (int i = 0; i < count; i++) values[i] = range.Tick(i);
+        var labels = ChartNumber.TickLabels(values, range.FractionDigits);
         var ticks = new AxisTick[count];
-        for (int i = 0; i < count; i++)
-        {
-            double value = range.Tick(i);
-            ticks[i] = new AxisTick(value, ChartNumber.Fixed(value, range.FractionDigits));
-        }
+        for (int i = 0; i < count; i++) ticks[i] = new AxisTick(values[i], labels[i]);
         return new LinearScale(range.First, range.Last, ticks);
     }
 
@@ -45,15 +44,17 @@ public sealed class LinearScale : IAxisScale
         if (!(maximum > minimum) || !double.IsFinite(minimum) || !double.IsFinite(maximum))
             throw new ArgumentException("A fixed axis needs finite limits with maximum above minimum.");
         var range = NiceNumbers.LooseTicks(minimum, maximum, targetTickCount);
-        var ticks = new List<AxisTick>(range.TickCount);
+        var values = new List<double>(range.TickCount);
         double tolerance = range.Step * 1e-9;
         for (int i = 0; i < range.TickCount; i++)
         {
             double value = range.Tick(i);
-            if (value >= minimum - tolerance && value <= maximum + tolerance)
-                ticks.Add(new AxisTick(value, ChartNumber.Fixed(value, range.FractionDigits)));
+            if (value >= minimum - tolerance && value <= maximum + tolerance) values.Add(value);
         }
-        return new LinearScale(minimum, maximum, ticks.ToArray());
+        var labels = ChartNumber.TickLabels(values, range.FractionDigits);
+        var ticks = new AxisTick[values.Count];
+        for (int i = 0; i < ticks.Length; i++) ticks[i] = new AxisTick(values[i], labels[i]);
+        return new LinearScale(minimum, maximum, ticks);
     }
 
     public double Fraction(double value) => (value - Minimum) / (Maximum - Minimum);

@@ -42,28 +42,26 @@ public sealed class LogScale : IAxisScale
         if (high == low) high++;
         int decades = high - low;
         int decadeStep = (decades + MaxLabelledDecades - 1) / MaxLabelledDecades;
-        var ticks = new List<AxisTick>();
+        var values = new List<double>();
         for (int decade = low; decade <= high; decade++)
         {
             if ((decade - low) % decadeStep != 0) continue;
             double power = Math.Pow(10, decade);
-            ticks.Add(new AxisTick(power, Label(power, decade)));
+            values.Add(power);
             if (decades <= 2 && decade < high)
             {
-                ticks.Add(new AxisTick(2 * power, Label(2 * power, decade)));
-                ticks.Add(new AxisTick(5 * power, Label(5 * power, decade)));
+                values.Add(2 * power);
+                values.Add(5 * power);
             }
         }
-        return new LogScale(low, high, ticks.ToArray());
+        var labels = ChartNumber.TickLabels(values, fractionDigits: -1);
+        var ticks = new AxisTick[values.Count];
+        for (int i = 0; i < ticks.Length; i++) ticks[i] = new AxisTick(values[i], labels[i]);
+        return new LogScale(low, high, ticks);
     }
 
     public double Fraction(double value) => (Math.Log10(value) - _logMinimum) / (_logMaximum - _logMinimum);
 
     public bool CanShow(double value) => value > 0 && double.IsFinite(value);
 
-    // Plain decimals between 0.001 and 10000 read easiest; beyond them, exponent form ("1e-05") stays short.
-    private static string Label(double value, int decade) =>
-        decade is >= -3 and <= 4
-            ? value.ToString(decade < 0 ? "0.###" : "0", CultureInfo.InvariantCulture)
-            : value.ToString("0e+00", CultureInfo.InvariantCulture);
 }

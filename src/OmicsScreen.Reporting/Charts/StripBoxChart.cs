@@ -5,7 +5,9 @@ namespace OmicsScreen.Reporting.Charts;
 /// <summary>
 /// Strip chart (every sample as a dot, spread sideways) over a box plot, one group per class, for
 /// one feature. Samples below the detection limit are drawn as hollow markers on a labelled row at
-/// the limit, so a reader sees how many there are without mistaking them for measured values.
+/// the limit, so a reader sees how many there are without mistaking them for measured values; when
+/// the limit is unknown they get a labelled row of their own under the value axis, apart from it,
+/// so they neither pose as values nor stretch the axis.
 /// </summary>
 /// <remarks>
 /// Below-detection samples enter the box statistics at the limit: they are known to be lower than
@@ -21,6 +23,7 @@ public static class StripBoxChart
     private const int MaxGroupNameCharacters = 24;
     private const double LinearRowPadding = 0.05;
     private const double LogRowPadding = 1.3;
+    private const double ApartRowHeight = 26;
 
     public static SvgImage Render(StripBoxChartOptions options, IReadOnlyList<StripGroup> groups)
     {
@@ -44,17 +47,23 @@ public static class StripBoxChart
             range.Include(log ? options.DetectionLimit / LogRowPadding : options.DetectionLimit - LinearRowPadding * span, log);
         }
         var scale = range.Scale(options.ValueScale);
-        double limitRow = scale.CanShow(options.DetectionLimit) && censoredTotal > 0 ? options.DetectionLimit : scale.Minimum;
+        bool limitKnown = scale.CanShow(options.DetectionLimit);
+        bool apart = censoredTotal > 0 && !limitKnown;
+        // Box statistics still count them, at the bottom of the axis: below every measured value.
+        double limitRow = limitKnown && censoredTotal > 0 ? options.DetectionLimit : scale.Minimum;
+        double apartHeight = apart ? ApartRowHeight : 0;
 
         var legend = new List<LegendEntry> { new("Measured sample", ChartPalette.Axis, LegendSymbol.Dot) };
-        if (censoredTotal > 0) legend.Add(new("Below detection (drawn at the limit)", ChartPalette.Axis, LegendSymbol.HollowDot));
+        if (censoredTotal > 0)
+            legend.Add(new(apart ? "Below detection, limit unknown (row under the axis)" : "Below detection (drawn at the limit)",
+                ChartPalette.Axis, LegendSymbol.HollowDot));
         legend.Add(new("Median; box: quartiles; whiskers: 1.5 IQR", ChartPalette.Black, LegendSymbol.Line));
         double legendHeight = LegendPainter.Height(legend, options.Width - 40);
         double left = AxisPainter.LeftAxisWidth(scale) + 10;
         double top = 34 + legendHeight + 8;
         const double groupLabelHeight = 18; // second line under the group names: sample counts
         var area = new PlotArea(left, top, options.Width - left - 24,
-            options.Height - top - AxisPainter.BottomAxisHeight - groupLabelHeight - 8);
+            options.Height - top - AxisPainter.BottomAxisHeight - groupLabelHeight - apartHeight - 8);
         if (area.Height < 40) throw new ArgumentException("The chart is too short for its legend; raise Height.", nameof(options));
 
         var svg = new SvgWriter(options.Width, options.Height, options.Title, options.Description ?? Describe(options, groups));
@@ -62,10 +71,15 @@ public static class StripBoxChart
         LegendPainter.Draw(svg, legend, 20, 34, options.Width - 40);
         AxisPainter.Left(svg, scale, area, options.ValueAxisLabel);
         svg.Line(area.Left, area.Bottom, area.Right, area.Bottom, ChartPalette.Axis);
-        svg.Text(area.Left + area.Width / 2, area.Bottom + AxisPainter.BottomAxisHeight + groupLabelHeight - 6,
+        svg.Text(area.Left + area.Width / 2, area.Bottom + apartHeight + AxisPainter.BottomAxisHeight + groupLabelHeight - 6,
             options.GroupAxisLabel, TextAnchor.Middle, bold: true);
 
-        if (censoredTotal > 0)
+        if (apart)
+        {
+            svg.Line(area.Left, area.Bottom + apartHeight, area.Right, area.Bottom + apartHeight, ChartPalette.Axis, 0.75);
+            svg.Text(area.Left + 4, area.Bottom + apartHeight - 4, "below detection (limit unknown)", TextAnchor.Start, 11, fill: ChartPalette.Axis);
+        }
+        else if (censoredTotal > 0)
         {
             double y = area.Y(scale, limitRow);
             string rowLabel = scale.CanShow(options.DetectionLimit) ? "detection limit" : "below detection (limit unknown)";
@@ -75,12 +89,13 @@ public static class StripBoxChart
 
         double groupWidth = area.Width / groups.Count;
         for (int g = 0; g < groups.Count; g++)
-            DrawGroup(svg, groups[g], ChartPalette.SeriesColour(g), area, scale, limitRow, area.Left + (g + 0.5) * groupWidth, groupWidth);
+            DrawGroup(svg, groups[g], ChartPalette.SeriesColour(g), area, scale, limitRow, area.Left + (g + 0.5) * groupWidth, groupWidth,
+                apart ? area.Bottom + apartHeight / 2 : double.NaN, apartHeight);
         return svg.Finish();
     }
 
     private static void DrawGroup(SvgWriter svg, StripGroup group, string colour, PlotArea area, IAxisScale scale,
-        double limitRow, double centre, double groupWidth)
+        double limitRow, double centre, double groupWidth, double apartRowY, double apartHeight)
     {
         svg.BeginGroup(group.Name);
         int shown = 0;
@@ -121,18 +136,20 @@ public static class StripBoxChart
         }
         if (group.BelowDetectionCount > 0)
         {
-            double y = area.Y(scale, limitRow);
+            double y = double.IsNaN(apartRowY) ? area.Y(scale, limitRow) : apartRowY;
             for (int i = 0; i < group.BelowDetectionCount; i++)
                 svg.Circle(centre + Jitter(pointIndex++) * stripWidth, y, 3.2, "none", colour, 1.5,
                     tooltip: labels?[group.MeasuredValues.Count + i]);
         }
 
-        svg.Text(centre, area.Bottom + 17, ChartText.Shorten(group.Name, MaxGroupNameCharacters), TextAnchor.Middle, tooltip: group.Name);
+        svg.Text(centre, area.Bottom + apartHeight + 17, ChartText.Shorten(group.Name, MaxGroupNameCharacters), TextAnchor.Middle, tooltip: group.Name);
         int sampleCount = group.MeasuredValues.Count + group.BelowDetectionCount;
         string counts = group.BelowDetectionCount > 0
             ? string.Create(CultureInfo.InvariantCulture, $"n = {sampleCount}, {group.BelowDetectionCount} below limit")
-            : string.Create(CultureInfo.InvariantCulture, $"n = {sampleCount}");
-        svg.Text(centre, area.Bottom + 32, counts, TextAnchor.Middle, 11, fill: ChartPalette.Axis);
+            : group.DrawnFrom is { } total && total > sampleCount
+                ? string.Create(CultureInfo.InvariantCulture, $"n = {total} ({sampleCount} quantiles drawn)")
+                : string.Create(CultureInfo.InvariantCulture, $"n = {sampleCount}");
+        svg.Text(centre, area.Bottom + apartHeight + 32, counts, TextAnchor.Middle, 11, fill: ChartPalette.Axis);
         svg.EndGroup();
     }
 

@@ -8,5 +8,6 @@ namespace OmicsScreen.Reporting.Charts;
 /// Optional hover text of each point: the measured values' labels first, in order, then one per
 /// below-detection sample. Null draws points without labels.
 /// </param>
+/// <param name="DrawnFrom">When the values are a thinned sample (evenly spaced quantiles) of a larger group: that group's size, shown beside the count drawn.</param>
 public sealed record StripGroup(string Name, IReadOnlyList<double> MeasuredValues, int BelowDetectionCount = 0,
-    IReadOnlyList<string>? PointLabels = null);
+    IReadOnlyList<string>? PointLabels = null, int? DrawnFrom = null);

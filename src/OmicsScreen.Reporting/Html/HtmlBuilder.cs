@@ -23,6 +23,8 @@ public sealed class HtmlBuilder
     private const int DeepestHeadingLevel = 6;
 
     private readonly StringBuilder _html = new(64 * 1024);
+    private readonly List<(string Id, string Heading)> _topSections = [];
+    private int _contentsAt = -1;
     private int _sectionDepth;
     private bool _begun;
     private bool _ended;
@@ -53,7 +55,14 @@ public sealed class HtmlBuilder
         EnsureOpen();
         int level = Math.Min(_sectionDepth + 2, DeepestHeadingLevel);
         _sectionDepth++;
-        _html.Append("<section>\n");
+        if (level == 2)
+        {
+            // Ids are numbered, never made from the heading, so a name from the data cannot shape an attribute.
+            string id = "section-" + (_topSections.Count + 1).ToString(System.Globalization.CultureInfo.InvariantCulture);
+            _topSections.Add((id, heading));
+            _html.Append("<section id=\"").Append(id).Append("\">\n");
+        }
+        else _html.Append("<section>\n");
         AppendHeading(level, heading);
         return this;
     }
@@ -71,6 +80,16 @@ public sealed class HtmlBuilder
     {
         EnsureOpen();
         AppendElement("p", text);
+        return this;
+    }
+
+    /// <summary>A small-print paragraph under a table that spells out its column headers.</summary>
+    public HtmlBuilder Legend(string text)
+    {
+        EnsureOpen();
+        _html.Append("<p class=\"legend\">");
+        MarkupText.AppendEncoded(_html, text);
+        _html.Append("</p>\n");
         return this;
     }
 
@@ -136,6 +155,7 @@ public sealed class HtmlBuilder
                 _html.Append('<').Append(tag);
                 if (rowHeader) _html.Append(" scope=\"row\"");
                 if (columns[c].Alignment == ColumnAlignment.Numeric) _html.Append(" class=\"num\"");
+                else if (columns[c].Alignment == ColumnAlignment.Unbroken) _html.Append(" class=\"unbroken\"");
                 _html.Append('>');
                 MarkupText.AppendEncoded(_html, row[c]);
                 _html.Append("</").Append(tag).Append('>');
@@ -157,6 +177,18 @@ public sealed class HtmlBuilder
         return this;
     }
 
+    /// <summary>
+    /// Marks where the table of contents goes: a list of links to every top-level section, filled
+    /// in by <see cref="EndDocument"/> once all sections are known.
+    /// </summary>
+    public HtmlBuilder TableOfContents()
+    {
+        EnsureOpen();
+        if (_contentsAt >= 0) throw new InvalidOperationException("The document already has a table of contents.");
+        _contentsAt = _html.Length;
+        return this;
+    }
+
     /// <summary>Closes the body and returns the page.</summary>
     public string EndDocument()
     {
@@ -164,6 +196,18 @@ public sealed class HtmlBuilder
         if (_sectionDepth != 0) throw new InvalidOperationException($"{_sectionDepth} section(s) are still open.");
         _ended = true;
         _html.Append("</main>\n</body>\n</html>\n");
+        if (_contentsAt >= 0 && _topSections.Count > 0)
+        {
+            var contents = new StringBuilder("<nav class=\"contents\" aria-label=\"Contents\">\n<p class=\"contents-title\">Contents</p>\n<ol>\n");
+            foreach (var (id, heading) in _topSections)
+            {
+                contents.Append("<li><a href=\"#").Append(id).Append("\">");
+                MarkupText.AppendEncoded(contents, heading);
+                contents.Append("</a></li>\n");
+            }
+            contents.Append("</ol>\n</nav>\n");
+            _html.Insert(_contentsAt, contents.ToString());
+        }
         return _html.ToString();
     }
 

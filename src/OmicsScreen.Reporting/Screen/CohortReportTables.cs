@@ -49,7 +49,7 @@ internal static class CohortReportTables
         var table = new HtmlTable(ShortlistFlagsCaption,
         [
             new("Rank", ColumnAlignment.Numeric),
-            new("Marker"),
+            new("Feature"),
             new("Flag"),
             new("AUC, all samples [95% CI]"),
             new("Within-cohort AUC [95% CI]"),
@@ -81,7 +81,7 @@ internal static class CohortReportTables
             : OutsideArtefactsCaption;
         var table = new HtmlTable(caption,
         [
-            new("Screen position", ColumnAlignment.Numeric),
+            new("Order", ColumnAlignment.Numeric),
             new("Feature"),
             new("AUC, all samples [95% CI]"),
             new("Within-cohort AUC [95% CI]"),

@@ -27,8 +27,10 @@ public static class ScreenReport
         var html = new HtmlBuilder().BeginDocument(Title);
         WriteAnswer(html, input);
         html.Caution("Cautions", ScreenReportText.Cautions(input.Result.Cohorts is not null));
+        html.TableOfContents();
         WriteInputs(html, input);
         WriteShortlist(html, input.Result);
+        WriteLockedPanel(html, input.Result);
         WriteFigures(html, input);
         if (input.Result.Cohorts is { } cohorts) CohortReportSection.Write(html, input.Result, cohorts);
         WriteReproducibility(html, input);
@@ -57,7 +59,7 @@ public static class ScreenReport
         html.BeginSection("Input and settings");
         var facts = new List<KeyValuePair<string, string>>();
         foreach (var file in input.Inputs) facts.Add(new(Capitalised(file.Role), file.Name));
-        facts.Add(new("Matrix layout", input.PanelLayout));
+        facts.Add(new("Layout", input.PanelLayout));
         facts.Add(new("Samples", ReportNumber.Integer(panel.SampleCount)));
         facts.Add(new("Features", ReportNumber.Integer(panel.FeatureCount)));
         facts.Add(new("Outcome column", panel.Outcome.ColumnName));
@@ -69,7 +71,7 @@ public static class ScreenReport
         facts.Add(new("Missing cells", ReportNumber.Percent(missingShare, 2)));
         facts.Add(new("Below-detection cells", ReportNumber.Percent(belowDetectionShare, 2)));
         html.DefinitionList(facts);
-        html.Paragraph("Screen parameters (every one; the defaults are included):");
+        html.Paragraph("Settings (every one, defaults included; each with the option that sets it):");
         html.DefinitionList(ScreenReportText.Parameters(settings));
         html.EndSection();
     }
@@ -86,13 +88,34 @@ public static class ScreenReport
         }
         else
         {
-            html.Paragraph("One row per shortlisted marker, best first. Markers sharing a redundancy group (Group) are strongly correlated "
-                + "and can stand in for one another. Direction, log2 median ratio and AUC compare the positive class with the rest; "
-                + "the AUC interval is DeLong's. Univariate rank is the marker's position by rank-test p-value among all features.");
+            html.Paragraph("One row per shortlisted marker, best first, in two tables: the forest evidence, then each marker on its own.");
             html.Table(ScreenReportTables.Shortlist(result));
+            html.Legend("Group: markers sharing a redundancy group are strongly correlated and can stand in for one another. "
+                + "Selection frequency: share of repeats that selected the marker. Median rank [IQR]: its rank over repeats, with quartiles.");
+            html.Table(ScreenReportTables.ShortlistStatistics(result));
+            html.Legend("Direction, log2 ratio (of class medians) and AUC compare the positive class with the rest; the AUC interval is DeLong's. "
+                + "Univariate rank: the marker's position by rank-test p-value among all features.");
         }
         html.EndSection();
     }
+
+    private static void WriteLockedPanel(HtmlBuilder html, ScreenResult result)
+    {
+        html.BeginSection("The locked panel");
+        if (result.LockedPanelSize > 0)
+        {
+            html.Paragraph(string.Create(CultureInfo.InvariantCulture,
+                $"The panel locked for `omicsscreen apply` ({LockedPanelFileName}) holds these {result.LockedPanelSize} markers, the first of the screen order."));
+            html.Table(ScreenReportTables.LockedPanel(result));
+        }
+        else
+        {
+            html.Paragraph("No panel was locked in this run.");
+        }
+        html.EndSection();
+    }
+
+    private const string LockedPanelFileName = "locked_panel.json";
 
     private static void WriteFigures(HtmlBuilder html, ScreenReportInput input)
     {
@@ -123,10 +146,11 @@ public static class ScreenReport
         if (result.PanelSize is { } curve)
         {
             html.BeginSection("How many markers to measure");
-            html.Figure(ScreenReportCharts.PanelSize(curve),
+            html.Figure(ScreenReportCharts.PanelSize(curve, input.Panel.Outcome, result.LockedPanelSize),
                 "Solid line: selection-aware estimate, markers chosen afresh inside each outer training part (Ambroise & McLachlan 2002). "
                 + "Dashed line: optimistic estimate, markers chosen once on all samples. Shading: ± 1 SD over outer folds. "
-                + "The diamond marks the recommended size: the smallest within one standard error of the best (Breiman et al. 1984).");
+                + "The diamond marks the recommended size: the smallest within one standard error of the best (Breiman et al. 1984). "
+                + "The size axis is log-spaced, as the sizes tried grow roughly geometrically; the horizontal reference line is chance and the vertical one the locked panel's size.");
             html.EndSection();
         }
 
@@ -136,13 +160,15 @@ public static class ScreenReport
         if (markers.Count > 0)
         {
             html.BeginSection("Values of the top markers by class");
-            html.Paragraph("Each dot is one sample; boxes show quartiles and the median. Hollow markers on the dashed row are samples below the "
-                + "detection limit. Missing values are left out. A log axis is used when every measured value is positive.");
+            html.Paragraph("Each dot is one sample; boxes show quartiles and the median. Hollow markers are samples below the detection limit: "
+                + "on the dashed row at the limit when the file gives it (<0.05), on a row of their own under the axis when it does not (<LOD). Missing values are left out. A log axis is used when every measured value is positive.");
             foreach (var feature in markers)
                 html.Figure(ScreenReportCharts.MarkerByClass(input.Panel, feature, input.ShowSampleIds),
                     "Values of " + feature.Feature + " by class.");
             html.EndSection();
         }
+
+        WriteStatisticianFigures(html, input);
 
         if (result.Shortlist.Count > 0)
         {
@@ -161,6 +187,43 @@ public static class ScreenReport
             html.EndSection();
         }
         html.EndSection();
+    }
+
+    /// <summary>The figures a statistician checks first: a map of the samples, forest against single-marker evidence, and the decoys.</summary>
+    private static void WriteStatisticianFigures(HtmlBuilder html, ScreenReportInput input)
+    {
+        var result = input.Result;
+        var panel = input.Panel;
+        if (SamplePrincipalComponents.Of(panel.Matrix) is { } components)
+        {
+            html.BeginSection("Samples on their first two principal components");
+            string features = components.FeaturesUsed < panel.FeatureCount
+                ? string.Create(CultureInfo.InvariantCulture, $"the {components.FeaturesUsed} features of largest variance")
+                : "all features";
+            html.Figure(ScreenReportCharts.SampleMap(components, "Samples by class", panel.Outcome.ClassNames, panel.Outcome.SampleClasses),
+                "Each dot is one sample, placed by the first two principal components of " + features + " (each standardised; a missing cell at the feature's mean, "
+                + "a below-detection cell at its smallest measured value), coloured by class. Classes apart here differ in many features at once.");
+            if (panel.Cohort is { } cohort)
+                html.Figure(ScreenReportCharts.SampleMap(components, "Samples by cohort", cohort.LevelNames, cohort.SampleLevels),
+                    "The same map coloured by cohort: cohorts apart here differ in many features at once (a batch or centre effect), whatever the class.");
+            html.EndSection();
+        }
+
+        html.BeginSection("Forest order against single-marker AUC");
+        html.Figure(ScreenReportCharts.RankAgainstAuc(result),
+            "Every feature (up to " + ReportNumber.Integer(ScreenReportCharts.RankAucFeatureLimit) + ") by its position in the screen order (log axis) and its single-marker AUC. "
+            + "Features far from 0.5 near the top agree with a one-marker test; features near 0.5 high in the order carry signal only together with others.");
+        html.EndSection();
+
+        if (ScreenReportCharts.ImportanceAgainstDecoys(result) is { } decoys)
+        {
+            html.BeginSection("Observed importances against the decoys");
+            html.Figure(decoys,
+                "Corrected impurity importance, mean over repeats, of the decoys (permuted copies of real features, so unrelated to the outcome by construction), "
+                + "of the features not shortlisted and of the shortlisted markers. Groups above " + ReportNumber.Integer(ScreenReportCharts.DistributionPointLimit)
+                + " values are drawn as that many evenly spaced quantiles.");
+            html.EndSection();
+        }
     }
 
     private static void WriteReproducibility(HtmlBuilder html, ScreenReportInput input)
@@ -183,8 +246,8 @@ public static class ScreenReport
             new("Cores", ReportNumber.Integer(input.Cores)),
             new("Threads", ReportNumber.Integer(input.Threads)),
         ]);
-        html.Paragraph("Every parameter as the program holds it:");
-        html.DefinitionList(ScreenReportText.RawParameters(settings));
+        html.Paragraph("The manifest records every setting listed under Input and settings, under its option's name without the dashes ("
+            + string.Join(", ", ScreenParameters.All.Take(3).Select(p => p.Key)) + ", ...).");
         html.Table(ScreenReportTables.Files("Input files", input.Inputs));
         html.Table(ScreenReportTables.Files("Result tables beside this report", input.Tables));
         var timings = new List<KeyValuePair<string, string>> { new("Reading and checking the inputs", ReportNumber.Seconds(input.LoadSeconds)) };

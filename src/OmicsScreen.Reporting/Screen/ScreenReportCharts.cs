@@ -95,7 +95,12 @@ internal static class ScreenReportCharts
     public static string PanelSizeScoreLabel(PanelSizeCurve curve) =>
         curve.Metric == "auc" ? "Held-out AUC (mean over outer folds)" : "Held-out accuracy (mean over outer folds)";
 
-    public static SvgImage PanelSize(PanelSizeCurve curve)
+    /// <summary>
+    /// The panel-size curve on a log-spaced size axis (the sizes grow roughly geometrically), with
+    /// the level a panel without information reaches (AUC 0.5, or the largest class's share for
+    /// accuracy) and the size of the locked panel.
+    /// </summary>
+    public static SvgImage PanelSize(PanelSizeCurve curve, ClassOutcome outcome, int lockedPanelSize)
     {
         int count = curve.Points.Count;
         var sizes = new double[count];
@@ -121,13 +126,123 @@ internal static class ScreenReportCharts
         var markers = double.IsFinite(recommendedScore)
             ? new[] { new PointMarker(curve.RecommendedSize, recommendedScore, Invariant($"Recommended size: {curve.RecommendedSize}")) }
             : [];
+        var lines = new List<ReferenceLine> { new(ChartAxis.Y, ChanceLevel(curve, outcome), ChanceLabel(curve)) };
+        if (lockedPanelSize > 0)
+            lines.Add(new ReferenceLine(ChartAxis.X, lockedPanelSize, Invariant($"Locked panel: {lockedPanelSize} markers")));
         return XYChart.Render(
-            new XYChartOptions("Panel-size curve: selection-aware and optimistic estimates", PanelSizeAxisLabel, PanelSizeScoreLabel(curve), Width: 820),
+            new XYChartOptions("Panel-size curve: selection-aware and optimistic estimates", PanelSizeAxisLabel, PanelSizeScoreLabel(curve), Width: 820,
+                XScale: AxisScaleKind.Log10, YMaximum: 1),
             [
                 new XYSeries("Selection-aware (markers chosen inside each training part)", sizes, selectionAware, XYSeriesStyle.LineAndPoints, selectionAwareLow, selectionAwareHigh),
                 new XYSeries("Optimistic (markers chosen once on all samples)", sizes, optimistic, XYSeriesStyle.DashedLine, optimisticLow, optimisticHigh),
             ],
-            markers: markers);
+            lines,
+            markers);
+    }
+
+    /// <summary>What guessing scores: AUC 0.5, or for accuracy the share of the largest class (always calling it).</summary>
+    public static double ChanceLevel(PanelSizeCurve curve, ClassOutcome outcome)
+    {
+        if (curve.Metric == "auc") return 0.5;
+        int largest = 0;
+        foreach (int count in outcome.ClassCounts) largest = Math.Max(largest, count);
+        return (double)largest / outcome.SampleCount;
+    }
+
+    public static string ChanceLabel(PanelSizeCurve curve) =>
+        curve.Metric == "auc" ? "Chance (AUC 0.5)" : "Chance (always the largest class)";
+
+    public const string FirstComponentAxisLabel = "First principal component";
+    public const string SecondComponentAxisLabel = "Second principal component";
+    public const string AucAxisLabel = "Single-marker AUC (positive class against the rest)";
+    public const string ImportanceAxisLabel = "Corrected impurity importance (mean over repeats)";
+    public const int RankAucFeatureLimit = 5000;
+    public const int DistributionPointLimit = 1000;
+
+    /// <summary>Samples on the first two principal components, one colour per level of <paramref name="grouping"/>.</summary>
+    public static SvgImage SampleMap(SamplePrincipalComponents components, string title, IReadOnlyList<string> levelNames, ReadOnlySpan<int> sampleLevels)
+    {
+        var series = new List<XYSeries>(levelNames.Count);
+        for (int level = 0; level < levelNames.Count; level++)
+        {
+            var x = new List<double>();
+            var y = new List<double>();
+            for (int s = 0; s < sampleLevels.Length; s++)
+            {
+                if (sampleLevels[s] != level) continue;
+                x.Add(components.First[s]);
+                y.Add(components.Second[s]);
+            }
+            series.Add(new XYSeries(levelNames[level], x, y, XYSeriesStyle.Points));
+        }
+        return XYChart.Render(new XYChartOptions(title,
+            Invariant($"{FirstComponentAxisLabel} ({components.FirstShare:0.0%} of variance)"),
+            Invariant($"{SecondComponentAxisLabel} ({components.SecondShare:0.0%} of variance)"), Width: 620, Height: 480), series);
+    }
+
+    /// <summary>
+    /// Every feature's position in the screen order (log axis) against its single-marker AUC: where the
+    /// forest and a one-marker test agree, and the markers the forest ranks high for reasons a single test misses.
+    /// </summary>
+    public static SvgImage RankAgainstAuc(ScreenResult result)
+    {
+        int count = Math.Min(RankAucFeatureLimit, result.Order.Count);
+        var shortlisted = new HashSet<int>(result.Shortlist.Select(e => e.Forest.FeatureIndex));
+        var inX = new List<double>();
+        var inY = new List<double>();
+        var outX = new List<double>();
+        var outY = new List<double>();
+        for (int i = 0; i < count; i++)
+        {
+            int feature = result.Order[i];
+            double auc = result.Univariate.Row(feature, 0).Auc;
+            if (!double.IsFinite(auc)) continue;
+            (shortlisted.Contains(feature) ? inX : outX).Add(i + 1);
+            (shortlisted.Contains(feature) ? inY : outY).Add(auc);
+        }
+        return XYChart.Render(
+            new XYChartOptions(Invariant($"Screen order against single-marker AUC ({count} features)"), OrderAxisLabel, AucAxisLabel,
+                XScale: AxisScaleKind.Log10, YMinimum: 0, YMaximum: 1, Width: 820),
+            [new XYSeries("Not shortlisted", outX, outY, XYSeriesStyle.Points), new XYSeries("Shortlisted", inX, inY, XYSeriesStyle.Points)],
+            [new ReferenceLine(ChartAxis.Y, 0.5, "AUC 0.5 (no separation)")]);
+    }
+
+    /// <summary>
+    /// The observed corrected importances (mean over repeats) of the features beside those of the
+    /// decoys, each decoy slot's mean over repeats; null without decoys. Large groups are thinned to
+    /// evenly spaced quantiles so the page stays small.
+    /// </summary>
+    public static SvgImage? ImportanceAgainstDecoys(ScreenResult result)
+    {
+        var repeats = result.Repeats;
+        if (repeats.DecoyCount == 0 || repeats.RepeatCount == 0) return null;
+        var decoys = new double[repeats.DecoyCount];
+        for (int r = 0; r < repeats.RepeatCount; r++)
+            for (int d = 0; d < repeats.DecoyCount; d++) decoys[d] += repeats.DecoyCorrected[r * repeats.DecoyCount + d] / repeats.RepeatCount;
+        var shortlisted = new HashSet<int>(result.Shortlist.Select(e => e.Forest.FeatureIndex));
+        var others = new List<double>();
+        var chosen = new List<double>();
+        foreach (var feature in result.Features)
+            (shortlisted.Contains(feature.FeatureIndex) ? chosen : others).Add(feature.CorrectedMean);
+        var groups = new List<StripGroup>
+        {
+            new("Decoys (permuted copies)", Thinned(decoys), DrawnFrom: decoys.Length),
+            new("Features not shortlisted", Thinned(others), DrawnFrom: others.Count),
+        };
+        if (chosen.Count > 0) groups.Add(new StripGroup("Shortlisted markers", Thinned(chosen), DrawnFrom: chosen.Count));
+        return StripBoxChart.Render(new StripBoxChartOptions("Observed importances against the decoys", ImportanceAxisLabel, "Kind",
+            Width: 820, Height: 440), groups);
+    }
+
+    /// <summary>At most <see cref="DistributionPointLimit"/> evenly spaced order statistics, so box and points keep the shape of the whole.</summary>
+    private static double[] Thinned(IReadOnlyList<double> values)
+    {
+        var sorted = values.Where(double.IsFinite).Order().ToArray();
+        if (sorted.Length <= DistributionPointLimit) return sorted;
+        var thinned = new double[DistributionPointLimit];
+        for (int i = 0; i < thinned.Length; i++)
+            thinned[i] = sorted[(int)Math.Round((double)i * (sorted.Length - 1) / (thinned.Length - 1))];
+        return thinned;
     }
 
     public static SvgImage MarkerByClass(Panel panel, FeatureSummary feature, bool showSampleIds)

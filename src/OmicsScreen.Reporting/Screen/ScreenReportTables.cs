@@ -7,32 +7,34 @@ namespace OmicsScreen.Reporting.Screen;
 internal static class ScreenReportTables
 {
     public const string ShortlistCaption = "Shortlisted markers";
+    public const string ShortlistStatisticsCaption = "Shortlisted markers: single-marker statistics";
+    public const string LockedPanelCaption = "Markers of the locked panel";
     public const int FallbackFeatureCount = 10;
 
+    /// <summary>
+    /// The forest evidence of each shortlisted marker. The shortlist is split in two tables (this
+    /// one and <see cref="ShortlistStatistics"/>), each with rank and feature, because its twelve
+    /// columns did not fit a 1,280-pixel window or an A4 page.
+    /// </summary>
     public static HtmlTable Shortlist(ScreenResult result)
     {
         // Numeric headers do not wrap (the style sheet keeps figures on one line), so the wide
-        // columns are text columns with wrapping headers; the table then fits a printed A4 page.
+        // columns are text columns with wrapping headers.
         var table = new HtmlTable(ShortlistCaption,
         [
             new("Rank", ColumnAlignment.Numeric),
-            new("Marker"),
+            new("Feature"),
             new("Group", ColumnAlignment.Numeric),
             new("Selection frequency"),
             new("Median rank [IQR]"),
             new("Corrected importance ± SD"),
             new("Permutation importance ± SD"),
             new("q-value", ColumnAlignment.Numeric),
-            new("Direction"),
-            new("log2 ratio", ColumnAlignment.Numeric),
-            new("AUC [95% CI]"),
-            new("Univariate rank"),
         ])
         { FirstColumnIsRowHeader = false };
         foreach (var entry in result.Shortlist)
         {
             var forest = entry.Forest;
-            var univariate = entry.Univariate;
             table.AddRow(
                 ReportNumber.Integer(entry.Rank),
                 forest.Feature,
@@ -41,12 +43,79 @@ internal static class ScreenReportTables
                 MedianRank(forest),
                 ReportNumber.MeanSd(forest.CorrectedMean, forest.CorrectedSd, 2),
                 ReportNumber.MeanSd(forest.PermutationMean, forest.PermutationSd, 2),
-                ReportNumber.Significant(forest.QValue, 2),
+                ReportNumber.Significant(forest.QValue, 2));
+        }
+        return table;
+    }
+
+    /// <summary>Each shortlisted marker on its own: direction, effect size, AUC and its rank by rank test among all features.</summary>
+    public static HtmlTable ShortlistStatistics(ScreenResult result)
+    {
+        var table = new HtmlTable(ShortlistStatisticsCaption,
+        [
+            new("Rank", ColumnAlignment.Numeric),
+            new("Feature"),
+            new("Direction"),
+            new("log2 ratio", ColumnAlignment.Numeric),
+            new("AUC [95% CI]"),
+            new("Univariate rank", ColumnAlignment.Numeric),
+        ])
+        { FirstColumnIsRowHeader = false };
+        foreach (var entry in result.Shortlist)
+        {
+            var univariate = entry.Univariate;
+            table.AddRow(
+                ReportNumber.Integer(entry.Rank),
+                entry.Forest.Feature,
                 ScreenTables.DirectionText(univariate),
                 ReportNumber.Fixed(univariate.Log2MedianRatio, 2),
                 ReportNumber.Fixed(univariate.Auc, 3) + " [" + ReportNumber.Fixed(univariate.AucInterval.Lower, 3) + ", "
                     + ReportNumber.Fixed(univariate.AucInterval.Upper, 3) + "]",
                 ReportNumber.Integer(entry.UnivariateRank));
+        }
+        return table;
+    }
+
+    /// <summary>
+    /// The markers `apply` scores with: the first <see cref="ScreenResult.LockedPanelSize"/> of the
+    /// screen order, as the locker takes them. Each has its role: the first locked member of a
+    /// redundancy group leads it, a later one measures much the same signal as that lead, and a
+    /// marker past the end of the shortlist is named as such.
+    /// </summary>
+    public static HtmlTable LockedPanel(ScreenResult result)
+    {
+        var table = new HtmlTable(LockedPanelCaption,
+        [
+            new("Order", ColumnAlignment.Numeric),
+            new("Feature"),
+            new("Role"),
+            new("Direction"),
+        ])
+        { FirstColumnIsRowHeader = false };
+        var leads = new Dictionary<int, string>();
+        int size = Math.Min(result.LockedPanelSize, result.Order.Count);
+        for (int i = 0; i < size; i++)
+        {
+            int featureIndex = result.Order[i];
+            string feature = result.Features[featureIndex].Feature;
+            string role;
+            if (i >= result.Shortlist.Count)
+                role = "not shortlisted: added to reach the panel size";
+            else
+            {
+                var entry = result.Shortlist[i];
+                if (leads.TryGetValue(entry.RedundancyGroup, out var lead))
+                    role = "also in redundancy group " + ReportNumber.Integer(entry.RedundancyGroup) + ", correlated with " + lead;
+                else
+                {
+                    leads.Add(entry.RedundancyGroup, feature);
+                    int members = result.Shortlist.Count(e => e.RedundancyGroup == entry.RedundancyGroup);
+                    role = members > 1
+                        ? "leads redundancy group " + ReportNumber.Integer(entry.RedundancyGroup) + " (" + ReportNumber.Integer(members) + " shortlisted members)"
+                        : "shortlisted, alone in its redundancy group";
+                }
+            }
+            table.AddRow(ReportNumber.Integer(i + 1), feature, role, ScreenTables.DirectionText(result.Univariate.Row(featureIndex, 0)));
         }
         return table;
     }
@@ -110,7 +179,7 @@ internal static class ScreenReportTables
 
     public static HtmlTable Files(string caption, IReadOnlyList<ReportedFile> files)
     {
-        var table = new HtmlTable(caption, [new("File"), new("Role"), new("SHA-256")]);
+        var table = new HtmlTable(caption, [new("File", ColumnAlignment.Unbroken), new("Role"), new("SHA-256", ColumnAlignment.Unbroken)]);
         foreach (var file in files) table.AddRow(file.Name, file.Role, file.Sha256);
         return table;
     }

@@ -1,6 +1,4 @@
 using System.Globalization;
-using System.Reflection;
-using System.Text.Json;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Screening.Screen;
 
@@ -69,59 +67,9 @@ internal static class ScreenReportText
     public static string Confidence(ScreenResult result) =>
         "How confident the screen is: " + string.Join(" ", ErrorControlText.Lines(result)) + " " + ErrorControlText.LockedPanelSentence(result);
 
-    /// <summary>Every screen parameter in plain words, with the values resolved for this panel.</summary>
-    public static IReadOnlyList<KeyValuePair<string, string>> Parameters(ScreenSettings settings)
-    {
-        var o = settings.Options;
-        return
-        [
-            new("Run seed", o.Seed.ToString(CultureInfo.InvariantCulture)),
-            new("Half-sample pairs (repeats)", Invariant($"{o.HalfSamplePairs} ({settings.RepeatCount} repeats)")),
-            new("Trees per forest", Integer(o.TreesPerForest)),
-            new("Features tried at each split", o.FeaturesPerSplit > 0 ? Integer(settings.FeaturesPerSplit) : Invariant($"{settings.FeaturesPerSplit} (square root of the feature count)")),
-            new("Smallest leaf (samples)", Integer(o.MinLeafSize)),
-            new("Class-balanced trees", Invariant($"{(settings.ClassBalanced ? "yes" : "no")} (setting: {o.Balance})")),
-            new("Per-repeat selection level", Invariant($"{o.RepeatSelectionLevel:0.###}")),
-            new("Cap on features selected per repeat", o.SelectedPerRepeat > 0 ? Integer(o.SelectedPerRepeat) : "none"),
-            new("Selection frequency threshold", o.FrequencyThreshold > 0 ? Invariant($"{o.FrequencyThreshold:0.###}") : "none (frequency orders the list)"),
-            new("q-value threshold", Invariant($"{o.QValueThreshold:0.###}")),
-            new("Decoys (each permuted once per run)", o.DecoyCount >= 0 ? Integer(settings.DecoyCount) : Invariant($"{settings.DecoyCount} (automatic: one per feature, {o.AutomaticDecoyFloor} to {o.AutomaticDecoyCeiling})")),
-            new("Outcome permutations", o.OutcomePermutations > 0 ? Integer(o.OutcomePermutations) : "none"),
-            new("Redundancy correlation (Spearman |rho|)", Invariant($"{o.RedundancyCorrelation:0.###}")),
-            new("Panel-size curve", o.CurveFolds > 0
-                ? Invariant($"{o.CurveFolds} outer folds x {o.CurveFoldRepeats}, {o.CurveInnerPairs} inner half-sample pairs, sizes up to {o.CurveMaxPanelSize}")
-                : "skipped"),
-            new("Threads", o.ThreadCount > 0 ? Integer(o.ThreadCount) : "all cores"),
-        ];
-    }
-
-    /// <summary>
-    /// Every property of <see cref="ScreenOptions"/> under the name the manifest uses (snake case),
-    /// found by reflection so that an option added later can never be left out of the report.
-    /// </summary>
-    public static IReadOnlyList<KeyValuePair<string, string>> RawParameters(ScreenSettings settings)
-    {
-        var properties = typeof(ScreenOptions).GetProperties(BindingFlags.Public | BindingFlags.Instance);
-        // Declaration order, which reflection does not promise; metadata tokens follow it.
-        Array.Sort(properties, (a, b) => a.MetadataToken.CompareTo(b.MetadataToken));
-        var entries = new List<KeyValuePair<string, string>>(properties.Length + 3);
-        foreach (var property in properties)
-        {
-            if (property.GetIndexParameters().Length > 0 || property.Name == "EqualityContract") continue;
-            object? value = property.GetValue(settings.Options);
-            string text = value switch
-            {
-                Enum e => JsonNamingPolicy.SnakeCaseLower.ConvertName(e.ToString()),
-                IFormattable f => f.ToString(null, CultureInfo.InvariantCulture),
-                _ => value?.ToString() ?? "",
-            };
-            entries.Add(new(JsonNamingPolicy.SnakeCaseLower.ConvertName(property.Name), text));
-        }
-        entries.Add(new("resolved features_per_split", Integer(settings.FeaturesPerSplit)));
-        entries.Add(new("resolved class_balanced", settings.ClassBalanced ? "true" : "false"));
-        entries.Add(new("resolved decoys", Integer(settings.DecoyCount)));
-        return entries;
-    }
+    /// <summary>Every setting under its report label, with the option that sets it, as the run used it.</summary>
+    public static IReadOnlyList<KeyValuePair<string, string>> Parameters(ScreenSettings settings) =>
+        ScreenParameters.All.Select(p => new KeyValuePair<string, string>(p.Label + " (" + p.Option + ")", p.Text(settings))).ToList();
 
     public static string StageName(ScreenStage stage) => stage switch
     {

@@ -26,7 +26,7 @@ public class OpenDataTests
         Assert.Equal(ExitCode.Success, run.ExitCode);
         using var json = JsonDocument.Parse(run.Out);
         Assert.True(json.RootElement.GetProperty("can_screen").GetBoolean());
-        Assert.Equal(569, json.RootElement.GetProperty("inspection").GetProperty("sample_count").GetInt32());
+        Assert.Equal(569, json.RootElement.GetProperty("inspection").GetProperty("samples").GetInt32());
     }
 
     [Fact]

@@ -36,7 +36,7 @@ public sealed class ScreenCommandTests : IDisposable
         var root = manifest.RootElement;
         Assert.Equal("omicsscreen", root.GetProperty("tool").GetString());
         Assert.Equal(64, root.GetProperty("inputs")[0].GetProperty("sha256").GetString()!.Length);
-        Assert.Equal(3, root.GetProperty("parameters").GetProperty("half_sample_pairs").GetInt32());
+        Assert.Equal(3, root.GetProperty("parameters").GetProperty("pairs").GetInt32());
         Assert.Contains("--pairs 3", root.GetProperty("command_line").GetString());
     }
 

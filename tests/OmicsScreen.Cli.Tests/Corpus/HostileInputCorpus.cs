@@ -103,9 +103,9 @@ internal static class HostileInputCorpus
         yield return new("an empty sample id in the matrix", "m.csv", Text(WithSecondSample(",3,4")), Sheet,
             ExitCode.InputError, ["m.csv", "line 3", "sample id is empty"]);
         yield return new("features in rows without the flag", "m.csv", Text("feature,s1,s2,s3,s4,s5,s6\nf1,1,2,3,4,5,6\nf2,3,4,5,6,7,9\n"), Sheet,
-            ExitCode.InputError, ["m.csv", "one row per feature", "FeaturesInRows"]);
+            ExitCode.InputError, ["m.csv", "one row per feature", "with --features-in-rows"]);
         yield return new("samples in rows given with the features-in-rows flag", "m.csv", Text(Valid), Sheet,
-            ExitCode.InputError, ["m.csv", "one row per sample", "SamplesInRows"], ["--features-in-rows"]);
+            ExitCode.InputError, ["m.csv", "one row per sample", "without --features-in-rows"], ["--features-in-rows"]);
         yield return new("features in rows with the flag loads", "m.csv", Text("feature,s1,s2,s3,s4,s5,s6\nf1,1,2,3,4,5,6\nf2,3,4,5,6,7,9\n"), Sheet,
             ExitCode.Success, ["samples"], ["--features-in-rows"]);
 

@@ -41,7 +41,7 @@ public sealed class SampleSheetJoinTests : IDisposable
         Assert.Contains("sheet.tsv", error.Message);
         Assert.Contains("6 in m.csv but not in sheet.tsv ('extra1', 'extra2', 'extra3', 'extra4', 'extra5' and 1 more)", error.Message);
         Assert.Contains("1 in sheet.tsv but not in m.csv ('ghost')", error.Message);
-        Assert.Contains("DropUnmatchedSamples", error.Message);
+        Assert.Contains("--drop-unmatched", error.Message);
     }
 
     [Fact]

@@ -96,7 +96,7 @@ public sealed class PanelInspectionTests : IDisposable
         var finding = Assert.Single(inspection.Findings, f => f.Code == "orientation-suspect");
         Assert.Equal(FindingSeverity.Warning, finding.Severity);
         Assert.Contains("1200 samples but only 2 features", finding.Message);
-        Assert.Contains("FeaturesInRows", finding.Message);
+        Assert.Contains("--features-in-rows", finding.Message);
         Assert.True(inspection.CanScreen);
     }
 

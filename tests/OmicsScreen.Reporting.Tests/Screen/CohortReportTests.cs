@@ -58,7 +58,7 @@ public sealed class CohortReportTests
 
     private static ScreenReportInput Input(ScreenResult result) => new(
         Screened.Value.Panel, result,
-        [new ReportedFile("matrix", "panel.csv", new string('a', 64))], "SamplesInRows",
+        [new ReportedFile("matrix", "panel.csv", new string('a', 64))], "samples in rows",
         [new ReportedFile("result table", "cohort_markers.tsv", new string('c', 64))],
         "omicsscreen screen panel.csv --cohort centre", "0.1.0-test",
         new DateTimeOffset(2026, 1, 2, 3, 4, 5, TimeSpan.Zero), new DateTimeOffset(2026, 1, 2, 3, 5, 6, TimeSpan.Zero),

@@ -37,7 +37,7 @@ internal static class ScreenReportSample
         Panel,
         result ?? Result,
         [new ReportedFile("matrix", "data/<panel> & co.csv", new string('a', 64)), new ReportedFile("sample sheet", "sheet.tsv", new string('b', 64))],
-        "SamplesInRows",
+        "samples in rows",
         [new ReportedFile("result table", "shortlist.tsv", new string('c', 64))],
         "omicsscreen screen 'data/<panel> & co.csv' --pairs 3",
         "0.1.0-test",

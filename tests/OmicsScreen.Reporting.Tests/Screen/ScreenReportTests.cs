@@ -37,6 +37,8 @@ public sealed class ScreenReportTests
         {
             if (attribute.IsNamespaceDeclaration) continue;
             string name = attribute.Name.LocalName;
+            // Links within the page (the table of contents) load nothing.
+            if (name == "href" && attribute.Value.StartsWith('#')) continue;
             Assert.False(name is "src" or "href" or "srcset" or "action" or "data", $"{attribute.Parent!.Name.LocalName} has a {name} attribute.");
         }
         Assert.Empty(Markup.Elements(document, "link"));
@@ -62,6 +64,37 @@ public sealed class ScreenReportTests
     }
 
     [Fact]
+    public void The_locked_panel_lists_its_markers_in_screen_order_with_their_role()
+    {
+        var result = ScreenReportSample.Result;
+        Assert.True(result.LockedPanelSize > 0);
+        var rows = BodyRows(TableByCaption(Markup.Parse(DefaultReport.Value), ScreenReportTables.LockedPanelCaption));
+
+        Assert.Equal(result.LockedPanelSize, rows.Count);
+        for (int i = 0; i < rows.Count; i++)
+        {
+            var cells = rows[i].Elements().Select(c => c.Value).ToList();
+            Assert.Equal(result.Features[result.Order[i]].Feature, cells[1]);
+            Assert.False(string.IsNullOrWhiteSpace(cells[2]));
+        }
+    }
+
+    [Fact]
+    public void The_report_opens_with_a_table_of_contents_linking_every_top_section()
+    {
+        var document = Markup.Parse(DefaultReport.Value);
+        var links = Markup.Elements(document, "nav").Single().Descendants().Where(e => e.Name.LocalName == "a").ToList();
+        var sections = Markup.Elements(document, "section").Where(e => e.Attribute("id") is not null).ToList();
+        Assert.Equal(sections.Count, links.Count);
+        Assert.True(links.Count >= 5);
+        for (int i = 0; i < links.Count; i++)
+        {
+            Assert.Equal("#" + sections[i].Attribute("id")!.Value, links[i].Attribute("href")!.Value);
+            Assert.Equal(sections[i].Elements().First().Value, links[i].Value);
+        }
+    }
+
+    [Fact]
     public void Shortlist_table_has_one_row_per_shortlisted_marker_in_shortlist_order()
     {
         var result = ScreenReportSample.Result;
@@ -72,7 +105,7 @@ public sealed class ScreenReportTests
         for (int i = 0; i < rows.Count; i++)
         {
             var cells = rows[i].Elements().Select(c => c.Value).ToList();
-            Assert.Equal(12, cells.Count);
+            Assert.Equal(8, cells.Count);
             Assert.Equal((i + 1).ToString(System.Globalization.CultureInfo.InvariantCulture), cells[0]);
             Assert.Equal(result.Shortlist[i].Forest.Feature, cells[1]);
         }
@@ -89,7 +122,7 @@ public sealed class ScreenReportTests
         // then the cohort section: one forest plot per top marker and, from three screened cohorts, the agreement map
         int forests = result.Cohorts is null ? 0 : Math.Min(CohortReportCharts.ForestPlotMarkerLimit, result.Shortlist.Count);
         int cohortMap = result.Cohorts is { ScreenedCohorts.Count: >= CohortReportCharts.HeatMapMinimumCohorts } ? 1 : 0;
-        int expected = 5 + strips + (result.Shortlist.Count >= 2 ? 1 : 0) + forests + cohortMap;
+        int expected = 5 + strips + (result.Shortlist.Count >= 2 ? 1 : 0) + forests + cohortMap + StatisticianCharts(result);
         Assert.Equal(expected, charts.Count);
 
         foreach (var chart in charts)
@@ -163,16 +196,26 @@ public sealed class ScreenReportTests
         var rows = BodyRows(fallback);
         Assert.Equal(ScreenReportTables.FallbackFeatureCount, rows.Count);
         Assert.Equal(empty.Features[empty.Order[0]].Feature, rows[0].Elements().ElementAt(1).Value);
-        // No strip charts or correlation map without markers; the five screen-wide charts stay.
-        Assert.Equal(5, Markup.Elements(document, "svg").Count());
+        // No strip charts or correlation map without markers; the screen-wide charts stay.
+        Assert.Equal(5 + StatisticianCharts(empty), Markup.Elements(document, "svg").Count());
     }
 
+    /// <summary>The sample maps (by class, and by cohort when there is one), screen order against AUC, and the decoys when there are any.</summary>
+    private static int StatisticianCharts(ScreenResult result) =>
+        2 + (ScreenReportSample.Panel.Cohort is null ? 0 : 1) + (result.Repeats.DecoyCount > 0 ? 1 : 0);
+
     [Fact]
-    public void Every_screen_option_is_listed_under_its_manifest_name()
+    public void Every_screen_option_is_listed_under_its_label_and_option()
     {
+        // A setting added to ScreenOptions later must join the vocabulary (ScreenParameters), or it would
+        // be left out of the report and the manifest. The automatic decoy floor and ceiling are constants shown with --decoys.
         var terms = Markup.Elements(Markup.Parse(DefaultReport.Value), "dt").Select(e => e.Value).ToHashSet();
+        var covered = ScreenParameters.All.Select(p => p.Property).ToHashSet();
         foreach (var property in typeof(ScreenOptions).GetProperties())
-            Assert.Contains(JsonNamingPolicy.SnakeCaseLower.ConvertName(property.Name), terms);
+            if (property.Name is not (nameof(ScreenOptions.AutomaticDecoyFloor) or nameof(ScreenOptions.AutomaticDecoyCeiling)))
+                Assert.Contains(property.Name, covered);
+        foreach (var parameter in ScreenParameters.All)
+            Assert.Contains(parameter.Label + " (" + parameter.Option + ")", terms);
     }
 
     [Fact]

@@ -1,0 +1,60 @@
+using OmicsScreen.Data;
+using OmicsScreen.Reporting.Screen;
+using OmicsScreen.Screening.Screen;
+
+namespace OmicsScreen.Cli.Commands;
+
+/// <summary>
+/// What `screen --json` prints on standard output: the headline results a pipeline reads next,
+/// with the same names as the manifest and the tables. Everything else is in the results folder.
+/// </summary>
+public sealed record ScreenHeadline
+{
+    public required string ResultsFolder { get; init; }
+    public required string Report { get; init; }
+    public required string LockedPanelFile { get; init; }
+    public required int Samples { get; init; }
+    public required int Features { get; init; }
+    public required int Repeats { get; init; }
+    public required int TreesPerForest { get; init; }
+    public required ulong Seed { get; init; }
+    public required double OutOfBagError { get; init; }
+    public required double? OutOfBagAuc { get; init; }
+    public required double MinFrequency { get; init; }
+    public required double MaxQ { get; init; }
+    public required IReadOnlyList<ShortlistedMarker> Shortlist { get; init; }
+    public required int? RecommendedPanelSize { get; init; }
+    public required int LockedPanelSize { get; init; }
+    public required IReadOnlyList<string> LockedPanel { get; init; }
+    public required double LockedPanelEstimate { get; init; }
+
+    /// <summary>One shortlisted marker, with the columns of shortlist.tsv a reader needs first.</summary>
+    public sealed record ShortlistedMarker(int Rank, string Feature, double SelectionFrequency, double MedianRank, double QValue,
+        string Direction, double Auc, int RedundancyGroup);
+
+    public static ScreenHeadline Of(LoadedPanel loaded, ScreenResult result, string folder)
+    {
+        var options = result.Settings.Options;
+        return new ScreenHeadline
+        {
+            ResultsFolder = folder,
+            Report = Path.Combine(folder, ScreenRun.ReportFileName),
+            LockedPanelFile = Path.Combine(folder, Data.Models.LockedPanelFile.DefaultFileName),
+            Samples = loaded.Panel.SampleCount,
+            Features = loaded.Panel.FeatureCount,
+            Repeats = result.Settings.RepeatCount,
+            TreesPerForest = options.TreesPerForest,
+            Seed = options.Seed,
+            OutOfBagError = result.ReferenceForest.OutOfBagError,
+            OutOfBagAuc = result.ReferenceForest.OutOfBagAuc,
+            MinFrequency = options.FrequencyThreshold,
+            MaxQ = options.QValueThreshold,
+            Shortlist = result.Shortlist.Select(e => new ShortlistedMarker(e.Rank, e.Forest.Feature, e.Forest.SelectionFrequency,
+                e.Forest.MedianRank, e.Forest.QValue, ScreenTables.DirectionText(e.Univariate), e.Univariate.Auc, e.RedundancyGroup)).ToList(),
+            RecommendedPanelSize = result.PanelSize?.RecommendedSize,
+            LockedPanelSize = result.LockedPanelSize,
+            LockedPanel = result.Shortlist.Take(result.LockedPanelSize).Select(e => e.Forest.Feature).ToList(),
+            LockedPanelEstimate = result.LockedPanelEstimate,
+        };
+    }
+}

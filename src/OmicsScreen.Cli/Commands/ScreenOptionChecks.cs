@@ -1,0 +1,38 @@
+using System.Globalization;
+using OmicsScreen.Screening.Screen;
+
+namespace OmicsScreen.Cli.Commands;
+
+/// <summary>
+/// The screen's settings checked against the options that set them, so a wrong value is reported
+/// as the option to change and the values it accepts, not as the library's field name.
+/// </summary>
+internal static class ScreenOptionChecks
+{
+    public static void Check(ScreenOptions o)
+    {
+        Require(o.HalfSamplePairs >= 1, "--pairs", o.HalfSamplePairs, "must be at least 1 (each pair gives two half-sample repeats)");
+        Require(o.TreesPerForest >= 10, "--trees", o.TreesPerForest, "must be at least 10: fewer trees give no stable out-of-bag estimate");
+        Require(o.FeaturesPerSplit >= 0, "--features-per-split", o.FeaturesPerSplit, "must be at least 1 (leave it out for the square root of the feature count)");
+        Require(o.MinLeafSize >= 1, "--min-leaf", o.MinLeafSize, "must be at least 1");
+        Require(o.RepeatSelectionLevel > 0 && o.RepeatSelectionLevel < 0.5, "--repeat-level", o.RepeatSelectionLevel, "must lie between 0 and 0.5 (for example 0.10)");
+        Require(o.SelectedPerRepeat >= 0, "--per-repeat-cap", o.SelectedPerRepeat, "must be at least 1 (leave it out for no cap)");
+        Require(o.FrequencyThreshold == 0 || (o.FrequencyThreshold > 0.5 && o.FrequencyThreshold <= 1), "--min-frequency", o.FrequencyThreshold,
+            "must be above 0.5 and at most 1 (for example 0.6), or 0 to leave the list to the q-values: a filter must ask for more than half of the repeats");
+        Require(o.QValueThreshold > 0 && o.QValueThreshold <= 1, "--max-q", o.QValueThreshold, "must be above 0 and at most 1 (for example 0.10)");
+        Require(o.DecoyCount >= -1, "--decoys", o.DecoyCount, "must be 0 or more (leave it out for the automatic count)");
+        Require(o.OutcomePermutations >= 0, "--outcome-permutations", o.OutcomePermutations, "must be 0 or more");
+        Require(o.RedundancyCorrelation > 0 && o.RedundancyCorrelation <= 1, "--redundancy-rho", o.RedundancyCorrelation, "must be above 0 and at most 1 (for example 0.7)");
+        Require(o.CurveFolds == 0 || o.CurveFolds >= 2, "--curve-folds", o.CurveFolds, "must be at least 2 (or 0 to skip the panel-size curve)");
+        Require(o.CurveFoldRepeats >= 1, "--curve-repeats", o.CurveFoldRepeats, "must be at least 1");
+        Require(o.CurveInnerPairs >= 1, "--curve-inner-pairs", o.CurveInnerPairs, "must be at least 1");
+        Require(o.CurveMaxPanelSize >= 1, "--max-panel-size", o.CurveMaxPanelSize, "must be at least 1");
+        Require(o.ThreadCount >= 0, "--threads", o.ThreadCount, "must be at least 1 (leave it out to use all cores)");
+    }
+
+    private static void Require(bool condition, string option, double value, string rule)
+    {
+        if (!condition)
+            throw new CommandInputException($"{option} {value.ToString(CultureInfo.InvariantCulture)}: the value {rule}.");
+    }
+}
