@@ -102,11 +102,16 @@ public static class ScreenReport
     private static void WriteLockedPanel(HtmlBuilder html, ScreenResult result)
     {
         html.BeginSection("The locked panel");
-        if (result.LockedPanelSize > 0)
+        if (Math.Min(result.LockedPanelSize, result.Shortlist.Count) > 0)
         {
             html.Paragraph(string.Create(CultureInfo.InvariantCulture,
-                $"The panel locked for `omicsscreen apply` ({LockedPanelFileName}) holds these {result.LockedPanelSize} markers, the first of the screen order."));
+                $"The panel locked for `omicsscreen apply` ({LockedPanelFileName}) holds these {result.LockedPanelSize} markers, the first of the shortlist."));
             html.Table(ScreenReportTables.LockedPanel(result));
+            if (result.PanelSize is { LockedOutOfFoldScores.Count: > 0 } curve)
+                html.Figure(ScreenReportCharts.LockedPanelRoc(curve),
+                    "Cross-validated ROC curve of the locking procedure: in every outer fold the screen, its shortlist and the size choice were repeated on the training part only, "
+                    + "and the held-out samples were scored by a forest on that fold's panel (every sample of a fold that locked nothing scored alike). "
+                    + "The diagonal is chance. It describes the procedure on these samples; the locked panel itself still needs an independent cohort.");
         }
         else
         {

@@ -160,6 +160,37 @@ internal static class ScreenReportCharts
     public const int DistributionPointLimit = 1000;
 
     /// <summary>Samples on the first two principal components, one colour per level of <paramref name="grouping"/>.</summary>
+    /// <summary>
+    /// The ROC curve of the pooled held-out probabilities of the locked procedure: each distinct
+    /// probability, from the highest, is a threshold; ties move the curve diagonally (common practice).
+    /// </summary>
+    public static SvgImage LockedPanelRoc(PanelSizeCurve curve)
+    {
+        var scores = curve.LockedOutOfFoldScores;
+        var positive = curve.LockedOutOfFoldPositive;
+        var order = Enumerable.Range(0, scores.Count).OrderByDescending(i => scores[i]).ThenBy(i => i).ToArray();
+        int positives = positive.Count(p => p), negatives = positive.Count - positives;
+        var falsePositiveRate = new List<double> { 0 };
+        var truePositiveRate = new List<double> { 0 };
+        int truePositives = 0, falsePositives = 0;
+        for (int k = 0; k < order.Length; k++)
+        {
+            if (positive[order[k]]) truePositives++;
+            else falsePositives++;
+            if (k + 1 < order.Length && scores[order[k + 1]] == scores[order[k]]) continue;
+            falsePositiveRate.Add(negatives == 0 ? 0 : (double)falsePositives / negatives);
+            truePositiveRate.Add(positives == 0 ? 0 : (double)truePositives / positives);
+        }
+        const string title = "Locked panel: cross-validated ROC";
+        return XYChart.Render(
+            new XYChartOptions(title, "False positive rate (1 - specificity)", "True positive rate (sensitivity)",
+                YMinimum: 0, YMaximum: 1, Width: 520, Height: 480),
+            [
+                new XYSeries(Invariant($"Held-out samples (AUC {curve.LockedEstimate:0.000})"), falsePositiveRate, truePositiveRate, XYSeriesStyle.Line),
+                new XYSeries("Chance", [0.0, 1.0], [0.0, 1.0], XYSeriesStyle.DashedLine),
+            ]);
+    }
+
     public static SvgImage SampleMap(SamplePrincipalComponents components, string title, IReadOnlyList<string> levelNames, ReadOnlySpan<int> sampleLevels)
     {
         var series = new List<XYSeries>(levelNames.Count);

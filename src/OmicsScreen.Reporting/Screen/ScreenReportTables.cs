@@ -93,17 +93,15 @@ internal static class ScreenReportTables
         ])
         { FirstColumnIsRowHeader = false };
         var leads = new Dictionary<int, string>();
-        int size = Math.Min(result.LockedPanelSize, result.Order.Count);
+        // The locked panel is the first markers of the shortlist (never a marker that failed error control).
+        int size = Math.Min(result.LockedPanelSize, result.Shortlist.Count);
         for (int i = 0; i < size; i++)
         {
-            int featureIndex = result.Order[i];
-            string feature = result.Features[featureIndex].Feature;
+            var entry = result.Shortlist[i];
+            int featureIndex = entry.Forest.FeatureIndex;
+            string feature = entry.Forest.Feature;
             string role;
-            if (i >= result.Shortlist.Count)
-                role = "not shortlisted: added to reach the panel size";
-            else
             {
-                var entry = result.Shortlist[i];
                 if (leads.TryGetValue(entry.RedundancyGroup, out var lead))
                     role = "also in redundancy group " + ReportNumber.Integer(entry.RedundancyGroup) + ", correlated with " + lead;
                 else

@@ -16,17 +16,21 @@ public static class PanelLocker
     /// <summary>A repeat index of its own, so the locked forest draws streams no screen forest uses.</summary>
     public const int LockRepeat = int.MaxValue - 1;
 
-    /// <summary>Keeps the top k of <see cref="ScreenResult.Order"/> (see <see cref="PanelLockOptions.PanelSize"/>) and locks them.</summary>
+    /// <summary>
+    /// Keeps the first k markers of the shortlist (k = <see cref="PanelLockOptions.PanelSize"/>, or
+    /// the screen's <see cref="ScreenResult.LockedPanelSize"/>; never more than the shortlist holds)
+    /// and locks them. A marker that failed error control is never locked.
+    /// </summary>
     public static LockedPanel Lock(Panel panel, ScreenResult result, PanelLockOptions options)
     {
         ArgumentNullException.ThrowIfNull(panel);
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(options);
         options.Validate();
-        int size = options.PanelSize ?? result.LockedPanelSize;
-        size = Math.Clamp(size, 1, result.Order.Count);
+        if (result.Shortlist.Count == 0) throw new ArgumentException("The shortlist is empty, so there is no panel to lock.");
+        int size = Math.Clamp(options.PanelSize ?? result.LockedPanelSize, 1, result.Shortlist.Count);
         var markers = new int[size];
-        for (int i = 0; i < size; i++) markers[i] = result.Order[i];
+        for (int i = 0; i < size; i++) markers[i] = result.Shortlist[i].Forest.FeatureIndex;
         // The panel forest tries floor(sqrt(k)) features per split of its own k, as the panel-size curve does.
         var screenOptions = result.Settings.ForestOptions(panel.Subject, options.Seed, LockRepeat);
         var forestOptions = screenOptions with

@@ -26,4 +26,14 @@ public sealed record PanelSizeCurve(string Metric, IReadOnlyList<PanelSizePoint>
 
     /// <summary>Mean number of markers the folds' procedure locked (folds without a panel count 0).</summary>
     public double MeanFoldPanelSize { get; init; }
+
+    /// <summary>
+    /// Held-out probability of the positive class under the locked procedure, every outer fold's
+    /// test samples pooled (0.5 where a fold locked nothing); with <see cref="LockedOutOfFoldPositive"/>
+    /// the cross-validated ROC curve of the locked panel. Empty for more than two classes.
+    /// </summary>
+    public IReadOnlyList<double> LockedOutOfFoldScores { get; init; } = [];
+
+    /// <summary>Whether each of <see cref="LockedOutOfFoldScores"/> belongs to a sample of the positive class.</summary>
+    public IReadOnlyList<bool> LockedOutOfFoldPositive { get; init; } = [];
 }

@@ -80,6 +80,7 @@ internal static class PanelSizeEstimator
         var selectionAwareError = new double[folds.Count, sizes.Length];
         var optimistic = new double[folds.Count, sizes.Length];
         var optimisticError = new double[folds.Count, sizes.Length];
+        var selectionAwareProbabilities = new double[folds.Count, sizes.Length][];
         var innerScreens = new InnerScreenResult[folds.Count];
         for (int i = 0; i < folds.Count; i++)
         {
@@ -90,8 +91,8 @@ internal static class PanelSizeEstimator
             var innerOrder = innerScreens[i].Order;
             for (int s = 0; s < sizes.Length; s++)
             {
-                (selectionAware[i, s], selectionAwareError[i, s]) = Score(matrix, panel, settings, innerOrder.AsSpan(0, sizes[s]), fold, innerSeed, ScoringRepeatBase + s, binary);
-                (optimistic[i, s], optimisticError[i, s]) = Score(matrix, panel, settings, fullOrder.AsSpan(0, sizes[s]), fold, innerSeed, ScoringRepeatBase + s, binary);
+                (selectionAware[i, s], selectionAwareError[i, s], selectionAwareProbabilities[i, s]) = Score(matrix, panel, settings, innerOrder.AsSpan(0, sizes[s]), fold, innerSeed, ScoringRepeatBase + s, binary);
+                (optimistic[i, s], optimisticError[i, s], _) = Score(matrix, panel, settings, fullOrder.AsSpan(0, sizes[s]), fold, innerSeed, ScoringRepeatBase + s, binary);
             }
             foldDone?.Invoke(i + 1, folds.Count);
         }
@@ -116,6 +117,10 @@ internal static class PanelSizeEstimator
         // screen's shortlist, cut at the size the same rule picks from the OTHER folds' scores, so
         // no fold's held-out part takes part in choosing the size it is scored at.
         var lockedScores = new double[folds.Count];
+        // Every fold's held-out probabilities of the positive class under the locked procedure,
+        // pooled: the cross-validated ROC curve of the locked panel (two classes only).
+        var outOfFoldScores = new List<double>();
+        var outOfFoldPositive = new List<bool>();
         int withoutPanel = 0;
         double sizeSum = 0;
         for (int i = 0; i < folds.Count; i++)
@@ -127,6 +132,8 @@ internal static class PanelSizeEstimator
             {
                 withoutPanel++;
                 lockedScores[i] = ChanceScore(outcome, fold, binary);
+                // A fold that locks nothing calls every held-out sample alike.
+                AddOutOfFold(outcome, fold, null, outOfFoldScores, outOfFoldPositive);
                 continue;
             }
             var otherMeans = new double[sizes.Length];
@@ -141,9 +148,15 @@ internal static class PanelSizeEstimator
             sizeSum += size;
             var panelFeatures = inner.Shortlist.AsSpan(0, size);
             int onGrid = Array.IndexOf(sizes, size);
-            lockedScores[i] = onGrid >= 0 && panelFeatures.SequenceEqual(inner.Order.AsSpan(0, size))
-                ? selectionAware[i, onGrid]
-                : Score(matrix, panel, settings, panelFeatures, fold, InnerSeed(options, fold), ScoringRepeatBase + sizes.Length, binary).Score;
+            double[] probabilities;
+            if (onGrid >= 0 && panelFeatures.SequenceEqual(inner.Order.AsSpan(0, size)))
+            {
+                lockedScores[i] = selectionAware[i, onGrid];
+                probabilities = selectionAwareProbabilities[i, onGrid];
+            }
+            else
+                (lockedScores[i], _, probabilities) = Score(matrix, panel, settings, panelFeatures, fold, InnerSeed(options, fold), ScoringRepeatBase + sizes.Length, binary);
+            AddOutOfFold(outcome, fold, probabilities, outOfFoldScores, outOfFoldPositive);
         }
         double lockedMean = lockedScores.Average();
         double lockedSd = lockedScores.Length < 2 ? double.NaN
@@ -156,7 +169,19 @@ internal static class PanelSizeEstimator
             LockedEstimateStandardError = lockedSd / Math.Sqrt(lockedScores.Length),
             FoldsWithoutPanel = withoutPanel,
             MeanFoldPanelSize = sizeSum / folds.Count,
+            LockedOutOfFoldScores = binary ? outOfFoldScores.ToArray() : [],
+            LockedOutOfFoldPositive = binary ? outOfFoldPositive.ToArray() : [],
         };
+    }
+
+    /// <summary>Appends a fold's held-out probabilities (0.5 for every sample when the fold locked nothing) and their classes.</summary>
+    private static void AddOutOfFold(ClassOutcome outcome, OuterFold fold, double[]? probabilities, List<double> scores, List<bool> positive)
+    {
+        for (int i = 0; i < fold.TestRows.Length; i++)
+        {
+            scores.Add(probabilities is null ? 0.5 : probabilities[i]);
+            positive.Add(outcome.SampleClasses[fold.TestRows[i]] == outcome.PositiveClass);
+        }
     }
 
     /// <summary>What a fold scores when its procedure locks nothing: AUC 0.5, or the accuracy of always calling the training part's largest class.</summary>
@@ -173,7 +198,7 @@ internal static class PanelSizeEstimator
     }
 
     /// <summary>Grows a forest on the fold's training rows using the given features and scores the test rows.</summary>
-    private static (double Score, double Error) Score(BinnedMatrix matrix, Panel panel, ScreenSettings settings,
+    private static (double Score, double Error, double[] Probabilities) Score(BinnedMatrix matrix, Panel panel, ScreenSettings settings,
         ReadOnlySpan<int> features, OuterFold fold, ulong seed, int scoringRepeat, bool binary)
     {
         var outcome = panel.Outcome;
@@ -196,7 +221,7 @@ internal static class PanelSizeEstimator
         }
         double error = (double)wrong / fold.TestRows.Length;
         double score = binary ? MannWhitneyAuc.Compute(scores, positive) : 1 - error;
-        return (score, error);
+        return (score, error, scores);
     }
 
     private static (double Mean, double Sd) MeanAndSdWithout(double[,] values, int column, int skippedRow)

@@ -30,6 +30,24 @@ public sealed class ReportFigureTests
     }
 
     [Fact]
+    public void The_locked_panels_roc_curve_runs_from_the_origin_to_the_corner_through_hand_worked_points()
+    {
+        // Hand-worked: scores 0.9 (positive), 0.8 (negative), 0.7 (positive), 0.2 (negative):
+        // thresholds give (FPR, TPR) = (0, 0), (0, 0.5), (0.5, 0.5), (0.5, 1), (1, 1) (common practice).
+        var curve = ScreenReportSample.Result.PanelSize! with
+        {
+            LockedOutOfFoldScores = [0.9, 0.8, 0.7, 0.2],
+            LockedOutOfFoldPositive = [true, false, true, false],
+            LockedEstimate = 0.75,
+        };
+        var chart = ScreenReportCharts.LockedPanelRoc(curve);
+        var texts = Markup.Texts(Markup.Parse(chart.Markup), "text");
+        Assert.Contains("Held-out samples (AUC 0.750)", texts);
+        Assert.Contains("False positive rate (1 - specificity)", texts);
+        Assert.Contains("<polyline", chart.Markup);
+    }
+
+    [Fact]
     public void Chance_is_half_for_AUC_and_the_largest_class_share_for_accuracy()
     {
         var outcome = ScreenReportSample.Panel.Outcome;

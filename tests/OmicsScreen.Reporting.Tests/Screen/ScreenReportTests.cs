@@ -200,9 +200,13 @@ public sealed class ScreenReportTests
         Assert.Equal(5 + StatisticianCharts(empty), Markup.Elements(document, "svg").Count());
     }
 
-    /// <summary>The sample maps (by class, and by cohort when there is one), screen order against AUC, and the decoys when there are any.</summary>
+    /// <summary>
+    /// The sample maps (by class, and by cohort when there is one), screen order against AUC, the
+    /// decoys when there are any, and the locked panel's cross-validated ROC curve when a panel is locked.
+    /// </summary>
     private static int StatisticianCharts(ScreenResult result) =>
-        2 + (ScreenReportSample.Panel.Cohort is null ? 0 : 1) + (result.Repeats.DecoyCount > 0 ? 1 : 0);
+        2 + (ScreenReportSample.Panel.Cohort is null ? 0 : 1) + (result.Repeats.DecoyCount > 0 ? 1 : 0)
+        + (Math.Min(result.LockedPanelSize, result.Shortlist.Count) > 0 && result.PanelSize is { LockedOutOfFoldScores.Count: > 0 } ? 1 : 0);
 
     [Fact]
     public void Every_screen_option_is_listed_under_its_label_and_option()

@@ -60,6 +60,9 @@ public sealed class ShortlistErrorControlTests(ITestOutputHelper output)
         Assert.InRange(result.LockedPanelEstimate, 0.6, 1.0);
         // The curve is evaluated at the locked size itself.
         Assert.Contains(curve.Points, p => p.PanelSize == result.LockedPanelSize);
+        // The cross-validated ROC data of the locked procedure: every held-out sample once per fold repeat.
+        Assert.Equal(panel.SampleCount, curve.LockedOutOfFoldScores.Count);
+        Assert.Equal(panel.SampleCount, curve.LockedOutOfFoldPositive.Count);
         var locked = PanelLocker.Lock(panel, result, new PanelLockOptions { Seed = 31, TreeCount = 50 });
         var expected = result.Shortlist.Take(result.LockedPanelSize).Select(e => e.Forest.Feature).ToArray();
         Assert.Equal(expected, locked.MarkerNames);
