@@ -26,6 +26,7 @@ internal static class PanelInspector
         for (int c = 0; c < classes.Length; c++) classes[c] = new LevelCount(outcome.ClassNames[c], outcome.ClassCounts[c]);
 
         AddClassFindings(outcome, options, findings);
+        AddSubjectFinding(panel.Subject, findings);
         AddFeatureFindings(matrix, scan, findings);
         AddOrientationFinding(matrix, options.Layout, findings);
         AddCaseOnlyDifferenceFinding(matrix.SampleIds, "sample ids", findings);
@@ -120,6 +121,17 @@ internal static class PanelInspector
     }
 
     private static bool SameValue(float a, float b) => a == b || (float.IsNaN(a) && float.IsNaN(b));
+
+    /// <summary>A screen draws complementary halves of the subjects; a single subject leaves one half empty.</summary>
+    private static void AddSubjectFinding(SampleGrouping? subject, List<InspectionFinding> findings)
+    {
+        if (subject is null) return;
+        var seen = new HashSet<int>();
+        foreach (int level in subject.SampleLevels) seen.Add(level);
+        if (seen.Count < 2)
+            findings.Add(new InspectionFinding(FindingSeverity.Error, "single-subject", Invariant(
+                $"Every sample belongs to one subject of '{subject.ColumnName}', so resampling by subject leaves nothing to compare; a screen needs at least two subjects. Check that the subject column names the person each sample comes from, or leave out --subject.")));
+    }
 
     private static void AddClassFindings(ClassOutcome outcome, PanelLoadOptions options, List<InspectionFinding> findings)
     {

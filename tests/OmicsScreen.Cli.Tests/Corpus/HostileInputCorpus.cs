@@ -147,6 +147,25 @@ internal static class HostileInputCorpus
         yield return new("sample ids differing only by case are distinct", "m.csv", Text(Valid.Replace("s2,", "S1,")), Sheet.Replace("s2,", "S1,"),
             ExitCode.Success, ["samples"]);
 
+        // Issue 13, finding 11: an outcome given twice, used without a word about the other copy.
+        const string WithStatus = "sample_id,status,f1,f2\ns1,case,1,2\ns2,case,3,4\ns3,case,5,6\ns4,control,7,8\ns5,control,9,10\ns6,control,11,13\n";
+        yield return new("11 the outcome in both the matrix and the sheet, disagreeing", "m.csv", Text(WithStatus), Sheet.Replace("s4,control", "s4,case"),
+            ExitCode.InputError, ["s.csv", "line 5", "'status'", "both in the sample sheet and in the matrix", "'s4'", "Remove the column from one of the files"]);
+        yield return new("11 the outcome twice in the sheet, disagreeing", "m.csv", Text(Valid),
+            "sample_id,status,status\ns1,case,case\ns2,case,case\ns3,case,control\ns4,control,control\ns5,control,control\ns6,control,control\n",
+            ExitCode.InputError, ["s.csv", "line 4", "appears twice", "columns 2 and 3", "Keep one of the two columns"]);
+        yield return new("11 the outcome in both the matrix and the sheet, agreeing, loads", "m.csv", Text(WithStatus), Sheet,
+            ExitCode.Success, ["samples"]);
+
+        // Issue 13, finding 14: messages that named the wrong cause.
+        yield return new("14 sample ids composed (NFC) in the matrix and decomposed (NFD) in the sheet", "m.csv",
+            Text(Valid.Replace("s1,", "s\u00e91,").Replace("s2,", "s\u00e92,")),
+            Sheet.Replace("s1,", "se\u03011,").Replace("s2,", "se\u03012,"),
+            ExitCode.InputError, ["s.csv", "encode their accented letters differently", "NFC", "NFD", "same Unicode normalisation"]);
+        yield return new("14 1,234 in a TSV may be thousands or a decimal comma", "m.tsv",
+            Text("sample_id\tf1\tf2\ns1\t1\t2\ns2\t1,234\t4\ns3\t5\t6\ns4\t7\t8\ns5\t9\t10\ns6\t11\t13\n"), Sheet,
+            ExitCode.InputError, ["m.tsv", "line 3", "thousands separator or a decimal comma", "(1234)", "(1.234)"]);
+
         // Binary formats and paths.
         yield return new("a 0-byte Parquet file", "m.parquet", Bytes([]), Sheet,
             ExitCode.InputError, ["m.parquet", "empty", "export the matrix again"]);
