@@ -21,6 +21,18 @@ internal static class DelimitedMatrixReader
 
     public static RawMatrix Read(string path, PanelLoadOptions options, CancellationToken ct)
     {
+        try
+        {
+            return ReadRows(path, options, ct);
+        }
+        catch (Exception e) when (LongRows.IsRowTooLong(e))
+        {
+            throw LongRows.Error(path, e);
+        }
+    }
+
+    private static RawMatrix ReadRows(string path, PanelLoadOptions options, CancellationToken ct)
+    {
         char delimiter = DelimiterDetector.Detect(path);
         using var text = DelimiterDetector.OpenText(path);
         using var reader = Open(text, delimiter);
@@ -36,9 +48,16 @@ internal static class DelimitedMatrixReader
     /// <summary>The header's cells, trimmed, without reading any data row.</summary>
     public static string[] ReadHeaderCells(string path)
     {
-        using var text = DelimiterDetector.OpenText(path);
-        using var reader = Open(text, DelimiterDetector.Detect(path));
-        return ReadHeader(reader, path);
+        try
+        {
+            using var text = DelimiterDetector.OpenText(path);
+            using var reader = Open(text, DelimiterDetector.Detect(path));
+            return ReadHeader(reader, path);
+        }
+        catch (Exception e) when (LongRows.IsRowTooLong(e))
+        {
+            throw LongRows.Error(path, e);
+        }
     }
 
     private static SepReader Open(TextReader text, char delimiter) =>

@@ -147,6 +147,10 @@ internal static class HostileInputCorpus
         yield return new("sample ids differing only by case are distinct", "m.csv", Text(Valid.Replace("s2,", "S1,")), Sheet.Replace("s2,", "S1,"),
             ExitCode.Success, ["samples"]);
 
+        // Issue 13, finding 2: a row past the text reader's 16 Mi-character buffer was an internal error.
+        yield return new("2 a header row longer than 16 Mi characters", "m.csv", HeaderPastTheRowLimit, Sheet,
+            ExitCode.InputError, ["m.csv", "longer than the 16 Mi characters", "--features-in-rows", "Parquet or Arrow"]);
+
         // Issue 13, finding 11: an outcome given twice, used without a word about the other copy.
         const string WithStatus = "sample_id,status,f1,f2\ns1,case,1,2\ns2,case,3,4\ns3,case,5,6\ns4,control,7,8\ns5,control,9,10\ns6,control,11,13\n";
         yield return new("11 the outcome in both the matrix and the sheet, disagreeing", "m.csv", Text(WithStatus), Sheet.Replace("s4,control", "s4,case"),
@@ -162,6 +166,9 @@ internal static class HostileInputCorpus
             Text(Valid.Replace("s1,", "s\u00e91,").Replace("s2,", "s\u00e92,")),
             Sheet.Replace("s1,", "se\u03011,").Replace("s2,", "se\u03012,"),
             ExitCode.InputError, ["s.csv", "encode their accented letters differently", "NFC", "NFD", "same Unicode normalisation"]);
+        yield return new("14 a TSV whose feature names hold commas is read as tab-separated", "m.tsv",
+            Text("sample_id\tIL-6, serum\tTNF, serum, plasma\ns1\t1\t2\ns2\t3\t4\ns3\t5\t6\ns4\t7\t8\ns5\t9\t10\ns6\t11\t13\n"), Sheet,
+            ExitCode.Success, ["samples", "tab"]);
         yield return new("14 1,234 in a TSV may be thousands or a decimal comma", "m.tsv",
             Text("sample_id\tf1\tf2\ns1\t1\t2\ns2\t1,234\t4\ns3\t5\t6\ns4\t7\t8\ns5\t9\t10\ns6\t11\t13\n"), Sheet,
             ExitCode.InputError, ["m.tsv", "line 3", "thousands separator or a decimal comma", "(1234)", "(1.234)"]);
@@ -200,6 +207,18 @@ internal static class HostileInputCorpus
                 text.Append(',').Append(sample == 6 && feature == featureCount ? "broken" : ((sample * 7 + feature) % 13).ToString(System.Globalization.CultureInfo.InvariantCulture));
             text.Append('\n');
         }
+        return Encoding.UTF8.GetBytes(text.ToString());
+    }
+
+    /// <summary>A header of 1.9 million feature names (about 17 million characters), then short rows.</summary>
+    private static byte[] HeaderPastTheRowLimit(string folder)
+    {
+        const int featureCount = 1_900_000;
+        var text = new StringBuilder(featureCount * 9 + 64);
+        text.Append("sample_id");
+        for (int feature = 0; feature < featureCount; feature++) text.Append(",f").Append(feature.ToString("D7", System.Globalization.CultureInfo.InvariantCulture));
+        text.Append('\n');
+        for (int sample = 1; sample <= 6; sample++) text.Append('s').Append(sample).Append(",1\n");
         return Encoding.UTF8.GetBytes(text.ToString());
     }
 
