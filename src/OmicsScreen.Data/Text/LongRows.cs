@@ -1,10 +1,10 @@
 namespace OmicsScreen.Data.Text;
 
 /// <summary>
-/// The text reader (Sep) holds a whole row in one buffer of at most 16 Mi characters; a longer
-/// row (a samples-in-rows export of about a million features at full precision) stops it. That
-/// limit becomes an input error naming the file and the layouts that have no such limit, instead
-/// of an internal error.
+/// The fast text reader (Sep) holds a whole row in one buffer of at most 16 Mi characters; a
+/// longer row (a samples-in-rows export of about a million features at full precision) stops it.
+/// Samples in rows are then read again row by row with no limit; a features-in-rows row that long
+/// becomes an input error naming the file and the layouts that have no such limit.
 /// </summary>
 internal static class LongRows
 {
@@ -19,9 +19,10 @@ internal static class LongRows
         _ => false,
     };
 
-    public static PanelInputException Error(string path, Exception error) =>
+    /// <summary>A features-in-rows row (one feature's value in every sample) past the buffer: more samples than the row-by-row reader takes in this layout.</summary>
+    public static PanelInputException FeaturesInRowsError(string path, Exception error) =>
         PanelInputException.At(path, null, null,
-            FormattableString.Invariant($"has a row longer than the {MaxRowChars / (1024 * 1024)} Mi characters a CSV/TSV row may hold here (or a quote that is never closed, which makes the rest of the file one row)."),
-            "Write the matrix with one row per feature and read it with --features-in-rows (each row then holds one feature's values), or as Parquet or Arrow, which have no row limit; if a quote is left open, close it.",
+            FormattableString.Invariant($"has a row longer than the {MaxRowChars / (1024 * 1024)} Mi characters a features-in-rows CSV/TSV row may hold (or a quote that is never closed, which makes the rest of the file one row)."),
+            "Write the matrix with one row per sample (samples in rows have no row limit), or as Parquet or Arrow; if a quote is left open, close it.",
             error);
 }

@@ -147,9 +147,11 @@ internal static class HostileInputCorpus
         yield return new("sample ids differing only by case are distinct", "m.csv", Text(Valid.Replace("s2,", "S1,")), Sheet.Replace("s2,", "S1,"),
             ExitCode.Success, ["samples"]);
 
-        // Issue 13, finding 2: a row past the text reader's 16 Mi-character buffer was an internal error.
-        yield return new("2 a header row longer than 16 Mi characters", "m.csv", HeaderPastTheRowLimit, Sheet,
-            ExitCode.InputError, ["m.csv", "longer than the 16 Mi characters", "--features-in-rows", "Parquet or Arrow"]);
+        // Issue 13, finding 2: a row past the fast text reader's 16 Mi-character buffer was an internal error.
+        yield return new("2 a samples-in-rows row longer than 16 Mi characters loads", "m.csv", RowPastTheBuffer, Sheet,
+            ExitCode.Success, ["samples"], ["--annotation", "note"]);
+        yield return new("2 a features-in-rows row longer than 16 Mi characters", "m.csv", FeatureRowsPastTheBuffer, Sheet,
+            ExitCode.InputError, ["m.csv", "longer than the 16 Mi characters", "one row per sample", "Parquet or Arrow"], ["--features-in-rows"]);
 
         // Issue 13, finding 11: an outcome given twice, used without a word about the other copy.
         const string WithStatus = "sample_id,status,f1,f2\ns1,case,1,2\ns2,case,3,4\ns3,case,5,6\ns4,control,7,8\ns5,control,9,10\ns6,control,11,13\n";
@@ -210,15 +212,19 @@ internal static class HostileInputCorpus
         return Encoding.UTF8.GetBytes(text.ToString());
     }
 
-    /// <summary>A header of 1.9 million feature names (about 17 million characters), then short rows.</summary>
-    private static byte[] HeaderPastTheRowLimit(string folder)
+    /// <summary>The valid panel with a text column whose second cell holds 17 million characters.</summary>
+    private static byte[] RowPastTheBuffer(string folder) =>
+        Encoding.UTF8.GetBytes(Valid.Replace("sample_id,", "sample_id,note,").Replace("s1,", "s1,n,").Replace("s2,", "s2," + new string('x', 17_000_000) + ",")
+            .Replace("s3,", "s3,n,").Replace("s4,", "s4,n,").Replace("s5,", "s5,n,").Replace("s6,", "s6,n,"));
+
+    /// <summary>A features-in-rows header of 1.9 million sample ids (about 17 million characters).</summary>
+    private static byte[] FeatureRowsPastTheBuffer(string folder)
     {
-        const int featureCount = 1_900_000;
-        var text = new StringBuilder(featureCount * 9 + 64);
-        text.Append("sample_id");
-        for (int feature = 0; feature < featureCount; feature++) text.Append(",f").Append(feature.ToString("D7", System.Globalization.CultureInfo.InvariantCulture));
-        text.Append('\n');
-        for (int sample = 1; sample <= 6; sample++) text.Append('s').Append(sample).Append(",1\n");
+        const int sampleCount = 1_900_000;
+        var text = new StringBuilder(sampleCount * 9 + 64);
+        text.Append("feature");
+        for (int sample = 0; sample < sampleCount; sample++) text.Append(",s").Append(sample.ToString("D7", System.Globalization.CultureInfo.InvariantCulture));
+        text.Append("\nf1,1\n");
         return Encoding.UTF8.GetBytes(text.ToString());
     }
 
