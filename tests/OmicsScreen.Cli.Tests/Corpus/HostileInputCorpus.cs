@@ -171,6 +171,9 @@ internal static class HostileInputCorpus
         yield return new("14 a TSV whose feature names hold commas is read as tab-separated", "m.tsv",
             Text("sample_id\tIL-6, serum\tTNF, serum, plasma\ns1\t1\t2\ns2\t3\t4\ns3\t5\t6\ns4\t7\t8\ns5\t9\t10\ns6\t11\t13\n"), Sheet,
             ExitCode.Success, ["samples", "tab"]);
+        yield return new("14 distinct integers near 9.2e18 are explained, not only called constant", "m.csv",
+            Text(Header + "s1,1,9223372036854775001\ns2,3,9223372036854775002\ns3,5,9223372036854775003\ns4,7,9223372036854775004\ns5,9,9223372036854775005\ns6,11,9223372036854775006\n"), Sheet,
+            ExitCode.Success, ["constant-features", "'f2'", "16,777,216 or more", "7 significant digits", "rescale them"]);
         yield return new("14 1,234 in a TSV may be thousands or a decimal comma", "m.tsv",
             Text("sample_id\tf1\tf2\ns1\t1\t2\ns2\t1,234\t4\ns3\t5\t6\ns4\t7\t8\ns5\t9\t10\ns6\t11\t13\n"), Sheet,
             ExitCode.InputError, ["m.tsv", "line 3", "thousands separator or a decimal comma", "(1234)", "(1.234)"]);
