@@ -119,6 +119,16 @@ internal static class MisuseCorpus
         yield return new("screen --force into a folder holding the input matrix under an output's name", s =>
                 ["screen", s.File("r/features.tsv", MisuseScene.SmallPanel), "--samples", s.Sheet(), "--outcome", "status", "--out", s.PathOf("r"), "--force", "--quiet"],
             ExitCode.OutputError, ["features.tsv", "input of this run", "move the input out"]);
+        yield return new("merge --out naming one of the part folders", s =>
+            {
+                foreach (var part in new[] { "1", "2" })
+                {
+                    var run = CliHarness.Run(MisuseScene.SmallScreen(s.PathOf("p" + part), "--part", part + "/2"));
+                    Assert.True(run.ExitCode == ExitCode.Success, run.Error);
+                }
+                return ["merge", s.PathOf("p1"), s.PathOf("p2"), "--out", s.PathOf("p1"), "--quiet"];
+            },
+            ExitCode.OutputError, ["--out", "is, or overlaps, the part folder", "a folder of their own"]);
         yield return new("screen --out naming a FIFO", s => MisuseScene.SmallScreen(s.Fifo("out")),
             ExitCode.OutputError, ["named pipe", "give --out a folder"]);
 
