@@ -78,7 +78,7 @@ internal static class DelimitedMatrixReader
         var columns = new FeatureColumns(roles.FeatureColumns.Length, rowBound);
         var rows = reader.ParallelEnumerate(row => ParseSampleRow(row, header.Length, slots, roles, attributeNames, columns),
             Environment.ProcessorCount);
-        return CollectSamples(rows, header, roles, attributeNames, columns, source, ct);
+        return CollectSamples(rows, header, roles, attributeNames, columns, source, options, ct);
     }
 
     /// <summary>
@@ -102,12 +102,12 @@ internal static class DelimitedMatrixReader
         {
             while (reader.Next(row)) yield return ParseSampleRow(row, header.Length, slots, roles, attributeNames, columns);
         }
-        return CollectSamples(Rows(), header, roles, attributeNames, columns, source, ct);
+        return CollectSamples(Rows(), header, roles, attributeNames, columns, source, options, ct);
     }
 
     /// <summary>Checks the parsed rows in file order, then gathers the samples' slots into the matrix.</summary>
     private static RawMatrix CollectSamples(IEnumerable<ParsedRow> rows, string[] header, SampleColumnRoles roles,
-        HashSet<string> attributeNames, FeatureColumns columns, MatrixSource source, CancellationToken ct)
+        HashSet<string> attributeNames, FeatureColumns columns, MatrixSource source, PanelLoadOptions options, CancellationToken ct)
     {
         string path = source.Path;
         var attributes = new List<string>[roles.AttributeColumns.Length];
@@ -214,7 +214,7 @@ internal static class DelimitedMatrixReader
     {
         while (reader.Next(row))
         {
-            if (row.IsBlank) continue;
+            if (row.IsBlank || DelimiterDetector.IsCommentAboveHeader(row[0])) continue;
             var header = new string[row.FieldCount];
             for (int c = 0; c < header.Length; c++) header[c] = row[c].Trim().ToString();
             return header;

@@ -24,6 +24,7 @@ public sealed class RowByRowReadingTests : IDisposable
         { "quotes.csv", "id,group,\"a, with comma\",\"b \"\"quoted\"\"\"\n\"s1\",x,1,2\ns2,\"y\",\" 3 \",4\ns3,x,5,\"6\"\n" },
         { "no final line break.csv", "id,group,a,b\ns1,x,1,2\ns2,y,3,4" },
         { "spaces.csv", "id , group , a , b \n s1 , x , 1 , 2 \n s2 , y , 3 , 4 \n" },
+        { "comments above the header.csv", "# exported 2026-01-01\n# instrument X\nid,group,a,b\ns1,x,1,2\ns2,y,3,4\n" },
         { "note over two lines.csv", "id,group,note,a\ns1,x,\"two\nlines\",1\ns2,y,n,2\ns3,x,n,3\n" },
     };
 
