@@ -24,6 +24,11 @@ internal static class CommandRunner
             console.Error.WriteLine($"error: {TextTable.Printable(e.Message)}");
             return ExitCode.InputError;
         }
+        catch (PanelNotScreenableException e)
+        {
+            console.Error.WriteLine($"error: {TextTable.Printable(e.Message)}");
+            return ExitCode.NotScreenable;
+        }
         catch (CommandInputException e)
         {
             console.Error.WriteLine($"error: {TextTable.Printable(e.Message)}");

@@ -22,6 +22,8 @@ internal static class Display
                 case '\t': builder.Append("\\t"); break;
                 default:
                     if (char.IsControl(c)) builder.Append("\\u").Append(((int)c).ToString("x4", CultureInfo.InvariantCulture));
+                    // Bidirectional overrides and zero-width characters would reorder or hide what is shown.
+                    else if (char.GetUnicodeCategory(c) == UnicodeCategory.Format) builder.Append("<U+").Append(((int)c).ToString("X4", CultureInfo.InvariantCulture)).Append('>');
                     else builder.Append(c);
                     break;
             }

@@ -19,7 +19,7 @@ public sealed class LoadedPanel
     public IReadOnlyList<InputFileRecord> Inputs { get; }
 
     /// <summary>
-    /// Throws a <see cref="PanelInputException"/> carrying every Error finding (a single class, a
+    /// Throws a <see cref="PanelNotScreenableException"/> carrying every Error finding (a single class, a
     /// class with one sample, all features constant) when the panel cannot be screened.
     /// </summary>
     public LoadedPanel EnsureScreenable()
@@ -28,6 +28,7 @@ public sealed class LoadedPanel
         var message = new StringBuilder(Path.GetFileName(Inspection.MatrixPath)).Append(": the panel cannot be screened:");
         foreach (var finding in Inspection.Findings)
             if (finding.Severity == FindingSeverity.Error) message.Append(' ').Append(finding.Message);
-        throw new PanelInputException(message.ToString(), Inspection.MatrixPath, column: Inspection.OutcomeColumn);
+        message.Append(" Run `omicsscreen check` on the same files for every finding.");
+        throw new PanelNotScreenableException(message.ToString(), Inspection.MatrixPath);
     }
 }

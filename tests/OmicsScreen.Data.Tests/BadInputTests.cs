@@ -5,7 +5,8 @@ namespace OmicsScreen.Data.Tests;
 
 /// <summary>
 /// Each kind of bad input stops with a <see cref="PanelInputException"/> whose message names the
-/// file, where the problem is, what was found and what to do.
+/// file, where the problem is, what was found and what to do; a panel that was read but cannot be
+/// screened stops with a <see cref="PanelNotScreenableException"/> worded the same way.
 /// </summary>
 public sealed class BadInputTests : IDisposable
 {
@@ -22,6 +23,14 @@ public sealed class BadInputTests : IDisposable
         var error = Assert.Throws<PanelInputException>(() => PanelLoader.Load(options).EnsureScreenable());
         foreach (var part in expectedParts) Assert.Contains(part, error.Message);
         return error;
+    }
+
+    private static void NotScreenable(PanelLoadOptions options, params string[] expectedParts)
+    {
+        var loaded = PanelLoader.Load(options);
+        var error = Assert.Throws<PanelNotScreenableException>(() => loaded.EnsureScreenable());
+        foreach (var part in expectedParts) Assert.Contains(part, error.Message);
+        Assert.Equal(options.MatrixPath, error.FilePath);
     }
 
     [Fact]
@@ -119,21 +128,21 @@ public sealed class BadInputTests : IDisposable
     [Fact]
     public void Single_class_cannot_be_screened()
     {
-        Fails(Options(_folder.Write("one.csv", GoodHeader + "s1,x,1,2\ns2,x,3,4\ns3,x,5,6\n")),
+        NotScreenable(Options(_folder.Write("one.csv", GoodHeader + "s1,x,1,2\ns2,x,3,4\ns3,x,5,6\n")),
             "one.csv", "single class 'x' (3 samples)", "at least two classes");
     }
 
     [Fact]
     public void Class_with_one_sample_cannot_be_screened()
     {
-        Fails(Options(_folder.Write("tiny.csv", GoodHeader + "s1,x,1,2\ns2,x,3,4\ns3,y,5,6\n")),
+        NotScreenable(Options(_folder.Write("tiny.csv", GoodHeader + "s1,x,1,2\ns2,x,3,4\ns3,y,5,6\n")),
             "tiny.csv", "class 'y' of 'group' has a single sample", "Merge it into another class or remove");
     }
 
     [Fact]
     public void All_features_constant_cannot_be_screened()
     {
-        Fails(Options(_folder.Write("flat.csv", GoodHeader + "s1,x,1,NA\ns2,x,1,NA\ns3,y,1,NA\ns4,y,1,NA\n")),
+        NotScreenable(Options(_folder.Write("flat.csv", GoodHeader + "s1,x,1,NA\ns2,x,1,NA\ns3,y,1,NA\ns4,y,1,NA\n")),
             "flat.csv", "All 2 features are constant or entirely missing", "Check that this is the right file");
     }
 

@@ -111,8 +111,11 @@ internal static class ApplyReport
         };
         if (model.Threshold is not null)
             cautions.Add("The threshold was chosen on the discovery cohort; in a cohort with another case mix or assay it may not balance sensitivity and specificity.");
-        if (scores.Warnings.Count > 0)
-            cautions.Add(FormattableString.Invariant($"{scores.Warnings.Count} marker(s) look measured on another scale than in discovery (see the scale check); their scores may be meaningless until the units match."));
+        int unmeasured = scores.Warnings.Count(w => w.Unmeasured);
+        if (unmeasured > 0)
+            cautions.Add(FormattableString.Invariant($"{unmeasured} marker(s) were measured in no sample of this cohort (see the scale check); the scores rest on the other markers only."));
+        if (scores.Warnings.Count > unmeasured)
+            cautions.Add(FormattableString.Invariant($"{scores.Warnings.Count - unmeasured} marker(s) look measured on another scale than in discovery (see the scale check); their scores may be meaningless until the units match."));
         if (performance is null)
             cautions.Add("No outcome was given, so nothing here says how well the panel works on this cohort.");
         else if (performance.SampleCount < 50)

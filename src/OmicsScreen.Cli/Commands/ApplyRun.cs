@@ -1,5 +1,6 @@
 using System.Globalization;
 using OmicsScreen.Cli.Console;
+using OmicsScreen.Cli.Output;
 using OmicsScreen.Data;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Reporting.Json;
@@ -19,6 +20,12 @@ internal static class ApplyRun
     public static int Execute(CliConsole console, ApplyRunOptions options)
     {
         options.Validate();
+        InputPathGuard.Check(options.ModelPath, "locked panel");
+        InputPathGuard.Check(options.MatrixPath, "matrix");
+        InputPathGuard.Check(options.SampleSheetPath, "sample sheet");
+        // The folder is checked and locked before any work; a refused run leaves it as it was.
+        using var folder = ResultsFolder.Open(options.OutputFolder, options.Force, ResultsKind.Apply,
+            [options.ModelPath, options.MatrixPath, options.SampleSheetPath], console.Error);
         var started = DateTimeOffset.UtcNow;
         var (model, discoveryIds) = ApplyModelFile.ReadWithDiscoveryIds(options.ModelPath);
         var (matrix, outcome, inputs) = LoadCohort(options);
@@ -45,7 +52,7 @@ internal static class ApplyRun
             }
         }
 
-        var folder = ResultsFolder.Prepare(options.OutputFolder, options.Force);
+        folder.ClearEarlierOutputs();
         var knownClasses = outcome is null ? null : KnownClassNames(outcome);
         folder.WriteText(ScoresFileName, w => ApplyTables.WriteScores(w, scores, knownClasses));
         if (performance is not null)
@@ -119,7 +126,7 @@ internal static class ApplyRun
         }).ToArray(),
         calibration = performance.Calibration,
         discovery_out_of_bag_auc = model.OutOfBagAuc,
-        scale_warnings = scores.Warnings.Select(w => new { marker = w.Marker, message = w.Message }).ToArray(),
+        scale_warnings = scores.Warnings.Select(w => new { marker = w.Marker, unmeasured = w.Unmeasured, message = w.Message }).ToArray(),
         discovery_overlap_warnings = overlap,
     };
 

@@ -1,4 +1,5 @@
 using OmicsScreen.Cli.Console;
+using OmicsScreen.Cli.Output;
 using OmicsScreen.Data;
 
 namespace OmicsScreen.Cli.Commands;
@@ -8,6 +9,8 @@ internal static class CheckRun
 {
     public static int Execute(CliConsole console, PanelLoadOptions options, bool json)
     {
+        InputPathGuard.Check(options.MatrixPath, "matrix");
+        InputPathGuard.Check(options.SampleSheetPath, "sample sheet");
         var loaded = PanelLoader.Load(options);
         if (json) InspectionPrinter.WriteJson(loaded, console.Out);
         else InspectionPrinter.WriteTable(loaded, console.Out);

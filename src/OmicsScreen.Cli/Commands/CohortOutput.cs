@@ -8,12 +8,15 @@ namespace OmicsScreen.Cli.Commands;
 /// <summary>Writes and prints the cohort check of a screen.</summary>
 internal static class CohortOutput
 {
+    /// <summary>The tables of the cohort check, in the order they are written.</summary>
+    public static readonly string[] FileNames = ["cohort_concordance.tsv", "cohort_markers.tsv", "cohort_effects.tsv", "cohort_validation.tsv"];
+
     public static void Write(ResultsFolder folder, CohortResult cohorts)
     {
-        folder.WriteText("cohort_concordance.tsv", w => CohortTables.WriteConcordance(w, cohorts));
-        folder.WriteText("cohort_markers.tsv", w => CohortTables.WriteMarkers(w, cohorts));
-        folder.WriteText("cohort_effects.tsv", w => CohortTables.WriteEffects(w, cohorts));
-        folder.WriteText("cohort_validation.tsv", w => CohortTables.WriteHeldOut(w, cohorts));
+        folder.WriteText(FileNames[0], w => CohortTables.WriteConcordance(w, cohorts));
+        folder.WriteText(FileNames[1], w => CohortTables.WriteMarkers(w, cohorts));
+        folder.WriteText(FileNames[2], w => CohortTables.WriteEffects(w, cohorts));
+        folder.WriteText(FileNames[3], w => CohortTables.WriteHeldOut(w, cohorts));
     }
 
     public static void PrintSummary(TextWriter output, ScreenResult result, CohortResult cohorts)

@@ -1,4 +1,5 @@
 using OmicsScreen.Cli.Console;
+using OmicsScreen.Cli.Output;
 using OmicsScreen.Data;
 using OmicsScreen.Data.Demo;
 using OmicsScreen.Screening.Screen;
@@ -10,6 +11,9 @@ internal static class DemoRun
 {
     public static int Execute(CliConsole console, DemoRunOptions options)
     {
+        // Files already in the panel folder are replaced only when an earlier demo wrote them.
+        foreach (var (fileName, start) in DemoStudyWriter.FileStarts)
+            OutputPathGuard.CheckFile(Path.Combine(options.PanelFolder, fileName), "--panel-dir", [], start);
         var study = DemoStudyGenerator.Generate(new DemoStudyOptions { Seed = options.Seed });
         var files = DemoStudyWriter.Write(study, options.PanelFolder);
         console.Out.WriteLine($"Demo panel written: {files.Panel}");

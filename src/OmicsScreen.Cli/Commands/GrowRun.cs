@@ -1,6 +1,7 @@
 using System.Diagnostics;
 using System.Globalization;
 using OmicsScreen.Cli.Console;
+using OmicsScreen.Cli.Output;
 using OmicsScreen.Data;
 using OmicsScreen.Data.Output;
 using OmicsScreen.Engine.Forests;
@@ -17,10 +18,18 @@ internal static class GrowRun
     public static int Execute(CliConsole console, GrowRunOptions options)
     {
         options.Validate();
+        InputPathGuard.Check(options.Panel.MatrixPath, "matrix");
+        InputPathGuard.Check(options.Panel.SampleSheetPath, "sample sheet");
+        if (options.ImportanceFile is { } importancePath)
+            OutputPathGuard.CheckFile(importancePath, "--importance-out", [options.Panel.MatrixPath, options.Panel.SampleSheetPath], ImportanceWriter.HeaderLine);
         var watch = Stopwatch.StartNew();
         var loaded = PanelLoader.Load(options.Panel).EnsureScreenable();
         var loadTime = watch.Elapsed;
         var panel = loaded.Panel;
+        // A node splits only when both children can hold min-leaf samples: above half the samples, every tree is one leaf.
+        if (2 * options.MinLeafSize > panel.SampleCount)
+            throw new CommandInputException(FormattableString.Invariant(
+                $"--min-leaf {options.MinLeafSize} leaves every tree a single leaf: the panel has {panel.SampleCount} samples and a split needs 2 x {options.MinLeafSize}. Use --min-leaf {Math.Max(1, panel.SampleCount / 4)} or less (the default 1 grows full trees)."));
         var forestOptions = options.ToForestOptions(panel);
         try
         {

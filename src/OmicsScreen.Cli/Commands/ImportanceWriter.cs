@@ -6,6 +6,9 @@ namespace OmicsScreen.Cli.Commands;
 /// <summary>Writes one forest's impurity decrease per feature as a TSV, most important first.</summary>
 internal static class ImportanceWriter
 {
+    /// <summary>The header every file written here starts with; how an earlier one is recognised before it is replaced.</summary>
+    public const string HeaderLine = "rank\tfeature\tmean_gini_decrease\tshare_of_total\n";
+
     private sealed record Row(int Rank, string Feature, double MeanDecrease, double Share);
 
     public static void Write(TextWriter writer, IReadOnlyList<string> featureNames, int[] ranked, ForestResult result)

@@ -3,6 +3,7 @@ using System.Globalization;
 using System.Security.Cryptography;
 using OmicsScreen.Cli.Console;
 using OmicsScreen.Cli.Memory;
+using OmicsScreen.Cli.Output;
 using OmicsScreen.Cli.Work;
 using OmicsScreen.Data;
 using OmicsScreen.Reporting.Json;
@@ -37,23 +38,28 @@ internal static class ScreenRun
         {
             throw new CommandInputException(e.Message);
         }
+        InputPathGuard.Check(options.Panel.MatrixPath, "matrix");
+        InputPathGuard.Check(options.Panel.SampleSheetPath, "sample sheet");
         if (!MemoryCheck.Passes(console, options)) return ExitCode.NotEnoughMemory;
+        if (options.Part is not null) return ExecutePart(console, options);
+
+        // The folder is checked and locked before any work; a refused run leaves it as it was.
+        using var folder = ResultsFolder.Open(options.ResolveOutputFolder(), options.Force, ResultsKind.Screen, InputPaths(options.Panel), console.Error);
         var started = DateTimeOffset.UtcNow;
         var watch = Stopwatch.StartNew();
         var loaded = PanelLoader.Load(options.Panel).EnsureScreenable();
         double loadSeconds = watch.Elapsed.TotalSeconds;
-        if (options.Panel.KeepFeatures is not null)
-            console.Error.WriteLine("note: only the features of the --keep-features list were read. If the list was chosen on these same samples "
-                + "(a first-stage screen), q-values and the selection-aware panel-size curve do not account for that choice: confirm in independent samples.");
-        if (options.Part is { } part) return PartRun.Execute(console, options, loaded, part);
+        PrintKeepFeaturesNote(console, options);
+        ScreenFeasibility.Check(options.Screen, loaded.Panel);
 
-        var folder = ResultsFolder.Prepare(options.ResolveOutputFolder(), options.Force);
         var settings = ScreenSettings.Resolve(options.Screen, loaded.Panel);
         var (identity, record) = RunIdentity.Of("checkpoint", loaded, options);
         var checkpoint = WorkFolder.Open(Path.Combine(folder.Path, CheckpointFolderName), CheckpointRecordName,
             record, identity, loaded.Panel.FeatureCount,
             settings.DecoyCount, options.Resume, options.Force, "checkpoint",
             Path.Combine(options.ResolveOutputFolder(), CheckpointFolderName));
+        // From here on the run replaces the folder's earlier results.
+        folder.ClearEarlierOutputs();
         var plan = WorkPlan.For(loaded.Panel, settings);
         if (options.Resume && !options.Quiet)
             console.Error.WriteLine($"resume: {checkpoint.CountPresent(plan.Units.Select(u => u.Unit))} of {plan.Units.Count} work units are in the checkpoint.");
@@ -77,6 +83,24 @@ internal static class ScreenRun
             (options.Json ? console.Error : console.Out).WriteLine($"Resumed: {checkpoint.ReusedCount} of {plan.Units.Count} work units came from the checkpoint.");
         return ExitCode.Success;
     }
+
+    private static int ExecutePart(CliConsole console, ScreenRunOptions options)
+    {
+        var loaded = PanelLoader.Load(options.Panel).EnsureScreenable();
+        PrintKeepFeaturesNote(console, options);
+        ScreenFeasibility.Check(options.Screen, loaded.Panel);
+        return PartRun.Execute(console, options, loaded, options.Part!.Value);
+    }
+
+    private static void PrintKeepFeaturesNote(CliConsole console, ScreenRunOptions options)
+    {
+        if (options.Panel.KeepFeatures is not null)
+            console.Error.WriteLine("note: only the features of the --keep-features list were read. If the list was chosen on these same samples "
+                + "(a first-stage screen), q-values and the selection-aware panel-size curve do not account for that choice: confirm in independent samples.");
+    }
+
+    /// <summary>The files a run reads, which its outputs must never replace.</summary>
+    internal static IEnumerable<string?> InputPaths(PanelLoadOptions panel) => [panel.MatrixPath, panel.SampleSheetPath];
 
     /// <summary>
     /// Writes every table, the locked panel, the report and (last) the manifest of a finished

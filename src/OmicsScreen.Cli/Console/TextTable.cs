@@ -1,4 +1,5 @@
 using System.Text;
+using OmicsScreen.Reporting.Html;
 
 namespace OmicsScreen.Cli.Console;
 
@@ -56,13 +57,22 @@ public sealed class TextTable
     }
 
     /// <summary>Names come from user files: control characters would move the cursor or ring the bell.</summary>
+    /// <summary>
+    /// Console-safe text: control characters become '?', and hidden format characters (bidirectional
+    /// overrides, zero-width spaces) a visible &lt;U+XXXX&gt;, so a name cannot reorder or hide what is printed.
+    /// </summary>
     internal static string Printable(string text)
     {
         bool clean = true;
-        foreach (char ch in text) if (char.IsControl(ch)) { clean = false; break; }
+        foreach (char ch in text) if (char.IsControl(ch) || HiddenCharacters.IsHidden(ch)) { clean = false; break; }
         if (clean) return text;
-        var sb = new StringBuilder(text.Length);
-        foreach (char ch in text) sb.Append(char.IsControl(ch) ? '?' : ch);
+        var sb = new StringBuilder(text.Length + 16);
+        foreach (char ch in text)
+        {
+            if (char.IsControl(ch)) sb.Append('?');
+            else if (HiddenCharacters.IsHidden(ch)) sb.Append(HiddenCharacters.Mark(ch));
+            else sb.Append(ch);
+        }
         return sb.ToString();
     }
 }

@@ -20,6 +20,10 @@ internal static class MergeRun
         var parts = ReadParts(options.PartFolders);
         var first = parts[0].Record;
         CheckTogether(parts);
+        CheckOutsideParts(options.OutputFolder, parts);
+        // The folder is checked and locked before the inputs are read again; a refused merge leaves it as it was.
+        using var results = ResultsFolder.Open(options.OutputFolder, options.Force, ResultsKind.Screen,
+            ScreenRun.InputPaths(first.LoadOptions), console.Error);
 
         var watch = Stopwatch.StartNew();
         var loaded = PanelLoader.Load(first.LoadOptions).EnsureScreenable();
@@ -55,7 +59,7 @@ internal static class MergeRun
             ShowSampleIds = first.ShowSampleIds,
             CommandLine = SingleRunCommand(first.CommandLine, options.OutputFolder),
         };
-        var results = ResultsFolder.Prepare(options.OutputFolder, options.Force);
+        results.ClearEarlierOutputs();
         var progress = new ProgressDisplay(console, options.Quiet);
         ScreenResult result;
         try
@@ -70,6 +74,21 @@ internal static class MergeRun
         ScreenRun.WriteResults(console, runOptions, loaded, result, results, started, loadSeconds, parts.Count);
         console.Out.WriteLine($"Merged {parts.Count} parts ({plan.Units.Count} work units).");
         return ExitCode.Success;
+    }
+
+    /// <summary>The results folder must not be, or hold, one of the parts: writing it would replace what is being merged.</summary>
+    private static void CheckOutsideParts(string outputFolder, List<(string Folder, RunRecord Record)> parts)
+    {
+        string output = Path.TrimEndingDirectorySeparator(Path.GetFullPath(outputFolder));
+        foreach (var (folder, _) in parts)
+        {
+            string part = Path.TrimEndingDirectorySeparator(folder);
+            if (part == output || part.StartsWith(output + Path.DirectorySeparatorChar, StringComparison.Ordinal)
+                || output.StartsWith(part + Path.DirectorySeparatorChar, StringComparison.Ordinal))
+                throw new CommandInputException(
+                    $"--out {outputFolder} is, or overlaps, the part folder {folder} being merged; give the merged results a folder of their own.",
+                    ExitCode.OutputError);
+        }
     }
 
     private static List<(string Folder, RunRecord Record)> ReadParts(IReadOnlyList<string> folders)

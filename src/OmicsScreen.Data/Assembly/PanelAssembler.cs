@@ -92,7 +92,11 @@ internal sealed class PanelAssembler
 
     private SampleAttribute Require(string name, string role)
     {
-        if (Find(name) is { } found) return found;
+        if (Find(name) is { } found)
+        {
+            RefuseConflictingCopies(found, role);
+            return found;
+        }
         var available = new List<string>();
         if (_sheet is not null) available.AddRange(_sheet.ColumnNames);
         foreach (var column in _raw.OtherColumns)
@@ -114,6 +118,38 @@ internal sealed class PanelAssembler
         string columns = available.Count == 0 ? "no text columns" : $"the columns {Display.List(available, 12)}";
         var path = _sheet?.Path ?? _raw.Source.Path;
         return ThrowMissing(path, name, role, where, columns, hint);
+    }
+
+    /// <summary>
+    /// The outcome, cohort or subject column must say one thing: a second sheet column of the same
+    /// name, or a matrix column of that name beside the sheet's, with a different value for some
+    /// sample leaves no way to know which is right, so the load stops at the first disagreement.
+    /// Copies that agree are harmless.
+    /// </summary>
+    private void RefuseConflictingCopies(SampleAttribute used, string role)
+    {
+        if (_sheet is null) return;
+        var kept = _join.KeptSamples;
+        int first = _sheet.IndexOf(used.Name);
+        for (int c = first + 1; c < _sheet.ColumnNames.Length; c++)
+        {
+            if (!string.Equals(_sheet.ColumnNames[c], used.Name, StringComparison.Ordinal)) continue;
+            for (int i = 0; i < kept.Length; i++)
+            {
+                int row = _join.SheetRows[i];
+                string other = _sheet.Columns[c][row];
+                if (!string.Equals(used.Values[i].Trim(), other.Trim(), StringComparison.Ordinal))
+                    throw PanelInputException.At(_sheet.Path, _sheet.Lines[row], used.Name, FormattableString.Invariant(
+                        $"the {role} column '{Display.Name(used.Name)}' appears twice in the sample sheet (columns {first + 1} and {c + 1}), and they disagree for sample '{Display.Name(_raw.Matrix.SampleIds[kept[i]])}' ('{Display.Name(used.Values[i])}' against '{Display.Name(other)}')."),
+                        "Keep one of the two columns, or rename the other.");
+            }
+        }
+        if (!_raw.Annotations.TryGetValue(used.Name, out var matrixValues)) return;
+        for (int i = 0; i < kept.Length; i++)
+            if (!string.Equals(used.Values[i].Trim(), matrixValues[kept[i]].Trim(), StringComparison.Ordinal))
+                throw PanelInputException.At(_sheet.Path, _sheet.Lines[_join.SheetRows[i]], used.Name, FormattableString.Invariant(
+                    $"the {role} column '{Display.Name(used.Name)}' is both in the sample sheet and in the matrix {Path.GetFileName(_raw.Source.Path)}, and they disagree for sample '{Display.Name(_raw.Matrix.SampleIds[kept[i]])}' ('{Display.Name(used.Values[i])}' in the sheet, '{Display.Name(matrixValues[kept[i]])}' in the matrix)."),
+                    "Remove the column from one of the files, or rename one of them.");
     }
 
     private static SampleAttribute ThrowMissing(string path, string name, string role, string where, string columns,

@@ -1,3 +1,5 @@
+using System.Globalization;
+using System.Text;
 using OmicsScreen.Data.Inspection;
 using OmicsScreen.Data.Text;
 
@@ -80,6 +82,7 @@ internal sealed class SampleJoin
                 bool readAsSamplesInRows = options.Layout == PanelLayout.SamplesInRows;
                 fix = $"The sheet's ids are column names of {matrixName}, so the matrix holds one row per {(readAsSamplesInRows ? "feature" : "sample")}: load it {(readAsSamplesInRows ? "with" : "without")} --features-in-rows.";
             }
+            else if (NormalisationNote(matrixOnly, sheetOnly) is { } note) fix = note;
             throw PanelInputException.At(sheet.Path, null, sheet.ColumnNames[idColumn],
                 $"no sample id matches the matrix {matrixName}: the sheet has {Display.List(sheetIds)}; the matrix has {Display.List(matrixIds)}.",
                 fix);
@@ -90,10 +93,47 @@ internal sealed class SampleJoin
         string unmatched = Unmatched(matrixOnly, matrixName, sheetName) + Unmatched(sheetOnly, sheetName, matrixName);
         if (!options.DropUnmatchedSamples)
             throw PanelInputException.At(sheet.Path, null, sheet.ColumnNames[idColumn], $"samples do not match:{unmatched}",
-                "Fix the ids, or add --drop-unmatched to continue without them.");
+                NormalisationNote(matrixOnly, sheetOnly)
+                ?? "Fix the ids, or add --drop-unmatched to continue without them.");
         findings.Add(new InspectionFinding(FindingSeverity.Warning, "unmatched-samples-dropped",
             $"{matrixOnly.Count + sheetOnly.Count} samples were dropped because they are in only one file:{unmatched}"));
         return new SampleJoin(kept.ToArray(), rows.ToArray(), [.. matrixOnly, .. sheetOnly]);
+    }
+
+    /// <summary>
+    /// A note when unmatched ids differ only in how accented letters are encoded (Unicode NFC in one
+    /// file, NFD in the other): they print identically, so the message must say why they differ.
+    /// The program runs with invariant globalisation, which has no normalisation tables, so two
+    /// ids are taken as such a pair when one carries combining marks and, with the marks removed,
+    /// each of its letters equals the other's or stands for an accented letter there.
+    /// </summary>
+    private static string? NormalisationNote(List<string> matrixOnly, List<string> sheetOnly)
+    {
+        string? example = null;
+        int count = 0;
+        foreach (var sheetId in sheetOnly)
+            foreach (var matrixId in matrixOnly)
+                if (LookAlikeUpToAccentEncoding(sheetId, matrixId) || LookAlikeUpToAccentEncoding(matrixId, sheetId))
+                {
+                    example ??= sheetId;
+                    count++;
+                    break;
+                }
+        if (example is null) return null;
+        return FormattableString.Invariant(
+            $"{count} ids (such as '{Display.Name(example)}') look the same in both files but encode their accented letters differently (Unicode NFC in one file, NFD in the other: 'é' as one character or as 'e' plus a combining accent). Save both files with the same Unicode normalisation (NFC is the usual one).");
+    }
+
+    /// <summary>True when <paramref name="decomposed"/> has combining marks and, without them, matches <paramref name="composed"/> letter for letter up to accents.</summary>
+    private static bool LookAlikeUpToAccentEncoding(string decomposed, string composed)
+    {
+        var bases = new StringBuilder(decomposed.Length);
+        foreach (char c in decomposed)
+            if (CharUnicodeInfo.GetUnicodeCategory(c) != UnicodeCategory.NonSpacingMark) bases.Append(c);
+        if (bases.Length == decomposed.Length || bases.Length != composed.Length) return false;
+        for (int i = 0; i < composed.Length; i++)
+            if (bases[i] != composed[i] && !(char.IsAsciiLetter(bases[i]) && composed[i] > '\u007F' && char.IsLetter(composed[i]))) return false;
+        return true;
     }
 
     private static string Unmatched(List<string> ids, string inFile, string notInFile) =>

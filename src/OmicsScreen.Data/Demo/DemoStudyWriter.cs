@@ -16,6 +16,17 @@ public static class DemoStudyWriter
     public const string TruthFileName = "marrowfen_truth.tsv";
     public const string ReadmeFileName = "README.md";
 
+    /// <summary>The file names written, each with the text its every version begins with (how an earlier demo file is recognised).</summary>
+    public static IReadOnlyList<(string FileName, string Start)> FileStarts { get; } =
+    [
+        (PanelFileName, "sample_id,"),
+        (SampleSheetFileName, $"sample_id\t{DemoStudy.OutcomeColumn}\t{DemoStudy.CentreColumn}\t"),
+        (TruthFileName, "feature\trole\t"),
+        (ReadmeFileName, ReadmeHeading),
+    ];
+
+    private const string ReadmeHeading = "# Demo panel: the Marrowfen plasma study (invented)";
+
     /// <summary>Writes every file atomically and returns their paths.</summary>
     public static DemoStudyFiles Write(DemoStudy study, string folder)
     {
@@ -100,7 +111,7 @@ public static class DemoStudyWriter
         var artefact = study.Truth.Where(t => t.Role == DemoFeatureRole.BatchArtefact).Select(t => t.Feature).ToArray();
         var centres = string.Join(", ", o.Centres.Select(c => $"{c.Centre} ({c.Cases} cases, {c.Controls} controls)"));
         return string.Create(CultureInfo.InvariantCulture, $"""
-            # Demo panel: the Marrowfen plasma study (invented)
+            {ReadmeHeading}
 
             Everything here is simulated by `omicsscreen demo` (seed {o.Seed}). Marrowfen syndrome is a
             fictional condition; the centres, analytes (`AN0001` ...) and samples (`mf-n001` ...) are

@@ -26,6 +26,7 @@ internal static class PanelInspector
         for (int c = 0; c < classes.Length; c++) classes[c] = new LevelCount(outcome.ClassNames[c], outcome.ClassCounts[c]);
 
         AddClassFindings(outcome, options, findings);
+        AddSubjectFinding(panel.Subject, findings);
         AddFeatureFindings(matrix, scan, findings);
         AddOrientationFinding(matrix, options.Layout, findings);
         AddCaseOnlyDifferenceFinding(matrix.SampleIds, "sample ids", findings);
@@ -61,7 +62,10 @@ internal static class PanelInspector
     }
 
     private sealed record FeatureScan(int[] MissingPerFeature, long MissingCells, long BelowDetectionCells,
-        int BelowDetectionFeatures, List<string> Constant, List<string> AllMissing);
+        int BelowDetectionFeatures, List<string> Constant, List<string> AllMissing, int ConstantBeyondFloatPrecision);
+
+    /// <summary>2^24: above it a 32-bit float no longer holds every integer, so distinct large integers can read as one value.</summary>
+    private const float ExactIntegerLimit = 16_777_216f;
 
     private static FeatureScan ScanFeatures(FeatureMatrix matrix)
     {
@@ -70,6 +74,7 @@ internal static class PanelInspector
         int belowFeatures = 0;
         var constant = new List<string>();
         var allMissing = new List<string>();
+        int beyondPrecision = 0;
         for (int f = 0; f < matrix.FeatureCount; f++)
         {
             var values = matrix.Column(f);
@@ -98,9 +103,13 @@ internal static class PanelInspector
             belowCells += below;
             if (below > 0) belowFeatures++;
             if (!seen) allMissing.Add(matrix.FeatureNames[f]);
-            else if (!varies) constant.Add(matrix.FeatureNames[f]);
+            else if (!varies)
+            {
+                constant.Add(matrix.FeatureNames[f]);
+                if (Math.Abs(firstValue) >= ExactIntegerLimit) beyondPrecision++;
+            }
         }
-        return new FeatureScan(missingPerFeature, missingCells, belowCells, belowFeatures, constant, allMissing);
+        return new FeatureScan(missingPerFeature, missingCells, belowCells, belowFeatures, constant, allMissing, beyondPrecision);
     }
 
     /// <summary>
@@ -120,6 +129,17 @@ internal static class PanelInspector
     }
 
     private static bool SameValue(float a, float b) => a == b || (float.IsNaN(a) && float.IsNaN(b));
+
+    /// <summary>A screen draws complementary halves of the subjects; a single subject leaves one half empty.</summary>
+    private static void AddSubjectFinding(SampleGrouping? subject, List<InspectionFinding> findings)
+    {
+        if (subject is null) return;
+        var seen = new HashSet<int>();
+        foreach (int level in subject.SampleLevels) seen.Add(level);
+        if (seen.Count < 2)
+            findings.Add(new InspectionFinding(FindingSeverity.Error, "single-subject", Invariant(
+                $"Every sample belongs to one subject of '{subject.ColumnName}', so resampling by subject leaves nothing to compare; a screen needs at least two subjects. Check that the subject column names the person each sample comes from, or leave out --subject.")));
+    }
 
     private static void AddClassFindings(ClassOutcome outcome, PanelLoadOptions options, List<InspectionFinding> findings)
     {
@@ -156,15 +176,17 @@ internal static class PanelInspector
     private static void AddFeatureFindings(FeatureMatrix matrix, FeatureScan scan, List<InspectionFinding> findings)
     {
         int uninformative = scan.Constant.Count + scan.AllMissing.Count;
+        string precision = scan.ConstantBeyondFloatPrecision == 0 ? "" : Invariant(
+            $" {scan.ConstantBeyondFloatPrecision} of them hold values of 16,777,216 or more, where measurements are kept with about 7 significant digits (32-bit floats), so distinct large numbers such as ids or raw counts can read as one value: rescale them (log-transform, or divide) before loading, or leave identifiers out of the matrix.");
         if (uninformative == matrix.FeatureCount)
         {
             findings.Add(new InspectionFinding(FindingSeverity.Error, "all-features-constant", Invariant(
-                $"All {matrix.FeatureCount} features are constant or entirely missing, so there is nothing to screen. Check that this is the right file and that values were not lost in the export (for example text turned into one value).")));
+                $"All {matrix.FeatureCount} features are constant or entirely missing, so there is nothing to screen. Check that this is the right file and that values were not lost in the export (for example text turned into one value).{precision}")));
             return;
         }
         if (scan.Constant.Count > 0)
             findings.Add(new InspectionFinding(FindingSeverity.Warning, "constant-features", Invariant(
-                $"{scan.Constant.Count} features hold a single value in every sample ({Display.List(scan.Constant)}); they cannot separate classes and will never be selected. Remove them or check their export.")));
+                $"{scan.Constant.Count} features hold a single value in every sample ({Display.List(scan.Constant)}); they cannot separate classes and will never be selected. Remove them or check their export.{precision}")));
         if (scan.AllMissing.Count > 0)
             findings.Add(new InspectionFinding(FindingSeverity.Warning, "all-missing-features", Invariant(
                 $"{scan.AllMissing.Count} features are missing in every sample ({Display.List(scan.AllMissing)}). Remove them or check their export.")));

@@ -104,6 +104,17 @@ public static class LockedPanelFile
             throw PanelInputException.At(path, null, null, "is not a locked panel file: it is not JSON.",
                 "Give the locked_panel.json of a screen's results folder.", e);
         }
+        try
+        {
+            // A name given twice would otherwise surface as a crash when the object is first read.
+            using var strict = JsonDocument.Parse(text, new JsonDocumentOptions { MaxDepth = 16, AllowDuplicateProperties = false });
+        }
+        catch (JsonException e)
+        {
+            throw PanelInputException.At(path, e.LineNumber + 1, null,
+                "is not a valid locked panel file: a property name appears twice in one object, so which value holds is ambiguous (the file was edited or written by another program).",
+                "Lock the panel again from the discovery results instead of editing the file.", e);
+        }
         if (root is not JsonObject envelope || !TryGetString(envelope, "format", out var format))
             throw PanelInputException.At(path, null, null, $"is not a locked panel file: it has no \"format\": \"{FormatName}\" header.",
                 "Give the locked_panel.json of a screen's results folder.");

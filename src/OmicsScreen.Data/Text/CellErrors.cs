@@ -18,6 +18,8 @@ internal static class CellErrors
             fix = textColumnFix;
         else if (text.Contains('\uFFFD'))
             fix = "The cell holds bytes that are not valid UTF-8 (the file is probably Latin-1 or Windows-1252): save the file again as UTF-8.";
+        else if (LooksLikeThousands(text))
+            fix = $"'{shown}' may hold a thousands separator or a decimal comma, which cannot be told apart here: write it without the comma ({Without(text, ',')}) if it is a whole number, or with a point ({text.ToString().Replace(',', '.')}) if it is a decimal, and load again.";
         else if (text.Contains(',') && !text.Contains('.'))
             fix = "Write decimals with a point (1.5, not 1,5) and load again.";
         else if (text.Contains(',') && text.Contains('.'))
@@ -33,4 +35,21 @@ internal static class CellErrors
         var trimmed = text.Trim();
         return trimmed.Length > 0 && (char.IsAsciiDigit(trimmed[0]) || trimmed[0] is '-' or '+' or '.') ? 0 : double.NaN;
     }
+
+    /// <summary>Digits grouped by commas in threes after one to three leading digits ("1,234", "-12,345,678"): thousands or decimals alike.</summary>
+    private static bool LooksLikeThousands(ReadOnlySpan<char> text)
+    {
+        var digits = text.Trim();
+        if (digits.Length > 0 && digits[0] is '+' or '-') digits = digits[1..];
+        int comma = digits.IndexOf(',');
+        if (comma is < 1 or > 3) return false;
+        for (int i = 0; i < comma; i++) if (!char.IsAsciiDigit(digits[i])) return false;
+        var rest = digits[comma..];
+        if (rest.Length % 4 != 0) return false;
+        for (int i = 0; i < rest.Length; i++)
+            if (i % 4 == 0 ? rest[i] != ',' : !char.IsAsciiDigit(rest[i])) return false;
+        return true;
+    }
+
+    private static string Without(ReadOnlySpan<char> text, char removed) => text.ToString().Replace(removed.ToString(), "", StringComparison.Ordinal);
 }

@@ -21,6 +21,20 @@ internal static class DelimitedMatrixReader
 
     public static RawMatrix Read(string path, PanelLoadOptions options, CancellationToken ct)
     {
+        try
+        {
+            return ReadRows(path, options, ct);
+        }
+        catch (Exception e) when (LongRows.IsRowTooLong(e))
+        {
+            if (options.Layout != PanelLayout.SamplesInRows) throw LongRows.FeaturesInRowsError(path, e);
+            // Sep holds a row in a buffer of at most 16 Mi characters; a longer one is read again row by row.
+            return ReadLongSamplesInRows(path, options, ct);
+        }
+    }
+
+    private static RawMatrix ReadRows(string path, PanelLoadOptions options, CancellationToken ct)
+    {
         char delimiter = DelimiterDetector.Detect(path);
         using var text = DelimiterDetector.OpenText(path);
         using var reader = Open(text, delimiter);
@@ -36,9 +50,18 @@ internal static class DelimitedMatrixReader
     /// <summary>The header's cells, trimmed, without reading any data row.</summary>
     public static string[] ReadHeaderCells(string path)
     {
-        using var text = DelimiterDetector.OpenText(path);
-        using var reader = Open(text, DelimiterDetector.Detect(path));
-        return ReadHeader(reader, path);
+        try
+        {
+            using var text = DelimiterDetector.OpenText(path);
+            using var reader = Open(text, DelimiterDetector.Detect(path));
+            return ReadHeader(reader, path);
+        }
+        catch (Exception e) when (LongRows.IsRowTooLong(e))
+        {
+            using var text = DelimiterDetector.OpenText(path);
+            var reader = new TextRowReader(text, DelimiterDetector.Detect(path));
+            return ReadLongHeader(reader, new TextRow(), path);
+        }
     }
 
     private static SepReader Open(TextReader text, char delimiter) =>
@@ -53,14 +76,45 @@ internal static class DelimitedMatrixReader
         var roles = SampleColumnRoles.Resolve(header, options, path, isTableRow: false);
         var attributeNames = options.SampleAttributeNames();
         var columns = new FeatureColumns(roles.FeatureColumns.Length, rowBound);
+        var rows = reader.ParallelEnumerate(row => ParseSampleRow(row, header.Length, slots, roles, attributeNames, columns),
+            Environment.ProcessorCount);
+        return CollectSamples(rows, header, roles, attributeNames, columns, source, options, ct);
+    }
 
+    /// <summary>
+    /// Samples in rows when a row is longer than Sep's buffer: the same checks and storage, one
+    /// row at a time on this thread (a file of such rows has few of them, each of millions of cells).
+    /// </summary>
+    internal static RawMatrix ReadLongSamplesInRows(string path, PanelLoadOptions options, CancellationToken ct)
+    {
+        char delimiter = DelimiterDetector.Detect(path);
+        using var text = DelimiterDetector.OpenText(path);
+        var reader = new TextRowReader(text, delimiter);
+        var row = new TextRow();
+        var source = new MatrixSource(path, MatrixFileFormat.DelimitedText, delimiter, options.Layout);
+        var header = ReadLongHeader(reader, row, path);
+        int rowBound = Math.Max(1, LineCounter.UpperBoundOfLines(path) - 1);
+        var slots = new SlotCounter();
+        var roles = SampleColumnRoles.Resolve(header, options, path, isTableRow: false);
+        var attributeNames = options.SampleAttributeNames();
+        var columns = new FeatureColumns(roles.FeatureColumns.Length, rowBound);
+        IEnumerable<ParsedRow> Rows()
+        {
+            while (reader.Next(row)) yield return ParseSampleRow(row, header.Length, slots, roles, attributeNames, columns);
+        }
+        return CollectSamples(Rows(), header, roles, attributeNames, columns, source, options, ct);
+    }
+
+    /// <summary>Checks the parsed rows in file order, then gathers the samples' slots into the matrix.</summary>
+    private static RawMatrix CollectSamples(IEnumerable<ParsedRow> rows, string[] header, SampleColumnRoles roles,
+        HashSet<string> attributeNames, FeatureColumns columns, MatrixSource source, PanelLoadOptions options, CancellationToken ct)
+    {
+        string path = source.Path;
         var attributes = new List<string>[roles.AttributeColumns.Length];
         for (int a = 0; a < attributes.Length; a++) attributes[a] = [];
         var sampleIds = new List<string>();
         var sampleLines = new List<long>();
         var sampleSlots = new List<int>();
-        var rows = reader.ParallelEnumerate(row => ParseSampleRow(row, header.Length, slots, roles, attributeNames, columns),
-            Environment.ProcessorCount);
         foreach (var row in rows)
         {
             if (row.IsBlank) continue;
@@ -124,6 +178,49 @@ internal static class DelimitedMatrixReader
             }
         }
         return parsed;
+    }
+
+    /// <summary>
+    /// <see cref="ParseSampleRow(SepReader.Row, int, SlotCounter, SampleColumnRoles, HashSet{string}, FeatureColumns)"/>
+    /// for a row of <see cref="TextRowReader"/>: the same steps, cell for cell.
+    /// </summary>
+    private static ParsedRow ParseSampleRow(TextRow row, int fieldCount, SlotCounter slots, SampleColumnRoles roles,
+        HashSet<string> attributeNames, FeatureColumns columns)
+    {
+        if (row.IsBlank) return new ParsedRow { IsBlank = true };
+        int slot = slots.Next();
+        var parsed = new ParsedRow { Line = row.FirstLine, FieldCount = row.FieldCount, Slot = slot, BeyondCapacity = slot >= columns.SampleCapacity };
+        if (!parsed.CanHoldCells(fieldCount)) return parsed;
+        parsed.Label = row[roles.IdColumn].Trim().ToString();
+        var texts = new string[roles.AttributeColumns.Length];
+        for (int a = 0; a < texts.Length; a++) texts[a] = row[roles.AttributeColumns[a]].Trim().ToString();
+        parsed.Texts = texts;
+        if (attributeNames.Contains(parsed.Label)) return parsed;
+        int[] featureColumns = roles.FeatureColumns;
+        for (int f = 0; f < featureColumns.Length; f++)
+        {
+            var cell = row[featureColumns[f]];
+            var kind = CellText.Classify(cell, out float value);
+            if (!columns.Store(f, slot, kind, value))
+            {
+                parsed.Fail(f, cell, kind);
+                break;
+            }
+        }
+        return parsed;
+    }
+
+    private static string[] ReadLongHeader(TextRowReader reader, TextRow row, string path)
+    {
+        while (reader.Next(row))
+        {
+            if (row.IsBlank || DelimiterDetector.IsCommentAboveHeader(row[0])) continue;
+            var header = new string[row.FieldCount];
+            for (int c = 0; c < header.Length; c++) header[c] = row[c].Trim().ToString();
+            return header;
+        }
+        throw PanelInputException.At(path, null, null, "holds no text rows (it is blank).",
+            "Export the matrix again; a matrix file needs a header row and at least one data row.");
     }
 
     private static RawMatrix ReadFeaturesInRows(SepReader reader, string[] header, SlotCounter slots, int rowBound,

@@ -11,8 +11,9 @@ namespace OmicsScreen.Reporting.Html;
 /// Escapes the five characters with markup meaning (&amp; &lt; &gt; " ') as in the OWASP XSS
 /// prevention guidance, and replaces characters XML 1.0 forbids (C0 controls other than tab, line
 /// feed and carriage return; U+FFFE, U+FFFF; unpaired surrogates) with U+FFFD, so the report stays
-/// well-formed XHTML and an SVG chart stays parseable XML. Everything else, including non-ASCII
-/// letters, is kept as is: the document is UTF-8.
+/// well-formed XHTML and an SVG chart stays parseable XML. Hidden format characters (bidirectional
+/// overrides, zero-width spaces; <see cref="HiddenCharacters"/>) are shown as a visible &lt;U+XXXX&gt;.
+/// Everything else, including non-ASCII letters, is kept as is: the document is UTF-8.
 /// </remarks>
 public static class MarkupText
 {
@@ -47,6 +48,10 @@ public static class MarkupText
                         builder.Append(c).Append(text[i + 1]);
                         i++;
                     }
+                    else if (HiddenCharacters.IsHidden(c))
+                    {
+                        builder.Append("&lt;U+").Append(((int)c).ToString("X4", System.Globalization.CultureInfo.InvariantCulture)).Append("&gt;");
+                    }
                     else
                     {
                         builder.Append(IsXmlCharacter(c) ? c : ReplacementCharacter);
@@ -60,7 +65,7 @@ public static class MarkupText
     {
         foreach (char c in text)
         {
-            if (c is '&' or '<' or '>' or '"' or '\'' || char.IsSurrogate(c) || !IsXmlCharacter(c)) return true;
+            if (c is '&' or '<' or '>' or '"' or '\'' || char.IsSurrogate(c) || !IsXmlCharacter(c) || HiddenCharacters.IsHidden(c)) return true;
         }
         return false;
     }

@@ -12,8 +12,11 @@ namespace OmicsScreen.Reporting.Tables;
 /// full-width forms (U+FF1D, U+FF0B, U+FF0D, U+FF20) are treated the same because some spreadsheet
 /// programs normalise them to the ASCII operators. Leading spaces do not hide a trigger: the check
 /// looks past them. Tabs, line breaks and every other control or line/paragraph separator character
-/// become a single space, so one name is always one cell. Apply this to text only, never to
-/// numbers: "-0.5" written by a number column is data, not a formula.
+/// become a single space, so one name is always one cell. A name a table reader would misread is
+/// prefixed the same way: one that reads as a missing value (NA, NaN, N/A, null, the forms the
+/// loader treats as missing) and one starting with a double quote, which readers take for the
+/// start of a quoted field. Apply this to text only, never to numbers: "-0.5" written by a number
+/// column is data, not a formula, and "NA" written by a number column is a missing number.
 /// </remarks>
 public static class SpreadsheetSafeText
 {
@@ -24,7 +27,7 @@ public static class SpreadsheetSafeText
     public static string Sanitise(string? text)
     {
         if (string.IsNullOrEmpty(text)) return string.Empty;
-        bool needsPrefix = StartsLikeFormula(text);
+        bool needsPrefix = StartsLikeFormula(text) || ReadsAsMissing(text) || text[0] == '"';
         bool needsReplacement = false;
         foreach (char c in text)
         {
@@ -48,6 +51,18 @@ public static class SpreadsheetSafeText
         while (first < text.Length && (char.IsWhiteSpace(text[first]) || char.IsControl(text[first]))) first++;
         return first < text.Length && IsFormulaTrigger(text[first]);
     }
+
+    /// <summary>True when a table reader would take the cell for a missing value.</summary>
+    public static bool ReadsAsMissing(string text)
+    {
+        var trimmed = text.AsSpan().Trim();
+        foreach (var token in MissingTokens)
+            if (trimmed.Equals(token, StringComparison.OrdinalIgnoreCase)) return true;
+        return false;
+    }
+
+    // The loader's missing forms (README, input formats) and R's and pandas' defaults among them.
+    private static readonly string[] MissingTokens = ["NA", "NaN", "N/A", "null", "NULL", "#N/A", "None", "nan", "-nan", "<NA>"];
 
     private static bool IsFormulaTrigger(char c) => c is '=' or '+' or '-' or '@'
         or '\uFF1D' or '\uFF0B' or '\uFF0D' or '\uFF20';

@@ -18,8 +18,25 @@ public static class LockedPanelScorer
         ArgumentNullException.ThrowIfNull(newMatrix);
         var columns = MapMarkers(panel, newMatrix);
         var matrix = newMatrix.SelectFeatures(columns);
-        int sampleCount = matrix.SampleCount, classCount = panel.ClassCount;
+        var (probabilities, predicted) = Vote(panel, matrix);
 
+        var warnings = new List<ScaleWarning>();
+        for (int m = 0; m < panel.MarkerCount; m++)
+        {
+            var scale = MarkerScale.Describe(matrix, m);
+            var warning = scale.MeasuredCount == 0
+                ? UnmeasuredWarning(panel, matrix, m, scale, probabilities, predicted)
+                : ScaleCheck(panel.MarkerNames[m], panel.Markers[m], scale);
+            if (warning is not null) warnings.Add(warning);
+        }
+        return new LockedPanelScores(matrix.SampleIds, panel.ClassNames, panel.PositiveClass, panel.Threshold,
+            probabilities, predicted, warnings);
+    }
+
+    /// <summary>Fraction of trees voting for each class (sample-major) and the class called for each sample.</summary>
+    private static (double[] Probabilities, int[] Predicted) Vote(LockedPanel panel, FeatureMatrix matrix)
+    {
+        int sampleCount = matrix.SampleCount, classCount = panel.ClassCount;
         var votes = new int[sampleCount * classCount];
         foreach (var tree in panel.Trees)
             for (int s = 0; s < sampleCount; s++) votes[s * classCount + tree.PredictClass(matrix, s)]++;
@@ -30,13 +47,50 @@ public static class LockedPanelScorer
         var predicted = new int[sampleCount];
         for (int s = 0; s < sampleCount; s++)
             predicted[s] = Call(panel, probabilities.AsSpan(s * classCount, classCount));
+        return (probabilities, predicted);
+    }
 
-        var warnings = new List<ScaleWarning>();
-        for (int m = 0; m < panel.MarkerCount; m++)
-            if (ScaleCheck(panel.MarkerNames[m], panel.Markers[m], MarkerScale.Describe(matrix, m)) is { } warning)
-                warnings.Add(warning);
-        return new LockedPanelScores(matrix.SampleIds, panel.ClassNames, panel.PositiveClass, panel.Threshold,
-            probabilities, predicted, warnings);
+    /// <summary>
+    /// A marker measured in no sample of the new cohort (every cell missing or below detection)
+    /// sends every sample down the trees' missing-value branches, so the scores rest on the other
+    /// markers alone. Its effect is measured by scoring again with the marker set to its discovery
+    /// median in every sample: the calls that change and the mean shift of the positive class's score.
+    /// </summary>
+    private static ScaleWarning? UnmeasuredWarning(LockedPanel panel, FeatureMatrix matrix, int marker, MarkerScale current,
+        double[] probabilities, int[] predicted)
+    {
+        var discovery = panel.Markers[marker];
+        if (discovery.MeasuredCount == 0 || double.IsNaN(discovery.Median)) return null;
+        var columns = new float[matrix.FeatureCount][];
+        var states = new CellState[]?[matrix.FeatureCount];
+        for (int f = 0; f < matrix.FeatureCount; f++)
+        {
+            columns[f] = matrix.Column(f).ToArray();
+            states[f] = matrix.HasUnmeasuredCells(f) ? matrix.States(f).ToArray() : null;
+        }
+        Array.Fill(columns[marker], (float)discovery.Median);
+        states[marker] = null;
+        var atMedian = new FeatureMatrix(matrix.FeatureNames, matrix.SampleIds, columns, states);
+        var (imputedProbabilities, imputedCalls) = Vote(panel, atMedian);
+
+        int changed = 0;
+        double shift = 0;
+        int classCount = panel.ClassCount, sampleCount = matrix.SampleCount;
+        for (int s = 0; s < sampleCount; s++)
+        {
+            if (imputedCalls[s] != predicted[s]) changed++;
+            int i = s * classCount + panel.PositiveClass;
+            shift += Math.Abs(imputedProbabilities[i] - probabilities[i]);
+        }
+        // Shares are counts over the sample count, so "none of the other kind" is the exact test.
+        string state = current.MissingShare == 0 ? "below the detection limit in every sample"
+            : current.BelowDetectionShare == 0 ? "missing in every sample"
+            : FormattableString.Invariant($"unmeasured in every sample ({current.MissingShare:P0} missing, {current.BelowDetectionShare:P0} below detection)");
+        var message = FormattableString.Invariant(
+            $"{panel.MarkerNames[marker]} is {state} of the new cohort (discovery measured it in {1 - discovery.MissingShare - discovery.BelowDetectionShare:P0} of samples), so every sample takes the trees' missing-value branches for it and the scores rest on the other markers only. ")
+            + FormattableString.Invariant(
+            $"Set to its discovery median instead, {changed} of {sampleCount} calls would change and the {panel.ClassNames[panel.PositiveClass]} score would move by {(sampleCount > 0 ? shift / sampleCount : 0):0.000} on average. Measure it, or do not trust these scores.");
+        return new ScaleWarning(panel.MarkerNames[marker], message) { Unmeasured = true };
     }
 
     /// <summary>

@@ -147,6 +147,37 @@ internal static class HostileInputCorpus
         yield return new("sample ids differing only by case are distinct", "m.csv", Text(Valid.Replace("s2,", "S1,")), Sheet.Replace("s2,", "S1,"),
             ExitCode.Success, ["samples"]);
 
+        // Issue 13, finding 2: a row past the fast text reader's 16 Mi-character buffer was an internal error.
+        yield return new("2 a samples-in-rows row longer than 16 Mi characters loads", "m.csv", RowPastTheBuffer, Sheet,
+            ExitCode.Success, ["samples"], ["--annotation", "note"]);
+        yield return new("2 a features-in-rows row longer than 16 Mi characters", "m.csv", FeatureRowsPastTheBuffer, Sheet,
+            ExitCode.InputError, ["m.csv", "longer than the 16 Mi characters", "one row per sample", "Parquet or Arrow"], ["--features-in-rows"]);
+
+        // Issue 13, finding 11: an outcome given twice, used without a word about the other copy.
+        const string WithStatus = "sample_id,status,f1,f2\ns1,case,1,2\ns2,case,3,4\ns3,case,5,6\ns4,control,7,8\ns5,control,9,10\ns6,control,11,13\n";
+        yield return new("11 the outcome in both the matrix and the sheet, disagreeing", "m.csv", Text(WithStatus), Sheet.Replace("s4,control", "s4,case"),
+            ExitCode.InputError, ["s.csv", "line 5", "'status'", "both in the sample sheet and in the matrix", "'s4'", "Remove the column from one of the files"]);
+        yield return new("11 the outcome twice in the sheet, disagreeing", "m.csv", Text(Valid),
+            "sample_id,status,status\ns1,case,case\ns2,case,case\ns3,case,control\ns4,control,control\ns5,control,control\ns6,control,control\n",
+            ExitCode.InputError, ["s.csv", "line 4", "appears twice", "columns 2 and 3", "Keep one of the two columns"]);
+        yield return new("11 the outcome in both the matrix and the sheet, agreeing, loads", "m.csv", Text(WithStatus), Sheet,
+            ExitCode.Success, ["samples"]);
+
+        // Issue 13, finding 14: messages that named the wrong cause.
+        yield return new("14 sample ids composed (NFC) in the matrix and decomposed (NFD) in the sheet", "m.csv",
+            Text(Valid.Replace("s1,", "s\u00e91,").Replace("s2,", "s\u00e92,")),
+            Sheet.Replace("s1,", "se\u03011,").Replace("s2,", "se\u03012,"),
+            ExitCode.InputError, ["s.csv", "encode their accented letters differently", "NFC", "NFD", "same Unicode normalisation"]);
+        yield return new("14 a TSV whose feature names hold commas is read as tab-separated", "m.tsv",
+            Text("sample_id\tIL-6, serum\tTNF, serum, plasma\ns1\t1\t2\ns2\t3\t4\ns3\t5\t6\ns4\t7\t8\ns5\t9\t10\ns6\t11\t13\n"), Sheet,
+            ExitCode.Success, ["samples", "tab"]);
+        yield return new("14 distinct integers near 9.2e18 are explained, not only called constant", "m.csv",
+            Text(Header + "s1,1,9223372036854775001\ns2,3,9223372036854775002\ns3,5,9223372036854775003\ns4,7,9223372036854775004\ns5,9,9223372036854775005\ns6,11,9223372036854775006\n"), Sheet,
+            ExitCode.Success, ["constant-features", "'f2'", "16,777,216 or more", "7 significant digits", "rescale them"]);
+        yield return new("14 1,234 in a TSV may be thousands or a decimal comma", "m.tsv",
+            Text("sample_id\tf1\tf2\ns1\t1\t2\ns2\t1,234\t4\ns3\t5\t6\ns4\t7\t8\ns5\t9\t10\ns6\t11\t13\n"), Sheet,
+            ExitCode.InputError, ["m.tsv", "line 3", "thousands separator or a decimal comma", "(1234)", "(1.234)"]);
+
         // Binary formats and paths.
         yield return new("a 0-byte Parquet file", "m.parquet", Bytes([]), Sheet,
             ExitCode.InputError, ["m.parquet", "empty", "export the matrix again"]);
@@ -181,6 +212,22 @@ internal static class HostileInputCorpus
                 text.Append(',').Append(sample == 6 && feature == featureCount ? "broken" : ((sample * 7 + feature) % 13).ToString(System.Globalization.CultureInfo.InvariantCulture));
             text.Append('\n');
         }
+        return Encoding.UTF8.GetBytes(text.ToString());
+    }
+
+    /// <summary>The valid panel with a text column whose second cell holds 17 million characters.</summary>
+    private static byte[] RowPastTheBuffer(string folder) =>
+        Encoding.UTF8.GetBytes(Valid.Replace("sample_id,", "sample_id,note,").Replace("s1,", "s1,n,").Replace("s2,", "s2," + new string('x', 17_000_000) + ",")
+            .Replace("s3,", "s3,n,").Replace("s4,", "s4,n,").Replace("s5,", "s5,n,").Replace("s6,", "s6,n,"));
+
+    /// <summary>A features-in-rows header of 1.9 million sample ids (about 17 million characters).</summary>
+    private static byte[] FeatureRowsPastTheBuffer(string folder)
+    {
+        const int sampleCount = 1_900_000;
+        var text = new StringBuilder(sampleCount * 9 + 64);
+        text.Append("feature");
+        for (int sample = 0; sample < sampleCount; sample++) text.Append(",s").Append(sample.ToString("D7", System.Globalization.CultureInfo.InvariantCulture));
+        text.Append("\nf1,1\n");
         return Encoding.UTF8.GetBytes(text.ToString());
     }
 

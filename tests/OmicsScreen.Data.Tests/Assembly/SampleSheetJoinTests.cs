@@ -74,10 +74,20 @@ public sealed class SampleSheetJoinTests : IDisposable
         Assert.Equal([2, 0, 1, 0], loaded.Panel.Outcome.SampleClasses.ToArray());
     }
 
+    // Issue 13, finding 11: the sheet's column used to win silently over a disagreeing matrix column.
     [Fact]
-    public void Sheet_values_win_over_a_matrix_column_of_the_same_name()
+    public void A_matrix_column_disagreeing_with_the_sheet_column_of_the_same_name_is_refused()
     {
-        var loaded = PanelLoader.Load(Options("id,group,a\ns1,old,1\ns2,old,2\n", "id\tgroup\ns1\tx\ns2\ty\n"));
+        var error = Assert.Throws<PanelInputException>(() =>
+            PanelLoader.Load(Options("id,group,a\ns1,old,1\ns2,old,2\n", "id\tgroup\ns1\tx\ns2\ty\n")));
+        Assert.Contains("sheet.tsv, line 2", error.Message);
+        Assert.Contains("both in the sample sheet and in the matrix", error.Message);
+    }
+
+    [Fact]
+    public void A_matrix_column_agreeing_with_the_sheet_column_of_the_same_name_loads()
+    {
+        var loaded = PanelLoader.Load(Options("id,group,a\ns1,x,1\ns2,y,2\n", "id\tgroup\ns1\tx\ns2\ty\n"));
         Assert.Equal(["x", "y"], loaded.Panel.Outcome.ClassNames);
     }
 

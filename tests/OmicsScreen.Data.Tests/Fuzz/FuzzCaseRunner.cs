@@ -47,6 +47,11 @@ internal static class FuzzCaseRunner
                 return $"sizing found {size.SampleCount} x {size.FeatureCount}, fewer than the {panel.SampleCount} x {panel.FeatureCount} loaded";
             return FuzzVerdict.OfPanel(panel, fuzzCase);
         }
+        // A panel that loads but cannot be screened (one class left, every feature constant) is a clean refusal too.
+        if (error is PanelNotScreenableException notScreenable)
+            return notScreenable.Message.Contains(Path.GetFileName(matrixPath), StringComparison.Ordinal) && !notScreenable.Message.Contains('\n')
+                ? null
+                : $"refused as unscreenable with a message that does not name the matrix on one line: {notScreenable.Message}";
         return error is PanelInputException refusal
             ? FuzzVerdict.OfRefusal(refusal, matrixPath, sheetPath)
             : $"threw {error.GetType().FullName}: {error.Message}{Environment.NewLine}{error.StackTrace}";

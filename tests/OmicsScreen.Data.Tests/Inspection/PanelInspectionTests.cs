@@ -110,6 +110,6 @@ public sealed class PanelInspectionTests : IDisposable
         });
         Assert.False(loaded.Inspection.CanScreen);
         Assert.Equal(FindingSeverity.Error, Assert.Single(loaded.Inspection.Findings, f => f.Code == "single-class").Severity);
-        Assert.Throws<PanelInputException>(() => loaded.EnsureScreenable());
+        Assert.Throws<PanelNotScreenableException>(() => loaded.EnsureScreenable());
     }
 }

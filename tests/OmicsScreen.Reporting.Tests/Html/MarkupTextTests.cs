@@ -29,4 +29,12 @@ public class MarkupTextTests
         var document = Markup.Parse("<p>" + encoded + "</p>");
         Assert.Equal("a\uFFFDb\uFFFDc\uFFFDd\te", document.Root!.Value);
     }
+
+    // Unicode Technical Report 36 (security considerations): bidirectional overrides such as U+202E
+    // reorder what is shown, and zero-width characters hide a difference between two names.
+    [Fact]
+    public void Bidirectional_and_zero_width_characters_are_shown_as_a_visible_mark()
+    {
+        Assert.Equal("ab&lt;U+202E&gt;cd x&lt;U+200B&gt;y", MarkupText.Encode("ab\u202Ecd x\u200By"));
+    }
 }
