@@ -34,6 +34,7 @@ public static class CohortTables
             TsvColumn<MarkerHeterogeneity>.Number("i2", m => m.WithinCohort?.I2 ?? double.NaN, Four),
             TsvColumn<MarkerHeterogeneity>.Number("tau2", m => m.WithinCohort?.Tau2 ?? double.NaN, NumberFormat.Significant(4)),
             TsvColumn<MarkerHeterogeneity>.Number("heterogeneity_p", m => m.WithinCohort?.QPValue ?? double.NaN, NumberFormat.Significant(4)),
+            TsvColumn<MarkerHeterogeneity>.Number("heterogeneity_q", m => m.HeterogeneityQValue, NumberFormat.Significant(4)),
             TsvColumn<MarkerHeterogeneity>.Number("cohort_separation_auc", m => m.CohortSeparation, Four),
             TsvColumn<MarkerHeterogeneity>.Text("most_separated_cohort", m => m.SeparatedCohort),
             TsvColumn<MarkerHeterogeneity>.Integer("cohort_importance_rank", m => m.CohortImportanceRank),

@@ -66,6 +66,8 @@ public static class ScreenTables
             TsvColumn<FeatureSummary>.Number("gini_decrease_sd", f => f.ImpuritySd, Importance),
             TsvColumn<FeatureSummary>.Number("null_p", f => f.NullP, Probability),
             TsvColumn<FeatureSummary>.Number("outcome_permutation_p", f => f.OutcomePermutationP, Probability),
+            TsvColumn<FeatureSummary>.Number("rank_test_p", f => f.RankTestP, Probability),
+            TsvColumn<FeatureSummary>.Number("combined_p", f => f.CombinedP, Probability),
             TsvColumn<FeatureSummary>.Number("p_value", f => f.PValue, Probability),
             TsvColumn<FeatureSummary>.Number("q_value", f => f.QValue, Probability),
             TsvColumn<FeatureSummary>.Integer("univariate_rank", f => result.UnivariateRanks[f.FeatureIndex]),
