@@ -11,6 +11,22 @@ internal static class SampleSheetReader
 {
     public static SampleSheet Read(string path)
     {
+        try
+        {
+            return ReadRows(path);
+        }
+        catch (Exception e) when (LongRows.IsRowTooLong(e))
+        {
+            // A sample sheet has a handful of columns, so a row past the reader's buffer is all but
+            // always a quote that is never closed, which turns the rest of the file into one row.
+            throw PanelInputException.At(path, null, null,
+                FormattableString.Invariant($"has a row longer than the {LongRows.MaxRowChars / (1024 * 1024)} Mi characters a sample sheet row may hold, most likely a quote that is never closed."),
+                "Close the open quote (or remove the stray quote character) so that each sample has a row of its own.", e);
+        }
+    }
+
+    private static SampleSheet ReadRows(string path)
+    {
         InputFilePath.EnsureFile(path, "sample sheet");
         if (new FileInfo(path).Length == 0)
             throw PanelInputException.At(path, null, null, "is empty (0 bytes).",
