@@ -140,7 +140,7 @@ internal static class PanelSizeEstimator
             var otherErrors = new double[sizes.Length];
             for (int s = 0; s < sizes.Length; s++)
             {
-                var (mean, sd) = MeanAndSdWithout(selectionAware, s, i);
+                var (mean, sd) = MeanAndSd(selectionAware, s, skippedRow: i);
                 otherMeans[s] = mean;
                 otherErrors[s] = sd / Math.Sqrt(Math.Max(1, folds.Count - 1));
             }
@@ -224,29 +224,24 @@ internal static class PanelSizeEstimator
         return (score, error, scores);
     }
 
-    private static (double Mean, double Sd) MeanAndSdWithout(double[,] values, int column, int skippedRow)
+    /// <summary>Mean and sample SD of one column over the folds, leaving out <paramref name="skippedRow"/> (-1 for none); SD is NaN with fewer than two folds.</summary>
+    private static (double Mean, double Sd) MeanAndSd(double[,] values, int column, int skippedRow = -1)
     {
         int count = values.GetLength(0);
         double sum = 0;
         int used = 0;
-        for (int i = 0; i < count; i++) if (i != skippedRow) { sum += values[i, column]; used++; }
+        for (int i = 0; i < count; i++)
+            if (i != skippedRow)
+            {
+                sum += values[i, column];
+                used++;
+            }
         if (used == 0) return (double.NaN, double.NaN);
         double mean = sum / used;
-        if (used < 2) return (mean, 0);
+        if (used < 2) return (mean, double.NaN);
         double squares = 0;
-        for (int i = 0; i < count; i++) if (i != skippedRow) squares += (values[i, column] - mean) * (values[i, column] - mean);
+        for (int i = 0; i < count; i++)
+            if (i != skippedRow) squares += (values[i, column] - mean) * (values[i, column] - mean);
         return (mean, Math.Sqrt(squares / (used - 1)));
-    }
-
-    private static (double Mean, double Sd) MeanAndSd(double[,] values, int column)
-    {
-        int count = values.GetLength(0);
-        double sum = 0;
-        for (int i = 0; i < count; i++) sum += values[i, column];
-        double mean = sum / count;
-        if (count < 2) return (mean, double.NaN);
-        double squares = 0;
-        for (int i = 0; i < count; i++) squares += (values[i, column] - mean) * (values[i, column] - mean);
-        return (mean, Math.Sqrt(squares / (count - 1)));
     }
 }
