@@ -17,6 +17,9 @@ public static class BenchmarkRegistry
         cases.Add(("forest", new ForestTrainingCase("forest-200x20000", 200, 20_000)));
         cases.Add(("forest", new ForestTrainingCase("forest-1000x2000", 1_000, 2_000)));
         cases.Add(("forest", new ForestTrainingCase("forest-4000x500", 4_000, 500)));
+        cases.Add(("interaction-scan", new InteractionScanCase(150, 1_000, 1_000)));
+        cases.Add(("interaction-scan", new InteractionScanCase(200, 10_000, 5_000)));
+        cases.Add(("interaction-scan", new InteractionScanCase(1_000, 5_000, 5_000)));
         cases.Add(("screen", new ScreenCase("screen-200x20000", 200, 20_000)));
         cases.Add(("screen", new ScreenCase("screen-1000x2000", 1_000, 2_000)));
         // The runtime's own share: a panel too small to matter.

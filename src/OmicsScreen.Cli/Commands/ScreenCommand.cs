@@ -72,6 +72,13 @@ public sealed class ScreenCommand : Command, IHelpLayout
         DefaultValueFactory = _ => Defaults.Balance,
     };
 
+    public Option<InteractionScanMode> InteractionScan { get; } = new("--interaction-scan")
+    {
+        Description = "The pairwise scan for markers that act only together (both high or both low against one of each): auto, on or off. Auto runs it up to 150,000,000 feature pairs (about 10,000 features with their decoys). Needs decoys.",
+        HelpName = "MODE",
+        DefaultValueFactory = _ => Defaults.InteractionScan,
+    };
+
     public Option<double> RepeatLevel { get; } = new("--repeat-level")
     {
         Description = "A repeat selects the features whose corrected importance beats this upper quantile of its null (mirrored and decoy importances).",
@@ -194,7 +201,7 @@ public sealed class ScreenCommand : Command, IHelpLayout
         new("Input", [Input.SampleSheet, Input.Outcome, Input.PositiveClass, Input.Subject, Input.SampleIdColumn, Input.Annotations,
             Input.FeaturesInRows, Input.DropUnmatched, Input.FeatureBlock, Input.KeepFeatures]),
         new("Forest", [Trees, FeaturesPerSplit, MinLeaf, Balance]),
-        new("Selection and error control", [Pairs, RepeatLevel, PerRepeat, MinFrequency, MaxQ, Rule, Decoys, OutcomePermutations, RedundancyRho]),
+        new("Selection and error control", [Pairs, RepeatLevel, PerRepeat, MinFrequency, MaxQ, Rule, Decoys, InteractionScan, OutcomePermutations, RedundancyRho]),
         new("Panel-size curve", [CurveFolds, CurveRepeats, CurveInnerPairs, MaxPanelSize]),
         new("Cohorts", [Input.Cohort]),
         new("Run", [Out, Force, Resume, Part, Seed, Threads, MemoryLimit, ShowSampleIds, Quiet, Json]),
@@ -214,7 +221,7 @@ public sealed class ScreenCommand : Command, IHelpLayout
     {
         Input.AddTo(this);
         foreach (var option in new Option[] { Out, Force, Resume, Part, Pairs, Trees, FeaturesPerSplit, MinLeaf, Balance, RepeatLevel, PerRepeat,
-                     MinFrequency, MaxQ, Rule, Decoys, OutcomePermutations, RedundancyRho, CurveFolds, CurveRepeats, CurveInnerPairs,
+                     MinFrequency, MaxQ, Rule, Decoys, InteractionScan, OutcomePermutations, RedundancyRho, CurveFolds, CurveRepeats, CurveInnerPairs,
                      MaxPanelSize, Seed, Threads, ShowSampleIds, Quiet, Json })
             Options.Add(option);
         Options.Add(MemoryLimit);
@@ -244,6 +251,7 @@ public sealed class ScreenCommand : Command, IHelpLayout
                 QValueThreshold = parse.GetValue(MaxQ),
                 DecoyCount = parse.GetValue(Decoys) ?? Defaults.DecoyCount,
                 Rule = ParseRule(parse.GetValue(Rule)),
+                InteractionScan = parse.GetValue(InteractionScan),
                 OutcomePermutations = parse.GetValue(OutcomePermutations),
                 RedundancyCorrelation = parse.GetValue(RedundancyRho),
                 CurveFolds = parse.GetValue(CurveFolds),

@@ -92,7 +92,7 @@ internal static class UsageErrors
         // A seed is unsigned: "a whole number, not '-1'" would not say what is wrong.
         "System.UInt64" => "a whole number from 0 to 18446744073709551615",
         "System.Double" or "System.Nullable`1[System.Double]" => "a number (with a decimal point, such as 0.6)",
-        _ when clrType.Contains("BalanceMode", StringComparison.Ordinal) => "auto, on or off",
+        _ when clrType.Contains("BalanceMode", StringComparison.Ordinal) || clrType.Contains("InteractionScanMode", StringComparison.Ordinal) => "auto, on or off",
         _ => "another kind of value",
     };
 

@@ -40,7 +40,8 @@ public static class ErrorControlText
         string forest = options.OutcomePermutations > 0 ? Invariant($"the forest's importance against {options.OutcomePermutations} outcome permutations")
             : result.Decoys.DecoyCount > 0 ? Invariant($"the forest's importance averaged over {result.Settings.RepeatCount} half-sample repeats against the decoys'")
             : "the forest's importance against the mirrored null";
-        string evidence = Invariant($"p-values combine {forest} with a rank test of the marker (Cauchy combination, Liu & Xie 2020)");
+        string scan = result.Settings.InteractionScan ? " and with a scan for a partner marker it acts with" : "";
+        string evidence = Invariant($"p-values combine {forest} with a rank test of the marker{scan} (Cauchy combination, Liu & Xie 2020)");
         if (options.Rule == ShortlistRule.DecoyBound && result.Decoys.DecoyCount > 0)
             return Invariant($"Rule: {frequency}cut where the decoy bound (with its +1 correction) stays at or under {Percent(options.QValueThreshold)}; {evidence}.");
         return Invariant($"Rule: {frequency}a Benjamini-Hochberg q-value of at most {options.QValueThreshold:0.###}, which keeps the expected share of false markers at or under {Percent(options.QValueThreshold)}; {evidence}.");

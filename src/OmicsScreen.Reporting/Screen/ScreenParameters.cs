@@ -29,6 +29,10 @@ public static class ScreenParameters
         new("--decoys", nameof(ScreenOptions.DecoyCount), "Decoys (each permuted once per run)", s => s.DecoyCount,
             s => s.Options.DecoyCount >= 0 ? Integer(s.DecoyCount)
                 : Integer(s.DecoyCount) + " (automatic: one per feature, " + Integer(s.Options.AutomaticDecoyFloor) + " to " + Integer(s.Options.AutomaticDecoyCeiling) + ")"),
+        new("--interaction-scan", nameof(ScreenOptions.InteractionScan), "Pairwise interaction scan", s => s.InteractionScan ? "on" : "off",
+            s => (s.InteractionScan ? "on" : "off") + " (" + ModeText(s.Options.InteractionScan)
+                + (s.Options.InteractionScan == InteractionScanMode.Auto ? ": on up to " + s.Options.InteractionScanPairLimit.ToString("N0", CultureInfo.InvariantCulture) + " feature pairs" : "")
+                + (s.DecoyCount == 0 ? "; needs decoys" : "") + ")"),
         new("--outcome-permutations", nameof(ScreenOptions.OutcomePermutations), "Outcome permutations", s => s.Options.OutcomePermutations,
             s => s.Options.OutcomePermutations > 0 ? Integer(s.Options.OutcomePermutations) : "none"),
         new("--redundancy-rho", nameof(ScreenOptions.RedundancyCorrelation), "Redundancy correlation (Spearman |rho|)", s => s.Options.RedundancyCorrelation, s => Number(s.Options.RedundancyCorrelation)),
@@ -46,6 +50,9 @@ public static class ScreenParameters
 
     /// <summary>The option's own spelling of a balance setting (auto, on, off).</summary>
     public static string BalanceText(BalanceMode mode) => mode.ToString().ToLowerInvariant();
+
+    /// <summary>The option's own spelling of the interaction scan setting (auto, on, off).</summary>
+    public static string ModeText(InteractionScanMode mode) => mode.ToString().ToLowerInvariant();
 
     private static string Integer(int value) => value.ToString(CultureInfo.InvariantCulture);
 

@@ -67,6 +67,8 @@ public static class ScreenTables
             TsvColumn<FeatureSummary>.Number("null_p", f => f.NullP, Probability),
             TsvColumn<FeatureSummary>.Number("outcome_permutation_p", f => f.OutcomePermutationP, Probability),
             TsvColumn<FeatureSummary>.Number("rank_test_p", f => f.RankTestP, Probability),
+            TsvColumn<FeatureSummary>.Number("interaction_p", f => f.InteractionP, Probability),
+            TsvColumn<FeatureSummary>.Text("interaction_partner", f => f.InteractionPartner >= 0 ? result.Features[f.InteractionPartner].Feature : ""),
             TsvColumn<FeatureSummary>.Number("combined_p", f => f.CombinedP, Probability),
             TsvColumn<FeatureSummary>.Number("p_value", f => f.PValue, Probability),
             TsvColumn<FeatureSummary>.Number("q_value", f => f.QValue, Probability),

@@ -5,9 +5,10 @@ namespace OmicsScreen.Screening.Screen;
 
 /// <summary>
 /// The decoys' evidence, computed exactly as the real features' is: mean corrected importance and
-/// selection frequency over the repeats, the forest's p-value against the other decoys, the rank
-/// test on the decoy's permuted values, the two combined (<see cref="CombinedP"/>), and that
-/// combination calibrated against the other decoys' (<see cref="PValues"/>).
+/// selection frequency over the repeats, the forest's p-value against the other decoys, the direct
+/// tests on the decoy's permuted values (<see cref="DirectTestEvidence"/>), all combined
+/// (<see cref="CombinedP"/>), and that combination calibrated against the other decoys'
+/// (<see cref="PValues"/>).
 /// </summary>
 internal sealed record DecoyEvidence(double[] Means, double[] Frequencies, double[] CombinedP, double[] PValues)
 {
@@ -15,17 +16,19 @@ internal sealed record DecoyEvidence(double[] Means, double[] Frequencies, doubl
 
     public static DecoyEvidence None { get; } = new([], [], [], []);
 
-    /// <param name="rankTestP">Each decoy's rank-test p-value; empty when the screen uses the forest's evidence alone.</param>
-    public static DecoyEvidence From(RepeatImportances repeats, ReadOnlySpan<double> rankTestP)
+    public static DecoyEvidence From(RepeatImportances repeats, DirectTestEvidence direct)
     {
+        ArgumentNullException.ThrowIfNull(direct);
         var means = ShortlistSelection.DecoyMeans(repeats);
         var frequencies = ShortlistSelection.DecoyFrequencies(repeats);
         var forestP = DecoyNull.DecoyPValues(means);
         var combinedP = new double[means.Length];
-        bool combined = rankTestP.Length == means.Length;
-        for (int d = 0; d < means.Length; d++) combinedP[d] = combined ? CauchyCombination.Combine(forestP[d], rankTestP[d]) : forestP[d];
+        for (int d = 0; d < means.Length; d++)
+            combinedP[d] = ScreenAggregation.Combine(forestP[d], At(direct.DecoyRankP, d), At(direct.DecoyInteractionP, d));
         return new DecoyEvidence(means, frequencies, combinedP, DecoyNull.DecoyPValues(Surprise(combinedP)));
     }
+
+    private static double At(double[] values, int index) => index < values.Length ? values[index] : double.NaN;
 
     /// <summary>-ln p: a statistic that grows with the evidence, whose tail the decoys' calibration fits (exponential for a uniform p).</summary>
     public static double[] Surprise(ReadOnlySpan<double> pValues)

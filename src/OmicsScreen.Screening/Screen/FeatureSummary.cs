@@ -8,7 +8,7 @@ namespace OmicsScreen.Screening.Screen;
 /// <param name="RankLowerQuartile">25th percentile of the combined rank over repeats (Hyndman-Fan type 7).</param>
 /// <param name="RankUpperQuartile">75th percentile of the combined rank over repeats.</param>
 /// <param name="NullP">p-value of the mean corrected importance against the decoys' means (<see cref="Importance.DecoyNull"/>), or against the mirrored null when the run has no decoys.</param>
-/// <param name="PValue">The forest's p-value (<see cref="ForestP"/>) combined with the rank test's (<see cref="RankTestP"/>) by the Cauchy combination test (Liu &amp; Xie 2020), then calibrated against the decoys' combinations (<see cref="Importance.DecoyNull"/>).</param>
+/// <param name="PValue">The forest's p-value (<see cref="ForestP"/>) combined with the rank test's (<see cref="RankTestP"/>) and the interaction scan's (<see cref="InteractionP"/>) by the Cauchy combination test (Liu &amp; Xie 2020), then calibrated against the decoys' combinations (<see cref="Importance.DecoyNull"/>).</param>
 /// <param name="QValue">Benjamini-Hochberg (1995) adjusted <paramref name="PValue"/> across all features.</param>
 /// <param name="Order">1-based position in the screen's final order (frequency, then median rank).</param>
 public sealed record FeatureSummary(
@@ -36,6 +36,16 @@ public sealed record FeatureSummary(
     /// <summary>The rank test's p-value on the same samples; NaN when the screen used the forest's evidence alone.</summary>
     public double RankTestP { get; init; } = double.NaN;
 
-    /// <summary>The Cauchy combination of <see cref="ForestP"/> and <see cref="RankTestP"/>, before its calibration against the decoys.</summary>
+    /// <summary>
+    /// The pairwise interaction scan's p-value (<see cref="Univariate.PairwiseInteractionScan"/>):
+    /// the feature's largest chi-square over partners against the decoys' (<see cref="Importance.DecoyNull"/>);
+    /// NaN when the scan did not run.
+    /// </summary>
+    public double InteractionP { get; init; } = double.NaN;
+
+    /// <summary>The feature index of the partner that gave the largest interaction chi-square; -1 when the scan did not run.</summary>
+    public int InteractionPartner { get; init; } = -1;
+
+    /// <summary>The Cauchy combination of <see cref="ForestP"/>, <see cref="RankTestP"/> and <see cref="InteractionP"/>, before its calibration against the decoys.</summary>
     public double CombinedP { get; init; } = double.NaN;
 }

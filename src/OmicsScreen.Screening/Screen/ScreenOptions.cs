@@ -70,6 +70,16 @@ public sealed record ScreenOptions
     /// <summary>Outcome permutations for Altmann et al. (2010) p-values; 0 turns them off.</summary>
     public int OutcomePermutations { get; init; }
 
+    /// <summary>
+    /// The pairwise interaction scan (markers that act only together); it needs decoys, which
+    /// calibrate it, and is skipped automatically on panels where it would cost more than
+    /// <see cref="InteractionScanPairLimit"/> pairs per screen.
+    /// </summary>
+    public InteractionScanMode InteractionScan { get; init; } = InteractionScanMode.Auto;
+
+    /// <summary>Most (features + decoys) x features pairs the automatic scan takes on (measured cost: see the README).</summary>
+    public long InteractionScanPairLimit { get; init; } = 150_000_000;
+
     /// <summary>Spearman |rho| at or above which shortlisted markers share a redundancy group.</summary>
     public double RedundancyCorrelation { get; init; } = 0.7;
 

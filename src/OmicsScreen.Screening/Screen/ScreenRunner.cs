@@ -72,9 +72,9 @@ public static class ScreenRunner
 
         var allRows = Enumerable.Range(0, panel.SampleCount).ToArray();
         var plan = DecoyPlan.For(panel.FeatureCount, settings.DecoyCount, options.Seed);
-        var (featureRankP, decoyRankP) = RankTestEvidence.Compute(panel, allRows, plan, options.ThreadCount);
-        var decoyEvidence = DecoyEvidence.From(repeats, decoyRankP);
-        var features = ScreenAggregation.Summarise(repeats, panel.Matrix.FeatureNames, decoyEvidence, outcomePermutationP, featureRankP);
+        var direct = DirectTestEvidence.Compute(panel, allRows, plan, settings.InteractionScan, options.ThreadCount);
+        var decoyEvidence = DecoyEvidence.From(repeats, direct);
+        var features = ScreenAggregation.Summarise(repeats, panel.Matrix.FeatureNames, decoyEvidence, outcomePermutationP, direct);
         var order = ScreenAggregation.OrderOf(features);
         var (shortlistedFeatures, decoys) = ShortlistSelection.Apply(features, order, decoyEvidence, options);
         var shortlisted = shortlistedFeatures.ToList();

@@ -16,6 +16,9 @@ public sealed record ScreenSettings
     public required int FeaturesPerSplit { get; init; }
     public required bool ClassBalanced { get; init; }
     public required int DecoyCount { get; init; }
+
+    /// <summary>Whether the pairwise interaction scan runs (never without decoys, which calibrate it).</summary>
+    public required bool InteractionScan { get; init; }
     public int RepeatCount => 2 * Options.HalfSamplePairs;
 
     public static ScreenSettings Resolve(ScreenOptions options, Panel panel)
@@ -48,6 +51,20 @@ public sealed record ScreenSettings
             FeaturesPerSplit = tried,
             ClassBalanced = balanced,
             DecoyCount = decoys,
+            InteractionScan = InteractionScanRuns(options, featureCount, decoys),
+        };
+    }
+
+    /// <summary>The scan runs when asked for or, automatically, when its pair count is within the limit; never without decoys.</summary>
+    public static bool InteractionScanRuns(ScreenOptions options, int featureCount, int decoyCount)
+    {
+        ArgumentNullException.ThrowIfNull(options);
+        if (decoyCount == 0) return false;
+        return options.InteractionScan switch
+        {
+            InteractionScanMode.On => true,
+            InteractionScanMode.Off => false,
+            _ => (long)(featureCount + decoyCount) * featureCount <= options.InteractionScanPairLimit,
         };
     }
 

@@ -21,6 +21,38 @@ public static class CauchyCombination
         return FromCauchy(statistic);
     }
 
+    /// <summary>The combined p-value of several tests with equal weights over those that are not NaN (all NaN gives NaN).</summary>
+    public static double Combine(ReadOnlySpan<double> pValues)
+    {
+        double sum = 0;
+        int count = 0;
+        foreach (double p in pValues)
+        {
+            if (double.IsNaN(p)) continue;
+            sum += ToCauchy(p);
+            count++;
+        }
+        return count == 0 ? double.NaN : FromCauchy(sum / count);
+    }
+
+    /// <summary>
+    /// The combined p-value with the given non-negative weights, renormalised over the tests that
+    /// are not NaN (Liu &amp; Xie 2020 allow any weights summing to 1); all NaN gives NaN.
+    /// </summary>
+    public static double Combine(ReadOnlySpan<double> pValues, ReadOnlySpan<double> weights)
+    {
+        if (weights.Length != pValues.Length) throw new ArgumentException("One weight is needed per p-value.", nameof(weights));
+        double sum = 0, total = 0;
+        for (int i = 0; i < pValues.Length; i++)
+        {
+            if (double.IsNaN(pValues[i])) continue;
+            if (!(weights[i] >= 0)) throw new ArgumentOutOfRangeException(nameof(weights), "Weights must be zero or more.");
+            sum += weights[i] * ToCauchy(pValues[i]);
+            total += weights[i];
+        }
+        return total > 0 ? FromCauchy(sum / total) : double.NaN;
+    }
+
     private static double ToCauchy(double p)
     {
         p = Math.Clamp(p, 1e-300, 1);

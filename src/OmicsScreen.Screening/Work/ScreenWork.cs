@@ -124,9 +124,9 @@ internal sealed class ScreenWork
         var repeats = RepeatScreen.Run(_matrix, _panel.Outcome, _panel.Subject, rows, _settings, seed,
             _settings.Options.CurveInnerPairs, _settings.DecoyCount, repeatDone: null, cancellation);
         var plan = DecoyPlan.For(_matrix.FeatureCount, _settings.DecoyCount, seed);
-        var (featureRankP, decoyRankP) = RankTestEvidence.Compute(_panel, rows, plan, _settings.Options.ThreadCount);
-        var decoys = DecoyEvidence.From(repeats, decoyRankP);
-        var features = ScreenAggregation.Summarise(repeats, _matrix.FeatureNames, decoys, [], featureRankP);
+        var direct = DirectTestEvidence.Compute(_panel, rows, plan, _settings.InteractionScan, _settings.Options.ThreadCount);
+        var decoys = DecoyEvidence.From(repeats, direct);
+        var features = ScreenAggregation.Summarise(repeats, _matrix.FeatureNames, decoys, [], direct);
         var order = ScreenAggregation.OrderOf(features);
         var (shortlist, _) = ShortlistSelection.Apply(features, order, decoys, _settings.Options);
         return new InnerScreenResult(order, CohortAnalysis.MeanCorrected(repeats), shortlist);

@@ -71,7 +71,7 @@ public static class CalibrationSuite
         if (p.PairFound is { } pair) found += pair ? ", pair found" : ", pair missed";
         if (p.ThresholdFound is { } threshold) found += threshold ? ", threshold found" : ", threshold missed";
         return Invariant(
-            $"[{done}/{total}] {p.Design} seed {p.Seed}: shortlist {p.Shortlisted} (false {p.FalseDiscoveries}, FDP {p.FalseDiscoveryProportion:F3}, decoy estimate {Number(p.DecoyEstimate)}){found}; {estimate}; {p.Seconds:F1} s (total {elapsed:F0} s)");
+            $"[{done}/{total}] {p.Design} seed {p.Seed}: shortlist {p.Shortlisted} (false {p.FalseDiscoveries}, FDP {p.FalseDiscoveryProportion:F3}, decoy estimate {Number(p.DecoyEstimate)}){found}; {estimate}; {p.Seconds:F1} s (total {elapsed:F0} s){(p.SpecialMarkers.Length > 0 ? " [" + p.SpecialMarkers + "]" : "")}");
     }
 
     /// <summary>The 1-minute load average from /proc/loadavg, for reading wall times on a shared machine; "n/a" elsewhere.</summary>

@@ -12,6 +12,8 @@ namespace OmicsScreen.Benchmarks.Calibration;
 /// <param name="SelectionAwareEstimate">The screen's selection-aware estimate of the locked panel (AUC, or accuracy for more than two classes); NaN when none.</param>
 /// <param name="FreshEstimate">The locked panel's AUC (accuracy for more classes) on a fresh cohort of the same model; NaN when no panel was locked.</param>
 /// <param name="NullFeaturePValues">The screen's p-value of every feature not related to the outcome.</param>
+/// <param name="EstimateStandardError">The DeLong (1988) standard error of the AUC of the locked procedure's pooled held-out probabilities: the sampling error of the selection-aware estimate at this sample size; NaN without a two-class locked panel.</param>
+/// <param name="SpecialMarkers">Where the interacting pair and the threshold marker ended up (screen order, forest, rank-test and final p, q), for reading a miss; empty when the design has neither.</param>
 public sealed record PanelCalibration(
     string Design,
     ulong Seed,
@@ -33,10 +35,15 @@ public sealed record PanelCalibration(
     double SelectionAwareEstimate,
     double FreshEstimate,
     double[] NullFeaturePValues,
+    double EstimateStandardError,
+    string SpecialMarkers,
     double Seconds)
 {
     /// <summary>|selection-aware estimate - fresh estimate|; NaN when either is missing.</summary>
     public double EstimateError => Math.Abs(SelectionAwareEstimate - FreshEstimate);
+
+    /// <summary>selection-aware estimate - fresh estimate; NaN when either is missing.</summary>
+    public double EstimateDifference => SelectionAwareEstimate - FreshEstimate;
 
     /// <summary>Both estimates exist, so the selection-aware one can be judged.</summary>
     public bool HasEstimatePair => double.IsFinite(SelectionAwareEstimate) && double.IsFinite(FreshEstimate);

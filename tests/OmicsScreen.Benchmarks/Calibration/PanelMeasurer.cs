@@ -75,7 +75,35 @@ public static class PanelMeasurer
             shortlisted.Count, trueDiscoveries, falseDiscoveries, (double)falseDiscoveries / Math.Max(1, shortlisted.Count),
             result.Decoys.EstimatedFalseDiscoveryRate, baselineDiscoveries, baselineTrue,
             pairFound, baselinePairFound, thresholdFound, baselineThresholdFound,
-            lockedSize, estimate, fresh, nullPValues.ToArray(), watch.Elapsed.TotalSeconds);
+            lockedSize, estimate, fresh, nullPValues.ToArray(), EstimateStandardError(result), SpecialMarkers(model, result), watch.Elapsed.TotalSeconds);
+    }
+
+    /// <summary>The DeLong standard error of the locked procedure's pooled held-out AUC; NaN when there is none.</summary>
+    private static double EstimateStandardError(ScreenResult result)
+    {
+        var curve = result.PanelSize;
+        if (result.LockedPanelSize == 0 || curve is null || curve.LockedOutOfFoldScores.Count == 0) return double.NaN;
+        var positive = new List<double>();
+        var negative = new List<double>();
+        for (int i = 0; i < curve.LockedOutOfFoldScores.Count; i++)
+            (curve.LockedOutOfFoldPositive[i] ? positive : negative).Add(curve.LockedOutOfFoldScores[i]);
+        return Math.Sqrt(Screening.Statistics.DeLong.Estimate(positive.ToArray(), negative.ToArray()).Variance);
+    }
+
+    /// <summary>One "role: order N, forest p, rank p, p, q" item per interacting or threshold marker.</summary>
+    private static string SpecialMarkers(CalibrationModel model, ScreenResult result)
+    {
+        var roles = new List<(string Role, int Feature)>();
+        foreach (int f in model.InteractingPair) roles.Add(("pair", f));
+        if (model.ThresholdMarker >= 0) roles.Add(("threshold", model.ThresholdMarker));
+        var items = new List<string>();
+        foreach (var (role, feature) in roles)
+        {
+            var summary = result.Features.First(x => x.FeatureIndex == feature);
+            items.Add(FormattableString.Invariant(
+                $"{role}: order {summary.Order}, forest p {summary.ForestP:G2}, rank p {summary.RankTestP:G2}, p {summary.PValue:G2}, q {summary.QValue:G2}"));
+        }
+        return string.Join("; ", items);
     }
 
     /// <summary>

@@ -212,11 +212,13 @@ public sealed class ScreenReportTests
     public void Every_screen_option_is_listed_under_its_label_and_option()
     {
         // A setting added to ScreenOptions later must join the vocabulary (ScreenParameters), or it would
-        // be left out of the report and the manifest. The automatic decoy floor and ceiling are constants shown with --decoys.
+        // be left out of the report and the manifest. The automatic decoy floor and ceiling are constants shown with --decoys,
+        // the interaction scan's pair limit with --interaction-scan.
         var terms = Markup.Elements(Markup.Parse(DefaultReport.Value), "dt").Select(e => e.Value).ToHashSet();
         var covered = ScreenParameters.All.Select(p => p.Property).ToHashSet();
         foreach (var property in typeof(ScreenOptions).GetProperties())
-            if (property.Name is not (nameof(ScreenOptions.AutomaticDecoyFloor) or nameof(ScreenOptions.AutomaticDecoyCeiling)))
+            if (property.Name is not (nameof(ScreenOptions.AutomaticDecoyFloor) or nameof(ScreenOptions.AutomaticDecoyCeiling)
+                or nameof(ScreenOptions.InteractionScanPairLimit)))
                 Assert.Contains(property.Name, covered);
         foreach (var parameter in ScreenParameters.All)
             Assert.Contains(parameter.Label + " (" + parameter.Option + ")", terms);

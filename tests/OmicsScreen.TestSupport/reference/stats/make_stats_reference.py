@@ -9,6 +9,7 @@ and the drawn inputs are stored in the JSON, so the tests never need Python.
 See README.md for what each block means.
 """
 import json
+from scipy.stats import chi2_contingency
 import os
 import platform
 
@@ -144,6 +145,62 @@ def main():
     # Generalized Pareto survival, scipy genpareto(c=shape, scale=scale).sf(y).
     out["generalized_pareto"] = [dict(shape=c, scale=s_, y=y, survival=float(st.genpareto.sf(y, c, scale=s_)))
                                  for c, s_, y in [(0.0, 1.0, 2.0), (0.3, 0.5, 1.7), (0.8, 2.0, 40.0), (0.1, 0.05, 0.9)]]
+
+    # Cauchy combination of three p-values with equal weights 1/3 (Liu & Xie 2020), scipy cauchy.sf.
+    out["cauchy_combination_three"] = [
+        dict(p=list(ps), combined=float(st.cauchy.sf(np.mean([np.tan((0.5 - p) * np.pi) for p in ps]))))
+        for ps in [(0.5, 0.5, 0.5), (1e-8, 0.6, 0.4), (0.02, 0.03, 0.9), (0.3, 0.99, 1e-4)]]
+
+    # Weighted Cauchy combination: T = sum w_i tan((0.5 - p_i) pi) with weights summing to 1.
+    weights = [0.4, 0.4, 0.2]
+    out["cauchy_combination_weighted"] = [
+        dict(p=list(ps), weights=weights,
+             combined=float(st.cauchy.sf(sum(w * np.tan((0.5 - p) * np.pi) for w, p in zip(weights, ps)))))
+        for ps in [(0.5, 0.5, 0.5), (1e-8, 0.6, 0.4), (0.02, 0.03, 0.9), (0.3, 0.99, 1e-4), (0.7, 0.8, 1e-12)]]
+
+    # Pearson chi-square of contingency tables without continuity correction:
+    # scipy chi2_contingency(table, correction=False)[0].
+    tables = [[[30, 10], [12, 28]], [[5, 0], [3, 7]], [[40, 2], [3, 35]], [[9, 11], [14, 6], [3, 17]]]
+    out["chi_square_tables"] = [dict(table=t, chi_square=float(chi2_contingency(np.array(t), correction=False)[0]))
+                                for t in tables]
+
+    # The pairwise interaction scan, written independently: for every ordered pair (a, b), samples
+    # where both are measured are put on the same side of both medians (strictly above the median
+    # = high) or on opposite sides; chi2_contingency of side x class; each column keeps its largest
+    # chi-square over partners and the first partner reaching it. Data: an interacting pair
+    # (class = same side, 10% flipped), a marginal marker, noise, a column with missing values
+    # (NaN), and a three-class outcome on the same columns.
+    scans = []
+    for label, classes_count in [("two_classes", 2), ("three_classes", 3)]:
+        n = 90
+        x = rng.normal(size=(n, 7))
+        same = (x[:, 0] > 0) == (x[:, 1] > 0)
+        y = np.where(rng.random(n) < 0.1, ~same, same).astype(int)
+        if classes_count == 3:
+            y = np.where(y == 1, 1 + (rng.random(n) < 0.5), 0)
+        x[:, 2] += 0.8 * (y > 0)
+        x[rng.random(n) < 0.15, 5] = np.nan
+        stats_, partners = [], []
+        for a in range(x.shape[1]):
+            best, partner = 0.0, -1
+            for b in range(x.shape[1]):
+                if b == a:
+                    continue
+                keep = ~np.isnan(x[:, a]) & ~np.isnan(x[:, b])
+                ha = x[keep, a] > np.median(x[~np.isnan(x[:, a]), a])
+                hb = x[keep, b] > np.median(x[~np.isnan(x[:, b]), b])
+                side = (ha == hb).astype(int)
+                table = np.array([[np.sum((side == sd) & (y[keep] == k)) for sd in (1, 0)] for k in range(classes_count)])
+                table = table[table.sum(axis=1) > 0]
+                chi = 0.0 if (table.sum(axis=0) == 0).any() else float(chi2_contingency(table, correction=False)[0])
+                if chi > best:
+                    best, partner = chi, b
+            stats_.append(best)
+            partners.append(partner)
+        scans.append(dict(name=label, classes=y.tolist(), columns=[[None if np.isnan(v) else float(v) for v in x[:, c]]
+                                                                    for c in range(x.shape[1])],
+                          statistics=stats_, partners=partners))
+    out["interaction_scan"] = scans
 
     with open(os.path.join(HERE, "stats_reference.json"), "w") as f:
         json.dump(out, f, indent=1)
