@@ -6,6 +6,7 @@ using OmicsScreen.Cli.Memory;
 using OmicsScreen.Cli.Output;
 using OmicsScreen.Cli.Work;
 using OmicsScreen.Data;
+using OmicsScreen.Data.Inspection;
 using OmicsScreen.Reporting.Json;
 using OmicsScreen.Reporting.Screen;
 using OmicsScreen.Reporting.Univariate;
@@ -51,6 +52,7 @@ internal static class ScreenRun
         double loadSeconds = watch.Elapsed.TotalSeconds;
         PrintKeepFeaturesNote(console, options);
         ScreenFeasibility.Check(options.Screen, loaded.Panel);
+        PrintWarnings(console, Warnings(options, loaded));
 
         var settings = ScreenSettings.Resolve(options.Screen, loaded.Panel);
         var (identity, record) = RunIdentity.Of("checkpoint", loaded, options);
@@ -89,6 +91,7 @@ internal static class ScreenRun
         var loaded = PanelLoader.Load(options.Panel).EnsureScreenable();
         PrintKeepFeaturesNote(console, options);
         ScreenFeasibility.Check(options.Screen, loaded.Panel);
+        PrintWarnings(console, Warnings(options, loaded));
         return PartRun.Execute(console, options, loaded, options.Part!.Value);
     }
 
@@ -97,6 +100,25 @@ internal static class ScreenRun
         if (options.Panel.KeepFeatures is not null)
             console.Error.WriteLine("note: only the features of the --keep-features list were read. If the list was chosen on these same samples "
                 + "(a first-stage screen), q-values and the selection-aware panel-size curve do not account for that choice: confirm in independent samples.");
+    }
+
+    /// <summary>
+    /// What the run should be warned about: the loader's warnings (an outcome column given twice,
+    /// constant features, dropped samples) and settings that are legal but weak. Printed before the
+    /// work starts and kept in the manifest's warnings list.
+    /// </summary>
+    internal static List<string> Warnings(ScreenRunOptions options, LoadedPanel loaded)
+    {
+        var warnings = new List<string>();
+        foreach (var finding in loaded.Inspection.Findings)
+            if (finding.Severity == FindingSeverity.Warning) warnings.Add(finding.Message);
+        warnings.AddRange(ScreenFeasibility.Warnings(options.Screen, loaded.Panel));
+        return warnings;
+    }
+
+    private static void PrintWarnings(CliConsole console, IEnumerable<string> warnings)
+    {
+        foreach (var warning in warnings) console.Error.WriteLine($"warning: {TextTable.Printable(warning)}");
     }
 
     /// <summary>The files a run reads, which its outputs must never replace.</summary>
@@ -122,7 +144,7 @@ internal static class ScreenRun
         var finished = DateTimeOffset.UtcNow;
         var report = ReportInput(options, loaded, result, folder, started, finished, loadSeconds) with { MergedParts = mergedParts };
         folder.WriteText(ReportFileName, w => w.Write(ScreenReport.Render(report)));
-        var manifest = ScreenManifest.Build(options, loaded, result, started, finished, loadSeconds, folder.WrittenFiles, mergedParts);
+        var manifest = ScreenManifest.Build(options, loaded, result, started, finished, loadSeconds, folder.WrittenFiles, Warnings(options, loaded), mergedParts);
         folder.WriteText(ResultsFolder.ManifestFileName, w => ManifestJson.Write(w, manifest));
 
         if (options.Json) ManifestJson.Write(console.Out, ScreenHeadline.Of(loaded, result, folder.Path));

@@ -163,8 +163,11 @@ internal static class HostileInputCorpus
         yield return new("11 the outcome twice in the sheet, disagreeing", "m.csv", Text(Valid),
             "sample_id,status,status\ns1,case,case\ns2,case,case\ns3,case,control\ns4,control,control\ns5,control,control\ns6,control,control\n",
             ExitCode.InputError, ["s.csv", "line 4", "appears twice", "columns 2 and 3", "Keep one of the two columns"]);
-        yield return new("11 the outcome in both the matrix and the sheet, agreeing, loads", "m.csv", Text(WithStatus), Sheet,
-            ExitCode.Success, ["samples"]);
+        yield return new("11 the outcome in both the matrix and the sheet, agreeing, loads with a warning", "m.csv", Text(WithStatus), Sheet,
+            ExitCode.Success, ["samples", "warning", "'status'", "both in the sample sheet s.csv and in the matrix m.csv", "their values agree"]);
+        yield return new("11 the outcome twice in the sheet, agreeing, loads with a warning naming both columns", "m.csv", Text(Valid),
+            "sample_id,status,status\ns1,case,case\ns2,case,case\ns3,case,case\ns4,control,control\ns5,control,control\ns6,control,control\n",
+            ExitCode.Success, ["samples", "warning", "'status'", "appears twice", "columns 2 and 3", "their values agree", "Keep one of the two"]);
 
         // Issue 13, finding 14: messages that named the wrong cause.
         yield return new("14 sample ids composed (NFC) in the matrix and decomposed (NFD) in the sheet", "m.csv",
