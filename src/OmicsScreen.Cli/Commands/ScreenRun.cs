@@ -52,7 +52,6 @@ internal static class ScreenRun
         double loadSeconds = watch.Elapsed.TotalSeconds;
         PrintKeepFeaturesNote(console, options);
         ScreenFeasibility.Check(options.Screen, loaded.Panel);
-        PrintWarnings(console, Warnings(options, loaded));
 
         var settings = ScreenSettings.Resolve(options.Screen, loaded.Panel);
         var (identity, record) = RunIdentity.Of("checkpoint", loaded, options);
@@ -60,8 +59,9 @@ internal static class ScreenRun
             record, identity, loaded.Panel.FeatureCount,
             settings.DecoyCount, options.Resume, options.Force, "checkpoint",
             Path.Combine(options.ResolveOutputFolder(), CheckpointFolderName));
-        // From here on the run replaces the folder's earlier results.
+        // From here on the run replaces the folder's earlier results; a refusal is never preceded by warnings.
         folder.ClearEarlierOutputs();
+        PrintWarnings(console, Warnings(options, loaded));
         var plan = WorkPlan.For(loaded.Panel, settings);
         if (options.Resume && !options.Quiet)
             console.Error.WriteLine($"resume: {checkpoint.CountPresent(plan.Units.Select(u => u.Unit))} of {plan.Units.Count} work units are in the checkpoint.");
@@ -91,7 +91,6 @@ internal static class ScreenRun
         var loaded = PanelLoader.Load(options.Panel).EnsureScreenable();
         PrintKeepFeaturesNote(console, options);
         ScreenFeasibility.Check(options.Screen, loaded.Panel);
-        PrintWarnings(console, Warnings(options, loaded));
         return PartRun.Execute(console, options, loaded, options.Part!.Value);
     }
 
@@ -116,7 +115,7 @@ internal static class ScreenRun
         return warnings;
     }
 
-    private static void PrintWarnings(CliConsole console, IEnumerable<string> warnings)
+    internal static void PrintWarnings(CliConsole console, IEnumerable<string> warnings)
     {
         foreach (var warning in warnings) console.Error.WriteLine($"warning: {TextTable.Printable(warning)}");
     }
