@@ -166,7 +166,7 @@ internal static class ScreenRun
         int threads = result.Settings.Options.ThreadCount > 0 ? result.Settings.Options.ThreadCount : Environment.ProcessorCount;
         return new ScreenReportInput(loaded.Panel, result, inputs, LayoutText(options.Panel), tables,
             string.Join(' ', options.CommandLine.Select(ScreenManifest.ShellQuote)), ScreenManifest.Version(), started, finished, loadSeconds,
-            Environment.ProcessorCount, threads, options.ShowSampleIds);
+            Environment.ProcessorCount, threads, options.ShowSampleIds, Warnings: Warnings(options, loaded));
     }
 
     /// <summary>The layout, and any feature block or list the panel was narrowed to, with what that means for the error control.</summary>

@@ -345,6 +345,7 @@ internal static class MisuseCorpus
                 Assert.Contains(warnings, w => w.StartsWith("--trees 20", StringComparison.Ordinal));
                 Assert.Contains(warnings, w => w.StartsWith("--pairs 2", StringComparison.Ordinal));
                 Assert.Contains(warnings, w => w.StartsWith("--decoys 50", StringComparison.Ordinal));
+                Assert.Contains("Warnings of this run", File.ReadAllText(s.PathOf("r/report.html")));
             });
         yield return new("11 screen with a loose --max-q and a low --redundancy-rho warns", s =>
                 MisuseScene.SmallScreen(s.PathOf("r"), "--max-q", "0.4", "--redundancy-rho", "0.2", "--features-per-split", "30"),
