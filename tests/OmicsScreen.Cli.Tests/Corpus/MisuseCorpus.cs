@@ -347,9 +347,10 @@ internal static class MisuseCorpus
                 Assert.Contains(warnings, w => w.StartsWith("--decoys 50", StringComparison.Ordinal));
                 Assert.Contains("Warnings of this run", File.ReadAllText(s.PathOf("r/report.html")));
             });
-        yield return new("11 screen with a loose --max-q and a low --redundancy-rho warns", s =>
-                MisuseScene.SmallScreen(s.PathOf("r"), "--max-q", "0.4", "--redundancy-rho", "0.2", "--features-per-split", "30"),
-            ExitCode.Success, ["warning: --max-q 0.4 lets up to 40%", "warning: --redundancy-rho 0.2", "warning: --features-per-split 30 tries every feature"]);
+        yield return new("11 screen with a loose --max-q, a low --redundancy-rho and few outcome permutations warns", s =>
+                MisuseScene.SmallScreen(s.PathOf("r"), "--max-q", "0.4", "--redundancy-rho", "0.2", "--features-per-split", "30", "--outcome-permutations", "3"),
+            ExitCode.Success, ["warning: --max-q 0.4 lets up to 40%", "warning: --redundancy-rho 0.2", "warning: --features-per-split 30 tries every feature",
+                "warning: --outcome-permutations 3 gives permutation p-values no smaller than 1/(3 + 1) = 0.25"]);
         yield return new("11 screen with the outcome in both the matrix and the sheet warns and records it", s =>
             {
                 var lines = File.ReadAllLines(ReferenceData.Wdbc("wdbc.csv")).Skip(1).Select(line => line.Split(',')).Select(cells => cells[0] + "," + cells[1]);
