@@ -106,11 +106,19 @@ internal static class ScreenRun
     /// constant features, dropped samples) and settings that are legal but weak. Printed before the
     /// work starts and kept in the manifest's warnings list.
     /// </summary>
-    internal static List<string> Warnings(ScreenRunOptions options, LoadedPanel loaded)
+    /// <param name="withSampleIds">False for the report without --show-sample-ids: a warning that names samples says how many instead.</param>
+    internal static List<string> Warnings(ScreenRunOptions options, LoadedPanel loaded, bool withSampleIds = true)
     {
         var warnings = new List<string>();
         foreach (var finding in loaded.Inspection.Findings)
-            if (finding.Severity == FindingSeverity.Warning) warnings.Add(finding.Message);
+        {
+            if (finding.Severity != FindingSeverity.Warning) continue;
+            if (!withSampleIds && finding.Code == "unmatched-samples-dropped")
+                warnings.Add($"{loaded.Inspection.DroppedSamples.Count} samples were dropped because they are in only one file (--drop-unmatched); the console named them, and --show-sample-ids lists them here.");
+            else if (!withSampleIds && finding.Code == "names-differ-only-by-case" && finding.Message.Contains("sample ids", StringComparison.Ordinal))
+                warnings.Add("Some sample ids differ from another only by upper and lower case; they are kept as different samples. `omicsscreen check` names them.");
+            else warnings.Add(finding.Message);
+        }
         warnings.AddRange(ScreenFeasibility.Warnings(options.Screen, loaded.Panel));
         return warnings;
     }
@@ -166,7 +174,7 @@ internal static class ScreenRun
         int threads = result.Settings.Options.ThreadCount > 0 ? result.Settings.Options.ThreadCount : Environment.ProcessorCount;
         return new ScreenReportInput(loaded.Panel, result, inputs, LayoutText(options.Panel), tables,
             string.Join(' ', options.CommandLine.Select(ScreenManifest.ShellQuote)), ScreenManifest.Version(), started, finished, loadSeconds,
-            Environment.ProcessorCount, threads, options.ShowSampleIds, Warnings: Warnings(options, loaded));
+            Environment.ProcessorCount, threads, options.ShowSampleIds, Warnings: Warnings(options, loaded, withSampleIds: options.ShowSampleIds));
     }
 
     /// <summary>The layout, and any feature block or list the panel was narrowed to, with what that means for the error control.</summary>

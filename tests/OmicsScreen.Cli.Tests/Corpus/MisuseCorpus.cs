@@ -360,6 +360,22 @@ internal static class MisuseCorpus
             ExitCode.Success, ["warning: the outcome column 'diagnosis' is both in the sample sheet wdbc_sheet.csv and in the matrix wdbc.csv", "their values agree"],
             Verify: (s, _) => Assert.Contains("both in the sample sheet", File.ReadAllText(s.PathOf("r/manifest.json"))));
 
+        // The loader's warnings join the run's; in the report, one that names samples says how many instead (README: ids stay out of the report).
+        yield return new("11 screen --drop-unmatched warns naming the dropped samples, and the report only counts them", s =>
+            {
+                var lines = File.ReadAllLines(ReferenceData.Wdbc("wdbc.csv")).Skip(4).Select(line => line.Split(',')).Select(cells => cells[0] + ",x");
+                string sheet = s.File("partial_sheet.csv", "sample_id,note\n" + string.Join("\n", lines) + "\nQ7777,x\n");
+                return MisuseScene.SmallScreen(s.PathOf("r"), "--samples", sheet, "--drop-unmatched");
+            },
+            ExitCode.Success, ["warning: 4 samples were dropped", "S0001", "Q7777"],
+            Verify: (s, _) =>
+            {
+                string report = File.ReadAllText(s.PathOf("r/report.html"));
+                Assert.Contains("4 samples were dropped because they are in only one file", report);
+                Assert.DoesNotContain("S0001", report);
+                Assert.DoesNotContain("Q7777", report);
+            });
+
         // grow: refused before the forest is grown.
         string[] Grow(MisuseScene s, params string[] extra) => ["grow", s.Panel(), "--samples", s.Sheet(), "--outcome", "status", .. extra];
         yield return new("11 grow --trees 0", s => Grow(s, "--trees", "0"), ExitCode.Usage, ["--trees", "at least 1"]);
