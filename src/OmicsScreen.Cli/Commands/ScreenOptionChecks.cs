@@ -1,4 +1,5 @@
 using System.Globalization;
+using OmicsScreen.Screening.Importance;
 using OmicsScreen.Screening.Screen;
 
 namespace OmicsScreen.Cli.Commands;
@@ -40,6 +41,8 @@ internal static class ScreenOptionChecks
     private static void CheckDecoysAgainstLevel(ScreenOptions o)
     {
         if (o.DecoyCount <= 0) return;
+        // From 100 decoys on, a tail fitted to the largest decoys gives p-values below the count's floor.
+        if (o.Rule == ShortlistRule.QValue && o.DecoyCount >= DecoyNull.MinimumTailFitCount) return;
         double floor = o.Rule == ShortlistRule.DecoyBound ? 1.0 / o.DecoyCount : 1.0 / (o.DecoyCount + 1);
         if (floor <= o.QValueThreshold) return;
         int needed = o.Rule == ShortlistRule.DecoyBound

@@ -311,6 +311,10 @@ internal static class MisuseCorpus
             s => MisuseScene.SmallScreen(s.PathOf("r"), "--decoys", "9", "--shortlist-rule", "decoy-bound"),
             ExitCode.Usage, ["--decoys 9", "the decoy bound cannot fall below 0.1111", "give at least 10"]);
 
+        // From 100 decoys on the p-values' tail fit reaches below 1/(decoys + 1): a strict --max-q is then legal.
+        yield return new("11 screen --decoys 150 with --max-q 0.001 is screened", s => MisuseScene.SmallScreen(s.PathOf("r"), "--decoys", "150", "--max-q", "0.001"),
+            ExitCode.Success, ["Shortlist"]);
+
         // Refused once the panel's size is known (WDBC: 569 samples, 30 features, 212 malignant), still before any forest.
         yield return new("11 screen --features-per-split above the feature count", s => MisuseScene.SmallScreen(s.PathOf("r"), "--features-per-split", "31"),
             ExitCode.Usage, ["--features-per-split 31", "30 features", "--features-per-split 30 or fewer"]);
