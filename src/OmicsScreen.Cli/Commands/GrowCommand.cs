@@ -20,7 +20,7 @@ public sealed class GrowCommand : Command, IHelpLayout
         DefaultValueFactory = _ => 500,
     };
 
-    public Option<int> FeaturesPerSplit { get; } = new("--features-per-split")
+    public Option<int?> FeaturesPerSplit { get; } = new("--features-per-split")
     {
         Description = "Features tried at each split. Default: floor(sqrt(features)).",
         HelpName = "K",
@@ -62,7 +62,7 @@ public sealed class GrowCommand : Command, IHelpLayout
         DefaultValueFactory = _ => 1,
     };
 
-    public Option<int> Threads { get; } = new("--threads")
+    public Option<int?> Threads { get; } = new("--threads")
     {
         Description = "Threads to grow trees on. Default: all cores.",
         HelpName = "N",
@@ -115,13 +115,13 @@ public sealed class GrowCommand : Command, IHelpLayout
         {
             Panel = Input.ToLoadOptions(parse),
             TreeCount = parse.GetValue(Trees),
-            FeaturesPerSplit = parse.GetValue(FeaturesPerSplit),
+            FeaturesPerSplit = ScreenOptionChecks.Given(parse.GetValue(FeaturesPerSplit), "--features-per-split", 1, "leave it out for the square root of the feature count"),
             MinLeafSize = parse.GetValue(MinLeaf),
             MaxDepth = parse.GetValue(MaxDepth),
             SampleFraction = parse.GetValue(SampleFraction),
             Balance = parse.GetValue(Balanced) ? BalanceMode.On : parse.GetValue(Balance),
             Seed = parse.GetValue(Seed),
-            ThreadCount = parse.GetValue(Threads),
+            ThreadCount = ScreenOptionChecks.Given(parse.GetValue(Threads), "--threads", 1, "leave it out to use all cores"),
             ImportanceFile = parse.GetValue(ImportanceFile),
             Json = parse.GetValue(Json),
         })));

@@ -3,6 +3,7 @@ using System.Globalization;
 using OmicsScreen.Cli.Console;
 using OmicsScreen.Cli.Output;
 using OmicsScreen.Data;
+using OmicsScreen.Data.Inspection;
 using OmicsScreen.Data.Output;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Reporting.Json;
@@ -26,10 +27,12 @@ internal static class GrowRun
         var loaded = PanelLoader.Load(options.Panel).EnsureScreenable();
         var loadTime = watch.Elapsed;
         var panel = loaded.Panel;
-        // A node splits only when both children can hold min-leaf samples: above half the samples, every tree is one leaf.
-        if (2 * options.MinLeafSize > panel.SampleCount)
-            throw new CommandInputException(FormattableString.Invariant(
-                $"--min-leaf {options.MinLeafSize} leaves every tree a single leaf: the panel has {panel.SampleCount} samples and a split needs 2 x {options.MinLeafSize}. Use --min-leaf {Math.Max(1, panel.SampleCount / 4)} or less (the default 1 grows full trees)."));
+        GrowFeasibility.Check(options, panel);
+        var warnings = new List<string>();
+        foreach (var finding in loaded.Inspection.Findings)
+            if (finding.Severity == FindingSeverity.Warning) warnings.Add(finding.Message);
+        warnings.AddRange(GrowFeasibility.Warnings(options, panel));
+        foreach (var warning in warnings) console.Error.WriteLine($"warning: {TextTable.Printable(warning)}");
         var forestOptions = options.ToForestOptions(panel);
         try
         {
@@ -46,7 +49,7 @@ internal static class GrowRun
         if (options.ImportanceFile is { } path)
             AtomicFile.WriteText(path, writer => ImportanceWriter.Write(writer, panel.Matrix.FeatureNames, ranked, result));
 
-        if (options.Json) WriteJson(console.Out, options, loaded, result, ranked, loadTime);
+        if (options.Json) WriteJson(console.Out, options, loaded, result, ranked, loadTime, warnings);
         else WriteText(console.Out, loaded, result, ranked, loadTime);
         return ExitCode.Success;
     }
@@ -104,7 +107,8 @@ internal static class GrowRun
             if (seen.Add(trees)) yield return (label, trees);
     }
 
-    private static void WriteJson(TextWriter output, GrowRunOptions options, LoadedPanel loaded, ForestResult result, int[] ranked, TimeSpan loadTime)
+    private static void WriteJson(TextWriter output, GrowRunOptions options, LoadedPanel loaded, ForestResult result, int[] ranked, TimeSpan loadTime,
+        IReadOnlyList<string> warnings)
     {
         var panel = loaded.Panel;
         var document = new
@@ -143,6 +147,7 @@ internal static class GrowRun
                 binning = result.BinningTime.TotalSeconds,
                 training = result.TrainingTime.TotalSeconds,
             },
+            warnings,
             impurity_decrease = ranked.Select(f => new
             {
                 feature = panel.Matrix.FeatureNames[f],

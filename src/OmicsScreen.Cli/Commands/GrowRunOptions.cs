@@ -28,7 +28,9 @@ public sealed record GrowRunOptions
         if (TreeCount < 1) throw new CommandInputException("--trees: the value must be at least 1.");
         if (FeaturesPerSplit < 0) throw new CommandInputException("--features-per-split: the value must be at least 1 (leave it out for the square root of the feature count).");
         if (MinLeafSize < 1) throw new CommandInputException("--min-leaf: the value must be at least 1.");
-        if (MaxDepth is < 0) throw new CommandInputException("--max-depth: the value cannot be negative.");
+        if (MaxDepth is < 1)
+            throw new CommandInputException(FormattableString.Invariant(
+                $"--max-depth {MaxDepth}: the root is level 0, so every tree would be a single leaf. Use 1 or more, or leave it out for no limit."));
         if (SampleFraction is { } f && !(f > 0 && f <= 1)) throw new CommandInputException("--sample-fraction: the value must be above 0 and at most 1 (for example 0.632).");
         if (ThreadCount < 0) throw new CommandInputException("--threads: the value must be at least 1 (leave it out to use all cores).");
     }

@@ -52,7 +52,7 @@ public sealed class ScreenCommand : Command, IHelpLayout
         DefaultValueFactory = _ => Defaults.TreesPerForest,
     };
 
-    public Option<int> FeaturesPerSplit { get; } = new("--features-per-split")
+    public Option<int?> FeaturesPerSplit { get; } = new("--features-per-split")
     {
         Description = "Features tried at each split. Default: floor(sqrt(features)).",
         HelpName = "K",
@@ -86,7 +86,7 @@ public sealed class ScreenCommand : Command, IHelpLayout
         HelpName = "A",
     };
 
-    public Option<int> PerRepeat { get; } = new("--per-repeat-cap")
+    public Option<int?> PerRepeat { get; } = new("--per-repeat-cap")
     {
         Description = "Most features a repeat may select (its best ones). Default: no cap.",
         HelpName = "N",
@@ -168,7 +168,7 @@ public sealed class ScreenCommand : Command, IHelpLayout
         DefaultValueFactory = _ => Defaults.Seed,
     };
 
-    public Option<int> Threads { get; } = new("--threads")
+    public Option<int?> Threads { get; } = new("--threads")
     {
         HelpName = "N",
         Description = "Threads to use. Default: all cores.",
@@ -242,14 +242,14 @@ public sealed class ScreenCommand : Command, IHelpLayout
                 Seed = parse.GetValue(Seed),
                 HalfSamplePairs = parse.GetValue(Pairs),
                 TreesPerForest = parse.GetValue(Trees),
-                FeaturesPerSplit = parse.GetValue(FeaturesPerSplit),
+                FeaturesPerSplit = ScreenOptionChecks.Given(parse.GetValue(FeaturesPerSplit), "--features-per-split", 1, "leave it out for the square root of the feature count"),
                 MinLeafSize = parse.GetValue(MinLeaf),
                 Balance = parse.GetValue(Balance),
                 RepeatSelectionLevel = parse.GetValue(RepeatLevel),
-                SelectedPerRepeat = parse.GetValue(PerRepeat),
+                SelectedPerRepeat = ScreenOptionChecks.Given(parse.GetValue(PerRepeat), "--per-repeat-cap", 1, "leave it out for no cap"),
                 FrequencyThreshold = parse.GetValue(MinFrequency),
                 QValueThreshold = parse.GetValue(MaxQ),
-                DecoyCount = parse.GetValue(Decoys) ?? Defaults.DecoyCount,
+                DecoyCount = ScreenOptionChecks.Given(parse.GetValue(Decoys), "--decoys", 0, "0 turns decoys off; leave it out for the automatic count", Defaults.DecoyCount),
                 Rule = ParseRule(parse.GetValue(Rule)),
                 InteractionScan = parse.GetValue(InteractionScan),
                 OutcomePermutations = parse.GetValue(OutcomePermutations),
@@ -258,7 +258,7 @@ public sealed class ScreenCommand : Command, IHelpLayout
                 CurveFoldRepeats = parse.GetValue(CurveRepeats),
                 CurveInnerPairs = parse.GetValue(CurveInnerPairs),
                 CurveMaxPanelSize = parse.GetValue(MaxPanelSize),
-                ThreadCount = parse.GetValue(Threads),
+                ThreadCount = ScreenOptionChecks.Given(parse.GetValue(Threads), "--threads", 1, "leave it out to use all cores"),
             },
         })));
     }

@@ -1,29 +1,50 @@
 using System.Globalization;
 using OmicsScreen.Engine.Panels;
+using OmicsScreen.Screening.Importance;
 using OmicsScreen.Screening.Screen;
 
 namespace OmicsScreen.Cli.Commands;
 
 /// <summary>
 /// Settings that cannot give a meaningful screen of this panel, refused with the option to
-/// change before any forest is grown: they depend on the panel's size, so the options record
-/// alone cannot check them.
+/// change before any forest is grown, and settings that are legal but weak, named in warnings:
+/// both depend on the panel's size, so the options record alone cannot check them.
 /// </summary>
 internal static class ScreenFeasibility
 {
+    /// <summary>Fewer trees than this leave out-of-bag estimates and importances visibly seed-dependent (common practice: a few hundred trees).</summary>
+    public const int FewTrees = 100;
+
+    /// <summary>Fewer half-sample pairs than this give under 10 repeats: selection frequencies in steps of a tenth or coarser.</summary>
+    public const int FewPairs = 5;
+
+    /// <summary>Above this false discovery rate a shortlist is mostly a list of candidates (common practice: 0.05 to 0.2).</summary>
+    public const double LooseQ = 0.25;
+
+    /// <summary>Below this Spearman |rho| single linkage chains markers that share little into one group.</summary>
+    public const double LowRedundancyRho = 0.5;
+
     /// <exception cref="CommandInputException">The settings cannot give a meaningful screen of <paramref name="panel"/>.</exception>
     public static void Check(ScreenOptions options, Panel panel)
     {
         int sampleCount = panel.SampleCount;
         int units = SamplingUnitCount(panel);
         string unitName = panel.Subject is null ? "samples" : $"subjects (--subject {panel.Subject.ColumnName})";
-        // Each forest of the screen is grown on a half-sample; a node splits only when both
-        // children can hold min-leaf samples, so 2 x min-leaf above the half-sample leaves every tree one leaf.
-        int halfSample = sampleCount / 2;
-        if (2 * options.MinLeafSize > halfSample)
+        if (options.FeaturesPerSplit > panel.FeatureCount)
             throw new CommandInputException(string.Create(CultureInfo.InvariantCulture,
-                $"--min-leaf {options.MinLeafSize} leaves every tree of the screen a single leaf: its forests are grown on half-samples of {halfSample} samples, "
-                + $"and a split needs 2 x {options.MinLeafSize} of them. Use --min-leaf {Math.Max(1, halfSample / 4)} or less (the default 1 grows full trees)."));
+                $"--features-per-split {options.FeaturesPerSplit} is more than the panel's {panel.FeatureCount} features. Use --features-per-split {panel.FeatureCount} or fewer "
+                + $"(all of them tries every feature at every split), or leave it out for the square root of the feature count."));
+        // Each forest of the screen is grown on a bootstrap of a half-sample; a node splits only
+        // when both children can hold min-leaf distinct samples, and a bootstrap of m samples holds
+        // about m (1 - (1 - 1/m)^m), 63% of them: with 2 x min-leaf above that every tree is one leaf.
+        int halfSample = sampleCount / 2;
+        double distinct = BootstrapDistinct(halfSample);
+        // The default of 1 is never refused: a panel too small for one split is the inspection's to report.
+        if (options.MinLeafSize > 1 && 2 * options.MinLeafSize > distinct)
+            throw new CommandInputException(string.Create(CultureInfo.InvariantCulture,
+                $"--min-leaf {options.MinLeafSize} leaves every tree of the screen a single leaf: its forests are grown on half-samples of {halfSample} samples "
+                + $"(a bootstrap of which holds about {distinct:0} distinct ones), and a split needs 2 x {options.MinLeafSize} of them. "
+                + $"Use --min-leaf {Math.Max(1, halfSample / 4)} or less (the default 1 grows full trees)."));
         if (options.CurveFolds > 0 && TrainingUnits(units, options.CurveFolds) < 2)
         {
             int workable = 0;
@@ -35,7 +56,49 @@ internal static class ScreenFeasibility
                 $"--curve-folds {options.CurveFolds} leaves too few {unitName} to train on: the panel has {units}, and in "
                 + $"{(options.CurveFolds > units ? "every" : "some")} fold the screen inside it would have fewer than 2 to draw half-samples from. {fix}"));
         }
+        if (options.CurveFolds > 0)
+        {
+            var (className, classUnits) = SmallestClassUnits(panel);
+            if (options.CurveFolds > classUnits)
+                throw new CommandInputException(string.Create(CultureInfo.InvariantCulture,
+                    $"--curve-folds {options.CurveFolds} is more than the {classUnits} {unitName} of the smallest class '{Display(className)}': some fold would test no "
+                    + $"'{Display(className)}' sample, so its AUC, and the panel-size curve's, is undefined. Use --curve-folds {Math.Max(2, Math.Min(classUnits, 5))} or fewer, or 0 to skip the panel-size curve."));
+            // The curve's inner screen grows its forests on half of a fold's training part.
+            int innerHalf = (sampleCount - (sampleCount + options.CurveFolds - 1) / options.CurveFolds) / 2;
+            double innerDistinct = BootstrapDistinct(innerHalf);
+            if (options.MinLeafSize > 1 && 2 * options.MinLeafSize > innerDistinct)
+                throw new CommandInputException(string.Create(CultureInfo.InvariantCulture,
+                    $"--min-leaf {options.MinLeafSize} leaves every tree of the panel-size curve's inner screens a single leaf: with --curve-folds {options.CurveFolds} they grow "
+                    + $"on half-samples of about {innerHalf} samples (a bootstrap of which holds about {innerDistinct:0} distinct ones), and a split needs 2 x {options.MinLeafSize}. "
+                    + $"Use --min-leaf {Math.Max(1, innerHalf / 4)} or less, or --curve-folds 0 to skip the curve."));
+        }
     }
+
+    /// <summary>Settings that are legal for this panel but make the screen weak, each in one sentence naming the option and a better value.</summary>
+    public static List<string> Warnings(ScreenOptions options, Panel panel)
+    {
+        var warnings = new List<string>();
+        if (options.TreesPerForest < FewTrees)
+            warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--trees {options.TreesPerForest} is few: out-of-bag estimates and importances of so small a forest change visibly with the seed; use {FewTrees} or more (the default is 500)."));
+        if (options.HalfSamplePairs < FewPairs)
+            warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--pairs {options.HalfSamplePairs} gives only {2 * options.HalfSamplePairs} half-sample repeats: selection frequencies move in steps of {1.0 / (2 * options.HalfSamplePairs):0.##} and the stability of the list rests on few lists; use {FewPairs} or more (the default is 25)."));
+        int decoys = ScreenSettings.DecoyCountFor(options, panel.FeatureCount);
+        if (decoys > 0 && decoys < DecoyNull.MinimumTailFitCount)
+            warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--decoys {decoys} is too few for the p-values' tail fit (it needs {DecoyNull.MinimumTailFitCount}): no p-value can fall below 1/({decoys} + 1) = {1.0 / (decoys + 1):0.####}, so only strong markers can reach the shortlist; leave --decoys out for the automatic count."));
+        if (options.OutcomePermutations > 0 && options.OutcomePermutations < DecoyNull.MinimumTailFitCount)
+            warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--outcome-permutations {options.OutcomePermutations} gives permutation p-values no smaller than 1/({options.OutcomePermutations} + 1) = {1.0 / (options.OutcomePermutations + 1):0.####}, so the forest's evidence hardly counts; use {DecoyNull.MinimumTailFitCount} or more, or 0."));
+        if (options.QValueThreshold > LooseQ)
+            warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--max-q {options.QValueThreshold} lets up to {options.QValueThreshold:0%} of the shortlist be false markers; treat the list as candidates, or use 0.05 to 0.2."));
+        if (options.RedundancyCorrelation < LowRedundancyRho)
+            warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--redundancy-rho {options.RedundancyCorrelation} groups markers whose Spearman |rho| is this low, and single linkage chains them: groups may join markers that share little; use 0.5 or more (the default is 0.7)."));
+        if (options.FeaturesPerSplit > 1 && options.FeaturesPerSplit == panel.FeatureCount)
+            warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--features-per-split {options.FeaturesPerSplit} tries every feature at every split: the trees are then alike and the strongest markers mask the others' importance; leave it out for the square root of the feature count (Breiman 2001)."));
+        return warnings;
+    }
+
+    /// <summary>The expected number of distinct samples in a bootstrap of <paramref name="count"/> from <paramref name="count"/>: count x (1 - (1 - 1/count)^count).</summary>
+    internal static double BootstrapDistinct(int count) =>
+        count <= 0 ? 0 : count * (1 - Math.Pow(1 - 1.0 / count, count));
 
     /// <summary>Units left for training in the fold with the largest test part (fold sizes differ by at most one unit).</summary>
     private static int TrainingUnits(int units, int folds) => folds > units ? 0 : units - (units + folds - 1) / folds;
@@ -48,4 +111,24 @@ internal static class ScreenFeasibility
         foreach (int level in panel.Subject.SampleLevels) seen.Add(level);
         return seen.Count;
     }
+
+    /// <summary>
+    /// The class present in the fewest sampling units (samples, or subjects with a sample of it):
+    /// a fold's test part holds a class only if one of its units does.
+    /// </summary>
+    private static (string Name, int Units) SmallestClassUnits(Panel panel)
+    {
+        var outcome = panel.Outcome;
+        var unitsOfClass = new HashSet<int>[outcome.ClassCount];
+        for (int c = 0; c < unitsOfClass.Length; c++) unitsOfClass[c] = [];
+        for (int s = 0; s < panel.SampleCount; s++)
+            unitsOfClass[outcome.SampleClasses[s]].Add(panel.Subject is null ? s : panel.Subject.SampleLevels[s]);
+        int smallest = 0;
+        for (int c = 1; c < unitsOfClass.Length; c++)
+            if (unitsOfClass[c].Count < unitsOfClass[smallest].Count) smallest = c;
+        return (outcome.ClassNames[smallest], unitsOfClass[smallest].Count);
+    }
+
+    private static string Display(string name) => Console.TextTable.Printable(name);
+
 }

@@ -12,7 +12,7 @@ namespace OmicsScreen.Cli.Commands;
 internal static class ScreenManifest
 {
     public static object Build(ScreenRunOptions options, LoadedPanel loaded, ScreenResult result, DateTimeOffset started,
-        DateTimeOffset finished, double loadSeconds, IReadOnlyList<string> outputs, int mergedParts = 0)
+        DateTimeOffset finished, double loadSeconds, IReadOnlyList<string> outputs, IReadOnlyList<string> warnings, int mergedParts = 0)
     {
         var panel = loaded.Panel;
         var settings = result.Settings;
@@ -72,6 +72,8 @@ internal static class ScreenManifest
                 reference_out_of_bag_auc = result.ReferenceForest.OutOfBagAuc,
             },
             outputs,
+            // The loader's warnings and the settings that are legal but weak, as printed before the run.
+            warnings,
             caution = "Research use only. A screen is not a diagnostic test; confirm markers in independent cohorts and follow local ethics, data-protection rules and licensed clinical practice.",
         };
     }

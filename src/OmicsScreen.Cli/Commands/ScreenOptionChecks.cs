@@ -1,4 +1,5 @@
 using System.Globalization;
+using OmicsScreen.Screening.Importance;
 using OmicsScreen.Screening.Screen;
 
 namespace OmicsScreen.Cli.Commands;
@@ -28,6 +29,41 @@ internal static class ScreenOptionChecks
         Require(o.CurveInnerPairs >= 1, "--curve-inner-pairs", o.CurveInnerPairs, "must be at least 1");
         Require(o.CurveMaxPanelSize >= 1, "--max-panel-size", o.CurveMaxPanelSize, "must be at least 1");
         Require(o.ThreadCount >= 0, "--threads", o.ThreadCount, "must be at least 1 (leave it out to use all cores)");
+        CheckDecoysAgainstLevel(o);
+    }
+
+    /// <summary>
+    /// Below the tail fit's 100 decoys a p-value is a Monte Carlo count against the decoys, never
+    /// under 1/(decoys + 1) (Davison &amp; Hinkley 1997, eq. 4.11), and a Benjamini-Hochberg q-value is
+    /// never under its p-value; the decoy bound's smallest value is 1/decoys (a list of every
+    /// feature, no decoy passing). When that floor is above --max-q no feature can ever be listed.
+    /// </summary>
+    private static void CheckDecoysAgainstLevel(ScreenOptions o)
+    {
+        if (o.DecoyCount <= 0) return;
+        // From 100 decoys on, a tail fitted to the largest decoys gives p-values below the count's floor.
+        if (o.Rule == ShortlistRule.QValue && o.DecoyCount >= DecoyNull.MinimumTailFitCount) return;
+        double floor = o.Rule == ShortlistRule.DecoyBound ? 1.0 / o.DecoyCount : 1.0 / (o.DecoyCount + 1);
+        if (floor <= o.QValueThreshold) return;
+        int needed = o.Rule == ShortlistRule.DecoyBound
+            ? (int)Math.Ceiling(1 / o.QValueThreshold - 1e-9)
+            : (int)Math.Ceiling(1 / o.QValueThreshold - 1 - 1e-9);
+        string measure = o.Rule == ShortlistRule.DecoyBound ? "the decoy bound" : "a p-value";
+        throw new CommandInputException(string.Create(CultureInfo.InvariantCulture,
+            $"--decoys {o.DecoyCount} can never give a shortlist at --max-q {o.QValueThreshold}: with so few decoys {measure} cannot fall below {floor:0.####}. "
+            + $"Leave --decoys out for the automatic count (at least 1,000), give at least {Math.Max(needed, 1)}, or 0 to turn decoys off."));
+    }
+
+    /// <summary>
+    /// An option whose absence means "automatic" (0 in the options record): a value given must be
+    /// at least <paramref name="least"/>, since a given 0 or -1 would silently mean "automatic" too.
+    /// </summary>
+    /// <returns>The value given, or <paramref name="absent"/> when the option was left out.</returns>
+    public static int Given(int? value, string option, int least, string whenLeftOut, int absent = 0)
+    {
+        if (value is not { } given) return absent;
+        Require(given >= least, option, given, FormattableString.Invariant($"must be at least {least} ({whenLeftOut})"));
+        return given;
     }
 
     private static void Require(bool condition, string option, double value, string rule)

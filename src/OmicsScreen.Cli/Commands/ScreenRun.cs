@@ -6,6 +6,7 @@ using OmicsScreen.Cli.Memory;
 using OmicsScreen.Cli.Output;
 using OmicsScreen.Cli.Work;
 using OmicsScreen.Data;
+using OmicsScreen.Data.Inspection;
 using OmicsScreen.Reporting.Json;
 using OmicsScreen.Reporting.Screen;
 using OmicsScreen.Reporting.Univariate;
@@ -58,8 +59,9 @@ internal static class ScreenRun
             record, identity, loaded.Panel.FeatureCount,
             settings.DecoyCount, options.Resume, options.Force, "checkpoint",
             Path.Combine(options.ResolveOutputFolder(), CheckpointFolderName));
-        // From here on the run replaces the folder's earlier results.
+        // From here on the run replaces the folder's earlier results; a refusal is never preceded by warnings.
         folder.ClearEarlierOutputs();
+        PrintWarnings(console, Warnings(options, loaded));
         var plan = WorkPlan.For(loaded.Panel, settings);
         if (options.Resume && !options.Quiet)
             console.Error.WriteLine($"resume: {checkpoint.CountPresent(plan.Units.Select(u => u.Unit))} of {plan.Units.Count} work units are in the checkpoint.");
@@ -99,6 +101,33 @@ internal static class ScreenRun
                 + "(a first-stage screen), q-values and the selection-aware panel-size curve do not account for that choice: confirm in independent samples.");
     }
 
+    /// <summary>
+    /// What the run should be warned about: the loader's warnings (an outcome column given twice,
+    /// constant features, dropped samples) and settings that are legal but weak. Printed before the
+    /// work starts and kept in the manifest's warnings list.
+    /// </summary>
+    /// <param name="withSampleIds">False for the report without --show-sample-ids: a warning that names samples says how many instead.</param>
+    internal static List<string> Warnings(ScreenRunOptions options, LoadedPanel loaded, bool withSampleIds = true)
+    {
+        var warnings = new List<string>();
+        foreach (var finding in loaded.Inspection.Findings)
+        {
+            if (finding.Severity != FindingSeverity.Warning) continue;
+            if (!withSampleIds && finding.Code == "unmatched-samples-dropped")
+                warnings.Add($"{loaded.Inspection.DroppedSamples.Count} samples were dropped because they are in only one file (--drop-unmatched); the console named them, and --show-sample-ids lists them here.");
+            else if (!withSampleIds && finding.Code == "names-differ-only-by-case" && finding.Message.Contains("sample ids", StringComparison.Ordinal))
+                warnings.Add("Some sample ids differ from another only by upper and lower case; they are kept as different samples. `omicsscreen check` names them.");
+            else warnings.Add(finding.Message);
+        }
+        warnings.AddRange(ScreenFeasibility.Warnings(options.Screen, loaded.Panel));
+        return warnings;
+    }
+
+    internal static void PrintWarnings(CliConsole console, IEnumerable<string> warnings)
+    {
+        foreach (var warning in warnings) console.Error.WriteLine($"warning: {TextTable.Printable(warning)}");
+    }
+
     /// <summary>The files a run reads, which its outputs must never replace.</summary>
     internal static IEnumerable<string?> InputPaths(PanelLoadOptions panel) => [panel.MatrixPath, panel.SampleSheetPath];
 
@@ -122,7 +151,7 @@ internal static class ScreenRun
         var finished = DateTimeOffset.UtcNow;
         var report = ReportInput(options, loaded, result, folder, started, finished, loadSeconds) with { MergedParts = mergedParts };
         folder.WriteText(ReportFileName, w => w.Write(ScreenReport.Render(report)));
-        var manifest = ScreenManifest.Build(options, loaded, result, started, finished, loadSeconds, folder.WrittenFiles, mergedParts);
+        var manifest = ScreenManifest.Build(options, loaded, result, started, finished, loadSeconds, folder.WrittenFiles, Warnings(options, loaded), mergedParts);
         folder.WriteText(ResultsFolder.ManifestFileName, w => ManifestJson.Write(w, manifest));
 
         if (options.Json) ManifestJson.Write(console.Out, ScreenHeadline.Of(loaded, result, folder.Path));
@@ -145,7 +174,7 @@ internal static class ScreenRun
         int threads = result.Settings.Options.ThreadCount > 0 ? result.Settings.Options.ThreadCount : Environment.ProcessorCount;
         return new ScreenReportInput(loaded.Panel, result, inputs, LayoutText(options.Panel), tables,
             string.Join(' ', options.CommandLine.Select(ScreenManifest.ShellQuote)), ScreenManifest.Version(), started, finished, loadSeconds,
-            Environment.ProcessorCount, threads, options.ShowSampleIds);
+            Environment.ProcessorCount, threads, options.ShowSampleIds, Warnings: Warnings(options, loaded, withSampleIds: options.ShowSampleIds));
     }
 
     /// <summary>The layout, and any feature block or list the panel was narrowed to, with what that means for the error control.</summary>

@@ -26,6 +26,7 @@ internal static class PartRun
         var record = described with { Part = part.Index, Parts = part.Count };
         var folder = WorkFolder.Open(shown, RecordFileName, record, identity, panel.FeatureCount, settings.DecoyCount,
             options.Resume, options.Force, "part", shown);
+        ScreenRun.PrintWarnings(console, ScreenRun.Warnings(options, loaded));
 
         var progress = new ProgressDisplay(console, options.Quiet);
         try

@@ -36,12 +36,12 @@ internal sealed class PanelAssembler
 
     private Panel Build(List<InspectionFinding> findings)
     {
-        var outcome = BuildOutcome(Require(_options.OutcomeColumn, "outcome"));
-        var cohort = _options.CohortColumn is { } cohortName ? Grouping(Require(cohortName, "cohort"), findings) : null;
-        var subject = _options.SubjectColumn is { } subjectName ? Grouping(Require(subjectName, "subject"), findings) : null;
+        var outcome = BuildOutcome(Require(_options.OutcomeColumn, "outcome", findings));
+        var cohort = _options.CohortColumn is { } cohortName ? Grouping(Require(cohortName, "cohort", findings), findings) : null;
+        var subject = _options.SubjectColumn is { } subjectName ? Grouping(Require(subjectName, "subject", findings), findings) : null;
 
         var extra = new Dictionary<string, string[]>(StringComparer.Ordinal);
-        foreach (var name in _options.AnnotationColumns) extra[name] = Require(name, "annotation").Values;
+        foreach (var name in _options.AnnotationColumns) extra[name] = Require(name, "annotation", findings).Values;
         if (_sheet is not null)
         {
             var used = _options.SampleAttributeNames();
@@ -90,11 +90,11 @@ internal sealed class PanelAssembler
         return null;
     }
 
-    private SampleAttribute Require(string name, string role)
+    private SampleAttribute Require(string name, string role, List<InspectionFinding> findings)
     {
         if (Find(name) is { } found)
         {
-            RefuseConflictingCopies(found, role);
+            RefuseConflictingCopies(found, role, findings);
             return found;
         }
         var available = new List<string>();
@@ -124,9 +124,10 @@ internal sealed class PanelAssembler
     /// The outcome, cohort or subject column must say one thing: a second sheet column of the same
     /// name, or a matrix column of that name beside the sheet's, with a different value for some
     /// sample leaves no way to know which is right, so the load stops at the first disagreement.
-    /// Copies that agree are harmless.
+    /// Copies that agree give the same panel, but a later edit of one copy would go unnoticed, so
+    /// they are named in a warning.
     /// </summary>
-    private void RefuseConflictingCopies(SampleAttribute used, string role)
+    private void RefuseConflictingCopies(SampleAttribute used, string role, List<InspectionFinding> findings)
     {
         if (_sheet is null) return;
         var kept = _join.KeptSamples;
@@ -143,13 +144,18 @@ internal sealed class PanelAssembler
                         $"the {role} column '{Display.Name(used.Name)}' appears twice in the sample sheet (columns {first + 1} and {c + 1}), and they disagree for sample '{Display.Name(_raw.Matrix.SampleIds[kept[i]])}' ('{Display.Name(used.Values[i])}' against '{Display.Name(other)}')."),
                         "Keep one of the two columns, or rename the other.");
             }
+            findings.Add(new InspectionFinding(FindingSeverity.Warning, "duplicate-column", FormattableString.Invariant(
+                $"the {role} column '{Display.Name(used.Name)}' appears twice in the sample sheet {Path.GetFileName(_sheet.Path)} (columns {first + 1} and {c + 1}); their values agree, and column {first + 1} is used. Keep one of the two so that an edit of one cannot go unnoticed.")));
         }
-        if (!_raw.Annotations.TryGetValue(used.Name, out var matrixValues)) return;
+        // A column the sheet lacks was taken from the matrix: there is no second copy.
+        if (first < 0 || !_raw.Annotations.TryGetValue(used.Name, out var matrixValues)) return;
         for (int i = 0; i < kept.Length; i++)
             if (!string.Equals(used.Values[i].Trim(), matrixValues[kept[i]].Trim(), StringComparison.Ordinal))
                 throw PanelInputException.At(_sheet.Path, _sheet.Lines[_join.SheetRows[i]], used.Name, FormattableString.Invariant(
                     $"the {role} column '{Display.Name(used.Name)}' is both in the sample sheet and in the matrix {Path.GetFileName(_raw.Source.Path)}, and they disagree for sample '{Display.Name(_raw.Matrix.SampleIds[kept[i]])}' ('{Display.Name(used.Values[i])}' in the sheet, '{Display.Name(matrixValues[kept[i]])}' in the matrix)."),
                     "Remove the column from one of the files, or rename one of them.");
+        findings.Add(new InspectionFinding(FindingSeverity.Warning, "duplicate-column", FormattableString.Invariant(
+            $"the {role} column '{Display.Name(used.Name)}' is both in the sample sheet {Path.GetFileName(_sheet.Path)} and in the matrix {Path.GetFileName(_raw.Source.Path)}; their values agree, and the sheet's is used. Remove it from one of the files so that an edit of one cannot go unnoticed.")));
     }
 
     private static SampleAttribute ThrowMissing(string path, string name, string role, string where, string columns,

@@ -27,9 +27,10 @@ internal static class DelimitedMatrixReader
         }
         catch (Exception e) when (LongRows.IsRowTooLong(e))
         {
-            if (options.Layout != PanelLayout.SamplesInRows) throw LongRows.FeaturesInRowsError(path, e);
             // Sep holds a row in a buffer of at most 16 Mi characters; a longer one is read again row by row.
-            return ReadLongSamplesInRows(path, options, ct);
+            return options.Layout == PanelLayout.SamplesInRows
+                ? ReadLongSamplesInRows(path, options, ct)
+                : ReadLongFeaturesInRows(path, options, ct);
         }
     }
 
@@ -226,7 +227,41 @@ internal static class DelimitedMatrixReader
     private static RawMatrix ReadFeaturesInRows(SepReader reader, string[] header, SlotCounter slots, int rowBound,
         MatrixSource source, PanelLoadOptions options, CancellationToken ct)
     {
-        string path = source.Path;
+        var sampleIds = FeaturesInRowsSampleIds(header, source.Path);
+        var attributeNames = options.SampleAttributeNames();
+        var columns = new FeatureColumns(rowBound, sampleIds.Length);
+        var rows = reader.ParallelEnumerate(row => ParseFeatureRow(row, header.Length, slots, attributeNames, columns),
+            Environment.ProcessorCount);
+        return CollectFeatures(rows, header, sampleIds, columns, source, ct);
+    }
+
+    /// <summary>
+    /// Features in rows when a row is longer than Sep's buffer (a header or a feature over about a
+    /// million samples, or very long numbers): the same checks and storage, one row at a time on this thread.
+    /// </summary>
+    internal static RawMatrix ReadLongFeaturesInRows(string path, PanelLoadOptions options, CancellationToken ct)
+    {
+        char delimiter = DelimiterDetector.Detect(path);
+        using var text = DelimiterDetector.OpenText(path);
+        var reader = new TextRowReader(text, delimiter);
+        var row = new TextRow();
+        var source = new MatrixSource(path, MatrixFileFormat.DelimitedText, delimiter, options.Layout);
+        var header = ReadLongHeader(reader, row, path);
+        var sampleIds = FeaturesInRowsSampleIds(header, path);
+        int rowBound = Math.Max(1, LineCounter.UpperBoundOfLines(path) - 1);
+        var slots = new SlotCounter();
+        var attributeNames = options.SampleAttributeNames();
+        var columns = new FeatureColumns(rowBound, sampleIds.Length);
+        IEnumerable<ParsedRow> Rows()
+        {
+            while (reader.Next(row)) yield return ParseFeatureRow(row, header.Length, slots, attributeNames, columns);
+        }
+        return CollectFeatures(Rows(), header, sampleIds, columns, source, ct);
+    }
+
+    /// <summary>The header's sample ids (every column after the first), checked.</summary>
+    private static string[] FeaturesInRowsSampleIds(string[] header, string path)
+    {
         if (header.Length < 2)
             throw PanelInputException.At(path, 1, null, "has a single column, so there are no sample columns.",
                 "Check the delimiter, or load the file without --features-in-rows.");
@@ -235,15 +270,18 @@ internal static class DelimitedMatrixReader
             NameRules.Check(sampleIds[s], "sample id", path, 1, FormattableString.Invariant($"#{s + 2}"));
         NameRules.CheckUnique(sampleIds, "sample id", path,
             "Make sample ids in the header unique (technical replicates need their own ids).");
+        return sampleIds;
+    }
 
-        var attributeNames = options.SampleAttributeNames();
-        var columns = new FeatureColumns(rowBound, sampleIds.Length);
+    /// <summary>Checks the parsed feature rows in file order, then gathers the features' slots into the matrix.</summary>
+    private static RawMatrix CollectFeatures(IEnumerable<ParsedRow> rows, string[] header, string[] sampleIds,
+        FeatureColumns columns, MatrixSource source, CancellationToken ct)
+    {
+        string path = source.Path;
         var featureNames = new List<string>();
         var featureSlots = new List<int>();
         var annotations = new Dictionary<string, string[]>(StringComparer.Ordinal);
         int rowCount = 0;
-        var rows = reader.ParallelEnumerate(row => ParseFeatureRow(row, header.Length, slots, attributeNames, columns),
-            Environment.ProcessorCount);
         foreach (var row in rows)
         {
             if (row.IsBlank) continue;
@@ -293,6 +331,39 @@ internal static class DelimitedMatrixReader
         for (int s = 0; s < sampleCount; s++)
         {
             var cell = row[s + 1].Span;
+            var kind = CellText.Classify(cell, out float value);
+            if (!columns.Store(slot, s, kind, value))
+            {
+                parsed.Fail(s, cell, kind);
+                break;
+            }
+        }
+        return parsed;
+    }
+
+    /// <summary>
+    /// <see cref="ParseFeatureRow(SepReader.Row, int, SlotCounter, HashSet{string}, FeatureColumns)"/>
+    /// for a row of <see cref="TextRowReader"/>: the same steps, cell for cell.
+    /// </summary>
+    private static ParsedRow ParseFeatureRow(TextRow row, int fieldCount, SlotCounter slots, HashSet<string> attributeNames,
+        FeatureColumns columns)
+    {
+        if (row.IsBlank) return new ParsedRow { IsBlank = true };
+        int slot = slots.Next();
+        var parsed = new ParsedRow { Line = row.FirstLine, FieldCount = row.FieldCount, Slot = slot, BeyondCapacity = slot >= columns.FeatureCount };
+        if (!parsed.CanHoldCells(fieldCount)) return parsed;
+        parsed.Label = row[0].Trim().ToString();
+        int sampleCount = fieldCount - 1;
+        if (attributeNames.Contains(parsed.Label))
+        {
+            var texts = new string[sampleCount];
+            for (int s = 0; s < texts.Length; s++) texts[s] = row[s + 1].Trim().ToString();
+            parsed.Texts = texts;
+            return parsed;
+        }
+        for (int s = 0; s < sampleCount; s++)
+        {
+            var cell = row[s + 1];
             var kind = CellText.Classify(cell, out float value);
             if (!columns.Store(slot, s, kind, value))
             {

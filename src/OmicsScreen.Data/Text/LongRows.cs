@@ -2,9 +2,9 @@ namespace OmicsScreen.Data.Text;
 
 /// <summary>
 /// The fast text reader (Sep) holds a whole row in one buffer of at most 16 Mi characters; a
-/// longer row (a samples-in-rows export of about a million features at full precision) stops it.
-/// Samples in rows are then read again row by row with no limit; a features-in-rows row that long
-/// becomes an input error naming the file and the layouts that have no such limit.
+/// longer row (a samples-in-rows export of about a million features at full precision, or a
+/// features-in-rows file of about a million samples) stops it. The file is then read again row by
+/// row with no limit but memory, in either layout.
 /// </summary>
 internal static class LongRows
 {
@@ -18,11 +18,4 @@ internal static class LongRows
         AggregateException aggregate => aggregate.InnerExceptions.Any(IsRowTooLong),
         _ => false,
     };
-
-    /// <summary>A features-in-rows row (one feature's value in every sample) past the buffer: more samples than the row-by-row reader takes in this layout.</summary>
-    public static PanelInputException FeaturesInRowsError(string path, Exception error) =>
-        PanelInputException.At(path, null, null,
-            FormattableString.Invariant($"has a row longer than the {MaxRowChars / (1024 * 1024)} Mi characters a features-in-rows CSV/TSV row may hold (or a quote that is never closed, which makes the rest of the file one row)."),
-            "Write the matrix with one row per sample (samples in rows have no row limit), or as Parquet or Arrow; if a quote is left open, close it.",
-            error);
 }

@@ -71,6 +71,11 @@ public static class ScreenReport
         facts.Add(new("Missing cells", ReportNumber.Percent(missingShare, 2)));
         facts.Add(new("Below-detection cells", ReportNumber.Percent(belowDetectionShare, 2)));
         html.DefinitionList(facts);
+        if (input.Warnings is { Count: > 0 } warnings)
+        {
+            html.Paragraph("Warnings of this run (also in manifest.json):");
+            html.BulletList(warnings);
+        }
         html.Paragraph("Settings (every one, defaults included; each with the option that sets it):");
         html.DefinitionList(ScreenReportText.Parameters(settings));
         html.EndSection();

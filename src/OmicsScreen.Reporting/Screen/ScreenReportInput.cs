@@ -22,6 +22,7 @@ namespace OmicsScreen.Reporting.Screen;
 /// <param name="Threads">Threads the forests used.</param>
 /// <param name="ShowSampleIds">When false (the default), no sample identifier appears anywhere in the report.</param>
 /// <param name="MergedParts">When above 0, the run was split into this many parts on separate processes and merged.</param>
+/// <param name="Warnings">What the run warned about (the loader's warnings, weak settings), as printed on the console; null or empty for none.</param>
 public sealed record ScreenReportInput(
     Panel Panel,
     ScreenResult Result,
@@ -36,7 +37,8 @@ public sealed record ScreenReportInput(
     int Cores,
     int Threads,
     bool ShowSampleIds = false,
-    int MergedParts = 0)
+    int MergedParts = 0,
+    IReadOnlyList<string>? Warnings = null)
 {
     /// <summary>File name of the manifest the report points to; it sits beside the report.</summary>
     public const string ManifestFileName = "manifest.json";

@@ -150,8 +150,11 @@ internal static class HostileInputCorpus
         // Issue 13, finding 2: a row past the fast text reader's 16 Mi-character buffer was an internal error.
         yield return new("2 a samples-in-rows row longer than 16 Mi characters loads", "m.csv", RowPastTheBuffer, Sheet,
             ExitCode.Success, ["samples"], ["--annotation", "note"]);
-        yield return new("2 a features-in-rows row longer than 16 Mi characters", "m.csv", FeatureRowsPastTheBuffer, Sheet,
-            ExitCode.InputError, ["m.csv", "longer than the 16 Mi characters", "one row per sample", "Parquet or Arrow"], ["--features-in-rows"]);
+        yield return new("2 a features-in-rows row longer than 16 Mi characters loads", "m.csv", FeatureRowsPastTheBuffer, null,
+            ExitCode.Success, ["samples", "300,000"], ["--features-in-rows"]);
+        yield return new("2 a features-in-rows file with rows past 16 Mi characters and --feature-block", "m.csv", FeatureRowsPastTheBuffer, null,
+            ExitCode.InputError, ["m.csv", "features in rows", "feature blocks and feature lists do not apply", "split it by rows"],
+            ["--features-in-rows", "--feature-block", "1/2"]);
 
         // Issue 13, finding 11: an outcome given twice, used without a word about the other copy.
         const string WithStatus = "sample_id,status,f1,f2\ns1,case,1,2\ns2,case,3,4\ns3,case,5,6\ns4,control,7,8\ns5,control,9,10\ns6,control,11,13\n";
@@ -160,8 +163,11 @@ internal static class HostileInputCorpus
         yield return new("11 the outcome twice in the sheet, disagreeing", "m.csv", Text(Valid),
             "sample_id,status,status\ns1,case,case\ns2,case,case\ns3,case,control\ns4,control,control\ns5,control,control\ns6,control,control\n",
             ExitCode.InputError, ["s.csv", "line 4", "appears twice", "columns 2 and 3", "Keep one of the two columns"]);
-        yield return new("11 the outcome in both the matrix and the sheet, agreeing, loads", "m.csv", Text(WithStatus), Sheet,
-            ExitCode.Success, ["samples"]);
+        yield return new("11 the outcome in both the matrix and the sheet, agreeing, loads with a warning", "m.csv", Text(WithStatus), Sheet,
+            ExitCode.Success, ["samples", "warning", "'status'", "both in the sample sheet s.csv and in the matrix m.csv", "their values agree"]);
+        yield return new("11 the outcome twice in the sheet, agreeing, loads with a warning naming both columns", "m.csv", Text(Valid),
+            "sample_id,status,status\ns1,case,case\ns2,case,case\ns3,case,case\ns4,control,control\ns5,control,control\ns6,control,control\n",
+            ExitCode.Success, ["samples", "warning", "'status'", "appears twice", "columns 2 and 3", "their values agree", "Keep one of the two"]);
 
         // Issue 13, finding 14: messages that named the wrong cause.
         yield return new("14 sample ids composed (NFC) in the matrix and decomposed (NFD) in the sheet", "m.csv",
@@ -220,14 +226,27 @@ internal static class HostileInputCorpus
         Encoding.UTF8.GetBytes(Valid.Replace("sample_id,", "sample_id,note,").Replace("s1,", "s1,n,").Replace("s2,", "s2," + new string('x', 17_000_000) + ",")
             .Replace("s3,", "s3,n,").Replace("s4,", "s4,n,").Replace("s5,", "s5,n,").Replace("s6,", "s6,n,"));
 
-    /// <summary>A features-in-rows header of 1.9 million sample ids (about 17 million characters).</summary>
+    /// <summary>
+    /// A features-in-rows panel of 300,000 samples whose outcome is an attribute row and whose two
+    /// feature rows hold numbers of over 55 digits: each feature row is over 17 million characters.
+    /// </summary>
     private static byte[] FeatureRowsPastTheBuffer(string folder)
     {
-        const int sampleCount = 1_900_000;
-        var text = new StringBuilder(sampleCount * 9 + 64);
+        const int sampleCount = 300_000;
+        var inv = System.Globalization.CultureInfo.InvariantCulture;
+        var zeros = new string('0', 55);
+        var text = new StringBuilder(sampleCount * 140);
         text.Append("feature");
-        for (int sample = 0; sample < sampleCount; sample++) text.Append(",s").Append(sample.ToString("D7", System.Globalization.CultureInfo.InvariantCulture));
-        text.Append("\nf1,1\n");
+        for (int sample = 0; sample < sampleCount; sample++) text.Append(",s").Append(sample.ToString("D6", inv));
+        text.Append("\nstatus");
+        for (int sample = 0; sample < sampleCount; sample++) text.Append(sample % 2 == 0 ? ",case" : ",control");
+        for (int feature = 1; feature <= 2; feature++)
+        {
+            text.Append("\nf").Append(feature);
+            for (int sample = 0; sample < sampleCount; sample++)
+                text.Append(',').Append(((sample * 7 + feature) % 13).ToString(inv)).Append('.').Append(zeros).Append(sample % 2);
+        }
+        text.Append('\n');
         return Encoding.UTF8.GetBytes(text.ToString());
     }
 

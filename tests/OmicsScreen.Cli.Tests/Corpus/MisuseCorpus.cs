@@ -27,7 +27,8 @@ internal static class MisuseCorpus
 
     private static IReadOnlySet<string> Everything(MisuseScene scene) => new HashSet<string>(FolderSnapshot.Take(scene.Root).Paths);
 
-    public static IEnumerable<MisuseCase> All() => Cases().Concat(SettingsCases()).Concat(NameCases()).Concat(PipeCases()).Concat(UnmeasuredMarkerCases());
+    public static IEnumerable<MisuseCase> All() => Cases().Concat(SettingsCases()).Concat(OptionRangeCases()).Concat(NameCases()).Concat(PipeCases())
+        .Concat(UnmeasuredMarkerCases());
 
     public static IEnumerable<MisuseCase> Cases()
     {
@@ -266,6 +267,154 @@ internal static class MisuseCorpus
         yield return new("11 grow --min-leaf above the sample count", s =>
                 ["grow", s.Panel(), "--samples", s.Sheet(), "--outcome", "status", "--min-leaf", "7"],
             ExitCode.Usage, ["--min-leaf 7", "single leaf", "6 samples"]);
+    }
+
+    /// <summary>
+    /// Finding 11, for every numeric option of `screen`, `grow` and `apply`: a value with which
+    /// nothing sensible can come out is refused before any work with exit code 1, the option, the
+    /// value and the range that works; a legal but weak one runs with a warning on the console
+    /// (and, for `screen`, in the manifest's warnings list).
+    /// </summary>
+    public static IEnumerable<MisuseCase> OptionRangeCases()
+    {
+        // Refused from the options alone, before the panel is read.
+        var screenRefusals = new (string Option, string Value, string[] Fragments)[]
+        {
+            ("--trees", "5", ["--trees 5", "at least 10"]),
+            ("--pairs", "0", ["--pairs 0", "at least 1"]),
+            ("--features-per-split", "0", ["--features-per-split 0", "at least 1", "square root of the feature count"]),
+            ("--min-leaf", "0", ["--min-leaf 0", "at least 1"]),
+            ("--repeat-level", "0.5", ["--repeat-level 0.5", "between 0 and 0.5"]),
+            ("--repeat-level", "0", ["--repeat-level 0", "between 0 and 0.5"]),
+            ("--per-repeat-cap", "0", ["--per-repeat-cap 0", "at least 1", "leave it out for no cap"]),
+            ("--min-frequency", "0.3", ["--min-frequency 0.3", "above 0.5 and at most 1"]),
+            ("--min-frequency", "1.5", ["--min-frequency 1.5", "above 0.5 and at most 1"]),
+            ("--max-q", "0", ["--max-q 0", "above 0 and at most 1"]),
+            ("--max-q", "1.5", ["--max-q 1.5", "above 0 and at most 1"]),
+            ("--decoys", "-1", ["--decoys -1", "at least 0", "automatic count"]),
+            ("--decoys", "5", ["--decoys 5", "never give a shortlist at --max-q 0.1", "cannot fall below 0.1667", "give at least 9"]),
+            ("--outcome-permutations", "-1", ["--outcome-permutations -1", "0 or more"]),
+            ("--redundancy-rho", "0", ["--redundancy-rho 0", "above 0 and at most 1"]),
+            ("--redundancy-rho", "1.2", ["--redundancy-rho 1.2", "above 0 and at most 1"]),
+            ("--curve-folds", "1", ["--curve-folds 1", "at least 2", "or 0 to skip"]),
+            ("--curve-repeats", "0", ["--curve-repeats 0", "at least 1"]),
+            ("--curve-inner-pairs", "0", ["--curve-inner-pairs 0", "at least 1"]),
+            ("--max-panel-size", "0", ["--max-panel-size 0", "at least 1"]),
+            ("--threads", "0", ["--threads 0", "at least 1", "all cores"]),
+            ("--threads", "-2", ["--threads -2", "at least 1", "all cores"]),
+        };
+        foreach (var (option, value, fragments) in screenRefusals)
+            yield return new($"11 screen {option} {value} is refused before any work", s => MisuseScene.SmallScreen(s.PathOf("r"), option, value),
+                ExitCode.Usage, fragments);
+        // The decoy bound's smallest value is 1/decoys (a list of every feature, no decoy passing).
+        yield return new("11 screen --decoys 9 with the decoy-bound rule is refused before any work",
+            s => MisuseScene.SmallScreen(s.PathOf("r"), "--decoys", "9", "--shortlist-rule", "decoy-bound"),
+            ExitCode.Usage, ["--decoys 9", "the decoy bound cannot fall below 0.1111", "give at least 10"]);
+
+        // From 100 decoys on the p-values' tail fit reaches below 1/(decoys + 1): a strict --max-q is then legal.
+        yield return new("11 screen --decoys 150 with --max-q 0.001 is screened", s => MisuseScene.SmallScreen(s.PathOf("r"), "--decoys", "150", "--max-q", "0.001"),
+            ExitCode.Success, ["Shortlist"]);
+
+        // Refused once the panel's size is known (WDBC: 569 samples, 30 features, 212 malignant), still before any forest.
+        yield return new("11 screen --features-per-split above the feature count", s => MisuseScene.SmallScreen(s.PathOf("r"), "--features-per-split", "31"),
+            ExitCode.Usage, ["--features-per-split 31", "30 features", "--features-per-split 30 or fewer"]);
+        // A bootstrap of the 284-sample half holds about 180 distinct samples: min-leaf 100 cannot split it.
+        yield return new("11 screen --min-leaf past the distinct samples of a half-sample's bootstrap", s => MisuseScene.SmallScreen(s.PathOf("r"), "--min-leaf", "100"),
+            ExitCode.Usage, ["--min-leaf 100", "single leaf", "about 180 distinct", "--min-leaf 71 or less"]);
+        // With 2 curve folds the inner screens grow on halves of 284 training samples: about 90 distinct in a bootstrap.
+        yield return new("11 screen --min-leaf that leaves the curve's inner trees one leaf", s => MisuseScene.SmallScreen(s.PathOf("r"), "--min-leaf", "60"),
+            ExitCode.Usage, ["--min-leaf 60", "panel-size curve's inner screens", "about 142 samples", "--min-leaf 35 or less", "--curve-folds 0"]);
+        yield return new("11 screen --curve-folds above the smallest class", s =>
+            {
+                var (matrix, sheet) = RareClassPanel(s);
+                return ["screen", matrix, "--samples", sheet, "--outcome", "status", "--curve-folds", "5", "--pairs", "2", "--trees", "20", "--out", s.PathOf("r"), "--quiet"];
+            },
+            ExitCode.Usage, ["--curve-folds 5", "4 samples of the smallest class 'case'", "AUC", "undefined", "--curve-folds 4 or fewer"]);
+        yield return new("11 screen --curve-folds equal to the smallest class is screened", s =>
+            {
+                var (matrix, sheet) = RareClassPanel(s);
+                return ["screen", matrix, "--samples", sheet, "--outcome", "status", "--curve-folds", "4", "--pairs", "2", "--trees", "20",
+                    "--curve-inner-pairs", "1", "--max-panel-size", "2", "--out", s.PathOf("r"), "--quiet"];
+            },
+            ExitCode.Success, ["Panel-size curve"],
+            Verify: (_, run) => Assert.DoesNotContain("NaN", run.Out));
+
+        // Legal but weak: the run goes ahead, warns on the console and keeps the warnings in the manifest.
+        yield return new("11 screen with few trees, pairs and decoys warns and records it", s => MisuseScene.SmallScreen(s.PathOf("r"), "--decoys", "50"),
+            ExitCode.Success, ["warning: --trees 20 is few", "warning: --pairs 2 gives only 4", "warning: --decoys 50 is too few for the p-values' tail fit"],
+            Verify: (s, _) =>
+            {
+                using var manifest = System.Text.Json.JsonDocument.Parse(File.ReadAllText(s.PathOf("r/manifest.json")));
+                var warnings = manifest.RootElement.GetProperty("warnings").EnumerateArray().Select(w => w.GetString()!).ToArray();
+                Assert.Contains(warnings, w => w.StartsWith("--trees 20", StringComparison.Ordinal));
+                Assert.Contains(warnings, w => w.StartsWith("--pairs 2", StringComparison.Ordinal));
+                Assert.Contains(warnings, w => w.StartsWith("--decoys 50", StringComparison.Ordinal));
+                Assert.Contains("Warnings of this run", File.ReadAllText(s.PathOf("r/report.html")));
+            });
+        yield return new("11 screen with a loose --max-q, a low --redundancy-rho and few outcome permutations warns", s =>
+                MisuseScene.SmallScreen(s.PathOf("r"), "--max-q", "0.4", "--redundancy-rho", "0.2", "--features-per-split", "30", "--outcome-permutations", "3"),
+            ExitCode.Success, ["warning: --max-q 0.4 lets up to 40%", "warning: --redundancy-rho 0.2", "warning: --features-per-split 30 tries every feature",
+                "warning: --outcome-permutations 3 gives permutation p-values no smaller than 1/(3 + 1) = 0.25"]);
+        yield return new("11 screen with the outcome in both the matrix and the sheet warns and records it", s =>
+            {
+                var lines = File.ReadAllLines(ReferenceData.Wdbc("wdbc.csv")).Skip(1).Select(line => line.Split(',')).Select(cells => cells[0] + "," + cells[1]);
+                string sheet = s.File("wdbc_sheet.csv", "sample_id,diagnosis\n" + string.Join("\n", lines) + "\n");
+                return MisuseScene.SmallScreen(s.PathOf("r"), "--samples", sheet);
+            },
+            ExitCode.Success, ["warning: the outcome column 'diagnosis' is both in the sample sheet wdbc_sheet.csv and in the matrix wdbc.csv", "their values agree"],
+            Verify: (s, _) => Assert.Contains("both in the sample sheet", File.ReadAllText(s.PathOf("r/manifest.json"))));
+
+        // The loader's warnings join the run's; in the report, one that names samples says how many instead (README: ids stay out of the report).
+        yield return new("11 screen --drop-unmatched warns naming the dropped samples, and the report only counts them", s =>
+            {
+                var lines = File.ReadAllLines(ReferenceData.Wdbc("wdbc.csv")).Skip(4).Select(line => line.Split(',')).Select(cells => cells[0] + ",x");
+                string sheet = s.File("partial_sheet.csv", "sample_id,note\n" + string.Join("\n", lines) + "\nQ7777,x\n");
+                return MisuseScene.SmallScreen(s.PathOf("r"), "--samples", sheet, "--drop-unmatched");
+            },
+            ExitCode.Success, ["warning: 4 samples were dropped", "S0001", "Q7777"],
+            Verify: (s, _) =>
+            {
+                string report = File.ReadAllText(s.PathOf("r/report.html"));
+                Assert.Contains("4 samples were dropped because they are in only one file", report);
+                Assert.DoesNotContain("S0001", report);
+                Assert.DoesNotContain("Q7777", report);
+            });
+
+        // grow: refused before the forest is grown.
+        string[] Grow(MisuseScene s, params string[] extra) => ["grow", s.Panel(), "--samples", s.Sheet(), "--outcome", "status", .. extra];
+        yield return new("11 grow --trees 0", s => Grow(s, "--trees", "0"), ExitCode.Usage, ["--trees", "at least 1"]);
+        yield return new("11 grow --features-per-split 0", s => Grow(s, "--features-per-split", "0"), ExitCode.Usage, ["--features-per-split 0", "at least 1", "square root"]);
+        yield return new("11 grow --features-per-split above the feature count", s => Grow(s, "--features-per-split", "4"),
+            ExitCode.Usage, ["--features-per-split 4", "3 features", "--features-per-split 3 or fewer"]);
+        yield return new("11 grow --max-depth 0", s => Grow(s, "--max-depth", "0"), ExitCode.Usage, ["--max-depth 0", "single leaf", "1 or more"]);
+        yield return new("11 grow --sample-fraction 1 leaves nothing out of bag", s => Grow(s, "--sample-fraction", "1"),
+            ExitCode.Usage, ["--sample-fraction 1", "no sample is ever out of bag", "for example 0.632"]);
+        yield return new("11 grow --sample-fraction 0 is out of range", s => Grow(s, "--sample-fraction", "0"),
+            ExitCode.Usage, ["--sample-fraction", "above 0 and at most 1"]);
+        yield return new("11 grow --sample-fraction drawing one sample per tree", s => Grow(s, "--sample-fraction", "0.1"),
+            ExitCode.Usage, ["single leaf", "draws 1 of the panel's 6 samples", "larger --sample-fraction"]);
+        yield return new("11 grow --threads 0", s => Grow(s, "--threads", "0"), ExitCode.Usage, ["--threads 0", "at least 1", "all cores"]);
+        yield return new("11 grow with few trees warns", s => Grow(s, "--trees", "10"),
+            ExitCode.Success, ["warning: --trees 10 is few", "out-of-bag error"]);
+
+        // apply has no numeric settings; the one combination that cannot work is a sheet without an outcome.
+        yield return new("11 apply with a sample sheet but no --outcome", s =>
+                ["apply", Path.Combine(s.ScreenFolder("r"), "locked_panel.json"), ReferenceData.Wdbc("wdbc.csv"), "--samples", s.Sheet(), "--out", s.PathOf("applied")],
+            ExitCode.Usage, ["sample sheet was given without --outcome", "name the outcome column"]);
+    }
+
+    /// <summary>A 40-sample panel with 4 cases and 36 controls, the first two features shifted in cases.</summary>
+    private static (string Matrix, string Sheet) RareClassPanel(MisuseScene scene)
+    {
+        var matrix = new StringBuilder("sample_id,f1,f2,f3,f4\n");
+        var sheet = new StringBuilder("sample_id,status\n");
+        for (int i = 0; i < 40; i++)
+        {
+            int shift = i < 4 ? 9 : 0;
+            matrix.Append(CultureInfo.InvariantCulture, $"s{i},{(i * 7) % 13 + shift},{(i * 5) % 11 + shift},{(i * 3) % 7},{i % 5}\n");
+            sheet.Append(CultureInfo.InvariantCulture, $"s{i},{(i < 4 ? "case" : "control")}\n");
+        }
+        return (scene.File("rare.csv", matrix.ToString()), scene.File("rare_sheet.csv", sheet.ToString()));
     }
 
     /// <summary>Cases of findings 13 and 14: names a reader would misread, and messages in the user's terms.</summary>
