@@ -22,6 +22,9 @@ public static class BenchmarkRegistry
         cases.Add(("interaction-scan", new InteractionScanCase(1_000, 5_000, 5_000)));
         cases.Add(("screen", new ScreenCase("screen-200x20000", 200, 20_000)));
         cases.Add(("screen", new ScreenCase("screen-1000x2000", 1_000, 2_000)));
+        // The widest panel the automatic interaction scan takes on, with and without it.
+        cases.Add(("screen-scan", new ScreenCase("screen-200x10000", 200, 10_000)));
+        cases.Add(("screen-scan", new ScreenCase("screen-200x10000-no-scan", 200, 10_000, Screening.Screen.InteractionScanMode.Off)));
         // The runtime's own share: a panel too small to matter.
         cases.Add(("memory-baseline", new MemoryCase("memory-60x100", 60, 100)));
         cases.Add(("memory", new MemoryCase("memory-200x2000", 200, 2_000)));

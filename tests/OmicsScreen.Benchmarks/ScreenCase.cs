@@ -8,8 +8,9 @@ namespace OmicsScreen.Benchmarks;
 /// <summary>
 /// The default screen (every option at its default, all cores) on a simulated panel with known
 /// causal features. Generation is not timed; the whole screen is, and each stage's time is printed.
+/// <paramref name="interactionScan"/> overrides the automatic interaction scan, to price it.
 /// </summary>
-public sealed class ScreenCase(string name, int sampleCount, int featureCount) : IBenchmarkCase
+public sealed class ScreenCase(string name, int sampleCount, int featureCount, InteractionScanMode interactionScan = InteractionScanMode.Auto) : IBenchmarkCase
 {
     public string Name => name;
 
@@ -26,7 +27,7 @@ public sealed class ScreenCase(string name, int sampleCount, int featureCount) :
             Seed = 42,
         });
         var watch = Stopwatch.StartNew();
-        var result = ScreenRunner.Run(panel, new ScreenOptions());
+        var result = ScreenRunner.Run(panel, new ScreenOptions { InteractionScan = interactionScan });
         double seconds = watch.Elapsed.TotalSeconds;
         int truePositives = result.Shortlist.Count(e => causal[e.Forest.FeatureIndex]);
         var figures = new List<string>
@@ -35,6 +36,7 @@ public sealed class ScreenCase(string name, int sampleCount, int featureCount) :
             $"shortlist={result.Shortlist.Count}",
             $"causal_found={truePositives}/{causal.Count(c => c)}",
             string.Create(CultureInfo.InvariantCulture, $"decoys={result.Settings.DecoyCount}"),
+            $"interaction_scan={(result.Settings.InteractionScan ? "on" : "off")}",
             $"recommended_size={result.PanelSize?.RecommendedSize}",
         };
         foreach (var (stage, stageSeconds) in result.StageSeconds)

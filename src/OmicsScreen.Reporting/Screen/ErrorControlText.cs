@@ -26,7 +26,7 @@ public static class ErrorControlText
             return Invariant($"No marker passed the rule, so no false marker is on the list; {decoys.DecoyCount} decoys (copies of real markers permuted once per run) were screened beside the real ones.");
         string bound = double.IsNaN(decoys.FalseDiscoveryBound) ? "" : Invariant($", and at most {Percent(decoys.FalseDiscoveryBound)} with the +1 correction of Barber & Candès (2015)");
         return Invariant($"Expected false markers on this list of {listed}: about {decoys.ExpectedFalseMarkers:0.#} ({Percent(decoys.EstimatedFalseDiscoveryRate)} of the list{bound}). ")
-            + Invariant($"Estimated from decoys: {decoys.DecoyCount} copies of real markers, each permuted once per run and screened beside them; {decoys.DecoysPassing} passed the same rule, and each stands for {decoys.FeaturesPerDecoy:0.##} real features.");
+            + Invariant($"Estimated from decoys: {decoys.DecoyCount} copies of real markers, each permuted once per run and screened beside them; {decoys.DecoysPassing} passed the same rule, and each stands for {decoys.FeaturesPerDecoy:0.##} real feature{(decoys.FeaturesPerDecoy == 1 ? "" : "s")}.");
     }
 
     /// <summary>The rule that cut the list, in one sentence.</summary>
