@@ -5,7 +5,7 @@ namespace OmicsScreen.Benchmarks;
 /// <summary>
 /// The forest suite's summary, a markdown table ready for the README: per shape, our median
 /// training and binning time and out-of-bag error over seeds 1..5, beside scikit-learn's and
-/// ranger's on the same panel and seeds (when installed), and the speed ratio to the faster of them.
+/// ranger's on the same panel and seeds ("not run" when not installed or skipped), and the speed ratio to the faster of them.
 /// </summary>
 public sealed class ForestReport : ISuiteReport
 {
@@ -33,7 +33,7 @@ public sealed class ForestReport : ISuiteReport
             foreach (var library in Libraries)
             {
                 double seconds = m.MedianFigure(library + "_train_median_s");
-                cells.Add(double.IsNaN(seconds) ? "not installed" : Invariant($"{seconds:F2} s"));
+                cells.Add(double.IsNaN(seconds) ? "not run" : Invariant($"{seconds:F2} s"));
                 cells.Add(double.IsNaN(seconds) ? "" : Error(m, library + "_"));
                 if (!double.IsNaN(seconds)) fastest = Math.Min(fastest, seconds);
             }
