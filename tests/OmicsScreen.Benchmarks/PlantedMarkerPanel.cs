@@ -6,12 +6,5 @@ namespace OmicsScreen.Benchmarks;
 /// <summary>The simulated panel the forest benchmarks train on: two classes, 10 planted markers shifted by one SD, fixed seed.</summary>
 public static class PlantedMarkerPanel
 {
-    public static Panel Generate(int sampleCount, int featureCount) => SyntheticPanel.Generate(new SyntheticPanelSpec
-    {
-        SampleCount = sampleCount,
-        FeatureCount = featureCount,
-        InformativeCount = 10,
-        EffectSize = 1.0,
-        Seed = 42,
-    });
+    public static Panel Generate(int sampleCount, int featureCount) => ForestReferenceShapes.Generate(sampleCount, featureCount);
 }

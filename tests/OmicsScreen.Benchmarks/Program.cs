@@ -8,7 +8,8 @@ namespace OmicsScreen.Benchmarks;
 /// resident memory reported belongs to that case alone, and prints the median time.
 /// Usage: omicsscreen-bench [SUITE|CASE ...] [--runs N] [--work DIR]
 /// or: omicsscreen-bench calibration [--seeds N] [--quick] [--threads T] [--only NAME]
-/// (the calibration suite measures error control, not time, so it runs in this process).
+/// (the calibration suite measures error control, not time, so it runs in this process)
+/// or: omicsscreen-bench write-panels DIR (the panels of reference/forest, for its scripts).
 /// </summary>
 public static class Program
 {
@@ -18,6 +19,7 @@ public static class Program
         CultureInfo.CurrentCulture = CultureInfo.InvariantCulture;
         if (args.Length >= 3 && args[0] == "--child") return RunChild(args[1], args[2]);
         if (args.Length >= 1 && args[0] == "calibration") return Calibration.CalibrationSuite.Run(args[1..], Console.Out);
+        if (args.Length == 2 && args[0] == "write-panels") return ReferenceForests.WritePanels(args[1], Console.Out);
 
         int runs = 3;
         string work = Path.Combine(Path.GetTempPath(), "omicsscreen-bench");

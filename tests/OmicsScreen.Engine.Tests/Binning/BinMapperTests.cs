@@ -127,4 +127,33 @@ public class BinMapperTests
         var encoded = binned.Encode(panel.Matrix);
         for (int f = 0; f < binned.FeatureCount; f++) Assert.Equal(binned.Codes(f).ToArray(), encoded.Codes(f).ToArray());
     }
+
+    [Theory]
+    [InlineData(300, 4, 0.0)]    // few distinct values: exact bins, many ties
+    [InlineData(600, 1000, 0.1)] // many distinct values: quantile bins, with unmeasured cells
+    [InlineData(600, 100_000, 0.3)]
+    public void Codes_read_from_the_sorted_walk_equal_a_bound_search_of_every_cell(int sampleCount, int levels, double unmeasured)
+    {
+        // The plain definition (FeatureBins.CodeOf: the first bin whose upper bound is at least the
+        // value, reserved codes for unmeasured cells) is the reference the sorted walk must match.
+        var generator = new Engine.Randomness.Xoshiro256StarStar((ulong)levels);
+        var builder = new FeatureMatrixBuilder(["a", "b", "c"], Enumerable.Range(0, sampleCount).Select(s => $"s{s}").ToArray());
+        for (int f = 0; f < 3; f++)
+            for (int s = 0; s < sampleCount; s++)
+            {
+                double u = generator.NextDouble();
+                if (u < unmeasured / 3) builder.SetMissing(f, s);
+                else if (u < 2 * unmeasured / 3) builder.SetBelowDetection(f, s, 0.5f);
+                else if (u < unmeasured) builder.SetMeasured(f, s, float.NaN);
+                else builder.SetMeasured(f, s, generator.NextInt(levels) * (f == 2 ? -0.25f : 1.5f));
+            }
+        var matrix = builder.Build();
+        var binned = new BinMapper().Bin(matrix, threadCount: 2);
+        for (int f = 0; f < 3; f++)
+        {
+            var bins = binned.Bins(f);
+            for (int s = 0; s < sampleCount; s++)
+                Assert.Equal(bins.CodeOf(matrix.Value(f, s), matrix.State(f, s)), binned.Codes(f)[s]);
+        }
+    }
 }
