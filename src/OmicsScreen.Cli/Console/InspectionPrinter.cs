@@ -15,7 +15,8 @@ internal static class InspectionPrinter
     {
         var i = loaded.Inspection;
         var facts = new TextTable("item", "found");
-        facts.Add("matrix", $"{i.MatrixPath} ({FormatName(i.FileFormat, i.Delimiter)}, {LayoutName(i.Layout)})");
+        string compression = i.Compression is null ? "" : $", {i.Compression}-compressed";
+        facts.Add("matrix", $"{i.MatrixPath} ({FormatName(i.FileFormat, i.Delimiter)}{compression}, {LayoutName(i.Layout)})");
         if (i.SampleSheetPath is not null) facts.Add("sample sheet", i.SampleSheetPath);
         facts.Add("samples", Count(i.SampleCount));
         facts.Add("features", Count(i.FeatureCount));

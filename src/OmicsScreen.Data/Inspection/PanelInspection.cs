@@ -11,6 +11,8 @@ public sealed record PanelInspection
     public required MatrixFileFormat FileFormat { get; init; }
     /// <summary>"comma", "tab" or "semicolon" for text files; null for Parquet and Arrow.</summary>
     public string? Delimiter { get; init; }
+    /// <summary>"gzip" when the text was decompressed while reading; null otherwise.</summary>
+    public string? Compression { get; init; }
     public required PanelLayout Layout { get; init; }
     public string? SampleSheetPath { get; init; }
 

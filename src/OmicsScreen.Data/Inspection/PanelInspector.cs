@@ -38,6 +38,7 @@ internal static class PanelInspector
             MatrixPath = source.Path,
             FileFormat = source.Format,
             Delimiter = source.Delimiter is { } d ? Text.DelimiterDetector.Describe(d) : null,
+            Compression = source.Gzip ? "gzip" : null,
             Layout = source.Layout,
             SampleSheetPath = sampleSheetPath,
             SampleCount = matrix.SampleCount,

@@ -25,6 +25,12 @@ internal static class DelimitedMatrixReader
         {
             return ReadRows(path, options, ct);
         }
+        catch (AggregateException e) when (e.InnerExceptions.Count == 1 && e.InnerExceptions[0] is PanelInputException inner)
+        {
+            // A damaged gzip file is found while Sep reads ahead for its parsing workers.
+            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Throw(inner);
+            throw;
+        }
         catch (Exception e) when (LongRows.IsRowTooLong(e))
         {
             // Sep holds a row in a buffer of at most 16 Mi characters; a longer one is read again row by row.
@@ -39,7 +45,7 @@ internal static class DelimitedMatrixReader
         char delimiter = DelimiterDetector.Detect(path);
         using var text = DelimiterDetector.OpenText(path);
         using var reader = Open(text, delimiter);
-        var source = new MatrixSource(path, MatrixFileFormat.DelimitedText, delimiter, options.Layout);
+        var source = new MatrixSource(path, MatrixFileFormat.DelimitedText, delimiter, options.Layout) { Gzip = TextInput.IsGzip(path) };
         var header = ReadHeader(reader, path);
         int rowBound = Math.Max(1, LineCounter.UpperBoundOfLines(path) - 1);
         var slots = new SlotCounter();
@@ -92,7 +98,7 @@ internal static class DelimitedMatrixReader
         using var text = DelimiterDetector.OpenText(path);
         var reader = new TextRowReader(text, delimiter);
         var row = new TextRow();
-        var source = new MatrixSource(path, MatrixFileFormat.DelimitedText, delimiter, options.Layout);
+        var source = new MatrixSource(path, MatrixFileFormat.DelimitedText, delimiter, options.Layout) { Gzip = TextInput.IsGzip(path) };
         var header = ReadLongHeader(reader, row, path);
         int rowBound = Math.Max(1, LineCounter.UpperBoundOfLines(path) - 1);
         var slots = new SlotCounter();

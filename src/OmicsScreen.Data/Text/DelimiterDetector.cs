@@ -110,10 +110,10 @@ internal static class DelimiterDetector
     /// </summary>
     public static bool IsCommentAboveHeader(ReadOnlySpan<char> firstCell) => firstCell.TrimStart().StartsWith('#');
 
-    /// <summary>Opens UTF-8 text, skipping a byte-order mark when there is one.</summary>
+    /// <summary>Opens UTF-8 text (decompressed when the file is gzip), skipping a byte-order mark when there is one.</summary>
     public static StreamReader OpenText(string path) =>
-        new(path, new UTF8Encoding(encoderShouldEmitUTF8Identifier: false), detectEncodingFromByteOrderMarks: true,
-            new FileStreamOptions { Access = FileAccess.Read, BufferSize = 1 << 16, Options = FileOptions.SequentialScan });
+        new(TextInput.Open(path), new UTF8Encoding(encoderShouldEmitUTF8Identifier: false), detectEncodingFromByteOrderMarks: true,
+            bufferSize: 1 << 16, leaveOpen: false);
 
     /// <summary>The delimiter as a word for people: "comma", "tab", "semicolon".</summary>
     public static string Describe(char delimiter) => delimiter switch
