@@ -17,6 +17,7 @@ internal static class InspectionPrinter
         var facts = new TextTable("item", "found");
         string compression = i.Compression is null ? "" : $", {i.Compression}-compressed";
         facts.Add("matrix", $"{i.MatrixPath} ({FormatName(i.FileFormat, i.Delimiter)}{compression}, {LayoutName(i.Layout)})");
+        if (i.CommentLineCount > 0) facts.Add("comment lines", $"{Count(i.CommentLineCount)} above the header ('#' or '!'), skipped");
         if (i.SampleSheetPath is not null) facts.Add("sample sheet", i.SampleSheetPath);
         facts.Add("samples", Count(i.SampleCount));
         facts.Add("features", Count(i.FeatureCount));

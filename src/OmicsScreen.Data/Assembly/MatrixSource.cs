@@ -9,4 +9,7 @@ internal sealed record MatrixSource(string Path, MatrixFileFormat Format, char? 
 {
     /// <summary>True when the text was gzip-compressed and decompressed while reading.</summary>
     public bool Gzip { get; init; }
+
+    /// <summary>Comment lines ('#' or '!') skipped above the header of a text file.</summary>
+    public int CommentLineCount { get; init; }
 }

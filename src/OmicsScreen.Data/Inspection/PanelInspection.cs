@@ -13,6 +13,8 @@ public sealed record PanelInspection
     public string? Delimiter { get; init; }
     /// <summary>"gzip" when the text was decompressed while reading; null otherwise.</summary>
     public string? Compression { get; init; }
+    /// <summary>Comment lines ('#' or '!') skipped above the header of a text matrix.</summary>
+    public int CommentLineCount { get; init; }
     public required PanelLayout Layout { get; init; }
     public string? SampleSheetPath { get; init; }
 

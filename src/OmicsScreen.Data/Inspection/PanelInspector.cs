@@ -39,6 +39,7 @@ internal static class PanelInspector
             FileFormat = source.Format,
             Delimiter = source.Delimiter is { } d ? Text.DelimiterDetector.Describe(d) : null,
             Compression = source.Gzip ? "gzip" : null,
+            CommentLineCount = source.CommentLineCount,
             Layout = source.Layout,
             SampleSheetPath = sampleSheetPath,
             SampleCount = matrix.SampleCount,

@@ -46,7 +46,8 @@ internal static class DelimitedMatrixReader
         using var text = DelimiterDetector.OpenText(path);
         using var reader = Open(text, delimiter);
         var source = new MatrixSource(path, MatrixFileFormat.DelimitedText, delimiter, options.Layout) { Gzip = TextInput.IsGzip(path) };
-        var header = ReadHeader(reader, path);
+        var header = ReadHeader(reader, path, out int commentLines);
+        source = source with { CommentLineCount = commentLines };
         int rowBound = Math.Max(1, LineCounter.UpperBoundOfLines(path) - 1);
         var slots = new SlotCounter();
         return options.Layout == PanelLayout.SamplesInRows
@@ -61,13 +62,13 @@ internal static class DelimitedMatrixReader
         {
             using var text = DelimiterDetector.OpenText(path);
             using var reader = Open(text, DelimiterDetector.Detect(path));
-            return ReadHeader(reader, path);
+            return ReadHeader(reader, path, out _);
         }
         catch (Exception e) when (LongRows.IsRowTooLong(e))
         {
             using var text = DelimiterDetector.OpenText(path);
             var reader = new TextRowReader(text, DelimiterDetector.Detect(path));
-            return ReadLongHeader(reader, new TextRow(), path);
+            return ReadLongHeader(reader, new TextRow(), path, out _);
         }
     }
 
@@ -98,8 +99,8 @@ internal static class DelimitedMatrixReader
         using var text = DelimiterDetector.OpenText(path);
         var reader = new TextRowReader(text, delimiter);
         var row = new TextRow();
-        var source = new MatrixSource(path, MatrixFileFormat.DelimitedText, delimiter, options.Layout) { Gzip = TextInput.IsGzip(path) };
-        var header = ReadLongHeader(reader, row, path);
+        var header = ReadLongHeader(reader, row, path, out int commentLines);
+        var source = new MatrixSource(path, MatrixFileFormat.DelimitedText, delimiter, options.Layout) { Gzip = TextInput.IsGzip(path), CommentLineCount = commentLines };
         int rowBound = Math.Max(1, LineCounter.UpperBoundOfLines(path) - 1);
         var slots = new SlotCounter();
         var roles = SampleColumnRoles.Resolve(header, options, path, isTableRow: false);
@@ -196,7 +197,11 @@ internal static class DelimitedMatrixReader
     {
         if (row.IsBlank) return new ParsedRow { IsBlank = true };
         int slot = slots.Next();
-        var parsed = new ParsedRow { Line = row.FirstLine, FieldCount = row.FieldCount, Slot = slot, BeyondCapacity = slot >= columns.SampleCapacity };
+        var parsed = new ParsedRow
+        {
+            Line = row.FirstLine, FieldCount = row.FieldCount, Slot = slot, BeyondCapacity = slot >= columns.SampleCapacity,
+            IsComment = DelimiterDetector.IsComment(row[0]),
+        };
         if (!parsed.CanHoldCells(fieldCount)) return parsed;
         parsed.Label = row[roles.IdColumn].Trim().ToString();
         var texts = new string[roles.AttributeColumns.Length];
@@ -217,11 +222,17 @@ internal static class DelimitedMatrixReader
         return parsed;
     }
 
-    private static string[] ReadLongHeader(TextRowReader reader, TextRow row, string path)
+    private static string[] ReadLongHeader(TextRowReader reader, TextRow row, string path, out int commentLines)
     {
+        commentLines = 0;
         while (reader.Next(row))
         {
-            if (row.IsBlank || DelimiterDetector.IsCommentAboveHeader(row[0])) continue;
+            if (row.IsBlank) continue;
+            if (DelimiterDetector.IsCommentAboveHeader(row[0]))
+            {
+                commentLines++;
+                continue;
+            }
             var header = new string[row.FieldCount];
             for (int c = 0; c < header.Length; c++) header[c] = row[c].Trim().ToString();
             return header;
@@ -385,7 +396,11 @@ internal static class DelimitedMatrixReader
     {
         if (IsBlank(row)) return new ParsedRow { IsBlank = true };
         int slot = slots.Next();
-        return new ParsedRow { Line = FirstLine(row), FieldCount = row.ColCount, Slot = slot, BeyondCapacity = slot >= slotCapacity };
+        return new ParsedRow
+        {
+            Line = FirstLine(row), FieldCount = row.ColCount, Slot = slot, BeyondCapacity = slot >= slotCapacity,
+            IsComment = DelimiterDetector.IsComment(row[0].Span),
+        };
     }
 
     /// <summary>
@@ -396,13 +411,19 @@ internal static class DelimitedMatrixReader
     private static long FirstLine(SepReader.Row row) =>
         row.LineNumberToExcl - 1 - row.Span.Count('\n');
 
-    private static string[] ReadHeader(SepReader reader, string path)
+    internal static string[] ReadHeader(SepReader reader, string path, out int commentLines)
     {
+        commentLines = 0;
         // Not foreach: leaving a foreach early would dispose the reader before the data rows.
         while (reader.MoveNext())
         {
             var row = reader.Current;
-            if (IsBlank(row) || DelimiterDetector.IsCommentAboveHeader(row[0].Span)) continue;
+            if (IsBlank(row)) continue;
+            if (DelimiterDetector.IsCommentAboveHeader(row[0].Span))
+            {
+                commentLines++;
+                continue;
+            }
             var header = new string[row.ColCount];
             for (int c = 0; c < header.Length; c++) header[c] = row[c].Span.Trim().ToString();
             return header;
@@ -427,6 +448,7 @@ internal static class DelimitedMatrixReader
 
     private static void CheckRow(ParsedRow row, int expected, string path)
     {
+        if (row.IsComment) throw DelimiterDetector.CommentInsideData(path, row.Line);
         if (row.FieldCount != expected)
             throw PanelInputException.At(path, row.Line, null,
                 FormattableString.Invariant($"the row has {row.FieldCount} fields but the header has {expected}."),

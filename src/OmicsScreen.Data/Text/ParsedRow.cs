@@ -8,6 +8,9 @@ namespace OmicsScreen.Data.Text;
 internal sealed class ParsedRow
 {
     public bool IsBlank { get; init; }
+
+    /// <summary>True when the row's first cell starts with '#' or '!': a comment line below the header.</summary>
+    public bool IsComment { get; init; }
     public long Line { get; init; }
     public int FieldCount { get; init; }
 

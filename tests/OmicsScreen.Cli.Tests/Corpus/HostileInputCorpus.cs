@@ -73,6 +73,11 @@ internal static class HostileInputCorpus
         yield return new("a NUL byte in a text file", "m.csv", Text(WithSecondSample("s2,3,4\0")), Sheet,
             ExitCode.InputError, ["m.csv", "binary", "CSV"]);
         yield return new("Windows line ends load", "m.csv", Text(Valid.Replace("\n", "\r\n")), Sheet, ExitCode.Success, ["samples"]);
+        // Comment lines: '#' and '!' above the header are skipped and stated; inside the data they are an error (common practice).
+        yield return new("comment lines above the header load and are counted", "m.csv", Text("# exported by X\n!platform Y\n" + Valid), Sheet,
+            ExitCode.Success, ["comment lines", "2 above the header"]);
+        yield return new("a comment line inside the data", "m.csv", Text(WithSecondSample("# freezer failure, s2 re-run")), Sheet,
+            ExitCode.InputError, ["m.csv", "line 3", "comment line inside the data", "move the line above the header"]);
         yield return new("blank lines between rows load", "m.csv", Text(Valid.Replace("s3,", "\n\ns3,")), Sheet, ExitCode.Success, ["samples"]);
 
         // Out-of-range and special numbers.
