@@ -47,6 +47,16 @@ public sealed record PanelLoadOptions
     /// </summary>
     public IReadOnlyList<string>? KeepFeatures { get; init; }
 
+    /// <summary>
+    /// The columns of a features-in-rows (or long) file that describe features; the first names
+    /// the feature, the others travel with it as annotations. Null: in features-in-rows text, the
+    /// first column and the text columns after it up to the first column of numbers.
+    /// </summary>
+    public IReadOnlyList<string>? FeatureColumns { get; init; }
+
+    /// <summary>The describing column (of the feature sheet or the matrix) holding each feature's lab-facing name. Default: a feature-sheet column named display_name.</summary>
+    public string? DisplayNameColumn { get; init; }
+
     /// <summary>The columns that describe samples rather than measure them: outcome, cohort, subject and annotations.</summary>
     internal HashSet<string> SampleAttributeNames()
     {

@@ -48,11 +48,13 @@ public static class PanelLoader
         ct.ThrowIfCancellationRequested();
 
         var findings = new List<InspectionFinding>();
+        var (descriptions, featureColumns) = FeatureDescriber.FromMatrix(raw, options);
         var (panel, dropped) = PanelAssembler.Assemble(raw, sheet, options, findings);
-        var inspection = PanelInspector.Inspect(panel, raw.Source, options.SampleSheetPath, dropped, options, findings);
+        var inspection = PanelInspector.Inspect(panel, raw.Source, options.SampleSheetPath, dropped, options, findings)
+            with { FeatureColumns = featureColumns };
         var inputs = new List<InputFileRecord> { matrixRecord.GetAwaiter().GetResult() };
         if (options.SampleSheetPath is { } path) inputs.Add(Record(path));
-        return new LoadedPanel(panel, inspection, inputs);
+        return new LoadedPanel(panel, inspection, inputs, descriptions);
     }
 
     private static RawMatrix ReadMatrix(PanelLoadOptions options, MatrixFileFormat format, CancellationToken ct)

@@ -63,6 +63,22 @@ public sealed class PanelInputOptions
         Description = "The matrix has one feature per row and one sample per column.",
     };
 
+    public Option<string[]> FeatureColumns { get; } = new("--feature-columns")
+    {
+        Description = "A column of a features-in-rows (or long) file that describes features rather than measuring a sample (repeatable): "
+            + "the first names each feature, the others travel with it as annotations. Default with --features-in-rows: the first column "
+            + "and the text columns after it, up to the first column of numbers.",
+        HelpName = "COLUMN",
+        AllowMultipleArgumentsPerToken = false,
+    };
+
+    public Option<string?> DisplayName { get; } = new("--display-name")
+    {
+        Description = "The describing column (of the feature sheet or the matrix file) holding each feature's lab-facing name, "
+            + "shown first in the report and tables. Default: a feature-sheet column named display_name.",
+        HelpName = "COLUMN",
+    };
+
     public Option<bool> DropUnmatched { get; } = new("--drop-unmatched")
     {
         Description = "Drop samples found in only one of matrix and sample sheet (with a warning) instead of stopping.",
@@ -91,6 +107,8 @@ public sealed class PanelInputOptions
         command.Options.Add(SampleIdColumn);
         command.Options.Add(Annotations);
         command.Options.Add(FeaturesInRows);
+        command.Options.Add(FeatureColumns);
+        command.Options.Add(DisplayName);
         command.Options.Add(DropUnmatched);
         command.Options.Add(FeatureBlock);
         command.Options.Add(KeepFeatures);
@@ -108,6 +126,8 @@ public sealed class PanelInputOptions
         AnnotationColumns = parse.GetValue(Annotations) ?? [],
         Layout = parse.GetValue(FeaturesInRows) ? PanelLayout.FeaturesInRows : PanelLayout.SamplesInRows,
         DropUnmatchedSamples = parse.GetValue(DropUnmatched),
+        FeatureColumns = parse.GetValue(FeatureColumns) is { Length: > 0 } describing ? describing : null,
+        DisplayNameColumn = parse.GetValue(DisplayName),
         FeatureBlock = parse.GetValue(FeatureBlock) is { } block ? ParseBlock(block) : null,
         KeepFeatures = parse.GetValue(KeepFeatures) is { } list ? ReadFeatureList(list) : null,
     };

@@ -18,6 +18,7 @@ internal static class InspectionPrinter
         string compression = i.Compression is null ? "" : $", {i.Compression}-compressed";
         facts.Add("matrix", $"{i.MatrixPath} ({FormatName(i.FileFormat, i.Delimiter)}{compression}, {LayoutName(i.Layout)})");
         if (i.CommentLineCount > 0) facts.Add("comment lines", $"{Count(i.CommentLineCount)} above the header ('#' or '!'), skipped");
+        if (i.FeatureColumns is { } describing) facts.Add("feature columns", FeatureColumnsText(describing));
         if (i.SampleSheetPath is not null) facts.Add("sample sheet", i.SampleSheetPath);
         facts.Add("samples", Count(i.SampleCount));
         facts.Add("features", Count(i.FeatureCount));
@@ -89,6 +90,17 @@ internal static class InspectionPrinter
         MatrixFileFormat.ArrowStream => "Arrow IPC stream",
         _ => format.ToString(),
     };
+
+    /// <summary>One line: which column names features, which travel with them, and how they were found.</summary>
+    private static string FeatureColumnsText(FeatureColumnsFound found)
+    {
+        string text = $"'{found.IdColumn}' names each feature";
+        if (found.AnnotationColumns.Count > 0)
+            text += "; " + string.Join(", ", found.AnnotationColumns.Select(c => $"'{c}'")) + " travel with it as annotations";
+        return text + (found.Detected
+            ? " (leading text columns before the first column of numbers; name them with --feature-columns)"
+            : " (named with --feature-columns)");
+    }
 
     private static string LayoutName(PanelLayout layout) =>
         layout == PanelLayout.SamplesInRows ? "samples in rows" : "features in rows";

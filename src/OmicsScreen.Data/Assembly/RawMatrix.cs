@@ -29,4 +29,13 @@ internal sealed class RawMatrix
 
     /// <summary>The id and annotation column names, for "columns available" in messages.</summary>
     public IReadOnlyList<string> OtherColumns { get; }
+
+    /// <summary>The column naming features (features in rows, long tables); null when features are columns.</summary>
+    public string? FeatureIdColumn { get; init; }
+
+    /// <summary>Feature-describing columns read with the matrix (name, one text per feature in matrix order).</summary>
+    public IReadOnlyList<(string Name, string[] Values)> FeatureAnnotations { get; init; } = [];
+
+    /// <summary>True when the describing columns were found as leading text columns rather than named by an option.</summary>
+    public bool FeatureColumnsDetected { get; init; }
 }

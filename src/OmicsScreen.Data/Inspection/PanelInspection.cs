@@ -15,6 +15,8 @@ public sealed record PanelInspection
     public string? Compression { get; init; }
     /// <summary>Comment lines ('#' or '!') skipped above the header of a text matrix.</summary>
     public int CommentLineCount { get; init; }
+    /// <summary>The feature-describing columns of a features-in-rows or long file; null when features are columns.</summary>
+    public FeatureColumnsFound? FeatureColumns { get; init; }
     public required PanelLayout Layout { get; init; }
     public string? SampleSheetPath { get; init; }
 

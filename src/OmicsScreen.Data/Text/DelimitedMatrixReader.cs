@@ -244,12 +244,12 @@ internal static class DelimitedMatrixReader
     private static RawMatrix ReadFeaturesInRows(SepReader reader, string[] header, SlotCounter slots, int rowBound,
         MatrixSource source, PanelLoadOptions options, CancellationToken ct)
     {
-        var sampleIds = FeaturesInRowsSampleIds(header, source.Path);
         var attributeNames = options.SampleAttributeNames();
-        var columns = new FeatureColumns(rowBound, sampleIds.Length);
-        var rows = reader.ParallelEnumerate(row => ParseFeatureRow(row, header.Length, slots, attributeNames, columns),
+        var roles = FeaturesInRowsRoles(header, source, options, attributeNames);
+        var columns = new FeatureColumns(rowBound, roles.SampleIds.Length);
+        var rows = reader.ParallelEnumerate(row => ParseFeatureRow(row, header.Length, slots, attributeNames, roles, columns),
             Environment.ProcessorCount);
-        return CollectFeatures(rows, header, sampleIds, columns, source, ct);
+        return CollectFeatures(rows, header, roles, columns, source, options, ct);
     }
 
     /// <summary>
@@ -262,61 +262,68 @@ internal static class DelimitedMatrixReader
         using var text = DelimiterDetector.OpenText(path);
         var reader = new TextRowReader(text, delimiter);
         var row = new TextRow();
-        var source = new MatrixSource(path, MatrixFileFormat.DelimitedText, delimiter, options.Layout);
-        var header = ReadLongHeader(reader, row, path);
-        var sampleIds = FeaturesInRowsSampleIds(header, path);
+        var header = ReadLongHeader(reader, row, path, out int commentLines);
+        var source = new MatrixSource(path, MatrixFileFormat.DelimitedText, delimiter, options.Layout) { Gzip = TextInput.IsGzip(path), CommentLineCount = commentLines };
+        var attributeNames = options.SampleAttributeNames();
+        var roles = FeaturesInRowsRoles(header, source, options, attributeNames);
         int rowBound = Math.Max(1, LineCounter.UpperBoundOfLines(path) - 1);
         var slots = new SlotCounter();
-        var attributeNames = options.SampleAttributeNames();
-        var columns = new FeatureColumns(rowBound, sampleIds.Length);
+        var columns = new FeatureColumns(rowBound, roles.SampleIds.Length);
         IEnumerable<ParsedRow> Rows()
         {
-            while (reader.Next(row)) yield return ParseFeatureRow(row, header.Length, slots, attributeNames, columns);
+            while (reader.Next(row)) yield return ParseFeatureRow(row, header.Length, slots, attributeNames, roles, columns);
         }
-        return CollectFeatures(Rows(), header, sampleIds, columns, source, ct);
+        return CollectFeatures(Rows(), header, roles, columns, source, options, ct);
     }
 
-    /// <summary>The header's sample ids (every column after the first), checked.</summary>
-    private static string[] FeaturesInRowsSampleIds(string[] header, string path)
+    /// <summary>The header's describing columns and sample ids (every other column), checked.</summary>
+    private static FeatureRowRoles FeaturesInRowsRoles(string[] header, MatrixSource source, PanelLoadOptions options, HashSet<string> attributeNames)
     {
+        string path = source.Path;
         if (header.Length < 2)
             throw PanelInputException.At(path, 1, null, "has a single column, so there are no sample columns.",
                 "Check the delimiter, or load the file without --features-in-rows.");
-        var sampleIds = header[1..];
+        var roles = FeatureRowRoles.Resolve(header, options, path,
+            () => LeadingTextColumns.Count(path, source.Delimiter!.Value, header.Length, attributeNames, FeatureRowRoles.ScannedRows));
+        var sampleIds = roles.SampleIds;
         for (int s = 0; s < sampleIds.Length; s++)
-            NameRules.Check(sampleIds[s], "sample id", path, 1, FormattableString.Invariant($"#{s + 2}"));
+            NameRules.Check(sampleIds[s], "sample id", path, 1, FormattableString.Invariant($"#{roles.SampleColumns[s] + 1}"));
         NameRules.CheckUnique(sampleIds, "sample id", path,
             "Make sample ids in the header unique (technical replicates need their own ids).");
-        return sampleIds;
+        return roles;
     }
 
     /// <summary>Checks the parsed feature rows in file order, then gathers the features' slots into the matrix.</summary>
-    private static RawMatrix CollectFeatures(IEnumerable<ParsedRow> rows, string[] header, string[] sampleIds,
-        FeatureColumns columns, MatrixSource source, CancellationToken ct)
+    private static RawMatrix CollectFeatures(IEnumerable<ParsedRow> rows, string[] header, FeatureRowRoles roles,
+        FeatureColumns columns, MatrixSource source, PanelLoadOptions options, CancellationToken ct)
     {
         string path = source.Path;
+        var sampleIds = roles.SampleIds;
+        var descriptors = new List<string[]>();
         var featureNames = new List<string>();
         var featureSlots = new List<int>();
         var annotations = new Dictionary<string, string[]>(StringComparer.Ordinal);
         int rowCount = 0;
+        string idName = header[roles.IdColumn];
         foreach (var row in rows)
         {
             if (row.IsBlank) continue;
             if ((rowCount++ & (CancellationCheckRows - 1)) == 0) ct.ThrowIfCancellationRequested();
             CheckRow(row, header.Length, path);
-            NameRules.Check(row.Label, "feature name", path, row.Line, header[0]);
+            NameRules.Check(row.Label, "feature name", path, row.Line, idName);
             if (row.Texts is { } values)
             {
                 if (!annotations.TryAdd(row.Label, values))
-                    throw PanelInputException.At(path, row.Line, header[0],
+                    throw PanelInputException.At(path, row.Line, idName,
                         $"the sample attribute row '{Display.Name(row.Label)}' occurs twice.", "Keep one row per sample attribute.");
                 continue;
             }
             if (row.FailedIndex >= 0)
                 throw CellErrors.NotAMeasurement(path, row.Line, sampleIds[row.FailedIndex], row.Label, row.FailedText,
-                    row.FailedKind);
+                    row.FailedKind, textColumnFix: DescriptorFix(roles), textColumnIsSample: true);
             featureNames.Add(row.Label);
             featureSlots.Add(row.Slot);
+            descriptors.Add(row.Descriptors!);
         }
         if (rowCount == 0) throw HeaderOnly(path);
         if (featureNames.Count == 0)
@@ -325,29 +332,53 @@ internal static class DelimitedMatrixReader
         NameRules.CheckUnique(featureNames, "feature name", path,
             "Make feature names unique (for example add the assay or isoform to the name) and load again.");
         var matrix = columns.ToMatrix(featureNames, sampleIds, featureSlots: featureSlots.ToArray());
-        return new RawMatrix(source, matrix, annotations, new long[sampleIds.Length], [header[0]]);
+        var featureAnnotations = new List<(string Name, string[] Values)>(roles.AnnotationColumns.Length);
+        for (int a = 0; a < roles.AnnotationColumns.Length; a++)
+        {
+            var values = new string[descriptors.Count];
+            for (int f = 0; f < values.Length; f++) values[f] = descriptors[f][a];
+            featureAnnotations.Add((roles.AnnotationNames[a], values));
+        }
+        return new RawMatrix(source, matrix, annotations, new long[sampleIds.Length], [idName])
+        {
+            FeatureIdColumn = idName,
+            FeatureAnnotations = featureAnnotations,
+            FeatureColumnsDetected = roles.Detected,
+        };
+    }
+
+    /// <summary>For a text cell in a sample column when the describing columns were guessed: the option that names them.</summary>
+    private static string? DescriptorFix(FeatureRowRoles roles)
+    {
+        if (!roles.Detected) return null;
+        return "If this column describes features (a symbol, a name, a description) rather than measuring a sample, name every describing column with --feature-columns (the first names the feature), for example --feature-columns "
+            + "ID --feature-columns SYMBOL; by default only leading columns that hold mostly text are taken.";
     }
 
     /// <summary>Runs on a worker: stores one feature's cells in its column slot, or keeps an attribute row as text.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static ParsedRow ParseFeatureRow(SepReader.Row row, int fieldCount, SlotCounter slots, HashSet<string> attributeNames,
-        FeatureColumns columns)
+        FeatureRowRoles roles, FeatureColumns columns)
     {
         var parsed = Start(row, slots, columns.FeatureCount);
         if (!parsed.CanHoldCells(fieldCount)) return parsed;
         int slot = parsed.Slot;
-        parsed.Label = row[0].Span.Trim().ToString();
-        int sampleCount = fieldCount - 1;
+        parsed.Label = row[roles.IdColumn].Span.Trim().ToString();
+        int[] sampleColumns = roles.SampleColumns;
+        int sampleCount = sampleColumns.Length;
         if (attributeNames.Contains(parsed.Label))
         {
             var texts = new string[sampleCount];
-            for (int s = 0; s < texts.Length; s++) texts[s] = row[s + 1].Span.Trim().ToString();
+            for (int s = 0; s < texts.Length; s++) texts[s] = row[sampleColumns[s]].Span.Trim().ToString();
             parsed.Texts = texts;
             return parsed;
         }
+        var descriptors = new string[roles.AnnotationColumns.Length];
+        for (int a = 0; a < descriptors.Length; a++) descriptors[a] = row[roles.AnnotationColumns[a]].Span.Trim().ToString();
+        parsed.Descriptors = descriptors;
         for (int s = 0; s < sampleCount; s++)
         {
-            var cell = row[s + 1].Span;
+            var cell = row[sampleColumns[s]].Span;
             var kind = CellText.Classify(cell, out float value);
             if (!columns.Store(slot, s, kind, value))
             {
@@ -359,28 +390,36 @@ internal static class DelimitedMatrixReader
     }
 
     /// <summary>
-    /// <see cref="ParseFeatureRow(SepReader.Row, int, SlotCounter, HashSet{string}, FeatureColumns)"/>
+    /// <see cref="ParseFeatureRow(SepReader.Row, int, SlotCounter, HashSet{string}, FeatureRowRoles, FeatureColumns)"/>
     /// for a row of <see cref="TextRowReader"/>: the same steps, cell for cell.
     /// </summary>
     private static ParsedRow ParseFeatureRow(TextRow row, int fieldCount, SlotCounter slots, HashSet<string> attributeNames,
-        FeatureColumns columns)
+        FeatureRowRoles roles, FeatureColumns columns)
     {
         if (row.IsBlank) return new ParsedRow { IsBlank = true };
         int slot = slots.Next();
-        var parsed = new ParsedRow { Line = row.FirstLine, FieldCount = row.FieldCount, Slot = slot, BeyondCapacity = slot >= columns.FeatureCount };
+        var parsed = new ParsedRow
+        {
+            Line = row.FirstLine, FieldCount = row.FieldCount, Slot = slot, BeyondCapacity = slot >= columns.FeatureCount,
+            IsComment = DelimiterDetector.IsComment(row[0]),
+        };
         if (!parsed.CanHoldCells(fieldCount)) return parsed;
-        parsed.Label = row[0].Trim().ToString();
-        int sampleCount = fieldCount - 1;
+        parsed.Label = row[roles.IdColumn].Trim().ToString();
+        int[] sampleColumns = roles.SampleColumns;
+        int sampleCount = sampleColumns.Length;
         if (attributeNames.Contains(parsed.Label))
         {
             var texts = new string[sampleCount];
-            for (int s = 0; s < texts.Length; s++) texts[s] = row[s + 1].Trim().ToString();
+            for (int s = 0; s < texts.Length; s++) texts[s] = row[sampleColumns[s]].Trim().ToString();
             parsed.Texts = texts;
             return parsed;
         }
+        var descriptors = new string[roles.AnnotationColumns.Length];
+        for (int a = 0; a < descriptors.Length; a++) descriptors[a] = row[roles.AnnotationColumns[a]].Trim().ToString();
+        parsed.Descriptors = descriptors;
         for (int s = 0; s < sampleCount; s++)
         {
-            var cell = row[s + 1];
+            var cell = row[sampleColumns[s]];
             var kind = CellText.Classify(cell, out float value);
             if (!columns.Store(slot, s, kind, value))
             {

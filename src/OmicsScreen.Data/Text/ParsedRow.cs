@@ -26,6 +26,9 @@ internal sealed class ParsedRow
     /// <summary>Attribute texts: one per attribute column, or for an attribute row one per sample.</summary>
     public string[]? Texts { get; set; }
 
+    /// <summary>A feature row's describing texts (its annotation columns), trimmed.</summary>
+    public string[]? Descriptors { get; set; }
+
     /// <summary>The index (feature or sample) of the first cell that is not a measurement, or -1.</summary>
     public int FailedIndex { get; set; } = -1;
     public string FailedText { get; set; } = "";

@@ -116,6 +116,13 @@ internal static class HostileInputCorpus
         yield return new("features in rows with the flag loads", "m.csv", Text("feature,s1,s2,s3,s4,s5,s6\nf1,1,2,3,4,5,6\nf2,3,4,5,6,7,9\n"), Sheet,
             ExitCode.Success, ["samples"], ["--features-in-rows"]);
 
+        // Describing columns before the samples, as expression and protein matrices are commonly written (common practice).
+        yield return new("features in rows with a symbol column load and the describing columns are stated", "m.tsv",
+            Text("gene_id\tsymbol\ts1\ts2\ts3\ts4\ts5\ts6\nf1\tGENE0\t1\t2\t3\t4\t5\t6\nf2\tGENE1\t3\t4\t5\t6\t7\t9\n"), Sheet,
+            ExitCode.Success, ["feature columns", "'gene_id' names each feature", "'symbol'", "--feature-columns"], ["--features-in-rows"]);
+        yield return new("a describing column named with --feature-columns that is not there", "m.tsv",
+            Text("gene_id\tsymbol\ts1\ts2\ts3\ts4\ts5\ts6\nf1\tGENE0\t1\t2\t3\t4\t5\t6\nf2\tGENE1\t3\t4\t5\t6\t7\t9\n"), Sheet,
+            ExitCode.InputError, ["m.tsv", "no column 'Symbol'", "--feature-columns"], ["--features-in-rows", "--feature-columns", "gene_id", "--feature-columns", "Symbol"]);
         yield return new("an empty feature name in the header", "m.csv", Text(Valid.Replace("sample_id,f1,", "sample_id,,")), Sheet,
             ExitCode.InputError, ["m.csv", "line 1", "column 2", "has no name"]);
         yield return new("feature names equal once trimmed", "m.csv", Text(Valid.Replace("f1,f2", "f1,f1 ")), Sheet,
