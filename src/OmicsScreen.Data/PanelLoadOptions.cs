@@ -1,3 +1,5 @@
+using OmicsScreen.Data.Assembly;
+
 namespace OmicsScreen.Data;
 
 /// <summary>Where a panel comes from and which columns say what.</summary>
@@ -56,6 +58,18 @@ public sealed record PanelLoadOptions
 
     /// <summary>The describing column (of the feature sheet or the matrix) holding each feature's lab-facing name. Default: a feature-sheet column named display_name.</summary>
     public string? DisplayNameColumn { get; init; }
+
+    /// <summary>Optional CSV/TSV feature sheet joined to the matrix on feature id: display names, annotations, detection limits.</summary>
+    public string? FeatureSheetPath { get; init; }
+
+    /// <summary>
+    /// The column holding detection limits: per feature in the feature sheet, per row in a long
+    /// table. Default: a column named detection_limit, when there is one.
+    /// </summary>
+    public string? DetectionLimitColumn { get; init; }
+
+    /// <summary>Limits read from the feature sheet before the matrix, applied by the readers as they build columns.</summary>
+    internal DetectionLimits? FeatureLimits { get; init; }
 
     /// <summary>The columns that describe samples rather than measure them: outcome, cohort, subject and annotations.</summary>
     internal HashSet<string> SampleAttributeNames()

@@ -29,7 +29,11 @@ public static class PanelLoader
                 "is read with features in rows, where feature blocks and feature lists do not apply.",
                 "Each run of rows of such a file is a panel of its own: split it by rows, repeating the header line "
                 + "(for example with `split`), and screen the pieces; select rows by name with `grep -F -w -f` likewise.");
+        if (options.FeatureSheetPath is { } featureFile) InputFilePath.EnsureFile(featureFile, "feature sheet");
         var format = MatrixFormatDetector.Detect(options.MatrixPath);
+        // The feature sheet comes first: its detection limits are applied as the readers build each column.
+        var featureSheet = options.FeatureSheetPath is { } featurePath ? SampleSheetReader.Read(featurePath, "feature sheet", "feature") : null;
+        if (featureSheet is not null) options = options with { FeatureLimits = FeatureSheetJoin.ReadLimits(featureSheet, options) };
         // Hashing is independent of parsing, so it runs on another core meanwhile.
         var matrixRecord = Task.Run(() => Record(options.MatrixPath), ct);
         RawMatrix raw;
@@ -49,11 +53,24 @@ public static class PanelLoader
 
         var findings = new List<InspectionFinding>();
         var (descriptions, featureColumns) = FeatureDescriber.FromMatrix(raw, options);
+        FeatureSheetFound? featureSheetFound = null;
+        if (featureSheet is not null)
+        {
+            var (kept, joined, found) = FeatureSheetJoin.Join(raw, descriptions, featureSheet, options, findings);
+            if (kept.Length != raw.Matrix.FeatureCount) raw = raw.WithFeatures(kept);
+            descriptions = joined;
+            featureSheetFound = found;
+        }
+        else if (options.DisplayNameColumn is { } displayName && descriptions.DisplayNames is null)
+            throw PanelInputException.At(options.MatrixPath, null, null,
+                $"has no describing column '{Display.Name(displayName)}' (named by --display-name).",
+                "Give the display names in a feature sheet (--feature-sheet) or name a describing column of the matrix file.");
         var (panel, dropped) = PanelAssembler.Assemble(raw, sheet, options, findings);
         var inspection = PanelInspector.Inspect(panel, raw.Source, options.SampleSheetPath, dropped, options, findings)
-            with { FeatureColumns = featureColumns };
+            with { FeatureColumns = featureColumns, FeatureSheet = featureSheetFound };
         var inputs = new List<InputFileRecord> { matrixRecord.GetAwaiter().GetResult() };
         if (options.SampleSheetPath is { } path) inputs.Add(Record(path));
+        if (options.FeatureSheetPath is { } featureSheetPath) inputs.Add(Record(featureSheetPath));
         return new LoadedPanel(panel, inspection, inputs, descriptions);
     }
 

@@ -63,6 +63,19 @@ public sealed class PanelInputOptions
         Description = "The matrix has one feature per row and one sample per column.",
     };
 
+    public Option<string?> FeatureSheet { get; } = new("--feature-sheet")
+    {
+        Description = "Feature sheet (CSV/TSV) joined to the matrix on feature id (its first column): display names, annotation columns "
+            + "and optional per-feature detection limits (values below a feature's limit become below-detection cells).",
+        HelpName = "SHEET",
+    };
+
+    public Option<string?> DetectionLimit { get; } = new("--detection-limit")
+    {
+        Description = "Column holding detection limits: per feature in the feature sheet, per row in a long table. Default: a column named detection_limit.",
+        HelpName = "COLUMN",
+    };
+
     public Option<string[]> FeatureColumns { get; } = new("--feature-columns")
     {
         Description = "A column of a features-in-rows (or long) file that describes features rather than measuring a sample (repeatable): "
@@ -107,6 +120,8 @@ public sealed class PanelInputOptions
         command.Options.Add(SampleIdColumn);
         command.Options.Add(Annotations);
         command.Options.Add(FeaturesInRows);
+        command.Options.Add(FeatureSheet);
+        command.Options.Add(DetectionLimit);
         command.Options.Add(FeatureColumns);
         command.Options.Add(DisplayName);
         command.Options.Add(DropUnmatched);
@@ -128,6 +143,8 @@ public sealed class PanelInputOptions
         DropUnmatchedSamples = parse.GetValue(DropUnmatched),
         FeatureColumns = parse.GetValue(FeatureColumns) is { Length: > 0 } describing ? describing : null,
         DisplayNameColumn = parse.GetValue(DisplayName),
+        FeatureSheetPath = parse.GetValue(FeatureSheet),
+        DetectionLimitColumn = parse.GetValue(DetectionLimit),
         FeatureBlock = parse.GetValue(FeatureBlock) is { } block ? ParseBlock(block) : null,
         KeepFeatures = parse.GetValue(KeepFeatures) is { } list ? ReadFeatureList(list) : null,
     };

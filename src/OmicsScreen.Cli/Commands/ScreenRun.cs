@@ -41,6 +41,7 @@ internal static class ScreenRun
         }
         InputPathGuard.Check(options.Panel.MatrixPath, "matrix");
         InputPathGuard.Check(options.Panel.SampleSheetPath, "sample sheet");
+        InputPathGuard.Check(options.Panel.FeatureSheetPath, "feature sheet");
         if (!MemoryCheck.Passes(console, options)) return ExitCode.NotEnoughMemory;
         if (options.Part is not null) return ExecutePart(console, options);
 
@@ -129,7 +130,7 @@ internal static class ScreenRun
     }
 
     /// <summary>The files a run reads, which its outputs must never replace.</summary>
-    internal static IEnumerable<string?> InputPaths(PanelLoadOptions panel) => [panel.MatrixPath, panel.SampleSheetPath];
+    internal static IEnumerable<string?> InputPaths(PanelLoadOptions panel) => [panel.MatrixPath, panel.SampleSheetPath, panel.FeatureSheetPath];
 
     /// <summary>
     /// Writes every table, the locked panel, the report and (last) the manifest of a finished
@@ -164,7 +165,8 @@ internal static class ScreenRun
     {
         var inputs = new List<ReportedFile>(loaded.Inputs.Count);
         for (int i = 0; i < loaded.Inputs.Count; i++)
-            inputs.Add(new ReportedFile(i == 0 ? "matrix" : "sample sheet", loaded.Inputs[i].Path, loaded.Inputs[i].Sha256));
+            inputs.Add(new ReportedFile(i == 0 ? "matrix" : loaded.Inputs[i].Path == options.Panel.FeatureSheetPath ? "feature sheet" : "sample sheet",
+                loaded.Inputs[i].Path, loaded.Inputs[i].Sha256));
         var tables = new List<ReportedFile>(folder.WrittenFiles.Count);
         foreach (var name in folder.WrittenFiles)
         {

@@ -20,6 +20,15 @@ internal static class InspectionPrinter
         if (i.CommentLineCount > 0) facts.Add("comment lines", $"{Count(i.CommentLineCount)} above the header ('#' or '!'), skipped");
         if (i.FeatureColumns is { } describing) facts.Add("feature columns", FeatureColumnsText(describing));
         if (i.SampleSheetPath is not null) facts.Add("sample sheet", i.SampleSheetPath);
+        if (i.FeatureSheet is { } featureSheet)
+        {
+            facts.Add("feature sheet", FeatureSheetText(featureSheet));
+            if (featureSheet.DetectionLimitColumn is { } limitColumn)
+                facts.Add("detection limits", $"'{limitColumn}': {Count(featureSheet.FeaturesWithLimit)} features with a limit; "
+                    + $"{Count(featureSheet.CensoredCellCount)} measured cells below their feature's limit, now below detection"
+                    + (featureSheet.CensoredCells.Count == 0 ? "" : " (" + string.Join(", ", featureSheet.CensoredCells.Take(ListedNames).Select(c => $"{c.Feature} {Count(c.Cells)}"))
+                        + (featureSheet.CensoredCells.Count > ListedNames ? $", and {featureSheet.CensoredCells.Count - ListedNames} more features" : "") + ")"));
+        }
         facts.Add("samples", Count(i.SampleCount));
         facts.Add("features", Count(i.FeatureCount));
         facts.Add("outcome", $"{i.OutcomeColumn}: " + string.Join(", ", i.Classes.Select(c => $"{c.Name} {c.SampleCount}")) + $" (positive class: {i.PositiveClass})");
@@ -90,6 +99,16 @@ internal static class InspectionPrinter
         MatrixFileFormat.ArrowStream => "Arrow IPC stream",
         _ => format.ToString(),
     };
+
+    private static string FeatureSheetText(FeatureSheetFound sheet)
+    {
+        string text = $"{sheet.Path}: ids in '{sheet.IdColumn}'";
+        if (sheet.DisplayNameColumn is { } display) text += $", display names in '{display}'";
+        if (sheet.AnnotationColumns.Count > 0) text += ", annotations " + string.Join(", ", sheet.AnnotationColumns.Select(c => $"'{c}'"));
+        if (sheet.MatrixOnlyFeatures.Count > 0) text += $"; {Count(sheet.MatrixOnlyFeatures.Count)} matrix features not in the sheet dropped";
+        if (sheet.SheetOnlyFeatures.Count > 0) text += $"; {Count(sheet.SheetOnlyFeatures.Count)} sheet rows not in the matrix ignored";
+        return text;
+    }
 
     /// <summary>One line: which column names features, which travel with them, and how they were found.</summary>
     private static string FeatureColumnsText(FeatureColumnsFound found)

@@ -19,6 +19,24 @@ internal sealed class RawMatrix
     }
 
     public MatrixSource Source { get; }
+
+    /// <summary>The same reading with only the given features, in the given order (describing columns picked alike).</summary>
+    public RawMatrix WithFeatures(int[] features)
+    {
+        var annotations = new List<(string Name, string[] Values)>(FeatureAnnotations.Count);
+        foreach (var (name, values) in FeatureAnnotations)
+        {
+            var picked = new string[features.Length];
+            for (int i = 0; i < picked.Length; i++) picked[i] = values[features[i]];
+            annotations.Add((name, picked));
+        }
+        return new RawMatrix(Source, Matrix.SelectFeatures(features), Annotations, SampleLines, OtherColumns)
+        {
+            FeatureIdColumn = FeatureIdColumn,
+            FeatureAnnotations = annotations,
+            FeatureColumnsDetected = FeatureColumnsDetected,
+        };
+    }
     public FeatureMatrix Matrix { get; }
 
     /// <summary>Annotation columns (or, for features in rows, annotation rows) as text, in sample order.</summary>

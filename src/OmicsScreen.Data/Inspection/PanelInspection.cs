@@ -17,6 +17,8 @@ public sealed record PanelInspection
     public int CommentLineCount { get; init; }
     /// <summary>The feature-describing columns of a features-in-rows or long file; null when features are columns.</summary>
     public FeatureColumnsFound? FeatureColumns { get; init; }
+    /// <summary>What the feature sheet gave, when one was joined.</summary>
+    public FeatureSheetFound? FeatureSheet { get; init; }
     public required PanelLayout Layout { get; init; }
     public string? SampleSheetPath { get; init; }
 

@@ -155,7 +155,7 @@ internal static class DelimitedMatrixReader
             annotations[header[roles.AttributeColumns[a]]] = attributes[a].ToArray();
             otherColumns.Add(header[roles.AttributeColumns[a]]);
         }
-        var matrix = columns.ToMatrix(roles.FeatureNames, sampleIds, sampleSlots: sampleSlots.ToArray());
+        var matrix = columns.ToMatrix(roles.FeatureNames, sampleIds, sampleSlots: sampleSlots.ToArray(), limits: options.FeatureLimits);
         return new RawMatrix(source, matrix, annotations, sampleLines.ToArray(), otherColumns);
     }
 
@@ -331,7 +331,7 @@ internal static class DelimitedMatrixReader
                 "Add the measurement rows, or check the layout.");
         NameRules.CheckUnique(featureNames, "feature name", path,
             "Make feature names unique (for example add the assay or isoform to the name) and load again.");
-        var matrix = columns.ToMatrix(featureNames, sampleIds, featureSlots: featureSlots.ToArray());
+        var matrix = columns.ToMatrix(featureNames, sampleIds, featureSlots: featureSlots.ToArray(), limits: options.FeatureLimits);
         var featureAnnotations = new List<(string Name, string[] Values)>(roles.AnnotationColumns.Length);
         for (int a = 0; a < roles.AnnotationColumns.Length; a++)
         {

@@ -123,6 +123,19 @@ internal static class HostileInputCorpus
         yield return new("a describing column named with --feature-columns that is not there", "m.tsv",
             Text("gene_id\tsymbol\ts1\ts2\ts3\ts4\ts5\ts6\nf1\tGENE0\t1\t2\t3\t4\t5\t6\nf2\tGENE1\t3\t4\t5\t6\t7\t9\n"), Sheet,
             ExitCode.InputError, ["m.tsv", "no column 'Symbol'", "--feature-columns"], ["--features-in-rows", "--feature-columns", "gene_id", "--feature-columns", "Symbol"]);
+        // Feature sheets, joined on feature id as sample sheets are on sample id.
+        yield return new("a feature sheet with display names and detection limits loads and states them", "m.csv", Text(Valid), Sheet,
+            ExitCode.Success, ["feature sheet", "display names in 'display_name'", "detection limits", "2 features with a limit", "3 measured cells below"],
+            FeatureSheet: "feature,display_name,detection_limit\nf1,Marker one,4\nf2,Marker two,3\n");
+        yield return new("a feature sheet missing a matrix feature and naming another", "m.csv", Text(Valid), Sheet,
+            ExitCode.InputError, ["f.csv", "features do not match", "1 in m.csv but not in f.csv ('f2')", "1 in f.csv but not in m.csv ('f7')", "--drop-unmatched"],
+            FeatureSheet: "feature,display_name\nf1,Marker one\nf7,Marker seven\n");
+        yield return new("a feature id twice in the feature sheet", "m.csv", Text(Valid), Sheet,
+            ExitCode.InputError, ["f.csv", "line 4", "'f1' occurs more than once", "one feature-sheet row per feature"],
+            FeatureSheet: "feature\nf1\nf2\nf1\n");
+        yield return new("a detection limit that is not a number", "m.csv", Text(Valid), Sheet,
+            ExitCode.InputError, ["f.csv", "line 2", "'detection_limit'", "not a number"],
+            FeatureSheet: "feature,detection_limit\nf1,1,5\nf2,2\n".Replace("1,5", "\"1,5\""));
         yield return new("an empty feature name in the header", "m.csv", Text(Valid.Replace("sample_id,f1,", "sample_id,,")), Sheet,
             ExitCode.InputError, ["m.csv", "line 1", "column 2", "has no name"]);
         yield return new("feature names equal once trimmed", "m.csv", Text(Valid.Replace("f1,f2", "f1,f1 ")), Sheet,
