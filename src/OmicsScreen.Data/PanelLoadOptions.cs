@@ -68,6 +68,15 @@ public sealed record PanelLoadOptions
     /// </summary>
     public string? DetectionLimitColumn { get; init; }
 
+    /// <summary>The value column of a long table. Default: value.</summary>
+    public string? ValueColumn { get; init; }
+
+    /// <summary>A long table's per-row below-detection flag column (set: the cell is below detection). Default: none.</summary>
+    public string? BelowDetectionFlagColumn { get; init; }
+
+    /// <summary>A long table's per-row quality flag column (set: the cell failed a quality check and is missing). Default: none.</summary>
+    public string? QualityFlagColumn { get; init; }
+
     /// <summary>Limits read from the feature sheet before the matrix, applied by the readers as they build columns.</summary>
     internal DetectionLimits? FeatureLimits { get; init; }
 

@@ -24,7 +24,7 @@ public static class PanelLoader
         ArgumentNullException.ThrowIfNull(options);
         InputFilePath.EnsureFile(options.MatrixPath, "matrix");
         if (options.SampleSheetPath is { } sheetFile) InputFilePath.EnsureFile(sheetFile, "sample sheet");
-        if (options.Layout == PanelLayout.FeaturesInRows && (options.FeatureBlock is not null || options.KeepFeatures is not null))
+        if (options.Layout != PanelLayout.SamplesInRows && (options.FeatureBlock is not null || options.KeepFeatures is not null))
             throw PanelInputException.At(options.MatrixPath, null, null,
                 "is read with features in rows, where feature blocks and feature lists do not apply.",
                 "Each run of rows of such a file is a panel of its own: split it by rows, repeating the header line "
@@ -78,8 +78,13 @@ public static class PanelLoader
     {
         switch (format)
         {
+            case MatrixFileFormat.DelimitedText when options.Layout == PanelLayout.Long:
+                return LongTableReader.Read(options.MatrixPath, options, ct);
             case MatrixFileFormat.DelimitedText:
                 return DelimitedMatrixReader.Read(options.MatrixPath, options, ct);
+            case var _ when options.Layout == PanelLayout.Long:
+                throw PanelInputException.At(options.MatrixPath, null, null, "is read as a long table, which is read from CSV/TSV text (plain or gzip) only.",
+                    "Export the long table as CSV or TSV, or pivot it to one column per feature before writing Parquet or Arrow.");
             case MatrixFileFormat.Parquet:
                 using (var table = ParquetTable.Open(options.MatrixPath))
                     return ColumnarMatrixReader.Read(table, options, ct);

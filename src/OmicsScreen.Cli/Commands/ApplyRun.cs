@@ -90,7 +90,8 @@ internal static class ApplyRun
     {
         if (options.OutcomeColumn is null)
         {
-            var (matrix, input) = MatrixLoader.Load(options.MatrixPath, options.Layout, options.SampleIdColumn, options.AnnotationColumns);
+            var (matrix, input) = MatrixLoader.Load(options.MatrixPath, options.Layout, options.SampleIdColumn, options.AnnotationColumns,
+                longColumns: options.MatrixColumns());
             return (matrix, null, [input]);
         }
         // No EnsureScreenable: a cohort of one class can still be scored and its error measured.

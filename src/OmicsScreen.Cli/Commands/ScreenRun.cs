@@ -182,7 +182,12 @@ internal static class ScreenRun
     /// <summary>The layout, and any feature block or list the panel was narrowed to, with what that means for the error control.</summary>
     internal static string LayoutText(PanelLoadOptions panel)
     {
-        string text = panel.Layout == PanelLayout.SamplesInRows ? "samples in rows" : "features in rows (--features-in-rows)";
+        string text = panel.Layout switch
+        {
+            PanelLayout.SamplesInRows => "samples in rows",
+            PanelLayout.FeaturesInRows => "features in rows (--features-in-rows)",
+            _ => "long table, one row per sample and feature (--long)",
+        };
         if (panel.FeatureBlock is { } block) text += $"; feature block {block} only";
         if (panel.KeepFeatures is { } keep)
             text += $"; only {keep.Count} features from a list (when the list was chosen on these samples, "

@@ -18,6 +18,7 @@ internal static class InspectionPrinter
         string compression = i.Compression is null ? "" : $", {i.Compression}-compressed";
         facts.Add("matrix", $"{i.MatrixPath} ({FormatName(i.FileFormat, i.Delimiter)}{compression}, {LayoutName(i.Layout)})");
         if (i.CommentLineCount > 0) facts.Add("comment lines", $"{Count(i.CommentLineCount)} above the header ('#' or '!'), skipped");
+        if (i.LongTable is { } longTable) facts.Add("long table", LongTableText(longTable));
         if (i.FeatureColumns is { } describing) facts.Add("feature columns", FeatureColumnsText(describing));
         if (i.SampleSheetPath is not null) facts.Add("sample sheet", i.SampleSheetPath);
         if (i.FeatureSheet is { } featureSheet)
@@ -121,8 +122,22 @@ internal static class InspectionPrinter
             : " (named with --feature-columns)");
     }
 
-    private static string LayoutName(PanelLayout layout) =>
-        layout == PanelLayout.SamplesInRows ? "samples in rows" : "features in rows";
+    private static string LayoutName(PanelLayout layout) => layout switch
+    {
+        PanelLayout.SamplesInRows => "samples in rows",
+        PanelLayout.FeaturesInRows => "features in rows",
+        _ => "long table",
+    };
+
+    private static string LongTableText(LongTableFound found)
+    {
+        string text = $"{Count(found.Rows)} rows; sample '{found.SampleColumn}', feature '{found.FeatureColumn}', value '{found.ValueColumn}'";
+        if (found.DetectionLimitColumn is { } limit) text += $"; per-row limit '{limit}': {Count(found.CellsBelowRowLimit)} values below it, now below detection";
+        if (found.BelowDetectionFlagColumn is { } below) text += $"; flag '{below}': {Count(found.CellsFlaggedBelow)} cells below detection";
+        if (found.QualityFlagColumn is { } quality) text += $"; quality flag '{quality}': {Count(found.CellsFailingQuality)} cells made missing";
+        if (found.CellsWithoutRow > 0) text += $"; {Count(found.CellsWithoutRow)} sample-feature pairs without a row, missing";
+        return text;
+    }
 
     private static string SeverityName(FindingSeverity severity) => severity switch
     {

@@ -12,4 +12,7 @@ internal sealed record MatrixSource(string Path, MatrixFileFormat Format, char? 
 
     /// <summary>Comment lines ('#' or '!') skipped above the header of a text file.</summary>
     public int CommentLineCount { get; init; }
+
+    /// <summary>How a long table was read; null for other layouts.</summary>
+    public Inspection.LongTableFound? LongTable { get; init; }
 }

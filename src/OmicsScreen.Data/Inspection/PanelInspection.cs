@@ -19,6 +19,8 @@ public sealed record PanelInspection
     public FeatureColumnsFound? FeatureColumns { get; init; }
     /// <summary>What the feature sheet gave, when one was joined.</summary>
     public FeatureSheetFound? FeatureSheet { get; init; }
+    /// <summary>How a long table was read, for that layout.</summary>
+    public LongTableFound? LongTable { get; init; }
     public required PanelLayout Layout { get; init; }
     public string? SampleSheetPath { get; init; }
 

@@ -40,6 +40,7 @@ internal static class PanelInspector
             Delimiter = source.Delimiter is { } d ? Text.DelimiterDetector.Describe(d) : null,
             Compression = source.Gzip ? "gzip" : null,
             CommentLineCount = source.CommentLineCount,
+            LongTable = source.LongTable,
             Layout = source.Layout,
             SampleSheetPath = sampleSheetPath,
             SampleCount = matrix.SampleCount,

@@ -24,6 +24,13 @@ internal static class HostileInputCorpus
 
     private const string Valid = "sample_id,f1,f2\ns1,1,2\ns2,3,4\ns3,5,6\ns4,7,8\ns5,9,10\ns6,11,13\n";
 
+    /// <summary>The valid six-sample panel as a long table: one row per sample and feature.</summary>
+    private const string LongValid = "sample,feature,value\ns1,f1,1\ns1,f2,2\ns2,f1,3\ns2,f2,4\ns3,f1,5\ns3,f2,6\ns4,f1,7\ns4,f2,8\ns5,f1,9\ns5,f2,10\ns6,f1,11\ns6,f2,13\n";
+
+    /// <summary>A long table with a quality-flag column "qc" holding "ok" on every row.</summary>
+    private static string WithQualityColumn(string longTable) =>
+        string.Join('\n', longTable.TrimEnd('\n').Split('\n').Select((line, i) => line + (i == 0 ? ",qc" : ",ok"))) + "\n";
+
     private static Func<string, byte[]> Text(string contents) => _ => Encoding.UTF8.GetBytes(contents);
 
     private static Func<string, byte[]> Bytes(byte[] contents) => _ => contents;
@@ -136,6 +143,17 @@ internal static class HostileInputCorpus
         yield return new("a detection limit that is not a number", "m.csv", Text(Valid), Sheet,
             ExitCode.InputError, ["f.csv", "line 2", "'detection_limit'", "not a number"],
             FeatureSheet: "feature,detection_limit\nf1,1,5\nf2,2\n".Replace("1,5", "\"1,5\""));
+        // Long tables: one row per sample and feature (common practice in targeted proteomics exports).
+        yield return new("a long table loads and is stated", "long.csv", Text(LongValid), Sheet, ExitCode.Success,
+            ["long table", "12 rows", "sample 'sample', feature 'feature', value 'value'"], ["--long"]);
+        yield return new("a long table with a repeated sample and feature", "long.csv", Text(LongValid + "s3,f2,6.5\n"), Sheet,
+            ExitCode.InputError, ["long.csv", "line 14", "sample 's3' and feature 'f2' occur again (first on line", "one row per sample and feature"], ["--long"]);
+        yield return new("a long table without a value column", "long.csv", Text(LongValid.Replace("value", "npx")), Sheet,
+            ExitCode.InputError, ["long.csv", "no column 'value'", "--value-column"], ["--long"]);
+        yield return new("a long table flag that is neither set nor clear", "long.csv", Text(WithQualityColumn(LongValid).Replace("s4,f1,7,ok", "s4,f1,7,maybe")), Sheet,
+            ExitCode.InputError, ["long.csv", "line 8", "'qc'", "neither set nor clear"], ["--long", "--quality-flag", "qc"]);
+        yield return new("--long with --features-in-rows", "long.csv", Text(LongValid), Sheet,
+            ExitCode.Usage, ["--features-in-rows and --long"], ["--long", "--features-in-rows"]);
         yield return new("an empty feature name in the header", "m.csv", Text(Valid.Replace("sample_id,f1,", "sample_id,,")), Sheet,
             ExitCode.InputError, ["m.csv", "line 1", "column 2", "has no name"]);
         yield return new("feature names equal once trimmed", "m.csv", Text(Valid.Replace("f1,f2", "f1,f1 ")), Sheet,
