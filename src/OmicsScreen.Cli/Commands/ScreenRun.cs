@@ -139,8 +139,9 @@ internal static class ScreenRun
     internal static void WriteResults(CliConsole console, ScreenRunOptions options, LoadedPanel loaded, ScreenResult result,
         ResultsFolder folder, DateTimeOffset started, double loadSeconds, int mergedParts)
     {
-        folder.WriteText("shortlist.tsv", w => ScreenTables.WriteShortlist(w, result));
-        folder.WriteText("features.tsv", w => ScreenTables.WriteFeatures(w, result));
+        var labels = MarkerLabels.Of(loaded);
+        folder.WriteText("shortlist.tsv", w => ScreenTables.WriteShortlist(w, result, labels));
+        folder.WriteText("features.tsv", w => ScreenTables.WriteFeatures(w, result, labels));
         if (result.PanelSize is { } curve) folder.WriteText("panel_size_curve.tsv", w => ScreenTables.WritePanelSizeCurve(w, curve));
         folder.WriteText("marker_statistics.tsv", w => UnivariateTableWriter.WriteAllSamples(w, result.Univariate));
         if (result.Univariate.PerCohort.Count > 0)
@@ -176,7 +177,8 @@ internal static class ScreenRun
         int threads = result.Settings.Options.ThreadCount > 0 ? result.Settings.Options.ThreadCount : Environment.ProcessorCount;
         return new ScreenReportInput(loaded.Panel, result, inputs, LayoutText(options.Panel), tables,
             string.Join(' ', options.CommandLine.Select(ScreenManifest.ShellQuote)), ScreenManifest.Version(), started, finished, loadSeconds,
-            Environment.ProcessorCount, threads, options.ShowSampleIds, Warnings: Warnings(options, loaded, withSampleIds: options.ShowSampleIds));
+            Environment.ProcessorCount, threads, options.ShowSampleIds, Warnings: Warnings(options, loaded, withSampleIds: options.ShowSampleIds),
+            Labels: MarkerLabels.Of(loaded));
     }
 
     /// <summary>The layout, and any feature block or list the panel was narrowed to, with what that means for the error control.</summary>
@@ -213,9 +215,10 @@ internal static class ScreenRun
         {
             output.WriteLine($"Shortlist: {result.Shortlist.Count} markers (q <= {o.QValueThreshold}{FrequencyClause(o)})"
                 + (result.Shortlist.Count > PrintedMarkers ? $", top {PrintedMarkers} shown" : ""));
+            var labels = MarkerLabels.Of(loaded);
             var table = new TextTable("rank", "marker", "frequency", "median rank", "q", "direction", "AUC", "group").AlignRight(0, 2, 3, 4, 6, 7);
             foreach (var e in result.Shortlist.Take(PrintedMarkers))
-                table.Add(e.Rank.ToString(CultureInfo.InvariantCulture), e.Forest.Feature,
+                table.Add(e.Rank.ToString(CultureInfo.InvariantCulture), labels.Label(e.Forest.FeatureIndex, e.Forest.Feature),
                     e.Forest.SelectionFrequency.ToString("0.00", CultureInfo.InvariantCulture),
                     e.Forest.MedianRank.ToString("0.0", CultureInfo.InvariantCulture),
                     e.Forest.QValue.ToString("0.###", CultureInfo.InvariantCulture),
