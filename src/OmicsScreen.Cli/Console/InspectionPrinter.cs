@@ -26,7 +26,7 @@ internal static class InspectionPrinter
             facts.Add("feature sheet", FeatureSheetText(featureSheet));
             if (featureSheet.DetectionLimitColumn is { } limitColumn)
                 facts.Add("detection limits", $"'{limitColumn}': {Count(featureSheet.FeaturesWithLimit)} features with a limit; "
-                    + $"{Count(featureSheet.CensoredCellCount)} measured cells below their feature's limit, now below detection"
+                    + $"{Count(featureSheet.CensoredCellTotal)} measured cells below their feature's limit, now below detection"
                     + (featureSheet.CensoredCells.Count == 0 ? "" : " (" + string.Join(", ", featureSheet.CensoredCells.Take(ListedNames).Select(c => $"{c.Feature} {Count(c.Cells)}"))
                         + (featureSheet.CensoredCells.Count > ListedNames ? $", and {featureSheet.CensoredCells.Count - ListedNames} more features" : "") + ")"));
         }

@@ -14,5 +14,5 @@ public sealed record FeatureSheetFound(string Path, string IdColumn, string? Dis
     string? DetectionLimitColumn, int FeaturesWithLimit, IReadOnlyList<FeatureCellCount> CensoredCells,
     IReadOnlyList<string> MatrixOnlyFeatures, IReadOnlyList<string> SheetOnlyFeatures)
 {
-    public long CensoredCellCount => CensoredCells.Sum(c => (long)c.Cells);
+    public long CensoredCellTotal => CensoredCells.Sum(c => (long)c.Cells);
 }

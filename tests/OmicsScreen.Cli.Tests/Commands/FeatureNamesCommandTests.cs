@@ -66,4 +66,19 @@ public sealed class FeatureNamesCommandTests : IDisposable
         Assert.Contains("Markers (matched by id):", apply.Out);
         Assert.Contains("(f1)", apply.Out);
     }
+
+    [Fact]
+    public void Check_as_json_states_the_long_table_the_feature_sheet_and_the_cells_below_each_limit()
+    {
+        string matrix = LongPanel();
+        string sheet = _folder.File("features.csv", "feature,detection_limit\nf1,3\nf2,\nf3,\nf4,\nf5,\n");
+
+        var run = CliHarness.Run("check", matrix, "--long", "--outcome", "status", "--feature-sheet", sheet, "--json");
+
+        Assert.Equal(ExitCode.Success, run.ExitCode);
+        // f1 of the controls is 2 + (7s mod 10)/10 for odd s: 2.0 to 2.9, all under 3; the cases' 6 and up are not. 20 controls.
+        Assert.Contains("\"censored_cells\": [", run.Out);
+        Assert.Contains("\"cells\": 20", run.Out);
+        Assert.Contains("\"long_table\": {", run.Out);
+    }
 }

@@ -48,7 +48,7 @@ public class FeatureSheetTests
         var found = loaded.Inspection.FeatureSheet!;
         Assert.Equal(2, found.FeaturesWithLimit);
         Assert.Equal([new OmicsScreen.Data.Inspection.FeatureCellCount("F1", 2), new OmicsScreen.Data.Inspection.FeatureCellCount("F2", 2)], found.CensoredCells);
-        Assert.Equal(4, found.CensoredCellCount);
+        Assert.Equal(4, found.CensoredCellTotal);
     }
 
     [Fact]
