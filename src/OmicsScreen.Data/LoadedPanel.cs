@@ -7,14 +7,19 @@ namespace OmicsScreen.Data;
 /// <summary>A panel as loaded, what the loader found in it, and the exact input files it came from.</summary>
 public sealed class LoadedPanel
 {
-    public LoadedPanel(Panel panel, PanelInspection inspection, IReadOnlyList<InputFileRecord> inputs)
+    public LoadedPanel(Panel panel, PanelInspection inspection, IReadOnlyList<InputFileRecord> inputs,
+        FeatureDescriptions? features = null)
     {
         Panel = panel;
         Inspection = inspection;
         Inputs = inputs;
+        Features = features ?? FeatureDescriptions.None(panel.Matrix.FeatureNames);
     }
 
     public Panel Panel { get; }
+
+    /// <summary>Display names and annotations of the panel's features, in panel feature order.</summary>
+    public FeatureDescriptions Features { get; }
     public PanelInspection Inspection { get; }
     public IReadOnlyList<InputFileRecord> Inputs { get; }
 

@@ -42,9 +42,7 @@ public static class MatrixFormatDetector
         if (head.StartsWith((ReadOnlySpan<byte>)[0xFF, 0xFE]) || head.StartsWith((ReadOnlySpan<byte>)[0xFE, 0xFF]))
             throw PanelInputException.At(path, null, null, "is text encoded as UTF-16, which is not read.",
                 "Save the file again as UTF-8 (\"CSV UTF-8\" in spreadsheet programs).");
-        if (head.StartsWith((ReadOnlySpan<byte>)[0x1F, 0x8B]))
-            throw PanelInputException.At(path, null, null, "is gzip-compressed.",
-                "Decompress it first (gunzip) and give the uncompressed CSV/TSV.");
+        if (head.StartsWith((ReadOnlySpan<byte>)[0x1F, 0x8B])) return DetectCompressed(path);
 
         string extension = Path.GetExtension(path).ToLowerInvariant();
         if (ParquetExtensions.Contains(extension))
@@ -59,6 +57,41 @@ public static class MatrixFormatDetector
             throw PanelInputException.At(path, null, null,
                 "is in an unknown binary format (it is not text, Parquet or Arrow IPC).",
                 "Give the matrix as CSV, TSV, Parquet or Arrow IPC; Excel workbooks must be saved as CSV first.");
+        return MatrixFileFormat.DelimitedText;
+    }
+
+    /// <summary>
+    /// A gzip file is read as text when its content is text; compressed Parquet or Arrow files
+    /// (which compress their own pages) and other binary content are named with the fix.
+    /// </summary>
+    private static MatrixFileFormat DetectCompressed(string path)
+    {
+        var head = new byte[4096];
+        int length;
+        using (var stream = Text.TextInput.Open(path))
+        {
+            try
+            {
+                length = stream.ReadAtLeast(head, head.Length, throwOnEndOfStream: false);
+            }
+            catch (EndOfStreamException e)
+            {
+                throw PanelInputException.At(path, null, null, "is gzip-compressed but truncated.", "Download or copy the file again and check it with `gzip -t`.", e);
+            }
+        }
+        var content = head.AsSpan(0, length);
+        if (length == 0)
+            throw PanelInputException.At(path, null, null, "is gzip-compressed and holds nothing once decompressed.",
+                "Compress the matrix file itself, not an empty file.");
+        if (content.StartsWith("PAR1"u8) || content.StartsWith("ARROW1"u8) || content.StartsWith((ReadOnlySpan<byte>)[0xFF, 0xFF, 0xFF, 0xFF]))
+            throw PanelInputException.At(path, null, null, "is a gzip-compressed Parquet or Arrow file, which is not read.",
+                "Decompress it first (gunzip): Parquet and Arrow compress their own data, so give the file as written.");
+        if (content.StartsWith((ReadOnlySpan<byte>)[0xFF, 0xFE]) || content.StartsWith((ReadOnlySpan<byte>)[0xFE, 0xFF]))
+            throw PanelInputException.At(path, null, null, "is gzip-compressed text encoded as UTF-16, which is not read.",
+                "Decompress it, save it again as UTF-8, and compress it again if you like.");
+        if (content.Contains((byte)0))
+            throw PanelInputException.At(path, null, null, "is gzip-compressed but holds binary content, not CSV/TSV text.",
+                "Decompress it and check what it holds; give the matrix as CSV, TSV (plain or gzip), Parquet or Arrow IPC.");
         return MatrixFileFormat.DelimitedText;
     }
 }

@@ -20,22 +20,29 @@ public static class MatrixLoader
     private const string NoOutcome = "\u0001no outcome";
 
     /// <param name="annotationColumns">Text columns of a samples-in-rows file to skip rather than read as features.</param>
+    /// <param name="longColumns">For a long table: its load options (feature, value, limit and flag columns); the path and outcome are set here.</param>
     public static (FeatureMatrix Matrix, InputFileRecord Input) Load(string matrixPath, PanelLayout layout = PanelLayout.SamplesInRows,
-        string? sampleIdColumn = null, IReadOnlyList<string>? annotationColumns = null, CancellationToken ct = default)
+        string? sampleIdColumn = null, IReadOnlyList<string>? annotationColumns = null, CancellationToken ct = default,
+        PanelLoadOptions? longColumns = null)
     {
         ArgumentNullException.ThrowIfNull(matrixPath);
         InputFilePath.EnsureFile(matrixPath, "matrix");
-        var options = new PanelLoadOptions
+        var options = (longColumns ?? new PanelLoadOptions { MatrixPath = matrixPath, OutcomeColumn = NoOutcome }) with
         {
             MatrixPath = matrixPath,
             Layout = layout,
             OutcomeColumn = NoOutcome,
             SampleIdColumn = sampleIdColumn,
             AnnotationColumns = annotationColumns ?? [],
+            SampleSheetPath = null,
+            FeatureSheetPath = null,
         };
         RawMatrix raw;
         switch (MatrixFormatDetector.Detect(matrixPath))
         {
+            case MatrixFileFormat.DelimitedText when layout == PanelLayout.Long:
+                raw = LongTableReader.Read(matrixPath, options, ct);
+                break;
             case MatrixFileFormat.DelimitedText:
                 raw = DelimitedMatrixReader.Read(matrixPath, options, ct);
                 break;

@@ -7,4 +7,6 @@ public enum PanelLayout
     SamplesInRows,
     /// <summary>One row per feature, one column per sample (the first column holds feature names).</summary>
     FeaturesInRows,
+    /// <summary>One row per measured cell: sample, feature and value columns (a long or "tidy" table), pivoted while read.</summary>
+    Long,
 }

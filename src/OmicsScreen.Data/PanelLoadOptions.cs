@@ -1,3 +1,5 @@
+using OmicsScreen.Data.Assembly;
+
 namespace OmicsScreen.Data;
 
 /// <summary>Where a panel comes from and which columns say what.</summary>
@@ -46,6 +48,37 @@ public sealed record PanelLoadOptions
     /// candidates kept from the screens of all blocks; a name not in the file is an error.
     /// </summary>
     public IReadOnlyList<string>? KeepFeatures { get; init; }
+
+    /// <summary>
+    /// The columns of a features-in-rows (or long) file that describe features; the first names
+    /// the feature, the others travel with it as annotations. Null: in features-in-rows text, the
+    /// first column and the text columns after it up to the first column of numbers.
+    /// </summary>
+    public IReadOnlyList<string>? FeatureColumns { get; init; }
+
+    /// <summary>The describing column (of the feature sheet or the matrix) holding each feature's lab-facing name. Default: a feature-sheet column named display_name.</summary>
+    public string? DisplayNameColumn { get; init; }
+
+    /// <summary>Optional CSV/TSV feature sheet joined to the matrix on feature id: display names, annotations, detection limits.</summary>
+    public string? FeatureSheetPath { get; init; }
+
+    /// <summary>
+    /// The column holding detection limits: per feature in the feature sheet, per row in a long
+    /// table. Default: a column named detection_limit, when there is one.
+    /// </summary>
+    public string? DetectionLimitColumn { get; init; }
+
+    /// <summary>The value column of a long table. Default: value.</summary>
+    public string? ValueColumn { get; init; }
+
+    /// <summary>A long table's per-row below-detection flag column (set: the cell is below detection). Default: none.</summary>
+    public string? BelowDetectionFlagColumn { get; init; }
+
+    /// <summary>A long table's per-row quality flag column (set: the cell failed a quality check and is missing). Default: none.</summary>
+    public string? QualityFlagColumn { get; init; }
+
+    /// <summary>Limits read from the feature sheet before the matrix, applied by the readers as they build columns.</summary>
+    internal DetectionLimits? FeatureLimits { get; init; }
 
     /// <summary>The columns that describe samples rather than measure them: outcome, cohort, subject and annotations.</summary>
     internal HashSet<string> SampleAttributeNames()

@@ -24,12 +24,16 @@ public static class PanelLoader
         ArgumentNullException.ThrowIfNull(options);
         InputFilePath.EnsureFile(options.MatrixPath, "matrix");
         if (options.SampleSheetPath is { } sheetFile) InputFilePath.EnsureFile(sheetFile, "sample sheet");
-        if (options.Layout == PanelLayout.FeaturesInRows && (options.FeatureBlock is not null || options.KeepFeatures is not null))
+        if (options.Layout != PanelLayout.SamplesInRows && (options.FeatureBlock is not null || options.KeepFeatures is not null))
             throw PanelInputException.At(options.MatrixPath, null, null,
                 "is read with features in rows, where feature blocks and feature lists do not apply.",
                 "Each run of rows of such a file is a panel of its own: split it by rows, repeating the header line "
                 + "(for example with `split`), and screen the pieces; select rows by name with `grep -F -w -f` likewise.");
+        if (options.FeatureSheetPath is { } featureFile) InputFilePath.EnsureFile(featureFile, "feature sheet");
         var format = MatrixFormatDetector.Detect(options.MatrixPath);
+        // The feature sheet comes first: its detection limits are applied as the readers build each column.
+        var featureSheet = options.FeatureSheetPath is { } featurePath ? SampleSheetReader.Read(featurePath, "feature sheet", "feature") : null;
+        if (featureSheet is not null) options = options with { FeatureLimits = FeatureSheetJoin.ReadLimits(featureSheet, options) };
         // Hashing is independent of parsing, so it runs on another core meanwhile.
         var matrixRecord = Task.Run(() => Record(options.MatrixPath), ct);
         RawMatrix raw;
@@ -48,19 +52,39 @@ public static class PanelLoader
         ct.ThrowIfCancellationRequested();
 
         var findings = new List<InspectionFinding>();
+        var (descriptions, featureColumns) = FeatureDescriber.FromMatrix(raw, options);
+        FeatureSheetFound? featureSheetFound = null;
+        if (featureSheet is not null)
+        {
+            var (kept, joined, found) = FeatureSheetJoin.Join(raw, descriptions, featureSheet, options, findings);
+            if (kept.Length != raw.Matrix.FeatureCount) raw = raw.WithFeatures(kept);
+            descriptions = joined;
+            featureSheetFound = found;
+        }
+        else if (options.DisplayNameColumn is { } displayName && descriptions.DisplayNames is null)
+            throw PanelInputException.At(options.MatrixPath, null, null,
+                $"has no describing column '{Display.Name(displayName)}' (named by --display-name).",
+                "Give the display names in a feature sheet (--feature-sheet) or name a describing column of the matrix file.");
         var (panel, dropped) = PanelAssembler.Assemble(raw, sheet, options, findings);
-        var inspection = PanelInspector.Inspect(panel, raw.Source, options.SampleSheetPath, dropped, options, findings);
+        var inspection = PanelInspector.Inspect(panel, raw.Source, options.SampleSheetPath, dropped, options, findings)
+            with { FeatureColumns = featureColumns, FeatureSheet = featureSheetFound };
         var inputs = new List<InputFileRecord> { matrixRecord.GetAwaiter().GetResult() };
         if (options.SampleSheetPath is { } path) inputs.Add(Record(path));
-        return new LoadedPanel(panel, inspection, inputs);
+        if (options.FeatureSheetPath is { } featureSheetPath) inputs.Add(Record(featureSheetPath));
+        return new LoadedPanel(panel, inspection, inputs, descriptions);
     }
 
     private static RawMatrix ReadMatrix(PanelLoadOptions options, MatrixFileFormat format, CancellationToken ct)
     {
         switch (format)
         {
+            case MatrixFileFormat.DelimitedText when options.Layout == PanelLayout.Long:
+                return LongTableReader.Read(options.MatrixPath, options, ct);
             case MatrixFileFormat.DelimitedText:
                 return DelimitedMatrixReader.Read(options.MatrixPath, options, ct);
+            case var _ when options.Layout == PanelLayout.Long:
+                throw PanelInputException.At(options.MatrixPath, null, null, "is read as a long table, which is read from CSV/TSV text (plain or gzip) only.",
+                    "Export the long table as CSV or TSV, or pivot it to one column per feature before writing Parquet or Arrow.");
             case MatrixFileFormat.Parquet:
                 using (var table = ParquetTable.Open(options.MatrixPath))
                     return ColumnarMatrixReader.Read(table, options, ct);

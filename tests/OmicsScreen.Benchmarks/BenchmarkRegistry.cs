@@ -37,6 +37,11 @@ public static class BenchmarkRegistry
     {
         cases.Add(("load", new LoadPanelCase(200, 20_000, Data.MatrixFileFormat.DelimitedText)));
         cases.Add(("load", new LoadPanelCase(5000, 1000, Data.MatrixFileFormat.DelimitedText)));
+        // The layouts of issue 20, made from the same 200 x 20,000 panel as the CSV above.
+        cases.Add(("load", new LoadPanelCase(200, 20_000, Data.MatrixFileFormat.DelimitedText, variant: LoadPanelCase.TextVariant.Gzip)));
+        cases.Add(("load", new LoadPanelCase(200, 20_000, Data.MatrixFileFormat.DelimitedText, variant: LoadPanelCase.TextVariant.FeaturesDescribed)));
+        cases.Add(("load", new LoadPanelCase(200, 20_000, Data.MatrixFileFormat.DelimitedText, variant: LoadPanelCase.TextVariant.Long)));
+        cases.Add(("load", new LoadPanelCase(200, 20_000, Data.MatrixFileFormat.DelimitedText, variant: LoadPanelCase.TextVariant.LongGzip)));
         cases.Add(("load", new LoadPanelCase(200, 20_000, Data.MatrixFileFormat.Parquet)));
         cases.Add(("load", new LoadPanelCase(200, 20_000, Data.MatrixFileFormat.ArrowFile)));
         cases.Add(("load", new LoadPanelCase(200, 20_000, Data.MatrixFileFormat.ArrowStream)));

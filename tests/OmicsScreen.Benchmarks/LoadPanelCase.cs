@@ -1,6 +1,8 @@
 using System.Diagnostics;
 using System.Globalization;
+using System.IO.Compression;
 using System.Text;
+using OmicsScreen.Data.Text;
 using OmicsScreen.Data;
 using OmicsScreen.Data.Writing;
 
@@ -16,22 +18,51 @@ namespace OmicsScreen.Benchmarks;
 /// </summary>
 public sealed class LoadPanelCase : IBenchmarkCase
 {
+    /// <summary>Text layouts pipelines write besides the plain CSV, each made from the same panel.</summary>
+    public enum TextVariant
+    {
+        Plain,
+        /// <summary>The samples-in-rows CSV, gzip-compressed.</summary>
+        Gzip,
+        /// <summary>Features in rows (TSV) with two describing columns before the samples.</summary>
+        FeaturesDescribed,
+        /// <summary>A long CSV: sample, feature, value, group, one row per cell.</summary>
+        Long,
+        /// <summary>The long CSV, gzip-compressed.</summary>
+        LongGzip,
+    }
+
     private readonly int _sampleCount;
     private readonly int _featureCount;
     private readonly MatrixFileFormat _format;
     private readonly PanelLayout _layout;
+    private readonly TextVariant _variant;
 
     /// <param name="layout">The orientation of the Parquet/Arrow copy; the CSV always has samples in rows.</param>
+    /// <param name="variant">For text: the layout written (the plain CSV by default).</param>
     public LoadPanelCase(int sampleCount, int featureCount, MatrixFileFormat format,
-        PanelLayout layout = PanelLayout.SamplesInRows)
+        PanelLayout layout = PanelLayout.SamplesInRows, TextVariant variant = TextVariant.Plain)
     {
         _sampleCount = sampleCount;
         _featureCount = featureCount;
         _format = format;
-        _layout = layout;
+        _layout = variant switch
+        {
+            TextVariant.FeaturesDescribed => PanelLayout.FeaturesInRows,
+            TextVariant.Long or TextVariant.LongGzip => PanelLayout.Long,
+            _ => layout,
+        };
+        _variant = variant;
     }
 
-    public string Name => $"load-{FormatWord}{(_layout == PanelLayout.FeaturesInRows ? "-features" : "")}-{_sampleCount}x{_featureCount}";
+    public string Name => _variant switch
+    {
+        TextVariant.Gzip => $"load-csv-gzip-{_sampleCount}x{_featureCount}",
+        TextVariant.FeaturesDescribed => $"load-tsv-features-described-{_sampleCount}x{_featureCount}",
+        TextVariant.Long => $"load-long-{_sampleCount}x{_featureCount}",
+        TextVariant.LongGzip => $"load-long-gzip-{_sampleCount}x{_featureCount}",
+        _ => $"load-{FormatWord}{(_layout == PanelLayout.FeaturesInRows ? "-features" : "")}-{_sampleCount}x{_featureCount}",
+    };
 
     private string Suffix => _layout == PanelLayout.FeaturesInRows ? "-features" : "";
 
@@ -45,7 +76,16 @@ public sealed class LoadPanelCase : IBenchmarkCase
 
     private string CsvPath(string work) => Path.Combine(work, $"panel-{_sampleCount}x{_featureCount}.csv");
 
-    private string FilePath(string work) => _format switch
+    private string FilePath(string work) => _variant switch
+    {
+        TextVariant.Gzip => CsvPath(work) + ".gz",
+        TextVariant.FeaturesDescribed => Path.Combine(work, $"panel-{_sampleCount}x{_featureCount}-features-described.tsv"),
+        TextVariant.Long => Path.Combine(work, $"panel-{_sampleCount}x{_featureCount}-long.csv"),
+        TextVariant.LongGzip => Path.Combine(work, $"panel-{_sampleCount}x{_featureCount}-long.csv.gz"),
+        _ => WideFilePath(work),
+    };
+
+    private string WideFilePath(string work) => _format switch
     {
         MatrixFileFormat.DelimitedText => CsvPath(work),
         MatrixFileFormat.Parquet => Path.Combine(work, $"panel-{_sampleCount}x{_featureCount}{Suffix}.parquet"),
@@ -63,6 +103,11 @@ public sealed class LoadPanelCase : IBenchmarkCase
         string path = FilePath(workDirectory);
         if (File.Exists(path)) return;
         var panel = PanelLoader.Load(Options(csv)).Panel;
+        if (_variant != TextVariant.Plain)
+        {
+            WriteVariant(panel, path, workDirectory);
+            return;
+        }
         // Features in rows are written without the outcome row, so that sample columns stay numeric;
         // the loader then needs a sample sheet, written beside the file.
         bool withAttributes = _layout == PanelLayout.SamplesInRows;
@@ -72,6 +117,46 @@ public sealed class LoadPanelCase : IBenchmarkCase
         else
             ArrowPanelWriter.Write(panel, path, _layout, asStream: _format == MatrixFileFormat.ArrowStream,
                 includeSampleAttributes: withAttributes);
+    }
+
+    /// <summary>Writes the gzip, described features-in-rows or long copy of the panel (cells as the loader reads them back).</summary>
+    private void WriteVariant(Engine.Panels.Panel panel, string path, string work)
+    {
+        var matrix = panel.Matrix;
+        string temporary = path + ".tmp";
+        using (var file = File.Create(temporary))
+        using (Stream stream = _variant is TextVariant.Gzip or TextVariant.LongGzip ? new GZipStream(file, CompressionLevel.Fastest) : file)
+        using (var writer = new StreamWriter(stream, new UTF8Encoding(false), 1 << 20))
+        {
+            switch (_variant)
+            {
+                case TextVariant.Gzip:
+                    using (var plain = File.OpenRead(CsvPath(work))) { writer.Flush(); plain.CopyTo(stream); }
+                    break;
+                case TextVariant.FeaturesDescribed:
+                    WriteSheet(panel, SheetPath(work));
+                    var line = new StringBuilder("feature\tsymbol\tdescription");
+                    foreach (var id in matrix.SampleIds) line.Append('\t').Append(id);
+                    writer.Write(line.Append('\n'));
+                    for (int f = 0; f < matrix.FeatureCount; f++)
+                    {
+                        line.Clear().Append(matrix.FeatureNames[f]).Append(CultureInfo.InvariantCulture, $"\tSYM{f}\tinvented marker {f}");
+                        for (int s = 0; s < matrix.SampleCount; s++) line.Append('\t').Append(CellText.Format(matrix.State(f, s), matrix.Value(f, s)));
+                        writer.Write(line.Append('\n'));
+                    }
+                    break;
+                default:
+                    writer.Write("sample,feature,value,group\n");
+                    for (int s = 0; s < matrix.SampleCount; s++)
+                    {
+                        string group = panel.Outcome.ClassNames[panel.Outcome.SampleClasses[s]];
+                        for (int f = 0; f < matrix.FeatureCount; f++)
+                            writer.Write($"{matrix.SampleIds[s]},{matrix.FeatureNames[f]},{CellText.Format(matrix.State(f, s), matrix.Value(f, s))},{group}\n");
+                    }
+                    break;
+            }
+        }
+        File.Move(temporary, path, overwrite: true);
     }
 
     private string SheetPath(string work) => Path.Combine(work, $"sheet-{_sampleCount}.csv");
@@ -115,6 +200,7 @@ public sealed class LoadPanelCase : IBenchmarkCase
         string path = FilePath(workDirectory);
         var options = Options(path, _layout);
         if (_layout == PanelLayout.FeaturesInRows) options = options with { SampleSheetPath = SheetPath(workDirectory) };
+        if (_variant == TextVariant.FeaturesDescribed) options = options with { FeatureColumns = ["feature", "symbol", "description"] };
         var processorStart = Process.GetCurrentProcess().TotalProcessorTime;
         var watch = Stopwatch.StartNew();
         var loaded = PanelLoader.Load(options);

@@ -50,6 +50,9 @@ public class CrossFormatTests
         ["semicolon-samples"] = ("panel.csv", Samples, (p, f, a) => DelimitedPanelWriter.Write(p, f, Samples, ';', includeSampleAttributes: a)),
         ["csv-bom-crlf-samples"] = ("panel.csv", Samples,
             (p, f, a) => DelimitedPanelWriter.Write(p, f, Samples, ',', byteOrderMark: true, newline: "\r\n", includeSampleAttributes: a)),
+        // gzip content under a name that does not say so, and under one that does: detected by the magic bytes (RFC 1952, 2.3.1).
+        ["csv-gzip-samples"] = ("panel.csv", Samples, (p, f, a) => GzipFile.Write(f, w => DelimitedPanelWriter.Write(p, w, Samples, ',', includeSampleAttributes: a))),
+        ["tsv-gzip-features"] = ("panel.tsv.gz", Features, (p, f, a) => GzipFile.Write(f, w => DelimitedPanelWriter.Write(p, w, Features, '\t', includeSampleAttributes: a))),
         ["csv-features"] = ("panel.csv", Features, (p, f, a) => DelimitedPanelWriter.Write(p, f, Features, ',', includeSampleAttributes: a)),
         ["tsv-features"] = ("panel.tsv", Features, (p, f, a) => DelimitedPanelWriter.Write(p, f, Features, '\t', includeSampleAttributes: a)),
         ["parquet-samples"] = ("panel.parquet", Samples, (p, f, a) => ParquetPanelWriter.Write(p, f, Samples, includeSampleAttributes: a)),

@@ -50,7 +50,8 @@ public sealed class ApplyCommand : Command, IHelpLayout
 
     public IReadOnlyList<HelpSection> HelpSections =>
     [
-        new("Input", [Input.SampleSheet, Outcome, Input.SampleIdColumn, Input.Annotations, Input.FeaturesInRows, Input.DropUnmatched]),
+        new("Input", [Input.SampleSheet, Outcome, Input.SampleIdColumn, Input.Annotations, Input.FeaturesInRows, Input.Long, Input.FeatureColumns,
+            Input.ValueColumn, Input.DetectionLimit, Input.BelowDetectionFlag, Input.QualityFlag, Input.DropUnmatched]),
         new("Run", [Out, Force, ShowSampleIds, Json]),
     ];
 
@@ -71,6 +72,12 @@ public sealed class ApplyCommand : Command, IHelpLayout
         Options.Add(Input.SampleIdColumn);
         Options.Add(Input.Annotations);
         Options.Add(Input.FeaturesInRows);
+        Options.Add(Input.Long);
+        Options.Add(Input.FeatureColumns);
+        Options.Add(Input.ValueColumn);
+        Options.Add(Input.DetectionLimit);
+        Options.Add(Input.BelowDetectionFlag);
+        Options.Add(Input.QualityFlag);
         Options.Add(Input.DropUnmatched);
         Options.Add(Out);
         Options.Add(Force);
@@ -84,7 +91,12 @@ public sealed class ApplyCommand : Command, IHelpLayout
             OutcomeColumn = parse.GetValue(Outcome),
             SampleIdColumn = parse.GetValue(Input.SampleIdColumn),
             AnnotationColumns = parse.GetValue(Input.Annotations) ?? [],
-            Layout = parse.GetValue(Input.FeaturesInRows) ? PanelLayout.FeaturesInRows : PanelLayout.SamplesInRows,
+            Layout = Input.LayoutOf(parse),
+            FeatureColumns = parse.GetValue(Input.FeatureColumns) is { Length: > 0 } describing ? describing : null,
+            ValueColumn = parse.GetValue(Input.ValueColumn),
+            DetectionLimitColumn = parse.GetValue(Input.DetectionLimit),
+            BelowDetectionFlagColumn = parse.GetValue(Input.BelowDetectionFlag),
+            QualityFlagColumn = parse.GetValue(Input.QualityFlag),
             DropUnmatchedSamples = parse.GetValue(Input.DropUnmatched),
             OutputFolder = parse.GetValue(Out)!,
             Force = parse.GetValue(Force),

@@ -46,6 +46,7 @@ public static class ApplyModelFile
         });
         var content = LockedPanelJson.ToJson(locked);
         content[DiscoveryOverlap.SampleIdHashesKey] = DiscoveryOverlap.SampleIdHashes(loaded.Panel.Matrix.SampleIds);
+        if (MarkerLabels.DisplayNames(loaded, locked.MarkerNames) is { } displayNames) content[MarkerLabels.DisplayNamesKey] = displayNames;
         LockedPanelFile.Write(Path.Combine(resultsFolder, LockedPanelFile.DefaultFileName), content);
         return LockedPanelFile.DefaultFileName;
     }
@@ -62,6 +63,9 @@ public static class ApplyModelFile
     /// <summary>The panel and, when the screen recorded them, the SHA-256 of each discovery sample id.</summary>
     public static (LockedPanel Panel, HashSet<string>? DiscoverySampleIdHashes) ReadWithDiscoveryIds(string path) =>
         LockedPanelFile.Read(path, content => (LockedPanelJson.FromJson(content), DiscoveryOverlap.ReadSampleIdHashes(content)));
+
+    /// <summary>The markers' display names recorded when the panel was locked (id to name; empty when none were).</summary>
+    public static Dictionary<string, string> ReadDisplayNames(string path) => LockedPanelFile.Read(path, MarkerLabels.ReadDisplayNames);
 
     /// <summary>SHA-256 (lower-case hex) of a model file's bytes, for manifests.</summary>
     public static string FileSha256(string path)

@@ -11,8 +11,9 @@ namespace OmicsScreen.Cli.Commands;
 internal static class ApplyReport
 {
     public static string Build(LockedPanel model, LockedPanelScores scores, LockedPanelPerformance? performance, ApplyRunOptions options,
-        IReadOnlyList<string> discoveryOverlap)
+        IReadOnlyList<string> discoveryOverlap, IReadOnlyDictionary<string, string>? displayNames = null)
     {
+        displayNames ??= new Dictionary<string, string>();
         var html = new HtmlBuilder().BeginDocument($"Locked panel applied to {Path.GetFileName(options.MatrixPath)}");
         html.Caution("Read before using these scores", [.. discoveryOverlap, .. Cautions(model, scores, performance)]);
 
@@ -22,7 +23,7 @@ internal static class ApplyReport
             : "the class most trees vote for";
         html.DefinitionList(
         [
-            new("Markers", string.Join(", ", model.MarkerNames)),
+            new("Markers", string.Join(", ", model.MarkerNames.Select(m => MarkerLabels.Label(m, displayNames)))),
             new("Trees", model.Trees.Count.ToString(CultureInfo.InvariantCulture)),
             new("Call", rule),
             new("Discovery out-of-bag AUC", model.OutOfBagAuc is { } auc ? Number(auc) : "not applicable"),

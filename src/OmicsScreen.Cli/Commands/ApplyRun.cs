@@ -28,6 +28,7 @@ internal static class ApplyRun
             [options.ModelPath, options.MatrixPath, options.SampleSheetPath], console.Error);
         var started = DateTimeOffset.UtcNow;
         var (model, discoveryIds) = ApplyModelFile.ReadWithDiscoveryIds(options.ModelPath);
+        var displayNames = ApplyModelFile.ReadDisplayNames(options.ModelPath);
         var (matrix, outcome, inputs) = LoadCohort(options);
         var overlap = DiscoveryOverlap.Warnings(model, discoveryIds, inputs, matrix.SampleIds);
         LockedPanelScores scores;
@@ -61,7 +62,7 @@ internal static class ApplyRun
             folder.WriteText(CalibrationFileName, w => ApplyTables.WriteCalibration(w, performance));
             folder.WriteText(ConfusionFileName, w => ApplyTables.WriteConfusion(w, performance));
         }
-        folder.WriteText(ReportFileName, w => w.Write(ApplyReport.Build(model, scores, performance, options, overlap)));
+        folder.WriteText(ReportFileName, w => w.Write(ApplyReport.Build(model, scores, performance, options, overlap, displayNames)));
         var manifest = new
         {
             tool = "omicsscreen",
@@ -70,7 +71,7 @@ internal static class ApplyRun
             command_line = string.Join(' ', options.CommandLine.Select(ScreenManifest.ShellQuote)),
             started_utc = started.ToString("O"),
             finished_utc = DateTimeOffset.UtcNow.ToString("O"),
-            model = new { path = options.ModelPath, sha256 = ApplyModelFile.FileSha256(options.ModelPath), markers = model.MarkerNames, discovery_inputs_sha256 = model.Provenance.InputSha256 },
+            model = new { path = options.ModelPath, sha256 = ApplyModelFile.FileSha256(options.ModelPath), markers = model.MarkerNames, marker_display_names = displayNames, discovery_inputs_sha256 = model.Provenance.InputSha256 },
             inputs = inputs.Select(i => new { path = i.Path, bytes = i.ByteCount, sha256 = i.Sha256 }).ToArray(),
             outputs = folder.WrittenFiles.ToArray(),
         };
@@ -82,7 +83,7 @@ internal static class ApplyRun
             foreach (var warning in scores.Warnings) console.Error.WriteLine($"warning: {TextTable.Printable(warning.Message)}");
             ManifestJson.Write(console.Out, ApplyHeadline.Of(model, scores, performance, folder.Path, overlap));
         }
-        else PrintSummary(console, model, scores, performance, folder.Path);
+        else PrintSummary(console, model, scores, performance, folder.Path, displayNames);
         return ExitCode.Success;
     }
 
@@ -90,7 +91,8 @@ internal static class ApplyRun
     {
         if (options.OutcomeColumn is null)
         {
-            var (matrix, input) = MatrixLoader.Load(options.MatrixPath, options.Layout, options.SampleIdColumn, options.AnnotationColumns);
+            var (matrix, input) = MatrixLoader.Load(options.MatrixPath, options.Layout, options.SampleIdColumn, options.AnnotationColumns,
+                longColumns: options.MatrixColumns());
             return (matrix, null, [input]);
         }
         // No EnsureScreenable: a cohort of one class can still be scored and its error measured.
@@ -130,7 +132,8 @@ internal static class ApplyRun
         discovery_overlap_warnings = overlap,
     };
 
-    private static void PrintSummary(CliConsole console, LockedPanel model, LockedPanelScores scores, LockedPanelPerformance? performance, string folder)
+    private static void PrintSummary(CliConsole console, LockedPanel model, LockedPanelScores scores, LockedPanelPerformance? performance, string folder,
+        IReadOnlyDictionary<string, string> displayNames)
     {
         var output = console.Out;
         foreach (var warning in scores.Warnings) console.Error.WriteLine($"warning: {TextTable.Printable(warning.Message)}");
@@ -138,6 +141,7 @@ internal static class ApplyRun
             ? FormattableString.Invariant($"{model.ClassNames[model.PositiveClass]} when its probability is at least {threshold:0.###}")
             : "majority vote of the trees";
         output.WriteLine($"Scored {scores.SampleCount} samples with a locked panel of {model.MarkerCount} markers and {model.Trees.Count} trees; call: {rule}.");
+        output.WriteLine(TextTable.Printable("Markers (matched by id): " + string.Join(", ", model.MarkerNames.Select(m => MarkerLabels.Label(m, displayNames)))));
         var called = new int[scores.ClassCount];
         foreach (int c in scores.PredictedClasses) called[c]++;
         output.WriteLine("Called: " + string.Join(", ", scores.ClassNames.Select((name, c) => $"{called[c]} {name}")) + ".");

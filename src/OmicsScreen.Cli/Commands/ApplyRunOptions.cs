@@ -24,6 +24,13 @@ public sealed record ApplyRunOptions
 
     public bool DropUnmatchedSamples { get; init; }
 
+    /// <summary>For a long table: its feature, value, limit and flag columns (the panel options of the other verbs).</summary>
+    public IReadOnlyList<string>? FeatureColumns { get; init; }
+    public string? ValueColumn { get; init; }
+    public string? DetectionLimitColumn { get; init; }
+    public string? BelowDetectionFlagColumn { get; init; }
+    public string? QualityFlagColumn { get; init; }
+
     public required string OutputFolder { get; init; }
 
     public bool Force { get; init; }
@@ -54,5 +61,22 @@ public sealed record ApplyRunOptions
         AnnotationColumns = AnnotationColumns,
         Layout = Layout,
         DropUnmatchedSamples = DropUnmatchedSamples,
+        FeatureColumns = FeatureColumns,
+        ValueColumn = ValueColumn,
+        DetectionLimitColumn = DetectionLimitColumn,
+        BelowDetectionFlagColumn = BelowDetectionFlagColumn,
+        QualityFlagColumn = QualityFlagColumn,
+    };
+
+    /// <summary>The long-table columns for reading the matrix alone (outcome unknown).</summary>
+    public PanelLoadOptions MatrixColumns() => new()
+    {
+        MatrixPath = MatrixPath,
+        OutcomeColumn = "",
+        FeatureColumns = FeatureColumns,
+        ValueColumn = ValueColumn,
+        DetectionLimitColumn = DetectionLimitColumn,
+        BelowDetectionFlagColumn = BelowDetectionFlagColumn,
+        QualityFlagColumn = QualityFlagColumn,
     };
 }

@@ -11,6 +11,7 @@ internal static class CheckRun
     {
         InputPathGuard.Check(options.MatrixPath, "matrix");
         InputPathGuard.Check(options.SampleSheetPath, "sample sheet");
+        InputPathGuard.Check(options.FeatureSheetPath, "feature sheet");
         var loaded = PanelLoader.Load(options);
         if (json) InspectionPrinter.WriteJson(loaded, console.Out);
         else InspectionPrinter.WriteTable(loaded, console.Out);

@@ -18,6 +18,7 @@ internal static class DemoRun
         var files = DemoStudyWriter.Write(study, options.PanelFolder);
         console.Out.WriteLine($"Demo panel written: {files.Panel}");
         console.Out.WriteLine($"  sample sheet:     {files.SampleSheet}");
+        console.Out.WriteLine($"  feature sheet:    {files.FeatureSheet}");
         console.Out.WriteLine($"  planted truth:    {files.Truth}");
         if (options.PanelOnly) return ExitCode.Success;
 
@@ -25,6 +26,7 @@ internal static class DemoRun
         {
             MatrixPath = files.Panel,
             SampleSheetPath = files.SampleSheet,
+            FeatureSheetPath = files.FeatureSheet,
             OutcomeColumn = DemoStudy.OutcomeColumn,
             CohortColumn = DemoStudy.CentreColumn,
         };
@@ -35,7 +37,7 @@ internal static class DemoRun
         console.Out.WriteLine();
         var commandLine = new List<string>
         {
-            "omicsscreen", "screen", files.Panel, "--samples", files.SampleSheet, "--outcome", DemoStudy.OutcomeColumn,
+            "omicsscreen", "screen", files.Panel, "--samples", files.SampleSheet, "--feature-sheet", files.FeatureSheet, "--outcome", DemoStudy.OutcomeColumn,
             "--cohort", DemoStudy.CentreColumn, "--out", options.ReportFolder, "--force",
         };
         if (options.Quiet) commandLine.Add("--quiet");

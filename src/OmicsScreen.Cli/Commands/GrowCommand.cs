@@ -82,7 +82,8 @@ public sealed class GrowCommand : Command, IHelpLayout
     public IReadOnlyList<HelpSection> HelpSections =>
     [
         new("Input", [Input.SampleSheet, Input.Outcome, Input.PositiveClass, Input.Subject, Input.SampleIdColumn, Input.Annotations,
-            Input.FeaturesInRows, Input.DropUnmatched, Input.FeatureBlock, Input.KeepFeatures]),
+            Input.FeatureSheet, Input.DetectionLimit, Input.FeaturesInRows, Input.Long, Input.FeatureColumns, Input.ValueColumn,
+            Input.BelowDetectionFlag, Input.QualityFlag, Input.DisplayName, Input.DropUnmatched, Input.FeatureBlock, Input.KeepFeatures]),
         new("Forest", [Trees, FeaturesPerSplit, MinLeaf, MaxDepth, SampleFraction, Balance]),
         new("Cohorts", [Input.Cohort]),
         new("Run", [Seed, Threads, ImportanceFile, Json]),

@@ -21,8 +21,9 @@ internal static class GrowRun
         options.Validate();
         InputPathGuard.Check(options.Panel.MatrixPath, "matrix");
         InputPathGuard.Check(options.Panel.SampleSheetPath, "sample sheet");
+        InputPathGuard.Check(options.Panel.FeatureSheetPath, "feature sheet");
         if (options.ImportanceFile is { } importancePath)
-            OutputPathGuard.CheckFile(importancePath, "--importance-out", [options.Panel.MatrixPath, options.Panel.SampleSheetPath], ImportanceWriter.HeaderLine);
+            OutputPathGuard.CheckFile(importancePath, "--importance-out", [options.Panel.MatrixPath, options.Panel.SampleSheetPath, options.Panel.FeatureSheetPath], ImportanceWriter.HeaderLine);
         var watch = Stopwatch.StartNew();
         var loaded = PanelLoader.Load(options.Panel).EnsureScreenable();
         var loadTime = watch.Elapsed;

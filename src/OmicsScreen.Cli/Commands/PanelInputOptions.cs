@@ -63,6 +63,59 @@ public sealed class PanelInputOptions
         Description = "The matrix has one feature per row and one sample per column.",
     };
 
+    public Option<bool> Long { get; } = new("--long")
+    {
+        Description = "The matrix is a long table: one row per sample and feature, with sample, feature and value columns "
+            + "(named by --id-column, --feature-columns and --value-column; defaults sample, feature, value).",
+    };
+
+    public Option<string?> ValueColumn { get; } = new("--value-column")
+    {
+        Description = "The value column of a long table. Default: value.",
+        HelpName = "COLUMN",
+    };
+
+    public Option<string?> BelowDetectionFlag { get; } = new("--below-detection-flag")
+    {
+        Description = "A long table's per-row flag column: a set flag (1, true, yes, flag, below) makes the cell below detection.",
+        HelpName = "COLUMN",
+    };
+
+    public Option<string?> QualityFlag { get; } = new("--quality-flag")
+    {
+        Description = "A long table's per-row quality flag column: a set flag (1, true, yes, warn, fail) makes the cell missing.",
+        HelpName = "COLUMN",
+    };
+
+    public Option<string?> FeatureSheet { get; } = new("--feature-sheet")
+    {
+        Description = "Feature sheet (CSV/TSV) joined to the matrix on feature id (its first column): display names, annotation columns "
+            + "and optional per-feature detection limits (values below a feature's limit become below-detection cells).",
+        HelpName = "SHEET",
+    };
+
+    public Option<string?> DetectionLimit { get; } = new("--detection-limit")
+    {
+        Description = "Column holding detection limits: per feature in the feature sheet, per row in a long table. Default: a column named detection_limit.",
+        HelpName = "COLUMN",
+    };
+
+    public Option<string[]> FeatureColumns { get; } = new("--feature-columns")
+    {
+        Description = "A column of a features-in-rows (or long) file that describes features rather than measuring a sample (repeatable): "
+            + "the first names each feature, the others travel with it as annotations. Default with --features-in-rows: the first column "
+            + "and the text columns after it, up to the first column of numbers.",
+        HelpName = "COLUMN",
+        AllowMultipleArgumentsPerToken = false,
+    };
+
+    public Option<string?> DisplayName { get; } = new("--display-name")
+    {
+        Description = "The describing column (of the feature sheet or the matrix file) holding each feature's lab-facing name, "
+            + "shown first in the report and tables. Default: a feature-sheet column named display_name.",
+        HelpName = "COLUMN",
+    };
+
     public Option<bool> DropUnmatched { get; } = new("--drop-unmatched")
     {
         Description = "Drop samples found in only one of matrix and sample sheet (with a warning) instead of stopping.",
@@ -91,6 +144,14 @@ public sealed class PanelInputOptions
         command.Options.Add(SampleIdColumn);
         command.Options.Add(Annotations);
         command.Options.Add(FeaturesInRows);
+        command.Options.Add(Long);
+        command.Options.Add(ValueColumn);
+        command.Options.Add(BelowDetectionFlag);
+        command.Options.Add(QualityFlag);
+        command.Options.Add(FeatureSheet);
+        command.Options.Add(DetectionLimit);
+        command.Options.Add(FeatureColumns);
+        command.Options.Add(DisplayName);
         command.Options.Add(DropUnmatched);
         command.Options.Add(FeatureBlock);
         command.Options.Add(KeepFeatures);
@@ -106,11 +167,29 @@ public sealed class PanelInputOptions
         PositiveClass = parse.GetValue(PositiveClass),
         SampleIdColumn = parse.GetValue(SampleIdColumn),
         AnnotationColumns = parse.GetValue(Annotations) ?? [],
-        Layout = parse.GetValue(FeaturesInRows) ? PanelLayout.FeaturesInRows : PanelLayout.SamplesInRows,
+        Layout = LayoutOf(parse),
         DropUnmatchedSamples = parse.GetValue(DropUnmatched),
+        FeatureColumns = parse.GetValue(FeatureColumns) is { Length: > 0 } describing ? describing : null,
+        DisplayNameColumn = parse.GetValue(DisplayName),
+        FeatureSheetPath = parse.GetValue(FeatureSheet),
+        ValueColumn = parse.GetValue(ValueColumn),
+        BelowDetectionFlagColumn = parse.GetValue(BelowDetectionFlag),
+        QualityFlagColumn = parse.GetValue(QualityFlag),
+        DetectionLimitColumn = parse.GetValue(DetectionLimit),
         FeatureBlock = parse.GetValue(FeatureBlock) is { } block ? ParseBlock(block) : null,
         KeepFeatures = parse.GetValue(KeepFeatures) is { } list ? ReadFeatureList(list) : null,
     };
+
+    /// <summary>The layout the options say; --features-in-rows and --long together are a usage error.</summary>
+    public PanelLayout LayoutOf(ParseResult parse)
+    {
+        bool featuresInRows = parse.GetValue(FeaturesInRows), isLong = parse.GetValue(Long);
+        if (featuresInRows && isLong)
+            throw new CommandInputException("--features-in-rows and --long describe two different layouts; give the one the matrix has.");
+        if (!isLong && (parse.GetValue(ValueColumn) ?? parse.GetValue(BelowDetectionFlag) ?? parse.GetValue(QualityFlag)) is not null)
+            throw new CommandInputException("--value-column, --below-detection-flag and --quality-flag name columns of a long table; add --long, or leave them out.");
+        return isLong ? PanelLayout.Long : featuresInRows ? PanelLayout.FeaturesInRows : PanelLayout.SamplesInRows;
+    }
 
     private static FeatureBlock ParseBlock(string text)
     {

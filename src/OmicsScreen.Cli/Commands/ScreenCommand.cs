@@ -199,7 +199,8 @@ public sealed class ScreenCommand : Command, IHelpLayout
     public IReadOnlyList<HelpSection> HelpSections =>
     [
         new("Input", [Input.SampleSheet, Input.Outcome, Input.PositiveClass, Input.Subject, Input.SampleIdColumn, Input.Annotations,
-            Input.FeaturesInRows, Input.DropUnmatched, Input.FeatureBlock, Input.KeepFeatures]),
+            Input.FeatureSheet, Input.DetectionLimit, Input.FeaturesInRows, Input.Long, Input.FeatureColumns, Input.ValueColumn,
+            Input.BelowDetectionFlag, Input.QualityFlag, Input.DisplayName, Input.DropUnmatched, Input.FeatureBlock, Input.KeepFeatures]),
         new("Forest", [Trees, FeaturesPerSplit, MinLeaf, Balance]),
         new("Selection and error control", [Pairs, RepeatLevel, PerRepeat, MinFrequency, MaxQ, Rule, Decoys, InteractionScan, OutcomePermutations, RedundancyRho]),
         new("Panel-size curve", [CurveFolds, CurveRepeats, CurveInnerPairs, MaxPanelSize]),

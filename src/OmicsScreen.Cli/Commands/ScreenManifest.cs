@@ -42,6 +42,7 @@ internal static class ScreenManifest
                 cohort_column = panel.Cohort?.ColumnName,
                 subject_column = panel.Subject?.ColumnName,
                 features_in_rows = options.Panel.Layout == PanelLayout.FeaturesInRows,
+                long_table = options.Panel.Layout == PanelLayout.Long,
                 feature_block = options.Panel.FeatureBlock?.ToString(),
                 features_kept_from_list = options.Panel.KeepFeatures?.Count,
                 dropped_samples = loaded.Inspection.DroppedSamples.Count,

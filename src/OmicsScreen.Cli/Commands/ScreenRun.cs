@@ -41,6 +41,7 @@ internal static class ScreenRun
         }
         InputPathGuard.Check(options.Panel.MatrixPath, "matrix");
         InputPathGuard.Check(options.Panel.SampleSheetPath, "sample sheet");
+        InputPathGuard.Check(options.Panel.FeatureSheetPath, "feature sheet");
         if (!MemoryCheck.Passes(console, options)) return ExitCode.NotEnoughMemory;
         if (options.Part is not null) return ExecutePart(console, options);
 
@@ -129,7 +130,7 @@ internal static class ScreenRun
     }
 
     /// <summary>The files a run reads, which its outputs must never replace.</summary>
-    internal static IEnumerable<string?> InputPaths(PanelLoadOptions panel) => [panel.MatrixPath, panel.SampleSheetPath];
+    internal static IEnumerable<string?> InputPaths(PanelLoadOptions panel) => [panel.MatrixPath, panel.SampleSheetPath, panel.FeatureSheetPath];
 
     /// <summary>
     /// Writes every table, the locked panel, the report and (last) the manifest of a finished
@@ -138,8 +139,9 @@ internal static class ScreenRun
     internal static void WriteResults(CliConsole console, ScreenRunOptions options, LoadedPanel loaded, ScreenResult result,
         ResultsFolder folder, DateTimeOffset started, double loadSeconds, int mergedParts)
     {
-        folder.WriteText("shortlist.tsv", w => ScreenTables.WriteShortlist(w, result));
-        folder.WriteText("features.tsv", w => ScreenTables.WriteFeatures(w, result));
+        var labels = MarkerLabels.Of(loaded);
+        folder.WriteText("shortlist.tsv", w => ScreenTables.WriteShortlist(w, result, labels));
+        folder.WriteText("features.tsv", w => ScreenTables.WriteFeatures(w, result, labels));
         if (result.PanelSize is { } curve) folder.WriteText("panel_size_curve.tsv", w => ScreenTables.WritePanelSizeCurve(w, curve));
         folder.WriteText("marker_statistics.tsv", w => UnivariateTableWriter.WriteAllSamples(w, result.Univariate));
         if (result.Univariate.PerCohort.Count > 0)
@@ -164,7 +166,8 @@ internal static class ScreenRun
     {
         var inputs = new List<ReportedFile>(loaded.Inputs.Count);
         for (int i = 0; i < loaded.Inputs.Count; i++)
-            inputs.Add(new ReportedFile(i == 0 ? "matrix" : "sample sheet", loaded.Inputs[i].Path, loaded.Inputs[i].Sha256));
+            inputs.Add(new ReportedFile(i == 0 ? "matrix" : loaded.Inputs[i].Path == options.Panel.FeatureSheetPath ? "feature sheet" : "sample sheet",
+                loaded.Inputs[i].Path, loaded.Inputs[i].Sha256));
         var tables = new List<ReportedFile>(folder.WrittenFiles.Count);
         foreach (var name in folder.WrittenFiles)
         {
@@ -174,13 +177,19 @@ internal static class ScreenRun
         int threads = result.Settings.Options.ThreadCount > 0 ? result.Settings.Options.ThreadCount : Environment.ProcessorCount;
         return new ScreenReportInput(loaded.Panel, result, inputs, LayoutText(options.Panel), tables,
             string.Join(' ', options.CommandLine.Select(ScreenManifest.ShellQuote)), ScreenManifest.Version(), started, finished, loadSeconds,
-            Environment.ProcessorCount, threads, options.ShowSampleIds, Warnings: Warnings(options, loaded, withSampleIds: options.ShowSampleIds));
+            Environment.ProcessorCount, threads, options.ShowSampleIds, Warnings: Warnings(options, loaded, withSampleIds: options.ShowSampleIds),
+            Labels: MarkerLabels.Of(loaded));
     }
 
     /// <summary>The layout, and any feature block or list the panel was narrowed to, with what that means for the error control.</summary>
     internal static string LayoutText(PanelLoadOptions panel)
     {
-        string text = panel.Layout == PanelLayout.SamplesInRows ? "samples in rows" : "features in rows (--features-in-rows)";
+        string text = panel.Layout switch
+        {
+            PanelLayout.SamplesInRows => "samples in rows",
+            PanelLayout.FeaturesInRows => "features in rows (--features-in-rows)",
+            _ => "long table, one row per sample and feature (--long)",
+        };
         if (panel.FeatureBlock is { } block) text += $"; feature block {block} only";
         if (panel.KeepFeatures is { } keep)
             text += $"; only {keep.Count} features from a list (when the list was chosen on these samples, "
@@ -206,9 +215,10 @@ internal static class ScreenRun
         {
             output.WriteLine($"Shortlist: {result.Shortlist.Count} markers (q <= {o.QValueThreshold}{FrequencyClause(o)})"
                 + (result.Shortlist.Count > PrintedMarkers ? $", top {PrintedMarkers} shown" : ""));
+            var labels = MarkerLabels.Of(loaded);
             var table = new TextTable("rank", "marker", "frequency", "median rank", "q", "direction", "AUC", "group").AlignRight(0, 2, 3, 4, 6, 7);
             foreach (var e in result.Shortlist.Take(PrintedMarkers))
-                table.Add(e.Rank.ToString(CultureInfo.InvariantCulture), e.Forest.Feature,
+                table.Add(e.Rank.ToString(CultureInfo.InvariantCulture), labels.Label(e.Forest.FeatureIndex, e.Forest.Feature),
                     e.Forest.SelectionFrequency.ToString("0.00", CultureInfo.InvariantCulture),
                     e.Forest.MedianRank.ToString("0.0", CultureInfo.InvariantCulture),
                     e.Forest.QValue.ToString("0.###", CultureInfo.InvariantCulture),

@@ -15,8 +15,21 @@ internal static class InspectionPrinter
     {
         var i = loaded.Inspection;
         var facts = new TextTable("item", "found");
-        facts.Add("matrix", $"{i.MatrixPath} ({FormatName(i.FileFormat, i.Delimiter)}, {LayoutName(i.Layout)})");
+        string compression = i.Compression is null ? "" : $", {i.Compression}-compressed";
+        facts.Add("matrix", $"{i.MatrixPath} ({FormatName(i.FileFormat, i.Delimiter)}{compression}, {LayoutName(i.Layout)})");
+        if (i.CommentLineCount > 0) facts.Add("comment lines", $"{Count(i.CommentLineCount)} above the header ('#' or '!'), skipped");
+        if (i.LongTable is { } longTable) facts.Add("long table", LongTableText(longTable));
+        if (i.FeatureColumns is { } describing) facts.Add("feature columns", FeatureColumnsText(describing));
         if (i.SampleSheetPath is not null) facts.Add("sample sheet", i.SampleSheetPath);
+        if (i.FeatureSheet is { } featureSheet)
+        {
+            facts.Add("feature sheet", FeatureSheetText(featureSheet));
+            if (featureSheet.DetectionLimitColumn is { } limitColumn)
+                facts.Add("detection limits", $"'{limitColumn}': {Count(featureSheet.FeaturesWithLimit)} features with a limit; "
+                    + $"{Count(featureSheet.CensoredCellTotal)} measured cells below their feature's limit, now below detection"
+                    + (featureSheet.CensoredCells.Count == 0 ? "" : " (" + string.Join(", ", featureSheet.CensoredCells.Take(ListedNames).Select(c => $"{c.Feature} {Count(c.Cells)}"))
+                        + (featureSheet.CensoredCells.Count > ListedNames ? $", and {featureSheet.CensoredCells.Count - ListedNames} more features" : "") + ")"));
+        }
         facts.Add("samples", Count(i.SampleCount));
         facts.Add("features", Count(i.FeatureCount));
         facts.Add("outcome", $"{i.OutcomeColumn}: " + string.Join(", ", i.Classes.Select(c => $"{c.Name} {c.SampleCount}")) + $" (positive class: {i.PositiveClass})");
@@ -88,8 +101,43 @@ internal static class InspectionPrinter
         _ => format.ToString(),
     };
 
-    private static string LayoutName(PanelLayout layout) =>
-        layout == PanelLayout.SamplesInRows ? "samples in rows" : "features in rows";
+    private static string FeatureSheetText(FeatureSheetFound sheet)
+    {
+        string text = $"{sheet.Path}: ids in '{sheet.IdColumn}'";
+        if (sheet.DisplayNameColumn is { } display) text += $", display names in '{display}'";
+        if (sheet.AnnotationColumns.Count > 0) text += ", annotations " + string.Join(", ", sheet.AnnotationColumns.Select(c => $"'{c}'"));
+        if (sheet.MatrixOnlyFeatures.Count > 0) text += $"; {Count(sheet.MatrixOnlyFeatures.Count)} matrix features not in the sheet dropped";
+        if (sheet.SheetOnlyFeatures.Count > 0) text += $"; {Count(sheet.SheetOnlyFeatures.Count)} sheet rows not in the matrix ignored";
+        return text;
+    }
+
+    /// <summary>One line: which column names features, which travel with them, and how they were found.</summary>
+    private static string FeatureColumnsText(FeatureColumnsFound found)
+    {
+        string text = $"'{found.IdColumn}' names each feature";
+        if (found.AnnotationColumns.Count > 0)
+            text += "; " + string.Join(", ", found.AnnotationColumns.Select(c => $"'{c}'")) + " travel with it as annotations";
+        return text + (found.Detected
+            ? " (leading text columns before the first column of numbers; name them with --feature-columns)"
+            : " (named with --feature-columns)");
+    }
+
+    private static string LayoutName(PanelLayout layout) => layout switch
+    {
+        PanelLayout.SamplesInRows => "samples in rows",
+        PanelLayout.FeaturesInRows => "features in rows",
+        _ => "long table",
+    };
+
+    private static string LongTableText(LongTableFound found)
+    {
+        string text = $"{Count(found.Rows)} rows; sample '{found.SampleColumn}', feature '{found.FeatureColumn}', value '{found.ValueColumn}'";
+        if (found.DetectionLimitColumn is { } limit) text += $"; per-row limit '{limit}': {Count(found.CellsBelowRowLimit)} values below it, now below detection";
+        if (found.BelowDetectionFlagColumn is { } below) text += $"; flag '{below}': {Count(found.CellsFlaggedBelow)} cells below detection";
+        if (found.QualityFlagColumn is { } quality) text += $"; quality flag '{quality}': {Count(found.CellsFailingQuality)} cells made missing";
+        if (found.CellsWithoutRow > 0) text += $"; {Count(found.CellsWithoutRow)} sample-feature pairs without a row, missing";
+        return text;
+    }
 
     private static string SeverityName(FindingSeverity severity) => severity switch
     {

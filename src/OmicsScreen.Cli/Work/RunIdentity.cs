@@ -52,6 +52,7 @@ internal static class RunIdentity
         {
             MatrixPath = Path.GetFullPath(options.Panel.MatrixPath),
             SampleSheetPath = options.Panel.SampleSheetPath is { } sheet ? Path.GetFullPath(sheet) : null,
+            FeatureSheetPath = options.Panel.FeatureSheetPath is { } features ? Path.GetFullPath(features) : null,
         };
         return new RunRecord
         {

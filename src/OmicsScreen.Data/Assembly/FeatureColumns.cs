@@ -75,8 +75,9 @@ internal sealed class FeatureColumns
     /// The matrix of the given sample slots (in order) of the given feature slots; sample slots
     /// are copied one column at a time, feature slots are picked without copying.
     /// </summary>
+    /// <param name="limits">Per-feature detection limits (a feature sheet's) applied to each column as it is gathered.</param>
     public FeatureMatrix ToMatrix(IReadOnlyList<string> featureNames, IReadOnlyList<string> sampleIds,
-        int[]? featureSlots = null, int[]? sampleSlots = null)
+        int[]? featureSlots = null, int[]? sampleSlots = null, DetectionLimits? limits = null)
     {
         int featureCount = featureSlots?.Length ?? _values.Length;
         var values = new float[featureCount][];
@@ -86,6 +87,7 @@ internal sealed class FeatureColumns
             int slot = featureSlots?[f] ?? f;
             values[f] = Pick(_values[slot], sampleSlots, sampleIds.Count);
             states[f] = _states[slot] is { } slotStates ? Pick(slotStates, sampleSlots, sampleIds.Count) : null;
+            limits?.Apply(featureNames[f], values[f], ref states[f]);
             // Release the slot at once so that at most one extra column is alive while compacting.
             _values[slot] = [];
             _states[slot] = null;

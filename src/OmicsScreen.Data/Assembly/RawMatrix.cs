@@ -19,6 +19,24 @@ internal sealed class RawMatrix
     }
 
     public MatrixSource Source { get; }
+
+    /// <summary>The same reading with only the given features, in the given order (describing columns picked alike).</summary>
+    public RawMatrix WithFeatures(int[] features)
+    {
+        var annotations = new List<(string Name, string[] Values)>(FeatureAnnotations.Count);
+        foreach (var (name, values) in FeatureAnnotations)
+        {
+            var picked = new string[features.Length];
+            for (int i = 0; i < picked.Length; i++) picked[i] = values[features[i]];
+            annotations.Add((name, picked));
+        }
+        return new RawMatrix(Source, Matrix.SelectFeatures(features), Annotations, SampleLines, OtherColumns)
+        {
+            FeatureIdColumn = FeatureIdColumn,
+            FeatureAnnotations = annotations,
+            FeatureColumnsDetected = FeatureColumnsDetected,
+        };
+    }
     public FeatureMatrix Matrix { get; }
 
     /// <summary>Annotation columns (or, for features in rows, annotation rows) as text, in sample order.</summary>
@@ -29,4 +47,13 @@ internal sealed class RawMatrix
 
     /// <summary>The id and annotation column names, for "columns available" in messages.</summary>
     public IReadOnlyList<string> OtherColumns { get; }
+
+    /// <summary>The column naming features (features in rows, long tables); null when features are columns.</summary>
+    public string? FeatureIdColumn { get; init; }
+
+    /// <summary>Feature-describing columns read with the matrix (name, one text per feature in matrix order).</summary>
+    public IReadOnlyList<(string Name, string[] Values)> FeatureAnnotations { get; init; } = [];
+
+    /// <summary>True when the describing columns were found as leading text columns rather than named by an option.</summary>
+    public bool FeatureColumnsDetected { get; init; }
 }

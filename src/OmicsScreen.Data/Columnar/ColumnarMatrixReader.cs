@@ -66,7 +66,7 @@ internal static class ColumnarMatrixReader
         }
         var lines = new long[sampleCount];
         for (int s = 0; s < lines.Length; s++) lines[s] = s + 1;
-        return new RawMatrix(source, columns.ToMatrix(roles.FeatureNames, sampleIds), annotations, lines, otherColumns);
+        return new RawMatrix(source, columns.ToMatrix(roles.FeatureNames, sampleIds, limits: options.FeatureLimits), annotations, lines, otherColumns);
     }
 
     private static RawMatrix ReadFeaturesInRows(IColumnarTable table, MatrixSource source, PanelLoadOptions options,
@@ -152,7 +152,7 @@ internal static class ColumnarMatrixReader
                 foreach (int r in attributeRows) annotations[labels[r]][s] = (texts[r] ?? "").Trim();
             }
         }
-        return new RawMatrix(source, columns.ToMatrix(featureNames, sampleIds), annotations,
+        return new RawMatrix(source, columns.ToMatrix(featureNames, sampleIds, limits: options.FeatureLimits), annotations,
             new long[sampleIds.Length], [header[0]]);
     }
 

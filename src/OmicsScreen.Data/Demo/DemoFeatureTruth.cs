@@ -4,6 +4,7 @@ namespace OmicsScreen.Data.Demo;
 /// <param name="CaseShiftSd">Shift of the case mean on the log2 scale, in units of the feature's SD.</param>
 /// <param name="CohortShiftSd">Shift in the batch-affected cohort, in SD units.</param>
 /// <param name="Module">Correlated module number, or -1 when the feature is on its own.</param>
+/// <param name="DetectionLimit">The feature's detection limit on the linear scale as written, or NaN when it has none.</param>
 public sealed record DemoFeatureTruth(
     string Feature,
     DemoFeatureRole Role,
@@ -13,4 +14,5 @@ public sealed record DemoFeatureTruth(
     double Log2Mean,
     double Log2Sd,
     double MissingRate,
-    bool HasDetectionLimit);
+    bool HasDetectionLimit,
+    float DetectionLimit = float.NaN);

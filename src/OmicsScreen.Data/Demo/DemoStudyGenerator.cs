@@ -104,7 +104,8 @@ public static class DemoStudyGenerator
                 }
             }
             truth[f] = new DemoFeatureTruth(names[f], p.Role, p.CaseShiftSd + (p.Module >= 0 ? shared * plan.ModuleShift[p.Module] : 0),
-                p.CohortShiftSd, p.Module, p.Log2Mean, p.Log2Sd, p.MissingRate, p.HasDetectionLimit);
+                p.CohortShiftSd, p.Module, p.Log2Mean, p.Log2Sd, p.MissingRate, p.HasDetectionLimit,
+                p.HasDetectionLimit ? RoundAsWritten(Math.Pow(2, p.Log2DetectionLimit)) : float.NaN);
         }
         return new DemoStudy(builder.Build(), status, centreLabel, age, sex, truth, options);
     }

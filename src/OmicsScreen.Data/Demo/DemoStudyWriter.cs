@@ -14,6 +14,7 @@ public static class DemoStudyWriter
     public const string PanelFileName = "marrowfen_plasma.csv";
     public const string SampleSheetFileName = "marrowfen_samples.tsv";
     public const string TruthFileName = "marrowfen_truth.tsv";
+    public const string FeatureSheetFileName = "marrowfen_features.csv";
     public const string ReadmeFileName = "README.md";
 
     /// <summary>The file names written, each with the text its every version begins with (how an earlier demo file is recognised).</summary>
@@ -22,6 +23,7 @@ public static class DemoStudyWriter
         (PanelFileName, "sample_id,"),
         (SampleSheetFileName, $"sample_id\t{DemoStudy.OutcomeColumn}\t{DemoStudy.CentreColumn}\t"),
         (TruthFileName, "feature\trole\t"),
+        (FeatureSheetFileName, "feature,display_name,assay_panel,detection_limit\n"),
         (ReadmeFileName, ReadmeHeading),
     ];
 
@@ -35,10 +37,12 @@ public static class DemoStudyWriter
             Path.Combine(folder, PanelFileName),
             Path.Combine(folder, SampleSheetFileName),
             Path.Combine(folder, TruthFileName),
-            Path.Combine(folder, ReadmeFileName));
+            Path.Combine(folder, ReadmeFileName),
+            Path.Combine(folder, FeatureSheetFileName));
         AtomicFile.WriteText(files.Panel, writer => WritePanel(study.Matrix, writer));
         AtomicFile.WriteText(files.SampleSheet, writer => WriteSampleSheet(study, writer));
         AtomicFile.WriteText(files.Truth, writer => WriteTruth(study, writer));
+        AtomicFile.WriteText(files.FeatureSheet, writer => WriteFeatureSheet(study, writer));
         AtomicFile.WriteAllText(files.Readme, Readme(study));
         return files;
     }
@@ -79,6 +83,25 @@ public static class DemoStudyWriter
         writer.Write($"sample_id\t{DemoStudy.OutcomeColumn}\t{DemoStudy.CentreColumn}\tage_years\tsex\n");
         for (int s = 0; s < study.Matrix.SampleCount; s++)
             writer.Write($"{study.Matrix.SampleIds[s]}\t{study.Status[s]}\t{study.Centre[s]}\t{study.AgeYears[s]}\t{study.Sex[s]}\n");
+    }
+
+    /// <summary>Invented syllables for the analytes' lab-facing names; no real protein or metabolite is named so.</summary>
+    private static readonly string[] NameStems = ["Fennorin", "Marlase", "Quillectin", "Brackulin", "Sedgomer", "Tarnase", "Woldin", "Heathectin"];
+
+    /// <summary>
+    /// The feature sheet a lab would keep beside the matrix: an invented display name per analyte,
+    /// the assay panel it was measured on, and its detection limit when it has one.
+    /// </summary>
+    private static void WriteFeatureSheet(DemoStudy study, TextWriter writer)
+    {
+        writer.Write("feature,display_name,assay_panel,detection_limit\n");
+        for (int f = 0; f < study.Truth.Count; f++)
+        {
+            var t = study.Truth[f];
+            string name = string.Create(CultureInfo.InvariantCulture, $"{NameStems[f % NameStems.Length]}-{f / NameStems.Length + 1}");
+            string limit = float.IsNaN(t.DetectionLimit) ? "" : t.DetectionLimit.ToString("G6", CultureInfo.InvariantCulture);
+            writer.Write(string.Create(CultureInfo.InvariantCulture, $"{t.Feature},{name},panel {(char)('A' + f % 3)},{limit}\n"));
+        }
     }
 
     private static void WriteTruth(DemoStudy study, TextWriter writer)
@@ -122,6 +145,8 @@ public static class DemoStudyWriter
             - `{SampleSheetFileName}`: sample sheet with `{DemoStudy.OutcomeColumn}` ({cases} {DemoStudy.CaseLabel}, {study.Matrix.SampleCount - cases} {DemoStudy.ControlLabel}),
               `{DemoStudy.CentreColumn}`: {centres}; plus `age_years` and `sex`, which carry no signal.
             - `{TruthFileName}`: what was planted in every analyte, so a screen can be scored.
+            - `{FeatureSheetFileName}`: feature sheet with an invented lab-facing `display_name` per analyte (`Fennorin-1` ...),
+              the `assay_panel` it was measured on, and the `detection_limit` of the analytes that have one.
 
             ## What was planted
             - {planted.Length} true markers: six acting alone (shifts of 0.6 to 1.2 SD on the log2 scale),

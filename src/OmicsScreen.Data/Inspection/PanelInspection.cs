@@ -11,6 +11,16 @@ public sealed record PanelInspection
     public required MatrixFileFormat FileFormat { get; init; }
     /// <summary>"comma", "tab" or "semicolon" for text files; null for Parquet and Arrow.</summary>
     public string? Delimiter { get; init; }
+    /// <summary>"gzip" when the text was decompressed while reading; null otherwise.</summary>
+    public string? Compression { get; init; }
+    /// <summary>Comment lines ('#' or '!') skipped above the header of a text matrix.</summary>
+    public int CommentLineCount { get; init; }
+    /// <summary>The feature-describing columns of a features-in-rows or long file; null when features are columns.</summary>
+    public FeatureColumnsFound? FeatureColumns { get; init; }
+    /// <summary>What the feature sheet gave, when one was joined.</summary>
+    public FeatureSheetFound? FeatureSheet { get; init; }
+    /// <summary>How a long table was read, for that layout.</summary>
+    public LongTableFound? LongTable { get; init; }
     public required PanelLayout Layout { get; init; }
     public string? SampleSheetPath { get; init; }
 

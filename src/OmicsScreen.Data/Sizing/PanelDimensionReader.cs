@@ -37,6 +37,12 @@ public static class PanelDimensionReader
         string path = options.MatrixPath;
         if (!File.Exists(path)) return null;
         var format = MatrixFormatDetector.Detect(path);
+        if (options.Layout == PanelLayout.Long)
+        {
+            if (format != MatrixFileFormat.DelimitedText) return null;
+            var (samples, features) = LongTableReader.CountDimensions(path, options);
+            return samples > 0 && features > 0 ? new PanelDimensions(samples, features, format, new FileInfo(path).Length) : null;
+        }
         IReadOnlyList<string> columns;
         long rows;
         switch (format)

@@ -4,7 +4,7 @@ namespace OmicsScreen.Data.Text;
 internal static class CellErrors
 {
     public static PanelInputException NotAMeasurement(string filePath, long line, string column, string feature,
-        ReadOnlySpan<char> text, CellKind kind, bool isTableRow = false, string? textColumnFix = null)
+        ReadOnlySpan<char> text, CellKind kind, bool isTableRow = false, string? textColumnFix = null, bool textColumnIsSample = false)
     {
         string shown = Display.Name(text);
         string where = column == feature ? "" : $" (feature '{Display.Name(feature)}')";
@@ -14,7 +14,7 @@ internal static class CellErrors
                 "Infinity is not a measurement: put the measured value, NA when it is missing, or a below-detection token such as <LOD.",
                 isTableRow: isTableRow);
         string fix = "Correct the cell. If this column describes samples rather than measuring them, name it with --annotation COLUMN (or with --outcome, --cohort or --subject).";
-        if (textColumnFix is not null && column == feature && double.IsNaN(LeadingNumber(text)))
+        if (textColumnFix is not null && (column == feature || textColumnIsSample) && double.IsNaN(LeadingNumber(text)))
             fix = textColumnFix;
         else if (text.Contains('\uFFFD'))
             fix = "The cell holds bytes that are not valid UTF-8 (the file is probably Latin-1 or Windows-1252): save the file again as UTF-8.";

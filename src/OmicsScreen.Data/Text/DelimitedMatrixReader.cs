@@ -25,6 +25,12 @@ internal static class DelimitedMatrixReader
         {
             return ReadRows(path, options, ct);
         }
+        catch (AggregateException e) when (e.InnerExceptions.Count == 1 && e.InnerExceptions[0] is PanelInputException inner)
+        {
+            // A damaged gzip file is found while Sep reads ahead for its parsing workers.
+            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Throw(inner);
+            throw;
+        }
         catch (Exception e) when (LongRows.IsRowTooLong(e))
         {
             // Sep holds a row in a buffer of at most 16 Mi characters; a longer one is read again row by row.
@@ -39,8 +45,9 @@ internal static class DelimitedMatrixReader
         char delimiter = DelimiterDetector.Detect(path);
         using var text = DelimiterDetector.OpenText(path);
         using var reader = Open(text, delimiter);
-        var source = new MatrixSource(path, MatrixFileFormat.DelimitedText, delimiter, options.Layout);
-        var header = ReadHeader(reader, path);
+        var source = new MatrixSource(path, MatrixFileFormat.DelimitedText, delimiter, options.Layout) { Gzip = TextInput.IsGzip(path) };
+        var header = ReadHeader(reader, path, out int commentLines);
+        source = source with { CommentLineCount = commentLines };
         int rowBound = Math.Max(1, LineCounter.UpperBoundOfLines(path) - 1);
         var slots = new SlotCounter();
         return options.Layout == PanelLayout.SamplesInRows
@@ -55,13 +62,13 @@ internal static class DelimitedMatrixReader
         {
             using var text = DelimiterDetector.OpenText(path);
             using var reader = Open(text, DelimiterDetector.Detect(path));
-            return ReadHeader(reader, path);
+            return ReadHeader(reader, path, out _);
         }
         catch (Exception e) when (LongRows.IsRowTooLong(e))
         {
             using var text = DelimiterDetector.OpenText(path);
             var reader = new TextRowReader(text, DelimiterDetector.Detect(path));
-            return ReadLongHeader(reader, new TextRow(), path);
+            return ReadLongHeader(reader, new TextRow(), path, out _);
         }
     }
 
@@ -92,8 +99,8 @@ internal static class DelimitedMatrixReader
         using var text = DelimiterDetector.OpenText(path);
         var reader = new TextRowReader(text, delimiter);
         var row = new TextRow();
-        var source = new MatrixSource(path, MatrixFileFormat.DelimitedText, delimiter, options.Layout);
-        var header = ReadLongHeader(reader, row, path);
+        var header = ReadLongHeader(reader, row, path, out int commentLines);
+        var source = new MatrixSource(path, MatrixFileFormat.DelimitedText, delimiter, options.Layout) { Gzip = TextInput.IsGzip(path), CommentLineCount = commentLines };
         int rowBound = Math.Max(1, LineCounter.UpperBoundOfLines(path) - 1);
         var slots = new SlotCounter();
         var roles = SampleColumnRoles.Resolve(header, options, path, isTableRow: false);
@@ -148,7 +155,7 @@ internal static class DelimitedMatrixReader
             annotations[header[roles.AttributeColumns[a]]] = attributes[a].ToArray();
             otherColumns.Add(header[roles.AttributeColumns[a]]);
         }
-        var matrix = columns.ToMatrix(roles.FeatureNames, sampleIds, sampleSlots: sampleSlots.ToArray());
+        var matrix = columns.ToMatrix(roles.FeatureNames, sampleIds, sampleSlots: sampleSlots.ToArray(), limits: options.FeatureLimits);
         return new RawMatrix(source, matrix, annotations, sampleLines.ToArray(), otherColumns);
     }
 
@@ -190,7 +197,11 @@ internal static class DelimitedMatrixReader
     {
         if (row.IsBlank) return new ParsedRow { IsBlank = true };
         int slot = slots.Next();
-        var parsed = new ParsedRow { Line = row.FirstLine, FieldCount = row.FieldCount, Slot = slot, BeyondCapacity = slot >= columns.SampleCapacity };
+        var parsed = new ParsedRow
+        {
+            Line = row.FirstLine, FieldCount = row.FieldCount, Slot = slot, BeyondCapacity = slot >= columns.SampleCapacity,
+            IsComment = DelimiterDetector.IsComment(row[0]),
+        };
         if (!parsed.CanHoldCells(fieldCount)) return parsed;
         parsed.Label = row[roles.IdColumn].Trim().ToString();
         var texts = new string[roles.AttributeColumns.Length];
@@ -211,11 +222,17 @@ internal static class DelimitedMatrixReader
         return parsed;
     }
 
-    private static string[] ReadLongHeader(TextRowReader reader, TextRow row, string path)
+    private static string[] ReadLongHeader(TextRowReader reader, TextRow row, string path, out int commentLines)
     {
+        commentLines = 0;
         while (reader.Next(row))
         {
-            if (row.IsBlank || DelimiterDetector.IsCommentAboveHeader(row[0])) continue;
+            if (row.IsBlank) continue;
+            if (DelimiterDetector.IsCommentAboveHeader(row[0]))
+            {
+                commentLines++;
+                continue;
+            }
             var header = new string[row.FieldCount];
             for (int c = 0; c < header.Length; c++) header[c] = row[c].Trim().ToString();
             return header;
@@ -227,12 +244,12 @@ internal static class DelimitedMatrixReader
     private static RawMatrix ReadFeaturesInRows(SepReader reader, string[] header, SlotCounter slots, int rowBound,
         MatrixSource source, PanelLoadOptions options, CancellationToken ct)
     {
-        var sampleIds = FeaturesInRowsSampleIds(header, source.Path);
         var attributeNames = options.SampleAttributeNames();
-        var columns = new FeatureColumns(rowBound, sampleIds.Length);
-        var rows = reader.ParallelEnumerate(row => ParseFeatureRow(row, header.Length, slots, attributeNames, columns),
+        var roles = FeaturesInRowsRoles(header, source, options, attributeNames);
+        var columns = new FeatureColumns(rowBound, roles.SampleIds.Length);
+        var rows = reader.ParallelEnumerate(row => ParseFeatureRow(row, header.Length, slots, attributeNames, roles, columns),
             Environment.ProcessorCount);
-        return CollectFeatures(rows, header, sampleIds, columns, source, ct);
+        return CollectFeatures(rows, header, roles, columns, source, options, ct);
     }
 
     /// <summary>
@@ -245,61 +262,68 @@ internal static class DelimitedMatrixReader
         using var text = DelimiterDetector.OpenText(path);
         var reader = new TextRowReader(text, delimiter);
         var row = new TextRow();
-        var source = new MatrixSource(path, MatrixFileFormat.DelimitedText, delimiter, options.Layout);
-        var header = ReadLongHeader(reader, row, path);
-        var sampleIds = FeaturesInRowsSampleIds(header, path);
+        var header = ReadLongHeader(reader, row, path, out int commentLines);
+        var source = new MatrixSource(path, MatrixFileFormat.DelimitedText, delimiter, options.Layout) { Gzip = TextInput.IsGzip(path), CommentLineCount = commentLines };
+        var attributeNames = options.SampleAttributeNames();
+        var roles = FeaturesInRowsRoles(header, source, options, attributeNames);
         int rowBound = Math.Max(1, LineCounter.UpperBoundOfLines(path) - 1);
         var slots = new SlotCounter();
-        var attributeNames = options.SampleAttributeNames();
-        var columns = new FeatureColumns(rowBound, sampleIds.Length);
+        var columns = new FeatureColumns(rowBound, roles.SampleIds.Length);
         IEnumerable<ParsedRow> Rows()
         {
-            while (reader.Next(row)) yield return ParseFeatureRow(row, header.Length, slots, attributeNames, columns);
+            while (reader.Next(row)) yield return ParseFeatureRow(row, header.Length, slots, attributeNames, roles, columns);
         }
-        return CollectFeatures(Rows(), header, sampleIds, columns, source, ct);
+        return CollectFeatures(Rows(), header, roles, columns, source, options, ct);
     }
 
-    /// <summary>The header's sample ids (every column after the first), checked.</summary>
-    private static string[] FeaturesInRowsSampleIds(string[] header, string path)
+    /// <summary>The header's describing columns and sample ids (every other column), checked.</summary>
+    private static FeatureRowRoles FeaturesInRowsRoles(string[] header, MatrixSource source, PanelLoadOptions options, HashSet<string> attributeNames)
     {
+        string path = source.Path;
         if (header.Length < 2)
             throw PanelInputException.At(path, 1, null, "has a single column, so there are no sample columns.",
                 "Check the delimiter, or load the file without --features-in-rows.");
-        var sampleIds = header[1..];
+        var roles = FeatureRowRoles.Resolve(header, options, path,
+            () => LeadingTextColumns.Count(path, source.Delimiter!.Value, header.Length, attributeNames, FeatureRowRoles.ScannedRows));
+        var sampleIds = roles.SampleIds;
         for (int s = 0; s < sampleIds.Length; s++)
-            NameRules.Check(sampleIds[s], "sample id", path, 1, FormattableString.Invariant($"#{s + 2}"));
+            NameRules.Check(sampleIds[s], "sample id", path, 1, FormattableString.Invariant($"#{roles.SampleColumns[s] + 1}"));
         NameRules.CheckUnique(sampleIds, "sample id", path,
             "Make sample ids in the header unique (technical replicates need their own ids).");
-        return sampleIds;
+        return roles;
     }
 
     /// <summary>Checks the parsed feature rows in file order, then gathers the features' slots into the matrix.</summary>
-    private static RawMatrix CollectFeatures(IEnumerable<ParsedRow> rows, string[] header, string[] sampleIds,
-        FeatureColumns columns, MatrixSource source, CancellationToken ct)
+    private static RawMatrix CollectFeatures(IEnumerable<ParsedRow> rows, string[] header, FeatureRowRoles roles,
+        FeatureColumns columns, MatrixSource source, PanelLoadOptions options, CancellationToken ct)
     {
         string path = source.Path;
+        var sampleIds = roles.SampleIds;
+        var descriptors = new List<string[]>();
         var featureNames = new List<string>();
         var featureSlots = new List<int>();
         var annotations = new Dictionary<string, string[]>(StringComparer.Ordinal);
         int rowCount = 0;
+        string idName = header[roles.IdColumn];
         foreach (var row in rows)
         {
             if (row.IsBlank) continue;
             if ((rowCount++ & (CancellationCheckRows - 1)) == 0) ct.ThrowIfCancellationRequested();
             CheckRow(row, header.Length, path);
-            NameRules.Check(row.Label, "feature name", path, row.Line, header[0]);
+            NameRules.Check(row.Label, "feature name", path, row.Line, idName);
             if (row.Texts is { } values)
             {
                 if (!annotations.TryAdd(row.Label, values))
-                    throw PanelInputException.At(path, row.Line, header[0],
+                    throw PanelInputException.At(path, row.Line, idName,
                         $"the sample attribute row '{Display.Name(row.Label)}' occurs twice.", "Keep one row per sample attribute.");
                 continue;
             }
             if (row.FailedIndex >= 0)
                 throw CellErrors.NotAMeasurement(path, row.Line, sampleIds[row.FailedIndex], row.Label, row.FailedText,
-                    row.FailedKind);
+                    row.FailedKind, textColumnFix: DescriptorFix(roles), textColumnIsSample: true);
             featureNames.Add(row.Label);
             featureSlots.Add(row.Slot);
+            descriptors.Add(row.Descriptors!);
         }
         if (rowCount == 0) throw HeaderOnly(path);
         if (featureNames.Count == 0)
@@ -307,30 +331,54 @@ internal static class DelimitedMatrixReader
                 "Add the measurement rows, or check the layout.");
         NameRules.CheckUnique(featureNames, "feature name", path,
             "Make feature names unique (for example add the assay or isoform to the name) and load again.");
-        var matrix = columns.ToMatrix(featureNames, sampleIds, featureSlots: featureSlots.ToArray());
-        return new RawMatrix(source, matrix, annotations, new long[sampleIds.Length], [header[0]]);
+        var matrix = columns.ToMatrix(featureNames, sampleIds, featureSlots: featureSlots.ToArray(), limits: options.FeatureLimits);
+        var featureAnnotations = new List<(string Name, string[] Values)>(roles.AnnotationColumns.Length);
+        for (int a = 0; a < roles.AnnotationColumns.Length; a++)
+        {
+            var values = new string[descriptors.Count];
+            for (int f = 0; f < values.Length; f++) values[f] = descriptors[f][a];
+            featureAnnotations.Add((roles.AnnotationNames[a], values));
+        }
+        return new RawMatrix(source, matrix, annotations, new long[sampleIds.Length], [idName])
+        {
+            FeatureIdColumn = idName,
+            FeatureAnnotations = featureAnnotations,
+            FeatureColumnsDetected = roles.Detected,
+        };
+    }
+
+    /// <summary>For a text cell in a sample column when the describing columns were guessed: the option that names them.</summary>
+    private static string? DescriptorFix(FeatureRowRoles roles)
+    {
+        if (!roles.Detected) return null;
+        return "If this column describes features (a symbol, a name, a description) rather than measuring a sample, name every describing column with --feature-columns (the first names the feature), for example --feature-columns "
+            + "ID --feature-columns SYMBOL; by default only leading columns that hold mostly text are taken.";
     }
 
     /// <summary>Runs on a worker: stores one feature's cells in its column slot, or keeps an attribute row as text.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static ParsedRow ParseFeatureRow(SepReader.Row row, int fieldCount, SlotCounter slots, HashSet<string> attributeNames,
-        FeatureColumns columns)
+        FeatureRowRoles roles, FeatureColumns columns)
     {
         var parsed = Start(row, slots, columns.FeatureCount);
         if (!parsed.CanHoldCells(fieldCount)) return parsed;
         int slot = parsed.Slot;
-        parsed.Label = row[0].Span.Trim().ToString();
-        int sampleCount = fieldCount - 1;
+        parsed.Label = row[roles.IdColumn].Span.Trim().ToString();
+        int[] sampleColumns = roles.SampleColumns;
+        int sampleCount = sampleColumns.Length;
         if (attributeNames.Contains(parsed.Label))
         {
             var texts = new string[sampleCount];
-            for (int s = 0; s < texts.Length; s++) texts[s] = row[s + 1].Span.Trim().ToString();
+            for (int s = 0; s < texts.Length; s++) texts[s] = row[sampleColumns[s]].Span.Trim().ToString();
             parsed.Texts = texts;
             return parsed;
         }
+        var descriptors = new string[roles.AnnotationColumns.Length];
+        for (int a = 0; a < descriptors.Length; a++) descriptors[a] = row[roles.AnnotationColumns[a]].Span.Trim().ToString();
+        parsed.Descriptors = descriptors;
         for (int s = 0; s < sampleCount; s++)
         {
-            var cell = row[s + 1].Span;
+            var cell = row[sampleColumns[s]].Span;
             var kind = CellText.Classify(cell, out float value);
             if (!columns.Store(slot, s, kind, value))
             {
@@ -342,28 +390,36 @@ internal static class DelimitedMatrixReader
     }
 
     /// <summary>
-    /// <see cref="ParseFeatureRow(SepReader.Row, int, SlotCounter, HashSet{string}, FeatureColumns)"/>
+    /// <see cref="ParseFeatureRow(SepReader.Row, int, SlotCounter, HashSet{string}, FeatureRowRoles, FeatureColumns)"/>
     /// for a row of <see cref="TextRowReader"/>: the same steps, cell for cell.
     /// </summary>
     private static ParsedRow ParseFeatureRow(TextRow row, int fieldCount, SlotCounter slots, HashSet<string> attributeNames,
-        FeatureColumns columns)
+        FeatureRowRoles roles, FeatureColumns columns)
     {
         if (row.IsBlank) return new ParsedRow { IsBlank = true };
         int slot = slots.Next();
-        var parsed = new ParsedRow { Line = row.FirstLine, FieldCount = row.FieldCount, Slot = slot, BeyondCapacity = slot >= columns.FeatureCount };
+        var parsed = new ParsedRow
+        {
+            Line = row.FirstLine, FieldCount = row.FieldCount, Slot = slot, BeyondCapacity = slot >= columns.FeatureCount,
+            IsComment = DelimiterDetector.IsComment(row[0]),
+        };
         if (!parsed.CanHoldCells(fieldCount)) return parsed;
-        parsed.Label = row[0].Trim().ToString();
-        int sampleCount = fieldCount - 1;
+        parsed.Label = row[roles.IdColumn].Trim().ToString();
+        int[] sampleColumns = roles.SampleColumns;
+        int sampleCount = sampleColumns.Length;
         if (attributeNames.Contains(parsed.Label))
         {
             var texts = new string[sampleCount];
-            for (int s = 0; s < texts.Length; s++) texts[s] = row[s + 1].Trim().ToString();
+            for (int s = 0; s < texts.Length; s++) texts[s] = row[sampleColumns[s]].Trim().ToString();
             parsed.Texts = texts;
             return parsed;
         }
+        var descriptors = new string[roles.AnnotationColumns.Length];
+        for (int a = 0; a < descriptors.Length; a++) descriptors[a] = row[roles.AnnotationColumns[a]].Trim().ToString();
+        parsed.Descriptors = descriptors;
         for (int s = 0; s < sampleCount; s++)
         {
-            var cell = row[s + 1];
+            var cell = row[sampleColumns[s]];
             var kind = CellText.Classify(cell, out float value);
             if (!columns.Store(slot, s, kind, value))
             {
@@ -379,7 +435,11 @@ internal static class DelimitedMatrixReader
     {
         if (IsBlank(row)) return new ParsedRow { IsBlank = true };
         int slot = slots.Next();
-        return new ParsedRow { Line = FirstLine(row), FieldCount = row.ColCount, Slot = slot, BeyondCapacity = slot >= slotCapacity };
+        return new ParsedRow
+        {
+            Line = FirstLine(row), FieldCount = row.ColCount, Slot = slot, BeyondCapacity = slot >= slotCapacity,
+            IsComment = DelimiterDetector.IsComment(row[0].Span),
+        };
     }
 
     /// <summary>
@@ -390,13 +450,19 @@ internal static class DelimitedMatrixReader
     private static long FirstLine(SepReader.Row row) =>
         row.LineNumberToExcl - 1 - row.Span.Count('\n');
 
-    private static string[] ReadHeader(SepReader reader, string path)
+    internal static string[] ReadHeader(SepReader reader, string path, out int commentLines)
     {
+        commentLines = 0;
         // Not foreach: leaving a foreach early would dispose the reader before the data rows.
         while (reader.MoveNext())
         {
             var row = reader.Current;
-            if (IsBlank(row) || DelimiterDetector.IsCommentAboveHeader(row[0].Span)) continue;
+            if (IsBlank(row)) continue;
+            if (DelimiterDetector.IsCommentAboveHeader(row[0].Span))
+            {
+                commentLines++;
+                continue;
+            }
             var header = new string[row.ColCount];
             for (int c = 0; c < header.Length; c++) header[c] = row[c].Span.Trim().ToString();
             return header;
@@ -421,6 +487,7 @@ internal static class DelimitedMatrixReader
 
     private static void CheckRow(ParsedRow row, int expected, string path)
     {
+        if (row.IsComment) throw DelimiterDetector.CommentInsideData(path, row.Line);
         if (row.FieldCount != expected)
             throw PanelInputException.At(path, row.Line, null,
                 FormattableString.Invariant($"the row has {row.FieldCount} fields but the header has {expected}."),

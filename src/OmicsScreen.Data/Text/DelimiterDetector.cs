@@ -98,22 +98,37 @@ internal static class DelimiterDetector
     {
         while (reader.Peek() is int next and >= 0)
         {
-            if (next == '#') reader.ReadLine();
+            if (next is '#' or '!') reader.ReadLine();
             else if (next is '\n' or '\r') reader.Read();
             else return;
         }
     }
 
     /// <summary>
-    /// True for a line above the header that starts with '#': exports from laboratory systems put
-    /// their date or instrument there. Such lines are skipped, so a header may not itself start with '#'.
+    /// True for a line that starts with '#' or '!': exports from laboratory systems put their date
+    /// or instrument above the header after '#', and series-matrix files of public expression
+    /// repositories their metadata after '!'. Such lines above the header are skipped (and
+    /// counted), so a header may not itself start with either; inside the data they are an error.
     /// </summary>
-    public static bool IsCommentAboveHeader(ReadOnlySpan<char> firstCell) => firstCell.TrimStart().StartsWith('#');
+    public static bool IsCommentAboveHeader(ReadOnlySpan<char> firstCell) => IsComment(firstCell);
 
-    /// <summary>Opens UTF-8 text, skipping a byte-order mark when there is one.</summary>
+    /// <summary>True when the first cell of a row starts (after spaces) with a comment mark, '#' or '!'.</summary>
+    public static bool IsComment(ReadOnlySpan<char> firstCell)
+    {
+        var trimmed = firstCell.TrimStart();
+        return trimmed.Length > 0 && trimmed[0] is '#' or '!';
+    }
+
+    /// <summary>The error for a comment line below the header, where it would be read as a sample or feature.</summary>
+    public static PanelInputException CommentInsideData(string path, long line) =>
+        PanelInputException.At(path, line, null,
+            "starts with '#' or '!', a comment line inside the data; comment lines are read only above the header.",
+            "Move the line above the header or delete it (if it is a sample id or feature name, rename it so it does not start with # or !).");
+
+    /// <summary>Opens UTF-8 text (decompressed when the file is gzip), skipping a byte-order mark when there is one.</summary>
     public static StreamReader OpenText(string path) =>
-        new(path, new UTF8Encoding(encoderShouldEmitUTF8Identifier: false), detectEncodingFromByteOrderMarks: true,
-            new FileStreamOptions { Access = FileAccess.Read, BufferSize = 1 << 16, Options = FileOptions.SequentialScan });
+        new(TextInput.Open(path), new UTF8Encoding(encoderShouldEmitUTF8Identifier: false), detectEncodingFromByteOrderMarks: true,
+            bufferSize: 1 << 16, leaveOpen: false);
 
     /// <summary>The delimiter as a word for people: "comma", "tab", "semicolon".</summary>
     public static string Describe(char delimiter) => delimiter switch

@@ -1,6 +1,9 @@
 namespace OmicsScreen.Data.Text;
 
-/// <summary>Counts line breaks in a file at memory speed, without decoding any text.</summary>
+/// <summary>
+/// Counts line breaks in a file at memory speed, without decoding any text; a gzip file is
+/// decompressed once for the count (its compressed size says nothing of its rows).
+/// </summary>
 internal static class LineCounter
 {
     /// <summary>An upper bound on the rows of a file: its line breaks plus one.</summary>
@@ -23,12 +26,12 @@ internal static class LineCounter
     /// </summary>
     private static (long Breaks, bool EndsWithBreak) Scan(string path)
     {
-        using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1, FileOptions.SequentialScan);
+        using var stream = TextInput.Open(path);
         var buffer = new byte[1 << 20];
         long lineFeeds = 0, carriageReturns = 0;
         byte last = (byte)'\n';
         int read;
-        while ((read = stream.Read(buffer, 0, buffer.Length)) > 0)
+        while ((read = stream.ReadAtLeast(buffer, buffer.Length, throwOnEndOfStream: false)) > 0)
         {
             var span = buffer.AsSpan(0, read);
             lineFeeds += span.Count((byte)'\n');

@@ -8,6 +8,9 @@ namespace OmicsScreen.Data.Text;
 internal sealed class ParsedRow
 {
     public bool IsBlank { get; init; }
+
+    /// <summary>True when the row's first cell starts with '#' or '!': a comment line below the header.</summary>
+    public bool IsComment { get; init; }
     public long Line { get; init; }
     public int FieldCount { get; init; }
 
@@ -22,6 +25,9 @@ internal sealed class ParsedRow
 
     /// <summary>Attribute texts: one per attribute column, or for an attribute row one per sample.</summary>
     public string[]? Texts { get; set; }
+
+    /// <summary>A feature row's describing texts (its annotation columns), trimmed.</summary>
+    public string[]? Descriptors { get; set; }
 
     /// <summary>The index (feature or sample) of the first cell that is not a measurement, or -1.</summary>
     public int FailedIndex { get; set; } = -1;

@@ -9,29 +9,33 @@ namespace OmicsScreen.Data.Text;
 /// </remarks>
 internal static class SampleSheetReader
 {
-    public static SampleSheet Read(string path)
+    /// <param name="role">What the sheet is, in the user's words: "sample sheet" or "feature sheet".</param>
+    /// <param name="rowNoun">What one row describes: "sample" or "feature".</param>
+    public static SampleSheet Read(string path, string role = "sample sheet", string rowNoun = "sample")
     {
         try
         {
-            return ReadRows(path);
+            return ReadRows(path, role, rowNoun);
         }
         catch (Exception e) when (LongRows.IsRowTooLong(e))
         {
             // A sample sheet has a handful of columns, so a row past the reader's buffer is all but
             // always a quote that is never closed, which turns the rest of the file into one row.
             throw PanelInputException.At(path, null, null,
-                FormattableString.Invariant($"has a row longer than the {LongRows.MaxRowChars / (1024 * 1024)} Mi characters a sample sheet row may hold, most likely a quote that is never closed."),
-                "Close the open quote (or remove the stray quote character) so that each sample has a row of its own.", e);
+                FormattableString.Invariant($"has a row longer than the {LongRows.MaxRowChars / (1024 * 1024)} Mi characters a {role} row may hold, most likely a quote that is never closed."),
+                $"Close the open quote (or remove the stray quote character) so that each {rowNoun} has a row of its own.", e);
         }
     }
 
-    private static SampleSheet ReadRows(string path)
+    private static SampleSheet ReadRows(string path, string role, string rowNoun)
     {
-        InputFilePath.EnsureFile(path, "sample sheet");
+        InputFilePath.EnsureFile(path, role);
         if (new FileInfo(path).Length == 0)
             throw PanelInputException.At(path, null, null, "is empty (0 bytes).",
-                "Give a sample sheet with a header row (sample id, outcome, ...) and one row per sample.");
-        EnsureText(path);
+                rowNoun == "sample"
+                    ? "Give a sample sheet with a header row (sample id, outcome, ...) and one row per sample."
+                    : $"Give a {role} with a header row ({rowNoun} id, ...) and one row per {rowNoun}.");
+        EnsureText(path, role);
         char delimiter = DelimiterDetector.Detect(path);
         using var text = DelimiterDetector.OpenText(path);
         using var reader = Sep.New(delimiter)
@@ -61,10 +65,10 @@ internal static class SampleSheetReader
         }
         if (header is null)
             throw PanelInputException.At(path, null, null, "holds no text rows (it is blank).",
-                "Give a sample sheet with a header row and one row per sample.");
+                $"Give a {role} with a header row and one row per {rowNoun}.");
         if (lines.Count == 0)
-            throw PanelInputException.At(path, null, null, "has a header row but no sample rows.",
-                "Add one row per sample to the sample sheet.");
+            throw PanelInputException.At(path, null, null, $"has a header row but no {rowNoun} rows.",
+                $"Add one row per {rowNoun} to the {role}.");
         var arrays = new string[columns.Length][];
         for (int c = 0; c < arrays.Length; c++) arrays[c] = columns[c].ToArray();
         return new SampleSheet(path, delimiter, header, arrays, lines.ToArray());
@@ -75,7 +79,7 @@ internal static class SampleSheetReader
     /// "header" and report no sample rows. A UTF-16 sheet starts with its byte-order mark
     /// (FF FE or FE FF) and is decoded as text, so its zero bytes are expected.
     /// </summary>
-    private static void EnsureText(string path)
+    private static void EnsureText(string path, string role)
     {
         Span<byte> head = stackalloc byte[4096];
         int length;
@@ -84,10 +88,10 @@ internal static class SampleSheetReader
         // Gzip member header: ID1 = 0x1F, ID2 = 0x8B (RFC 1952, section 2.3.1).
         if (head.StartsWith((ReadOnlySpan<byte>)[0x1F, 0x8B]))
             throw PanelInputException.At(path, null, null, "is gzip-compressed.",
-                "Decompress it first (gunzip) and give the uncompressed CSV/TSV sample sheet.");
+                $"Decompress it first (gunzip) and give the uncompressed CSV/TSV {role}.");
         bool utf16 = head.StartsWith((ReadOnlySpan<byte>)[0xFF, 0xFE]) || head.StartsWith((ReadOnlySpan<byte>)[0xFE, 0xFF]);
         if (!utf16 && head.Contains((byte)0))
             throw PanelInputException.At(path, null, null, "is not a text file (it holds zero bytes).",
-                "Give the sample sheet as CSV or TSV text; Excel workbooks must be saved as CSV first.");
+                $"Give the {role} as CSV or TSV text; Excel workbooks must be saved as CSV first.");
     }
 }

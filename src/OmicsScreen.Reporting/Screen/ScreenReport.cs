@@ -29,8 +29,8 @@ public static class ScreenReport
         html.Caution("Cautions", ScreenReportText.Cautions(input.Result.Cohorts is not null));
         html.TableOfContents();
         WriteInputs(html, input);
-        WriteShortlist(html, input.Result);
-        WriteLockedPanel(html, input.Result);
+        WriteShortlist(html, input.Result, input);
+        WriteLockedPanel(html, input.Result, input);
         WriteFigures(html, input);
         if (input.Result.Cohorts is { } cohorts) CohortReportSection.Write(html, input.Result, cohorts);
         WriteReproducibility(html, input);
@@ -81,7 +81,7 @@ public static class ScreenReport
         html.EndSection();
     }
 
-    private static void WriteShortlist(HtmlBuilder html, ScreenResult result)
+    private static void WriteShortlist(HtmlBuilder html, ScreenResult result, ScreenReportInput input)
     {
         html.BeginSection("Shortlist");
         if (result.Shortlist.Count == 0)
@@ -89,29 +89,29 @@ public static class ScreenReport
             html.Paragraph("No marker was shortlisted: no feature was selected often enough with a small enough q-value. "
                 + "The table below shows the first features of the screen order for orientation only; they are NOT shortlisted "
                 + "and should not be carried into a validation study on this evidence.");
-            html.Table(ScreenReportTables.NotShortlisted(result));
+            html.Table(ScreenReportTables.NotShortlisted(result, input.FeatureLabels));
         }
         else
         {
             html.Paragraph("One row per shortlisted marker, best first, in two tables: the forest evidence, then each marker on its own.");
-            html.Table(ScreenReportTables.Shortlist(result));
+            html.Table(ScreenReportTables.Shortlist(result, input.FeatureLabels));
             html.Legend("Group: markers sharing a redundancy group are strongly correlated and can stand in for one another. "
                 + "Selection frequency: share of repeats that selected the marker. Median rank [IQR]: its rank over repeats, with quartiles.");
-            html.Table(ScreenReportTables.ShortlistStatistics(result));
+            html.Table(ScreenReportTables.ShortlistStatistics(result, input.FeatureLabels));
             html.Legend("Direction, log2 ratio (of class medians) and AUC compare the positive class with the rest; the AUC interval is DeLong's. "
                 + "Univariate rank: the marker's position by rank-test p-value among all features.");
         }
         html.EndSection();
     }
 
-    private static void WriteLockedPanel(HtmlBuilder html, ScreenResult result)
+    private static void WriteLockedPanel(HtmlBuilder html, ScreenResult result, ScreenReportInput input)
     {
         html.BeginSection("The locked panel");
         if (Math.Min(result.LockedPanelSize, result.Shortlist.Count) > 0)
         {
             html.Paragraph(string.Create(CultureInfo.InvariantCulture,
                 $"The panel locked for `omicsscreen apply` ({LockedPanelFileName}) holds these {result.LockedPanelSize} markers, the first of the shortlist."));
-            html.Table(ScreenReportTables.LockedPanel(result));
+            html.Table(ScreenReportTables.LockedPanel(result, input.FeatureLabels));
             if (result.PanelSize is { LockedOutOfFoldScores.Count: > 0 } curve)
                 html.Figure(ScreenReportCharts.LockedPanelRoc(curve),
                     "Cross-validated ROC curve of the locking procedure: in every outer fold the screen, its shortlist and the size choice were repeated on the training part only, "
@@ -174,7 +174,7 @@ public static class ScreenReport
                 + "on the dashed row at the limit when the file gives it (<0.05), on a row of their own under the axis when it does not (<LOD). Missing values are left out. A log axis is used when every measured value is positive.");
             foreach (var feature in markers)
                 html.Figure(ScreenReportCharts.MarkerByClass(input.Panel, feature, input.ShowSampleIds),
-                    "Values of " + feature.Feature + " by class.");
+                    "Values of " + input.FeatureLabels.Label(feature.FeatureIndex, feature.Feature) + " by class.");
             html.EndSection();
         }
 
@@ -193,7 +193,7 @@ public static class ScreenReport
                     : string.Create(CultureInfo.InvariantCulture, $"The correlation map is left out above {ScreenReportCharts.HeatMapMaximum} markers; the groups below summarise it."));
             html.Paragraph(string.Create(CultureInfo.InvariantCulture,
                 $"Markers are grouped when their Spearman |rho| is at least {result.Settings.Options.RedundancyCorrelation:0.##}. Group permutation importance is the out-of-bag accuracy drop when all members of a group are shuffled together."));
-            html.Table(ScreenReportTables.RedundancyGroups(result));
+            html.Table(ScreenReportTables.RedundancyGroups(result, input.FeatureLabels));
             html.EndSection();
         }
         html.EndSection();

@@ -38,8 +38,12 @@ public sealed record ScreenReportInput(
     int Threads,
     bool ShowSampleIds = false,
     int MergedParts = 0,
-    IReadOnlyList<string>? Warnings = null)
+    IReadOnlyList<string>? Warnings = null,
+    FeatureLabels? Labels = null)
 {
+    /// <summary>The features' lab-facing names and annotations; none when the inputs gave none.</summary>
+    public FeatureLabels FeatureLabels => Labels ?? FeatureLabels.None;
+
     /// <summary>File name of the manifest the report points to; it sits beside the report.</summary>
     public const string ManifestFileName = "manifest.json";
 }

@@ -16,14 +16,14 @@ internal static class ScreenReportTables
     /// one and <see cref="ShortlistStatistics"/>), each with rank and feature, because its twelve
     /// columns did not fit a 1,280-pixel window or an A4 page.
     /// </summary>
-    public static HtmlTable Shortlist(ScreenResult result)
+    public static HtmlTable Shortlist(ScreenResult result, FeatureLabels labels)
     {
         // Numeric headers do not wrap (the style sheet keeps figures on one line), so the wide
         // columns are text columns with wrapping headers.
         var table = new HtmlTable(ShortlistCaption,
         [
             new("Rank", ColumnAlignment.Numeric),
-            new("Feature"),
+            new(labels.HasDisplayNames ? "Marker (feature id)" : "Feature"),
             new("Group", ColumnAlignment.Numeric),
             new("Selection frequency"),
             new("Median rank [IQR]"),
@@ -37,7 +37,7 @@ internal static class ScreenReportTables
             var forest = entry.Forest;
             table.AddRow(
                 ReportNumber.Integer(entry.Rank),
-                forest.Feature,
+                labels.Label(forest.FeatureIndex, forest.Feature),
                 ReportNumber.Integer(entry.RedundancyGroup),
                 ReportNumber.Fixed(forest.SelectionFrequency, 2),
                 MedianRank(forest),
@@ -49,12 +49,12 @@ internal static class ScreenReportTables
     }
 
     /// <summary>Each shortlisted marker on its own: direction, effect size, AUC and its rank by rank test among all features.</summary>
-    public static HtmlTable ShortlistStatistics(ScreenResult result)
+    public static HtmlTable ShortlistStatistics(ScreenResult result, FeatureLabels labels)
     {
         var table = new HtmlTable(ShortlistStatisticsCaption,
         [
             new("Rank", ColumnAlignment.Numeric),
-            new("Feature"),
+            new(labels.HasDisplayNames ? "Marker (feature id)" : "Feature"),
             new("Direction"),
             new("log2 ratio", ColumnAlignment.Numeric),
             new("AUC [95% CI]"),
@@ -66,7 +66,7 @@ internal static class ScreenReportTables
             var univariate = entry.Univariate;
             table.AddRow(
                 ReportNumber.Integer(entry.Rank),
-                entry.Forest.Feature,
+                labels.Label(entry.Forest.FeatureIndex, entry.Forest.Feature),
                 ScreenTables.DirectionText(univariate),
                 ReportNumber.Fixed(univariate.Log2MedianRatio, 2),
                 ReportNumber.Fixed(univariate.Auc, 3) + " [" + ReportNumber.Fixed(univariate.AucInterval.Lower, 3) + ", "
@@ -82,12 +82,12 @@ internal static class ScreenReportTables
     /// redundancy group leads it, a later one measures much the same signal as that lead, and a
     /// marker past the end of the shortlist is named as such.
     /// </summary>
-    public static HtmlTable LockedPanel(ScreenResult result)
+    public static HtmlTable LockedPanel(ScreenResult result, FeatureLabels labels)
     {
         var table = new HtmlTable(LockedPanelCaption,
         [
             new("Order", ColumnAlignment.Numeric),
-            new("Feature"),
+            new(labels.HasDisplayNames ? "Marker (feature id)" : "Feature"),
             new("Role"),
             new("Direction"),
         ])
@@ -99,7 +99,7 @@ internal static class ScreenReportTables
         {
             var entry = result.Shortlist[i];
             int featureIndex = entry.Forest.FeatureIndex;
-            string feature = entry.Forest.Feature;
+            string feature = labels.Label(featureIndex, entry.Forest.Feature);
             string role;
             {
                 if (leads.TryGetValue(entry.RedundancyGroup, out var lead))
@@ -119,13 +119,13 @@ internal static class ScreenReportTables
     }
 
     /// <summary>When nothing passed: the first features of the screen order, labelled as not shortlisted.</summary>
-    public static HtmlTable NotShortlisted(ScreenResult result)
+    public static HtmlTable NotShortlisted(ScreenResult result, FeatureLabels labels)
     {
         var top = ScreenReportCharts.TopFeatures(result, FallbackFeatureCount);
         var table = new HtmlTable("NOT shortlisted: the first " + ReportNumber.Integer(top.Count) + " features of the screen order, for orientation only",
         [
             new("Order", ColumnAlignment.Numeric),
-            new("Feature"),
+            new(labels.HasDisplayNames ? "Marker (feature id)" : "Feature"),
             new("Selection frequency", ColumnAlignment.Numeric),
             new("Median rank [IQR]", ColumnAlignment.Text),
             new("Corrected importance ± SD", ColumnAlignment.Text),
@@ -137,7 +137,7 @@ internal static class ScreenReportTables
         foreach (var feature in top)
             table.AddRow(
                 ReportNumber.Integer(feature.Order),
-                feature.Feature,
+                labels.Label(feature.FeatureIndex, feature.Feature),
                 ReportNumber.Fixed(feature.SelectionFrequency, 2),
                 MedianRank(feature),
                 ReportNumber.MeanSd(feature.CorrectedMean, feature.CorrectedSd),
@@ -148,7 +148,7 @@ internal static class ScreenReportTables
     }
 
     /// <summary>One row per redundancy group, in order of its best member: members that stand in for one another.</summary>
-    public static HtmlTable RedundancyGroups(ScreenResult result)
+    public static HtmlTable RedundancyGroups(ScreenResult result, FeatureLabels labels)
     {
         var table = new HtmlTable("Redundancy groups of the shortlist",
         [
@@ -168,7 +168,7 @@ internal static class ScreenReportTables
                 groupOrder.Add(entry.RedundancyGroup);
                 importance.Add(entry.RedundancyGroup, entry.GroupPermutationImportance);
             }
-            names.Add(entry.Forest.Feature);
+            names.Add(labels.Label(entry.Forest.FeatureIndex, entry.Forest.Feature));
         }
         foreach (int group in groupOrder)
             table.AddRow(ReportNumber.Integer(group), string.Join("; ", members[group]), ReportNumber.Significant(importance[group], 3));

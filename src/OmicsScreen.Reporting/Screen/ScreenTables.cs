@@ -14,7 +14,7 @@ public static class ScreenTables
     private static readonly NumberFormat Probability = NumberFormat.Significant(4);
     private static readonly NumberFormat Share = NumberFormat.Fixed(4);
 
-    public static int WriteShortlist(TextWriter writer, ScreenResult result)
+    public static int WriteShortlist(TextWriter writer, ScreenResult result, FeatureLabels? labels = null)
     {
         var columns = new List<TsvColumn<ShortlistEntry>>
         {
@@ -43,10 +43,11 @@ public static class ScreenTables
             TsvColumn<ShortlistEntry>.Number("rank_test_q", e => e.Univariate.QValue, Probability),
             TsvColumn<ShortlistEntry>.Integer("univariate_rank", e => e.UnivariateRank),
         };
+        AddLabelColumns(columns, labels, e => e.Forest.FeatureIndex);
         return new TsvTableWriter<ShortlistEntry>(columns).Write(writer, result.Shortlist);
     }
 
-    public static int WriteFeatures(TextWriter writer, ScreenResult result)
+    public static int WriteFeatures(TextWriter writer, ScreenResult result, FeatureLabels? labels = null)
     {
         var shortlisted = result.Shortlist.Select(e => e.Forest.FeatureIndex).ToHashSet();
         var columns = new List<TsvColumn<FeatureSummary>>
@@ -74,6 +75,7 @@ public static class ScreenTables
             TsvColumn<FeatureSummary>.Number("q_value", f => f.QValue, Probability),
             TsvColumn<FeatureSummary>.Integer("univariate_rank", f => result.UnivariateRanks[f.FeatureIndex]),
         };
+        AddLabelColumns(columns, labels, f => f.FeatureIndex);
         return new TsvTableWriter<FeatureSummary>(columns).Write(writer, result.Order.Select(f => result.Features[f]));
     }
 
@@ -94,6 +96,27 @@ public static class ScreenTables
             TsvColumn<PanelSizePoint>.Integer("outer_folds", p => p.FoldCount),
         };
         return new TsvTableWriter<PanelSizePoint>(columns).Write(writer, curve.Points);
+    }
+
+    /// <summary>
+    /// The display name right after the feature id, and each annotation column at the end under
+    /// its own name (prefixed feature_ when a column of the table already has that name).
+    /// </summary>
+    private static void AddLabelColumns<TRecord>(List<TsvColumn<TRecord>> columns, FeatureLabels? labels, Func<TRecord, int> featureIndex)
+    {
+        if (labels is null) return;
+        if (labels.HasDisplayNames)
+        {
+            int after = columns.FindIndex(c => c.Header == "feature") + 1;
+            columns.Insert(after, TsvColumn<TRecord>.Text("display_name", r => labels.DisplayName(featureIndex(r))));
+        }
+        var taken = new HashSet<string>(columns.Select(c => SpreadsheetSafeText.Sanitise(c.Header)), StringComparer.Ordinal);
+        foreach (var (name, values) in labels.Annotations)
+        {
+            string header = name;
+            while (!taken.Add(SpreadsheetSafeText.Sanitise(header))) header = "feature_" + header;
+            columns.Add(TsvColumn<TRecord>.Text(header, r => values[featureIndex(r)]));
+        }
     }
 
     /// <summary>"higher in case" style text: what a lab reads first about a marker.</summary>

@@ -20,6 +20,7 @@ public sealed class VocabularyTests
         "--samples", "--outcome", "--cohort", "--subject", "--positive-class", "--id-column", "--annotation", "--features-in-rows",
         "--drop-unmatched", "--feature-block", "--keep-features", "--out", "--force", "--resume", "--part", "--show-sample-ids",
         "--quiet", "--memory-limit", "--json",
+        "--feature-sheet", "--detection-limit", "--long", "--feature-columns", "--value-column", "--below-detection-flag", "--quality-flag", "--display-name",
     ];
 
     [Fact]

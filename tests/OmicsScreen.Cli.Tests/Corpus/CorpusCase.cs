@@ -4,7 +4,8 @@ namespace OmicsScreen.Cli.Tests.Corpus;
 /// One hostile or broken input: the matrix bytes (made at test time, so large cases are not
 /// committed), an optional sample sheet, the exit code the command must end with and the
 /// fragments its message must contain (file, place, and the fix). <see cref="SampleSheetBytes"/>,
-/// when given, replaces the UTF-8 text of <see cref="SampleSheet"/> for sheets in other encodings.
+/// when given, replaces the UTF-8 text of <see cref="SampleSheet"/> for sheets in other encodings;
+/// <see cref="FeatureSheet"/>, when given, is written beside them and passed with --feature-sheet.
 /// </summary>
 public sealed record CorpusCase(
     string Name,
@@ -14,7 +15,8 @@ public sealed record CorpusCase(
     int ExitCode,
     string[] Fragments,
     string[]? ExtraArguments = null,
-    byte[]? SampleSheetBytes = null)
+    byte[]? SampleSheetBytes = null,
+    string? FeatureSheet = null)
 {
     public override string ToString() => Name;
 }

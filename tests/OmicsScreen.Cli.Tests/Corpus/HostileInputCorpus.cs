@@ -24,6 +24,13 @@ internal static class HostileInputCorpus
 
     private const string Valid = "sample_id,f1,f2\ns1,1,2\ns2,3,4\ns3,5,6\ns4,7,8\ns5,9,10\ns6,11,13\n";
 
+    /// <summary>The valid six-sample panel as a long table: one row per sample and feature.</summary>
+    private const string LongValid = "sample,feature,value\ns1,f1,1\ns1,f2,2\ns2,f1,3\ns2,f2,4\ns3,f1,5\ns3,f2,6\ns4,f1,7\ns4,f2,8\ns5,f1,9\ns5,f2,10\ns6,f1,11\ns6,f2,13\n";
+
+    /// <summary>A long table with a quality-flag column "qc" holding "ok" on every row.</summary>
+    private static string WithQualityColumn(string longTable) =>
+        string.Join('\n', longTable.TrimEnd('\n').Split('\n').Select((line, i) => line + (i == 0 ? ",qc" : ",ok"))) + "\n";
+
     private static Func<string, byte[]> Text(string contents) => _ => Encoding.UTF8.GetBytes(contents);
 
     private static Func<string, byte[]> Bytes(byte[] contents) => _ => contents;
@@ -43,8 +50,10 @@ internal static class HostileInputCorpus
             ExitCode.InputError, ["m.csv", "line 3", "not valid UTF-8"]);
         yield return new("BOM in the middle of the file", "m.csv", Text(Header + "s1,1,2\ns2,3,4\n\ufeffs3,5,6\ns4,7,8\ns5,9,10\ns6,11,13\n"), Sheet,
             ExitCode.InputError, ["m.csv", "line 4", "byte-order mark", "without BOM"]);
-        yield return new("gzip file renamed .csv", "m.csv", Bytes(Gzip(Valid)), Sheet,
-            ExitCode.InputError, ["m.csv", "gzip", "decompress"]);
+        // gzip is told by its magic bytes 1F 8B (RFC 1952, 2.3.1), whatever the name, and read directly.
+        yield return new("gzip file renamed .csv loads", "m.csv", Bytes(Gzip(Valid)), Sheet, ExitCode.Success, ["samples", "gzip-compressed"]);
+        yield return new("a truncated gzip matrix", "m.csv.gz", _ => Gzip(Valid + Valid[16..] .Replace("s", "t"))[..^5], Sheet,
+            ExitCode.InputError, ["m.csv.gz", "truncated", "gzip -t"]);
 
         // Delimiters and quotes.
         yield return new("tabs in a row of a comma file", "m.csv", Text(WithSecondSample("s2\t3\t4")), Sheet,
@@ -71,6 +80,11 @@ internal static class HostileInputCorpus
         yield return new("a NUL byte in a text file", "m.csv", Text(WithSecondSample("s2,3,4\0")), Sheet,
             ExitCode.InputError, ["m.csv", "binary", "CSV"]);
         yield return new("Windows line ends load", "m.csv", Text(Valid.Replace("\n", "\r\n")), Sheet, ExitCode.Success, ["samples"]);
+        // Comment lines: '#' and '!' above the header are skipped and stated; inside the data they are an error (common practice).
+        yield return new("comment lines above the header load and are counted", "m.csv", Text("# exported by X\n!platform Y\n" + Valid), Sheet,
+            ExitCode.Success, ["comment lines", "2 above the header"]);
+        yield return new("a comment line inside the data", "m.csv", Text(WithSecondSample("# freezer failure, s2 re-run")), Sheet,
+            ExitCode.InputError, ["m.csv", "line 3", "comment line inside the data", "move the line above the header"]);
         yield return new("blank lines between rows load", "m.csv", Text(Valid.Replace("s3,", "\n\ns3,")), Sheet, ExitCode.Success, ["samples"]);
 
         // Out-of-range and special numbers.
@@ -109,6 +123,37 @@ internal static class HostileInputCorpus
         yield return new("features in rows with the flag loads", "m.csv", Text("feature,s1,s2,s3,s4,s5,s6\nf1,1,2,3,4,5,6\nf2,3,4,5,6,7,9\n"), Sheet,
             ExitCode.Success, ["samples"], ["--features-in-rows"]);
 
+        // Describing columns before the samples, as expression and protein matrices are commonly written (common practice).
+        yield return new("features in rows with a symbol column load and the describing columns are stated", "m.tsv",
+            Text("gene_id\tsymbol\ts1\ts2\ts3\ts4\ts5\ts6\nf1\tGENE0\t1\t2\t3\t4\t5\t6\nf2\tGENE1\t3\t4\t5\t6\t7\t9\n"), Sheet,
+            ExitCode.Success, ["feature columns", "'gene_id' names each feature", "'symbol'", "--feature-columns"], ["--features-in-rows"]);
+        yield return new("a describing column named with --feature-columns that is not there", "m.tsv",
+            Text("gene_id\tsymbol\ts1\ts2\ts3\ts4\ts5\ts6\nf1\tGENE0\t1\t2\t3\t4\t5\t6\nf2\tGENE1\t3\t4\t5\t6\t7\t9\n"), Sheet,
+            ExitCode.InputError, ["m.tsv", "no column 'Symbol'", "--feature-columns"], ["--features-in-rows", "--feature-columns", "gene_id", "--feature-columns", "Symbol"]);
+        // Feature sheets, joined on feature id as sample sheets are on sample id.
+        yield return new("a feature sheet with display names and detection limits loads and states them", "m.csv", Text(Valid), Sheet,
+            ExitCode.Success, ["feature sheet", "display names in 'display_name'", "detection limits", "2 features with a limit", "3 measured cells below"],
+            FeatureSheet: "feature,display_name,detection_limit\nf1,Marker one,4\nf2,Marker two,3\n");
+        yield return new("a feature sheet missing a matrix feature and naming another", "m.csv", Text(Valid), Sheet,
+            ExitCode.InputError, ["f.csv", "features do not match", "1 in m.csv but not in f.csv ('f2')", "1 in f.csv but not in m.csv ('f7')", "--drop-unmatched"],
+            FeatureSheet: "feature,display_name\nf1,Marker one\nf7,Marker seven\n");
+        yield return new("a feature id twice in the feature sheet", "m.csv", Text(Valid), Sheet,
+            ExitCode.InputError, ["f.csv", "line 4", "'f1' occurs more than once", "one feature-sheet row per feature"],
+            FeatureSheet: "feature\nf1\nf2\nf1\n");
+        yield return new("a detection limit that is not a number", "m.csv", Text(Valid), Sheet,
+            ExitCode.InputError, ["f.csv", "line 2", "'detection_limit'", "not a number"],
+            FeatureSheet: "feature,detection_limit\nf1,1,5\nf2,2\n".Replace("1,5", "\"1,5\""));
+        // Long tables: one row per sample and feature (common practice in targeted proteomics exports).
+        yield return new("a long table loads and is stated", "long.csv", Text(LongValid), Sheet, ExitCode.Success,
+            ["long table", "12 rows", "sample 'sample', feature 'feature', value 'value'"], ["--long"]);
+        yield return new("a long table with a repeated sample and feature", "long.csv", Text(LongValid + "s3,f2,6.5\n"), Sheet,
+            ExitCode.InputError, ["long.csv", "line 14", "sample 's3' and feature 'f2' occur again (first on line", "one row per sample and feature"], ["--long"]);
+        yield return new("a long table without a value column", "long.csv", Text(LongValid.Replace("value", "npx")), Sheet,
+            ExitCode.InputError, ["long.csv", "no column 'value'", "--value-column"], ["--long"]);
+        yield return new("a long table flag that is neither set nor clear", "long.csv", Text(WithQualityColumn(LongValid).Replace("s4,f1,7,ok", "s4,f1,7,maybe")), Sheet,
+            ExitCode.InputError, ["long.csv", "line 8", "'qc'", "neither set nor clear"], ["--long", "--quality-flag", "qc"]);
+        yield return new("--long with --features-in-rows", "long.csv", Text(LongValid), Sheet,
+            ExitCode.Usage, ["--features-in-rows and --long"], ["--long", "--features-in-rows"]);
         yield return new("an empty feature name in the header", "m.csv", Text(Valid.Replace("sample_id,f1,", "sample_id,,")), Sheet,
             ExitCode.InputError, ["m.csv", "line 1", "column 2", "has no name"]);
         yield return new("feature names equal once trimmed", "m.csv", Text(Valid.Replace("f1,f2", "f1,f1 ")), Sheet,

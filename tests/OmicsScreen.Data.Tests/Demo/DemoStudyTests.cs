@@ -22,7 +22,30 @@ public sealed class DemoStudyTests : IDisposable
         Assert.Equal(File.ReadAllBytes(first.SampleSheet), File.ReadAllBytes(second.SampleSheet));
         Assert.Equal(File.ReadAllBytes(first.Truth), File.ReadAllBytes(second.Truth));
         Assert.Equal(File.ReadAllBytes(first.Readme), File.ReadAllBytes(second.Readme));
+        Assert.Equal(File.ReadAllBytes(first.FeatureSheet), File.ReadAllBytes(second.FeatureSheet));
         Assert.Empty(Directory.GetFiles(Path.Combine(_root, "a"), "*.partial"));
+    }
+
+    [Fact]
+    public void The_feature_sheet_names_every_analyte_and_gives_the_limits_the_generator_censored_at()
+    {
+        var study = DemoStudyGenerator.Generate(new DemoStudyOptions());
+        var files = DemoStudyWriter.Write(study, Path.Combine(_root, "a"));
+
+        var loaded = PanelLoader.Load(new PanelLoadOptions
+        {
+            MatrixPath = files.Panel, SampleSheetPath = files.SampleSheet, FeatureSheetPath = files.FeatureSheet, OutcomeColumn = DemoStudy.OutcomeColumn,
+        });
+
+        Assert.All(loaded.Features.DisplayNames!, name => Assert.False(string.IsNullOrEmpty(name)));
+        Assert.Equal(study.Truth.Count(t => t.HasDetectionLimit), loaded.Inspection.FeatureSheet!.FeaturesWithLimit);
+        // The generator censors every value under a feature's limit itself, so the sheet's limits censor nothing more.
+        Assert.Equal(0, loaded.Inspection.FeatureSheet.CensoredCellTotal);
+        // A below-detection cell written without its value (<LOD) now holds its feature's limit.
+        var matrix = loaded.Panel.Matrix;
+        for (int f = 0; f < matrix.FeatureCount; f++)
+            for (int s = 0; s < matrix.SampleCount; s++)
+                if (matrix.State(f, s) == CellState.BelowDetection) Assert.Equal(study.Truth[f].DetectionLimit, matrix.Value(f, s));
     }
 
     [Fact]

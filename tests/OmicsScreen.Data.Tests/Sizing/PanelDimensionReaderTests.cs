@@ -83,15 +83,22 @@ public class PanelDimensionReaderTests
     }
 
     [Fact]
-    public void A_gzip_file_is_not_sized_and_left_to_the_loader()
+    public void A_gzip_file_is_sized_by_decompressing_it_once_and_a_truncated_one_is_left_to_the_loader()
     {
         using var folder = new TempFolder();
         string path = folder.File("panel.csv.gz");
         using (var gzip = new GZipStream(File.Create(path), CompressionLevel.Fastest))
-            gzip.Write("id,status,a\ns1,x,1\n"u8);
+            gzip.Write("id,status,a,b\ns1,x,1,2\ns2,y,3,4\ns3,y,5,6\n"u8);
+        var options = new PanelLoadOptions { MatrixPath = path, OutcomeColumn = "status" };
 
-        Assert.Null(PanelDimensionReader.TryRead(new PanelLoadOptions { MatrixPath = path, OutcomeColumn = "status" }));
-        Assert.Throws<PanelInputException>(() => PanelLoader.Load(new PanelLoadOptions { MatrixPath = path, OutcomeColumn = "status" }));
+        var sized = PanelDimensionReader.TryRead(options);
+
+        // Counted by hand from the text written above: 3 sample lines, feature columns a and b.
+        Assert.Equal((3, 2), (sized!.Value.SampleCount, sized.Value.FeatureCount));
+        var bytes = File.ReadAllBytes(path);
+        File.WriteAllBytes(path, bytes[..^6]);
+        Assert.Null(PanelDimensionReader.TryRead(options));
+        Assert.Throws<PanelInputException>(() => PanelLoader.Load(options));
     }
 
     [Fact]
