@@ -99,7 +99,9 @@ public static class ScreenReport
                 + "Selection frequency: share of repeats that selected the marker. Median rank [IQR]: its rank over repeats, with quartiles.");
             html.Table(ScreenReportTables.ShortlistStatistics(result, input.FeatureLabels));
             html.Legend("Direction, log2 ratio (of class medians) and AUC compare the positive class with the rest; the AUC interval is DeLong's. "
-                + "Univariate rank: the marker's position by rank-test p-value among all features.");
+                + "Univariate rank: the marker's position by rank-test p-value among all features. "
+                + "Acts with: for a marker whose evidence comes from the pairwise interaction scan rather than a shift of its own, its partner: "
+                + "the class differs between samples on the same side of both markers' medians and samples on opposite sides, so its direction and AUC alone say little.");
         }
         html.EndSection();
     }

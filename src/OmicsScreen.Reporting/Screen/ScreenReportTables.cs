@@ -59,11 +59,13 @@ internal static class ScreenReportTables
             new("log2 ratio", ColumnAlignment.Numeric),
             new("AUC [95% CI]"),
             new("Univariate rank", ColumnAlignment.Numeric),
+            new("Acts with"),
         ])
         { FirstColumnIsRowHeader = false };
         foreach (var entry in result.Shortlist)
         {
             var univariate = entry.Univariate;
+            int partner = ActsWith(entry.Forest);
             table.AddRow(
                 ReportNumber.Integer(entry.Rank),
                 labels.Label(entry.Forest.FeatureIndex, entry.Forest.Feature),
@@ -71,9 +73,23 @@ internal static class ScreenReportTables
                 ReportNumber.Fixed(univariate.Log2MedianRatio, 2),
                 ReportNumber.Fixed(univariate.Auc, 3) + " [" + ReportNumber.Fixed(univariate.AucInterval.Lower, 3) + ", "
                     + ReportNumber.Fixed(univariate.AucInterval.Upper, 3) + "]",
-                ReportNumber.Integer(entry.UnivariateRank));
+                ReportNumber.Integer(entry.UnivariateRank),
+                partner < 0 ? "" : labels.Label(partner, result.Features[partner].Feature));
         }
         return table;
+    }
+
+    /// <summary>
+    /// The partner the interaction scan names for a marker whose evidence lies in the pair rather
+    /// than in a shift of its own (scan p-value at most 0.05 and below the rank test's); -1
+    /// otherwise. For such a marker the direction and AUC alone tell the lab nothing true: it acts
+    /// through its partner (same side of both medians against one of each).
+    /// </summary>
+    public static int ActsWith(FeatureSummary feature)
+    {
+        ArgumentNullException.ThrowIfNull(feature);
+        if (feature.InteractionPartner < 0 || !(feature.InteractionP <= 0.05)) return -1;
+        return double.IsNaN(feature.RankTestP) || feature.InteractionP < feature.RankTestP ? feature.InteractionPartner : -1;
     }
 
     /// <summary>

@@ -46,6 +46,6 @@ public sealed record FeatureSummary(
     /// <summary>The feature index of the partner that gave the largest interaction chi-square; -1 when the scan did not run.</summary>
     public int InteractionPartner { get; init; } = -1;
 
-    /// <summary>The Cauchy combination of <see cref="ForestP"/>, <see cref="RankTestP"/> and <see cref="InteractionP"/>, before its calibration against the decoys.</summary>
+    /// <summary>The weighted Cauchy combination of <see cref="ForestP"/>, <see cref="RankTestP"/> and <see cref="InteractionP"/>, each capped at 0.9 (<see cref="ScreenAggregation.Combine"/>), before its calibration against the decoys.</summary>
     public double CombinedP { get; init; } = double.NaN;
 }
