@@ -85,6 +85,12 @@ public static class PanelLoader
             case var _ when options.Layout == PanelLayout.Long:
                 throw PanelInputException.At(options.MatrixPath, null, null, "is read as a long table, which is read from CSV/TSV text (plain or gzip) only.",
                     "Export the long table as CSV or TSV, or pivot it to one column per feature before writing Parquet or Arrow.");
+            // Describing columns are found in text files only; ignoring the option would load the
+            // describing columns as samples or drop the names the user asked for without a word.
+            case var _ when options.FeatureColumns is { Count: > 0 }:
+                throw PanelInputException.At(options.MatrixPath, null, null,
+                    "is Parquet or Arrow, where --feature-columns does not apply: describing columns are read from CSV/TSV features-in-rows files.",
+                    "Give the names and annotations in a feature sheet (--feature-sheet) and leave out --feature-columns, or export the matrix as CSV/TSV.");
             case MatrixFileFormat.Parquet:
                 using (var table = ParquetTable.Open(options.MatrixPath))
                     return ColumnarMatrixReader.Read(table, options, ct);

@@ -210,6 +210,16 @@ public sealed class BadInputTests : IDisposable
     }
 
     [Fact]
+    public void Describing_columns_named_for_a_parquet_matrix_are_refused_with_the_fix()
+    {
+        // Common practice: an option that cannot apply is refused, not silently ignored.
+        var path = _folder.File("features.parquet");
+        ParquetPanelWriter.Write(SyntheticPanels.Mixed(), path, PanelLayout.FeaturesInRows);
+        Fails(SyntheticPanels.MixedOptions(path, PanelLayout.FeaturesInRows) with { FeatureColumns = ["feature", "symbol"] },
+            "features.parquet", "--feature-columns does not apply", "--feature-sheet");
+    }
+
+    [Fact]
     public void Truncated_arrow_file_is_unreadable_with_the_fix()
     {
         var path = _folder.File("cut.arrow");
