@@ -202,6 +202,24 @@ def main():
                           statistics=stats_, partners=partners))
     out["interaction_scan"] = scans
 
+    # Spearman's rho as a test (scipy.stats.spearmanr: rho and its t-approximation p-value) and
+    # the Fisher-z interval with the Bonett & Wright (2000) variance (1 + rho^2/2)/(n - 3), written
+    # out in numpy. A fresh generator so the blocks above keep their draws.
+    sp_rng = np.random.default_rng(20261204)
+    spearman = []
+    for label, n, slope, tie_step in (("strong_positive", 60, 1.0, None), ("weak_negative", 150, -0.2, None),
+                                      ("null_with_ties", 40, 0.0, 0.5), ("small", 8, 0.7, None)):
+        xs = sp_rng.normal(size=n)
+        ys = slope * xs + sp_rng.normal(size=n)
+        if tie_step is not None:
+            xs = np.round(xs / tie_step) * tie_step
+        rho, p = st.spearmanr(xs, ys)
+        z, se = np.arctanh(rho), np.sqrt((1 + rho ** 2 / 2) / (n - 3))
+        crit = st.norm.ppf(0.975)
+        spearman.append(dict(name=label, x=xs.tolist(), y=ys.tolist(), rho=float(rho), p=float(p),
+                             lower=float(np.tanh(z - crit * se)), upper=float(np.tanh(z + crit * se))))
+    out["spearman_test"] = spearman
+
     with open(os.path.join(HERE, "stats_reference.json"), "w") as f:
         json.dump(out, f, indent=1)
         f.write("\n")
