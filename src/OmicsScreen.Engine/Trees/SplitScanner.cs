@@ -120,7 +120,7 @@ internal sealed class SplitScanner
         best = Record(feature, binThreshold, score, leftRows, rightRows, hasMissing, hasBelow, missingLeft, belowLeft);
     }
 
-    private static SplitCandidate Record(int feature, byte binThreshold, double score, double leftRows, double rightRows,
+    internal static SplitCandidate Record(int feature, byte binThreshold, double score, double leftRows, double rightRows,
         bool hasMissing, bool hasBelow, bool missingLeft, bool belowLeft)
     {
         bool largerLeft = leftRows >= rightRows;

@@ -1,0 +1,117 @@
+using OmicsScreen.Engine.Binning;
+using OmicsScreen.Engine.Forests;
+using OmicsScreen.Engine.Randomness;
+using OmicsScreen.Engine.Regression;
+
+namespace OmicsScreen.Screening.Importance;
+
+/// <summary>
+/// Importances of a measured (continuous) outcome: the corrected impurity importance of
+/// Nembrini, König &amp; Wright (2018, Bioinformatics 34(21):3711-3718), which covers regression
+/// forests, and out-of-bag permutation importance as the rise in squared error (Breiman 2001).
+/// </summary>
+/// <remarks>
+/// Same columns, same permuted copies and decoys (<see cref="CorrectedImpurityImportance.Augment"/>)
+/// and the same permutation streams (<see cref="OutOfBagTreeScorer"/>'s seeds) as for classes, so
+/// the screen's error control reads these numbers exactly as it reads the class ones.
+/// </remarks>
+public static class RegressionImportance
+{
+    /// <summary>AIR_j = MDI(j) - MDI(permuted copy of j), MDI the weighted variance decrease; decoys likewise.</summary>
+    public static CorrectedImportance MeasureCorrected(BinnedMatrix matrix, ReadOnlySpan<double> outcome, int[]? trainingRows,
+        ReadOnlySpan<int> decoySources, ForestOptions options)
+    {
+        ArgumentNullException.ThrowIfNull(matrix);
+        ArgumentNullException.ThrowIfNull(options);
+        int featureCount = matrix.FeatureCount;
+        foreach (int source in decoySources)
+            if ((uint)source >= (uint)featureCount) throw new ArgumentException($"Decoy source {source} is out of range.");
+        var augmented = CorrectedImpurityImportance.Augment(matrix, decoySources, options.Seed, options.Repeat, options.ThreadCount);
+        var decrease = RegressionForestTrainer.Train(augmented, outcome, options, trainingRows).MeanImpurityDecrease();
+        var features = new double[featureCount];
+        for (int f = 0; f < featureCount; f++) features[f] = decrease[f] - decrease[featureCount + f];
+        var decoys = new double[decoySources.Length];
+        for (int i = 0; i < decoys.Length; i++)
+            decoys[i] = decrease[2 * featureCount + i] - decrease[featureCount + decoySources[i]];
+        return new CorrectedImportance(features, decoys, decoySources.ToArray());
+    }
+
+    /// <summary>
+    /// Per tree, each split feature's codes are permuted among the tree's out-of-bag rows and the
+    /// rise in their mean squared error recorded; a feature the tree does not split on scores 0.
+    /// Returns the mean over all trees, in squared outcome units, and its standard error (SD over
+    /// trees / sqrt(trees), as for classes).
+    /// </summary>
+    public static ErrorRiseImportance MeasurePermutation(RegressionForest forest, BinnedMatrix matrix, ReadOnlySpan<double> outcome,
+        int threadCount = 0)
+    {
+        ArgumentNullException.ThrowIfNull(forest);
+        ArgumentNullException.ThrowIfNull(matrix);
+        if (matrix.FeatureCount != forest.FeatureCount || matrix.SampleCount != forest.SampleCount)
+            throw new ArgumentException("The matrix must be the one the forest was grown on.");
+        if (outcome.Length != forest.SampleCount) throw new ArgumentException("The outcome must have one value per sample.");
+        var y = outcome.ToArray();
+        var perTree = new TreePermutationScores[forest.TreeCount];
+        int threads = Math.Min(threadCount > 0 ? threadCount : Environment.ProcessorCount, Math.Max(1, forest.TreeCount));
+        int next = -1;
+        Parallel.For(0, threads, new ParallelOptions { MaxDegreeOfParallelism = threads }, _ =>
+        {
+            var codes = new byte[forest.SampleCount];
+            int t;
+            while ((t = Interlocked.Increment(ref next)) < forest.TreeCount)
+                perTree[t] = ScoreTree(forest, t, matrix, y, codes);
+        });
+        var summary = TreeScoreSummary.Summarise(perTree, forest.FeatureCount);
+        return new ErrorRiseImportance(summary.MeanAccuracyDrop, summary.StandardError);
+    }
+
+    private static TreePermutationScores ScoreTree(RegressionForest forest, int t, BinnedMatrix matrix, double[] y, byte[] codes)
+    {
+        var rows = forest.OutOfBagRows(t);
+        if (rows.Length == 0) return TreePermutationScores.Empty;
+        var tree = forest.Tree(t);
+        var baseline = forest.OutOfBagPredictions(t);
+        double baseError = 0;
+        for (int i = 0; i < rows.Length; i++) baseError += (y[rows[i]] - baseline[i]) * (y[rows[i]] - baseline[i]);
+        var used = SplitFeatures(tree);
+        var rises = new double[used.Length];
+        // Seeds as for class forests (OutOfBagTreeScorer.TreeSeed / FeatureGenerator): a function of
+        // (seed, repeat, tree, feature) only.
+        ulong treeSeed = SeedSchedule.Derive(forest.Options.Seed, forest.Options.Repeat, t, SeedPurpose.Permutation);
+        for (int k = 0; k < used.Length; k++)
+        {
+            int feature = used[k];
+            var source = matrix.Codes(feature);
+            for (int i = 0; i < rows.Length; i++) codes[i] = source[rows[i]];
+            var generator = SeedSchedule.Generator(treeSeed, 0, feature, SeedPurpose.Permutation);
+            // Fisher-Yates shuffle of the out-of-bag rows' codes.
+            for (int i = rows.Length - 1; i > 0; i--)
+            {
+                int j = generator.NextInt(i + 1);
+                (codes[i], codes[j]) = (codes[j], codes[i]);
+            }
+            double error = 0;
+            for (int i = 0; i < rows.Length; i++)
+            {
+                double residual = y[rows[i]] - tree.NodeMeans[tree.LeafOf(matrix, rows[i], feature, codes[i])];
+                error += residual * residual;
+            }
+            rises[k] = (error - baseError) / rows.Length;
+        }
+        // The per-tree summary is shared with class forests, whose first score is the accuracy drop;
+        // here it carries the rise in squared error (the second, the Brier rise, is unused).
+        return new TreePermutationScores(used, rises, rises);
+    }
+
+    private static int[] SplitFeatures(RegressionTree tree)
+    {
+        var used = new SortedSet<int>();
+        foreach (int f in tree.Features) if (f >= 0) used.Add(f);
+        return used.ToArray();
+    }
+}
+
+/// <summary>Out-of-bag permutation importance of a measured outcome, one entry per feature.</summary>
+/// <param name="MeanRise">Mean over all trees of (OOB mean squared error with the feature permuted - without).</param>
+/// <param name="StandardError">SD over trees (n - 1 denominator) of the per-tree rise, divided by sqrt(trees).</param>
+public sealed record ErrorRiseImportance(double[] MeanRise, double[] StandardError);
