@@ -74,7 +74,7 @@ internal sealed class SplitScanner
             double right0 = total0 - left0, right1 = total1 - left1;
             double leftWeight = left0 + left1, rightWeight = right0 + right1;
             if (leftWeight <= 0 || rightWeight <= 0) continue;
-            double score = (left0 * left0 + left1 * left1) / leftWeight + (right0 * right0 + right1 * right1) / rightWeight;
+            double score = GiniImpurity.SplitScore(left0, left1, right0, right1);
             if (!(score > bestScore)) continue;
             bestScore = score;
             best = Record(feature, codes[j], score, leftRows, rightRows, hasMissing, hasBelow, missingLeft, belowLeft);
@@ -104,18 +104,14 @@ internal sealed class SplitScanner
         double leftRows = left[classCount];
         double rightRows = nodeTotals[classCount] - leftRows;
         if (leftRows < minLeafSize || rightRows < minLeafSize) return;
-        double leftWeight = 0, rightWeight = 0, leftSquares = 0, rightSquares = 0;
+        double leftWeight = 0, rightWeight = 0;
         for (int c = 0; c < classCount; c++)
         {
-            double l = left[c];
-            double r = nodeTotals[c] - l;
-            leftWeight += l;
-            rightWeight += r;
-            leftSquares += l * l;
-            rightSquares += r * r;
+            leftWeight += left[c];
+            rightWeight += nodeTotals[c] - left[c];
         }
         if (leftWeight <= 0 || rightWeight <= 0) return;
-        double score = leftSquares / leftWeight + rightSquares / rightWeight;
+        double score = GiniImpurity.SplitScore(left[..classCount], nodeTotals[..classCount], leftWeight, rightWeight);
         if (!(score > best.Score)) return;
         best = Record(feature, binThreshold, score, leftRows, rightRows, hasMissing, hasBelow, missingLeft, belowLeft);
     }

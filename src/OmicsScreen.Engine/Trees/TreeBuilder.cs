@@ -32,7 +32,7 @@ internal sealed class TreeBuilder
     private readonly NodeHistogram _histogram;
     private readonly SplitScanner _scanner;
     private readonly Stack<PendingNode> _pending = new();
-    private readonly TreeStore _store;
+    private readonly TreeBuffer _buffer;
 
     public TreeBuilder(int maxRows, int featureCount, int maxCodeCount, int classCount)
     {
@@ -45,7 +45,7 @@ internal sealed class TreeBuilder
         _nodeTotals = new double[_stride];
         _histogram = new NodeHistogram(classCount, maxCodeCount);
         _scanner = new SplitScanner(classCount);
-        _store = new TreeStore(classCount);
+        _buffer = new TreeBuffer(classCount);
     }
 
     /// <summary>
@@ -64,7 +64,7 @@ internal sealed class TreeBuilder
         for (int f = 0; f < featureCount; f++) _featureOrder[f] = f;
         int featuresPerSplit = options.ResolveFeaturesPerSplit(featureCount);
 
-        _store.Clear();
+        _buffer.Clear();
         _pending.Clear();
         double rootWeight = 0;
         for (int i = 0; i < rowCount; i++) rootWeight += _rowWeights[i];
@@ -72,11 +72,11 @@ internal sealed class TreeBuilder
         while (_pending.Count > 0)
         {
             var pending = _pending.Pop();
-            int node = _store.Add(pending.Parent, pending.IsLeft);
+            int node = _buffer.Add(pending.Parent, pending.IsLeft);
             var totals = _nodeTotals.AsSpan();
             SumNode(pending.Start, pending.End, totals);
             var classWeights = totals[.._classCount];
-            _store.SetNode(node, classWeights, pending.End - pending.Start, MajorityClass(classWeights, ref generator));
+            _buffer.SetNode(node, classWeights, pending.End - pending.Start, MajorityClass(classWeights, ref generator));
 
             int nodeRows = pending.End - pending.Start;
             if (pending.Depth >= options.MaxDepth || nodeRows < 2 * options.MinLeafSize || nodeRows < 2 || IsPure(classWeights))
@@ -88,12 +88,12 @@ internal sealed class TreeBuilder
 
             var bins = matrix.Bins(best.Feature);
             int middle = Partition(matrix.Codes(best.Feature), pending.Start, pending.End, best, bins.MissingCode);
-            _store.SetSplit(node, best.Feature, best.BinThreshold, bins.UpperBound(best.BinThreshold), bins.MissingCode,
+            _buffer.SetSplit(node, best.Feature, best.BinThreshold, bins.UpperBound(best.BinThreshold), bins.MissingCode,
                 best.Routing, decrease);
             _pending.Push(new PendingNode(middle, pending.End, pending.Depth + 1, node, false));
             _pending.Push(new PendingNode(pending.Start, middle, pending.Depth + 1, node, true));
         }
-        return _store.ToTree();
+        return _buffer.ToTree();
     }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
@@ -137,16 +137,13 @@ internal sealed class TreeBuilder
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private int Partition(ReadOnlySpan<byte> codes, int start, int end, in SplitCandidate split, byte missingCode)
     {
-        bool missingLeft = (split.Routing & UnmeasuredRouting.MissingLeft) != 0;
-        bool belowLeft = (split.Routing & UnmeasuredRouting.BelowDetectionLeft) != 0;
         byte threshold = split.BinThreshold;
+        var routing = split.Routing;
         int low = start, high = end - 1;
         // Invariant: rows before low go left, rows after high go right.
         while (low <= high)
         {
-            byte code = codes[_rows[low]];
-            bool left = code <= threshold || (code == missingCode ? missingLeft : code > missingCode && belowLeft);
-            if (left) { low++; continue; }
+            if (BranchRule.GoesLeft(codes[_rows[low]], threshold, missingCode, routing)) { low++; continue; }
             (_rows[low], _rows[high]) = (_rows[high], _rows[low]);
             (_rowClasses[low], _rowClasses[high]) = (_rowClasses[high], _rowClasses[low]);
             (_rowWeights[low], _rowWeights[high]) = (_rowWeights[high], _rowWeights[low]);
