@@ -29,10 +29,15 @@ internal sealed class TreeBuilder
     private readonly double[] _rowWeights;
     private readonly int[] _featureOrder;
     private readonly double[] _nodeTotals;
+    private readonly ulong[] _rowIncrements;
     private readonly NodeHistogram _histogram;
+    private readonly PackedBinaryHistogram _packedHistogram = new();
     private readonly SplitScanner _scanner;
     private readonly Stack<PendingNode> _pending = new();
     private readonly TreeBuffer _buffer;
+
+    /// <summary>True while growing a tree whose two-class integer weights fit the packed histogram.</summary>
+    private bool _packed;
 
     public TreeBuilder(int maxRows, int featureCount, int maxCodeCount, int classCount)
     {
@@ -41,6 +46,7 @@ internal sealed class TreeBuilder
         _rows = new int[maxRows];
         _rowClasses = new int[maxRows];
         _rowWeights = new double[maxRows];
+        _rowIncrements = new ulong[classCount == 2 ? maxRows : 0];
         _featureOrder = new int[featureCount];
         _nodeTotals = new double[_stride];
         _histogram = new NodeHistogram(classCount, maxCodeCount);
@@ -60,6 +66,7 @@ internal sealed class TreeBuilder
         rows.CopyTo(_rows);
         rowClasses.CopyTo(_rowClasses);
         rowWeights.CopyTo(_rowWeights);
+        _packed = Pack(rowCount);
         int featureCount = matrix.FeatureCount;
         for (int f = 0; f < featureCount; f++) _featureOrder[f] = f;
         int featuresPerSplit = options.ResolveFeaturesPerSplit(featureCount);
@@ -119,6 +126,14 @@ internal sealed class TreeBuilder
             else if (next + PrefetchDistance < drawn) matrix.PrefetchCodes(order[next + PrefetchDistance]);
             int feature = order[next];
             int valueBins = matrix.ValueBinCount(feature);
+            if (_packed)
+            {
+                _packedHistogram.Fill(matrix.Codes(feature), rows, _rowIncrements.AsSpan(start, end - start), valueBins);
+                if (_packedHistogram.IsConstant) continue;
+                tried++;
+                _scanner.ScanPacked(_packedHistogram, feature, valueBins, totals, minLeafSize, ref best);
+                continue;
+            }
             _histogram.Fill(matrix.Codes(feature), rows, rowClasses, rowWeights, valueBins);
             if (_histogram.IsConstant) continue;
             tried++;
@@ -145,18 +160,52 @@ internal sealed class TreeBuilder
         {
             if (BranchRule.GoesLeft(codes[_rows[low]], threshold, missingCode, routing)) { low++; continue; }
             (_rows[low], _rows[high]) = (_rows[high], _rows[low]);
-            (_rowClasses[low], _rowClasses[high]) = (_rowClasses[high], _rowClasses[low]);
-            (_rowWeights[low], _rowWeights[high]) = (_rowWeights[high], _rowWeights[low]);
+            // A packed tree's classes and weights travel in its increments alone.
+            if (_packed) (_rowIncrements[low], _rowIncrements[high]) = (_rowIncrements[high], _rowIncrements[low]);
+            else
+            {
+                (_rowClasses[low], _rowClasses[high]) = (_rowClasses[high], _rowClasses[low]);
+                (_rowWeights[low], _rowWeights[high]) = (_rowWeights[high], _rowWeights[low]);
+            }
             high--;
         }
         return low;
+    }
+
+    /// <summary>
+    /// Whether this tree can use the packed two-class histogram: two classes, every weight a
+    /// whole number (bootstrap counts without fractional sample weights), and the total weight
+    /// small enough that no packed field can carry. Fills each row's increment when it can.
+    /// </summary>
+    private bool Pack(int rowCount)
+    {
+        if (_classCount != 2) return false;
+        double total = 0;
+        for (int i = 0; i < rowCount; i++)
+        {
+            double weight = _rowWeights[i];
+            if (weight != Math.Floor(weight) || weight < 1) return false;
+            total += weight;
+        }
+        if (total > PackedBinaryHistogram.MaxFieldValue) return false;
+        for (int i = 0; i < rowCount; i++)
+            _rowIncrements[i] = PackedBinaryHistogram.Increment(_rowClasses[i], (ulong)_rowWeights[i]);
+        return true;
     }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private void SumNode(int start, int end, Span<double> totals)
     {
         totals.Clear();
-        for (int i = start; i < end; i++) totals[_rowClasses[i]] += _rowWeights[i];
+        if (_packed)
+        {
+            // Whole-number sums: the same doubles as adding the weights one by one.
+            ulong sum = 0;
+            for (int i = start; i < end; i++) sum += _rowIncrements[i];
+            totals[0] = PackedBinaryHistogram.Class0(sum);
+            totals[1] = PackedBinaryHistogram.Class1(sum);
+        }
+        else for (int i = start; i < end; i++) totals[_rowClasses[i]] += _rowWeights[i];
         totals[_classCount] = end - start;
     }
 
