@@ -61,6 +61,10 @@ public static class ForestTrainer
         return new Forest(options, firstTree, trees, outOfBag, sampleCount, matrix.FeatureCount, classCount);
     }
 
+    /// <summary>The scratch memory of one training thread (its buffers, sized once), for memory estimates.</summary>
+    public static long ScratchBytesPerThread(long sampleCount, long columnCount, int classCount) =>
+        TreeWorker.BytesFor(sampleCount, columnCount, classCount);
+
     private static void ValidateRows(int[] rows, int sampleCount)
     {
         var seen = new bool[sampleCount];

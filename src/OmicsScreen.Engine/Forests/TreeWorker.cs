@@ -16,6 +16,22 @@ internal sealed class TreeWorker(int sampleCount, int maxRows, int featureCount,
     private readonly double[] _rowWeights = new double[maxRows];
     private readonly TreeBuilder _builder = new(Math.Max(1, maxRows), featureCount, maxCodeCount, classCount);
 
+    /// <summary>
+    /// The bytes of one worker on a panel of sampleCount rows and columnCount features: per
+    /// row the draw counts, the draw scratch and its in-bag row, class and weight, held twice
+    /// (here and in the builder), and the builder's packed increment of two-class rows; the
+    /// builder's feature order and histograms; and a node buffer grown by doubling to fit the
+    /// largest tree, at most 2n nodes on n rows.
+    /// </summary>
+    public static long BytesFor(long sampleCount, long columnCount, int classCount)
+    {
+        long rows = sampleCount * (sizeof(int) + sizeof(int) + sizeof(int) + sizeof(double)) * 2;
+        long increments = classCount == 2 ? sampleCount * sizeof(ulong) : 0;
+        long nodeBuffer = 2 * (2 * sampleCount) * DecisionTree.BytesPerNode(classCount);
+        return rows + increments + sizeof(int) * columnCount + NodeHistogram.BytesFor(classCount)
+            + PackedBinaryHistogram.Bytes + nodeBuffer;
+    }
+
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public (DecisionTree, TreeOutOfBag) GrowTree(BinnedMatrix matrix, int[] classes, double[]? sampleWeights,
         SamplingPlan plan, ForestOptions options, int tree)

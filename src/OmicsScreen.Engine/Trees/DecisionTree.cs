@@ -61,6 +61,18 @@ public sealed class DecisionTree
         _sampleCounts = sampleCounts;
     }
 
+    /// <summary>The parallel node arrays a tree holds, each an object with its own header.</summary>
+    public const int NodeArrayCount = 11;
+
+    /// <summary>
+    /// Bytes one node takes across the node arrays: feature, bin threshold, threshold, missing
+    /// code, routing (one byte), two children, class, impurity decrease, sample count, and one
+    /// weight per class. Memory estimates ask this rather than copy the layout.
+    /// </summary>
+    public static int BytesPerNode(int classCount) =>
+        sizeof(int) + sizeof(byte) + sizeof(float) + sizeof(byte) + sizeof(byte) + 2 * sizeof(int) + sizeof(int)
+        + sizeof(double) + sizeof(int) + classCount * sizeof(double);
+
     public int NodeCount => _features.Length;
     public int ClassCount { get; }
 
@@ -100,14 +112,8 @@ public sealed class DecisionTree
     }
 
     /// <summary>Whether a sample with this code of the node's feature goes to the left child.</summary>
-    public bool GoesLeft(int node, byte code)
-    {
-        if (code <= _binThresholds[node]) return true;
-        byte missingCode = _missingCodes[node];
-        if (code < missingCode) return false;
-        var flag = code == missingCode ? UnmeasuredRouting.MissingLeft : UnmeasuredRouting.BelowDetectionLeft;
-        return (_routing[node] & flag) != 0;
-    }
+    public bool GoesLeft(int node, byte code) =>
+        BranchRule.GoesLeft(code, _binThresholds[node], _missingCodes[node], _routing[node]);
 
     /// <summary>The leaf a sample of a binned matrix reaches.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]

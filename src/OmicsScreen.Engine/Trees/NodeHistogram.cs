@@ -31,6 +31,9 @@ internal sealed class NodeHistogram
         _valueCodes = new byte[256];
     }
 
+    /// <summary>The entries' bytes for a class count: 256 codes of class weights plus a row count, as doubles.</summary>
+    public static long BytesFor(int classCount) => 256L * (classCount + 1) * sizeof(double);
+
     public int ClassCount { get; }
     public int Stride { get; }
 

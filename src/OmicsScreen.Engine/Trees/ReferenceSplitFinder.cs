@@ -37,23 +37,14 @@ internal static class ReferenceSplitFinder
         int leftRows = 0, rightRows = 0;
         for (int i = 0; i < rows.Length; i++)
         {
-            byte code = codes[rows[i]];
-            bool goesLeft;
-            if (code == bins.MissingCode) goesLeft = (routing & UnmeasuredRouting.MissingLeft) != 0;
-            else if (code == bins.BelowDetectionCode) goesLeft = (routing & UnmeasuredRouting.BelowDetectionLeft) != 0;
-            else goesLeft = code <= threshold;
-            if (goesLeft) { left[rowClasses[i]] += rowWeights[i]; leftRows++; }
+            if (BranchRule.GoesLeft(codes[rows[i]], threshold, bins.MissingCode, routing)) { left[rowClasses[i]] += rowWeights[i]; leftRows++; }
             else { right[rowClasses[i]] += rowWeights[i]; rightRows++; }
         }
         if (leftRows < minLeafSize || rightRows < minLeafSize) return double.NegativeInfinity;
         double leftWeight = left.Sum(), rightWeight = right.Sum();
         if (leftWeight <= 0 || rightWeight <= 0) return double.NegativeInfinity;
-        double leftSquares = 0, rightSquares = 0;
-        for (int c = 0; c < classCount; c++)
-        {
-            leftSquares += left[c] * left[c];
-            rightSquares += right[c] * right[c];
-        }
-        return leftSquares / leftWeight + rightSquares / rightWeight;
+        var total = new double[classCount];
+        for (int c = 0; c < classCount; c++) total[c] = left[c] + right[c];
+        return GiniImpurity.SplitScore(left, total, leftWeight, rightWeight);
     }
 }

@@ -51,6 +51,69 @@ internal sealed class SplitScanner
         }
     }
 
+    /// <summary>
+    /// <see cref="Scan"/> for a packed two-class histogram: the same candidates in the same order
+    /// with the same scores (the packed sums are the double sums exactly), so the same split.
+    /// </summary>
+    public void ScanPacked(PackedBinaryHistogram histogram, int feature, int valueBinCount, ReadOnlySpan<double> nodeTotals,
+        int minLeafSize, ref SplitCandidate best)
+    {
+        bool hasMissing = histogram.Missing != 0;
+        bool hasBelow = histogram.BelowDetection != 0;
+        for (int combination = 0; combination < 4; combination++)
+        {
+            bool missingLeft = (combination & 1) != 0;
+            bool belowLeft = (combination & 2) != 0;
+            if ((missingLeft && !hasMissing) || (belowLeft && !hasBelow)) continue;
+            if (histogram.ValueEntryCount == 0)
+            {
+                if (combination == 1 && hasBelow)
+                {
+                    var left = _left.AsSpan();
+                    ulong missing = histogram.Missing;
+                    left[0] = PackedBinaryHistogram.Class0(missing);
+                    left[1] = PackedBinaryHistogram.Class1(missing);
+                    left[2] = PackedBinaryHistogram.Rows(missing);
+                    ConsiderGeneral(left, nodeTotals, minLeafSize, feature, (byte)(valueBinCount - 1),
+                        hasMissing, hasBelow, missingLeft, belowLeft, ref best);
+                }
+                continue;
+            }
+            ulong placed = (missingLeft ? histogram.Missing : 0) + (belowLeft ? histogram.BelowDetection : 0);
+            ScanPackedCuts(histogram, placed, feature, nodeTotals, minLeafSize, hasMissing, hasBelow, missingLeft, belowLeft, ref best);
+        }
+    }
+
+    /// <remarks>
+    /// Same candidates and score as <see cref="ScanBinary"/>; the running left sums are one
+    /// packed word, read out as exact doubles at each cut.
+    /// </remarks>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static void ScanPackedCuts(PackedBinaryHistogram histogram, ulong placed, int feature, ReadOnlySpan<double> nodeTotals,
+        int minLeafSize, bool hasMissing, bool hasBelow, bool missingLeft, bool belowLeft, ref SplitCandidate best)
+    {
+        var entries = histogram.Entries;
+        var codes = histogram.ValueCodes;
+        double total0 = nodeTotals[0], total1 = nodeTotals[1], totalRows = nodeTotals[2];
+        double bestScore = best.Score;
+        ulong left = placed;
+        // Invariant: after step j, left holds the placed groups plus value codes[0..j].
+        for (int j = 0; j < codes.Length; j++)
+        {
+            left += entries[codes[j]];
+            double leftRows = PackedBinaryHistogram.Rows(left);
+            double rightRows = totalRows - leftRows;
+            if (leftRows < minLeafSize || rightRows < minLeafSize) continue;
+            double left0 = PackedBinaryHistogram.Class0(left), left1 = PackedBinaryHistogram.Class1(left);
+            double right0 = total0 - left0, right1 = total1 - left1;
+            if (left0 + left1 <= 0 || right0 + right1 <= 0) continue;
+            double score = GiniImpurity.SplitScore(left0, left1, right0, right1);
+            if (!(score > bestScore)) continue;
+            bestScore = score;
+            best = Record(feature, codes[j], score, leftRows, rightRows, hasMissing, hasBelow, missingLeft, belowLeft);
+        }
+    }
+
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static void ScanBinary(NodeHistogram histogram, int feature, ReadOnlySpan<double> nodeTotals, int minLeafSize,
         bool hasMissing, bool hasBelow, bool missingLeft, bool belowLeft, ref SplitCandidate best)
@@ -74,7 +137,7 @@ internal sealed class SplitScanner
             double right0 = total0 - left0, right1 = total1 - left1;
             double leftWeight = left0 + left1, rightWeight = right0 + right1;
             if (leftWeight <= 0 || rightWeight <= 0) continue;
-            double score = (left0 * left0 + left1 * left1) / leftWeight + (right0 * right0 + right1 * right1) / rightWeight;
+            double score = GiniImpurity.SplitScore(left0, left1, right0, right1);
             if (!(score > bestScore)) continue;
             bestScore = score;
             best = Record(feature, codes[j], score, leftRows, rightRows, hasMissing, hasBelow, missingLeft, belowLeft);
@@ -104,18 +167,14 @@ internal sealed class SplitScanner
         double leftRows = left[classCount];
         double rightRows = nodeTotals[classCount] - leftRows;
         if (leftRows < minLeafSize || rightRows < minLeafSize) return;
-        double leftWeight = 0, rightWeight = 0, leftSquares = 0, rightSquares = 0;
+        double leftWeight = 0, rightWeight = 0;
         for (int c = 0; c < classCount; c++)
         {
-            double l = left[c];
-            double r = nodeTotals[c] - l;
-            leftWeight += l;
-            rightWeight += r;
-            leftSquares += l * l;
-            rightSquares += r * r;
+            leftWeight += left[c];
+            rightWeight += nodeTotals[c] - left[c];
         }
         if (leftWeight <= 0 || rightWeight <= 0) return;
-        double score = leftSquares / leftWeight + rightSquares / rightWeight;
+        double score = GiniImpurity.SplitScore(left[..classCount], nodeTotals[..classCount], leftWeight, rightWeight);
         if (!(score > best.Score)) return;
         best = Record(feature, binThreshold, score, leftRows, rightRows, hasMissing, hasBelow, missingLeft, belowLeft);
     }

@@ -29,10 +29,15 @@ internal sealed class TreeBuilder
     private readonly double[] _rowWeights;
     private readonly int[] _featureOrder;
     private readonly double[] _nodeTotals;
+    private readonly ulong[] _rowIncrements;
     private readonly NodeHistogram _histogram;
+    private readonly PackedBinaryHistogram _packedHistogram = new();
     private readonly SplitScanner _scanner;
     private readonly Stack<PendingNode> _pending = new();
-    private readonly TreeStore _store;
+    private readonly TreeBuffer _buffer;
+
+    /// <summary>True while growing a tree whose two-class integer weights fit the packed histogram.</summary>
+    private bool _packed;
 
     public TreeBuilder(int maxRows, int featureCount, int maxCodeCount, int classCount)
     {
@@ -41,11 +46,12 @@ internal sealed class TreeBuilder
         _rows = new int[maxRows];
         _rowClasses = new int[maxRows];
         _rowWeights = new double[maxRows];
+        _rowIncrements = new ulong[classCount == 2 ? maxRows : 0];
         _featureOrder = new int[featureCount];
         _nodeTotals = new double[_stride];
         _histogram = new NodeHistogram(classCount, maxCodeCount);
         _scanner = new SplitScanner(classCount);
-        _store = new TreeStore(classCount);
+        _buffer = new TreeBuffer(classCount);
     }
 
     /// <summary>
@@ -60,11 +66,12 @@ internal sealed class TreeBuilder
         rows.CopyTo(_rows);
         rowClasses.CopyTo(_rowClasses);
         rowWeights.CopyTo(_rowWeights);
+        _packed = Pack(rowCount);
         int featureCount = matrix.FeatureCount;
         for (int f = 0; f < featureCount; f++) _featureOrder[f] = f;
         int featuresPerSplit = options.ResolveFeaturesPerSplit(featureCount);
 
-        _store.Clear();
+        _buffer.Clear();
         _pending.Clear();
         double rootWeight = 0;
         for (int i = 0; i < rowCount; i++) rootWeight += _rowWeights[i];
@@ -72,11 +79,11 @@ internal sealed class TreeBuilder
         while (_pending.Count > 0)
         {
             var pending = _pending.Pop();
-            int node = _store.Add(pending.Parent, pending.IsLeft);
+            int node = _buffer.Add(pending.Parent, pending.IsLeft);
             var totals = _nodeTotals.AsSpan();
             SumNode(pending.Start, pending.End, totals);
             var classWeights = totals[.._classCount];
-            _store.SetNode(node, classWeights, pending.End - pending.Start, MajorityClass(classWeights, ref generator));
+            _buffer.SetNode(node, classWeights, pending.End - pending.Start, MajorityClass(classWeights, ref generator));
 
             int nodeRows = pending.End - pending.Start;
             if (pending.Depth >= options.MaxDepth || nodeRows < 2 * options.MinLeafSize || nodeRows < 2 || IsPure(classWeights))
@@ -88,12 +95,12 @@ internal sealed class TreeBuilder
 
             var bins = matrix.Bins(best.Feature);
             int middle = Partition(matrix.Codes(best.Feature), pending.Start, pending.End, best, bins.MissingCode);
-            _store.SetSplit(node, best.Feature, best.BinThreshold, bins.UpperBound(best.BinThreshold), bins.MissingCode,
+            _buffer.SetSplit(node, best.Feature, best.BinThreshold, bins.UpperBound(best.BinThreshold), bins.MissingCode,
                 best.Routing, decrease);
             _pending.Push(new PendingNode(middle, pending.End, pending.Depth + 1, node, false));
             _pending.Push(new PendingNode(pending.Start, middle, pending.Depth + 1, node, true));
         }
-        return _store.ToTree();
+        return _buffer.ToTree();
     }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
@@ -119,6 +126,14 @@ internal sealed class TreeBuilder
             else if (next + PrefetchDistance < drawn) matrix.PrefetchCodes(order[next + PrefetchDistance]);
             int feature = order[next];
             int valueBins = matrix.ValueBinCount(feature);
+            if (_packed)
+            {
+                _packedHistogram.Fill(matrix.Codes(feature), rows, _rowIncrements.AsSpan(start, end - start), valueBins);
+                if (_packedHistogram.IsConstant) continue;
+                tried++;
+                _scanner.ScanPacked(_packedHistogram, feature, valueBins, totals, minLeafSize, ref best);
+                continue;
+            }
             _histogram.Fill(matrix.Codes(feature), rows, rowClasses, rowWeights, valueBins);
             if (_histogram.IsConstant) continue;
             tried++;
@@ -137,29 +152,60 @@ internal sealed class TreeBuilder
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private int Partition(ReadOnlySpan<byte> codes, int start, int end, in SplitCandidate split, byte missingCode)
     {
-        bool missingLeft = (split.Routing & UnmeasuredRouting.MissingLeft) != 0;
-        bool belowLeft = (split.Routing & UnmeasuredRouting.BelowDetectionLeft) != 0;
         byte threshold = split.BinThreshold;
+        var routing = split.Routing;
         int low = start, high = end - 1;
         // Invariant: rows before low go left, rows after high go right.
         while (low <= high)
         {
-            byte code = codes[_rows[low]];
-            bool left = code <= threshold || (code == missingCode ? missingLeft : code > missingCode && belowLeft);
-            if (left) { low++; continue; }
+            if (BranchRule.GoesLeft(codes[_rows[low]], threshold, missingCode, routing)) { low++; continue; }
             (_rows[low], _rows[high]) = (_rows[high], _rows[low]);
-            (_rowClasses[low], _rowClasses[high]) = (_rowClasses[high], _rowClasses[low]);
-            (_rowWeights[low], _rowWeights[high]) = (_rowWeights[high], _rowWeights[low]);
+            // A packed tree's classes and weights travel in its increments alone.
+            if (_packed) (_rowIncrements[low], _rowIncrements[high]) = (_rowIncrements[high], _rowIncrements[low]);
+            else
+            {
+                (_rowClasses[low], _rowClasses[high]) = (_rowClasses[high], _rowClasses[low]);
+                (_rowWeights[low], _rowWeights[high]) = (_rowWeights[high], _rowWeights[low]);
+            }
             high--;
         }
         return low;
+    }
+
+    /// <summary>
+    /// Whether this tree can use the packed two-class histogram: two classes, every weight a
+    /// whole number (bootstrap counts without fractional sample weights), and the total weight
+    /// small enough that no packed field can carry. Fills each row's increment when it can.
+    /// </summary>
+    private bool Pack(int rowCount)
+    {
+        if (_classCount != 2) return false;
+        double total = 0;
+        for (int i = 0; i < rowCount; i++)
+        {
+            double weight = _rowWeights[i];
+            if (weight != Math.Floor(weight) || weight < 1) return false;
+            total += weight;
+        }
+        if (total > PackedBinaryHistogram.MaxFieldValue) return false;
+        for (int i = 0; i < rowCount; i++)
+            _rowIncrements[i] = PackedBinaryHistogram.Increment(_rowClasses[i], (ulong)_rowWeights[i]);
+        return true;
     }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private void SumNode(int start, int end, Span<double> totals)
     {
         totals.Clear();
-        for (int i = start; i < end; i++) totals[_rowClasses[i]] += _rowWeights[i];
+        if (_packed)
+        {
+            // Whole-number sums: the same doubles as adding the weights one by one.
+            ulong sum = 0;
+            for (int i = start; i < end; i++) sum += _rowIncrements[i];
+            totals[0] = PackedBinaryHistogram.Class0(sum);
+            totals[1] = PackedBinaryHistogram.Class1(sum);
+        }
+        else for (int i = start; i < end; i++) totals[_rowClasses[i]] += _rowWeights[i];
         totals[_classCount] = end - start;
     }
 

@@ -1,3 +1,7 @@
+using OmicsScreen.Engine.Binning;
+using OmicsScreen.Engine.Forests;
+using OmicsScreen.Engine.Trees;
+
 namespace OmicsScreen.Screening.Screen;
 
 /// <summary>
@@ -44,9 +48,6 @@ public sealed class MemoryEstimate
 
     /// <summary>Per cell of <see cref="RepeatImportances"/>: corrected, permutation, impurity, combined rank (doubles) and the selection flag.</summary>
     private const long RepeatCellBytes = 4 * sizeof(double) + sizeof(bool);
-
-    /// <summary>Per node of a stored tree: feature, bin threshold, threshold, missing code, routing, two children, class, decrease, sample count.</summary>
-    private const long NodeBytesWithoutClasses = 4 + 1 + 4 + 1 + 1 + 4 + 4 + 4 + 8 + 4;
 
     /// <summary>The fraction of a bootstrap sample of n that is distinct, 1 - (1 - 1/n)^n, close to 1 - 1/e.</summary>
     private const double DistinctInBagShare = 0.632;
@@ -183,11 +184,11 @@ public sealed class MemoryEstimate
 
     /// <summary>
     /// A byte code per cell, and each feature's bin bounds: one float per distinct value up to
-    /// 254 bins (BinMapper), in an object of its own, plus the matrix's per-column arrays.
+    /// BinMapper.MaxValueBins, in an object of its own, plus the matrix's per-column arrays.
     /// </summary>
     private static long BinnedBytes(long samples, long features)
     {
-        long bounds = ObjectHeader + 8 + ArrayHeader + 4 * Math.Min(samples, 254);
+        long bounds = ObjectHeader + 8 + ArrayHeader + 4 * Math.Min(samples, BinMapper.MaxValueBins);
         return ColumnBytes(features, samples) + features * (bounds + 3 * Reference + 9);
     }
 
@@ -195,8 +196,8 @@ public sealed class MemoryEstimate
     private static long ColumnBytes(long columns, long bytesPerColumn) => columns * (ArrayHeader + bytesPerColumn + Reference);
 
     /// <summary>
-    /// A forest grown on n rows: per tree, d nodes for d = 0.632 n distinct in-bag rows, eleven
-    /// node arrays and the tree object, and the out-of-bag rows with their predicted classes.
+    /// A forest grown on n rows: per tree, d nodes for d = 0.632 n distinct in-bag rows, the
+    /// tree's node arrays and object, and the out-of-bag rows with their predicted classes.
     /// </summary>
     /// <remarks>
     /// A tree could have up to 2 d - 1 nodes (a leaf per distinct sample), but fully grown trees
@@ -208,22 +209,15 @@ public sealed class MemoryEstimate
         long distinct = Math.Max(1, (long)Math.Ceiling(DistinctInBagShare * rows));
         long nodes = distinct;
         long outOfBag = rows - distinct;
-        long tree = nodes * (NodeBytesWithoutClasses + 8L * classCount) + 11 * ArrayHeader + ObjectHeader + 12 * Reference;
+        long tree = nodes * DecisionTree.BytesPerNode(classCount) + DecisionTree.NodeArrayCount * (ArrayHeader + Reference)
+            + ObjectHeader + Reference;
         long outOfBagRows = 2 * (ArrayHeader + 4 * outOfBag) + ObjectHeader + 2 * Reference;
         return trees * (tree + outOfBagRows + 2 * Reference);
     }
 
-    /// <summary>
-    /// One thread's tree worker: draw counts and in-bag rows, the feature order over every column,
-    /// a 256-code histogram, and a node store grown by doubling up to the largest tree.
-    /// </summary>
-    private static long WorkerBytes(long samples, long columns, int classCount)
-    {
-        long rows = samples * (4 + 4 + 4 + 8) * 2;
-        long histogram = 256L * (classCount + 1) * sizeof(double);
-        long store = 2 * (2 * samples) * (NodeBytesWithoutClasses + 8L * classCount);
-        return rows + 4 * columns + histogram + store;
-    }
+    /// <summary>One thread's tree worker, as the engine states it.</summary>
+    private static long WorkerBytes(long samples, long columns, int classCount) =>
+        ForestTrainer.ScratchBytesPerThread(samples, columns, classCount);
 
     private static void CheckShape(int sampleCount, int featureCount, int threadCount, int classCount)
     {

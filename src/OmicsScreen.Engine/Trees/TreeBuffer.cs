@@ -1,10 +1,10 @@
 namespace OmicsScreen.Engine.Trees;
 
 /// <summary>
-/// Growable node arrays reused by a <see cref="TreeBuilder"/> across trees; copied once into an
-/// exactly sized <see cref="DecisionTree"/> when a tree is finished.
+/// The builder's node buffer: growable node arrays reused by a <see cref="TreeBuilder"/> across
+/// trees, copied once into an exactly sized <see cref="DecisionTree"/> when a tree is finished.
 /// </summary>
-internal sealed class TreeStore
+internal sealed class TreeBuffer
 {
     private readonly int _classCount;
     private int _count;
@@ -20,7 +20,7 @@ internal sealed class TreeStore
     private double[] _decreases = new double[64];
     private int[] _sampleCounts = new int[64];
 
-    public TreeStore(int classCount)
+    public TreeBuffer(int classCount)
     {
         _classCount = classCount;
         _classWeights = new double[64 * classCount];
