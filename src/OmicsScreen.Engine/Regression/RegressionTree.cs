@@ -11,8 +11,9 @@ namespace OmicsScreen.Engine.Regression;
 /// 1984, ch. 8).
 /// </summary>
 /// <remarks>
-/// Same branch rule as <see cref="DecisionTree"/>: a code at most <see cref="BinThresholds"/>
-/// goes left; missing and below-detection cells follow <see cref="Routing"/>. A leaf has feature -1.
+/// Same branch rule as <see cref="DecisionTree"/> (<see cref="BranchRule"/>): a code at most
+/// <see cref="BinThresholds"/> goes left; missing and below-detection cells follow <see cref="Routing"/>.
+/// A leaf has feature -1.
 /// </remarks>
 public sealed class RegressionTree
 {
@@ -73,14 +74,8 @@ public sealed class RegressionTree
     public bool IsLeaf(int node) => _features[node] < 0;
 
     /// <summary>Whether a sample with this code of the node's feature goes to the left child.</summary>
-    public bool GoesLeft(int node, byte code)
-    {
-        if (code <= _binThresholds[node]) return true;
-        byte missingCode = _missingCodes[node];
-        if (code < missingCode) return false;
-        var flag = code == missingCode ? UnmeasuredRouting.MissingLeft : UnmeasuredRouting.BelowDetectionLeft;
-        return (_routing[node] & flag) != 0;
-    }
+    public bool GoesLeft(int node, byte code) =>
+        BranchRule.GoesLeft(code, _binThresholds[node], _missingCodes[node], _routing[node]);
 
     /// <summary>The leaf a sample of a binned matrix reaches.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]

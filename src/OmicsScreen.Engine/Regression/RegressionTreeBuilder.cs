@@ -249,16 +249,13 @@ internal sealed class RegressionTreeBuilder
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private int Partition(ReadOnlySpan<byte> codes, int start, int end, in SplitCandidate split, byte missingCode)
     {
-        bool missingLeft = (split.Routing & UnmeasuredRouting.MissingLeft) != 0;
-        bool belowLeft = (split.Routing & UnmeasuredRouting.BelowDetectionLeft) != 0;
         byte threshold = split.BinThreshold;
+        var routing = split.Routing;
         int low = start, high = end - 1;
         // Invariant: rows before low go left, rows after high go right.
         while (low <= high)
         {
-            byte code = codes[_rows[low]];
-            bool left = code <= threshold || (code == missingCode ? missingLeft : code > missingCode && belowLeft);
-            if (left) { low++; continue; }
+            if (BranchRule.GoesLeft(codes[_rows[low]], threshold, missingCode, routing)) { low++; continue; }
             (_rows[low], _rows[high]) = (_rows[high], _rows[low]);
             (_targets[low], _targets[high]) = (_targets[high], _targets[low]);
             (_weights[low], _weights[high]) = (_weights[high], _weights[low]);
