@@ -24,23 +24,12 @@ public static class RegressionForestTrainer
         if (outcome.Length != sampleCount) throw new ArgumentException("The outcome must have one value per sample.");
         foreach (double y in outcome)
             if (!double.IsFinite(y)) throw new ArgumentException("Every outcome value must be finite.");
-        if (sampleWeights is not null && sampleWeights.Length != sampleCount)
-            throw new ArgumentException("One weight per sample is needed.");
-        if (sampleWeights is not null)
-            foreach (double weight in sampleWeights)
-                if (!(weight >= 0) || double.IsInfinity(weight)) throw new ArgumentException("Sample weights must be finite and not negative.");
+        TreeSampleDraw.CheckWeights(sampleWeights, sampleCount);
         if (matrix.FeatureCount < 1) throw new ArgumentException("A forest needs at least one feature.");
         if (options.Sampling.ClassBalanced) throw new ArgumentException("Class-balanced drawing needs classes; a measured outcome has none.");
         options.Validate(sampleCount);
 
-        int[] eligible = trainingRows ?? Enumerable.Range(0, sampleCount).ToArray();
-        var seen = new bool[sampleCount];
-        foreach (int row in eligible)
-        {
-            if ((uint)row >= (uint)sampleCount) throw new ArgumentException($"Training row {row} is out of range.");
-            if (seen[row]) throw new ArgumentException($"Training row {row} is listed twice.");
-            seen[row] = true;
-        }
+        int[] eligible = TreeSampleDraw.EligibleRows(trainingRows, sampleCount);
         var targets = outcome.ToArray();
         // One pseudo-class: the plan's per-class lists are only used by class-balanced drawing.
         var plan = new SamplingPlan(options.Sampling, eligible, new int[sampleCount], 1);
@@ -53,42 +42,19 @@ public static class RegressionForestTrainer
         int nextTree = -1;
         Parallel.For(0, threads, new ParallelOptions { MaxDegreeOfParallelism = threads }, _ =>
         {
-            var counts = new int[sampleCount];
-            var scratch = new int[Math.Max(1, plan.ScratchLength)];
-            var rows = new int[Math.Max(1, eligible.Length)];
-            var rowTargets = new double[rows.Length];
-            var rowWeights = new double[rows.Length];
-            var builder = new RegressionTreeBuilder(rows.Length, matrix.FeatureCount);
+            var draw = new TreeSampleDraw(sampleCount, eligible.Length, plan.ScratchLength);
+            var rowTargets = new double[Math.Max(1, eligible.Length)];
+            var builder = new RegressionTreeBuilder(rowTargets.Length, matrix.FeatureCount);
             int tree;
             // Trees are handed out by an atomic counter; where a tree is grown never affects what is grown.
             while ((tree = Interlocked.Increment(ref nextTree)) < count)
             {
-                foreach (int row in eligible) counts[row] = 0;
-                var sampling = SeedSchedule.Generator(options.Seed, options.Repeat, tree, SeedPurpose.Sampling);
-                plan.Draw(ref sampling, counts, scratch);
-                int inBag = 0, outOfBag = 0;
-                foreach (int row in eligible)
-                {
-                    int drawn = counts[row];
-                    if (drawn == 0) { outOfBag++; continue; }
-                    double weight = drawn * (sampleWeights?[row] ?? 1.0);
-                    if (weight <= 0) continue;
-                    rows[inBag] = row;
-                    rowTargets[inBag] = targets[row];
-                    rowWeights[inBag] = weight;
-                    inBag++;
-                }
-                if (inBag == 0) throw new InvalidOperationException($"Tree {tree} drew no sample with positive weight.");
+                var left = draw.Draw(plan, sampleWeights, options.Seed, options.Repeat, tree);
+                var inBag = draw.InBagRows;
+                for (int i = 0; i < inBag.Length; i++) rowTargets[i] = targets[inBag[i]];
                 var splitting = SeedSchedule.Generator(options.Seed, options.Repeat, tree, SeedPurpose.Splitting);
-                var grown = builder.Grow(matrix, rows.AsSpan(0, inBag), rowTargets.AsSpan(0, inBag),
-                    rowWeights.AsSpan(0, inBag), options.Tree, ref splitting);
-                var left = new int[outOfBag];
-                var predicted = new double[outOfBag];
-                int k = 0;
-                // Eligible rows may come in any order; out-of-bag rows are stored sorted.
-                foreach (int row in eligible)
-                    if (counts[row] == 0) left[k++] = row;
-                Array.Sort(left);
+                var grown = builder.Grow(matrix, inBag, rowTargets.AsSpan(0, inBag.Length), draw.InBagWeights, options.Tree, ref splitting);
+                var predicted = new double[left.Length];
                 for (int i = 0; i < left.Length; i++) predicted[i] = grown.Predict(matrix, left[i]);
                 trees[tree] = grown;
                 oobRows[tree] = left;

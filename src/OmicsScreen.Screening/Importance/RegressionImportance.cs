@@ -111,7 +111,7 @@ public static class RegressionImportance
     }
 }
 
-/// <summary>Out-of-bag permutation importance of a measured outcome, one entry per feature.</summary>
-/// <param name="MeanRise">Mean over all trees of (OOB mean squared error with the feature permuted - without).</param>
+/// <summary>Out-of-bag permutation importance of a measured or time-to-event outcome, one entry per feature.</summary>
+/// <param name="MeanRise">Mean over all trees of the loss from permuting the feature: the rise in OOB mean squared error (measured outcome) or the drop in OOB concordance (time to event).</param>
 /// <param name="StandardError">SD over trees (n - 1 denominator) of the per-tree rise, divided by sqrt(trees).</param>
 public sealed record ErrorRiseImportance(double[] MeanRise, double[] StandardError);
