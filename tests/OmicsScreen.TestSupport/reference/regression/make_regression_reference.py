@@ -14,6 +14,8 @@ Values written to regression_reference.json:
   decrease (tree_.compute_feature_importances(normalize=False): weighted variance decrease
   divided by the root's sample count). With at most 300 distinct values per feature and exact
   bins, a correct CART regression tree finds the same splits whatever its threshold placement.
+- "spearman": each feature's Spearman rho and p-value against y (scipy.stats.spearmanr) and
+  Benjamini-Hochberg q-values across the 30 features (statsmodels multipletests "fdr_bh").
 - "forest": out-of-bag mean squared error of scikit-learn RandomForestRegressor and ranger
   (through Rscript), 500 trees, floor(sqrt(p)) = 5 features per split, leaves grown to purity
   (sklearn min_samples_leaf=1; ranger min.node.size=1), bootstrap of n rows, seeds 1..10.
@@ -93,6 +95,21 @@ def main():
             rg.append(round(float(parts[2]), 6))
     result["forest"]["ranger"] = {"version": version, "oob_mse": rg}
     result["y_variance_population"] = round(float(np.var(y)), 10)
+
+    # Per-feature Spearman rho and p (scipy.stats.spearmanr, t approximation) with
+    # Benjamini-Hochberg q-values (statsmodels multipletests, method "fdr_bh").
+    import scipy
+    import statsmodels
+    from scipy.stats import spearmanr
+    from statsmodels.stats.multitest import multipletests
+    rho, pval = [], []
+    for j in range(x.shape[1]):
+        r = spearmanr(x[:, j].astype(np.float32), y)
+        rho.append(float(r.correlation))
+        pval.append(float(r.pvalue))
+    q = multipletests(pval, method="fdr_bh")[1]
+    result["spearman"] = {"scipy_version": scipy.__version__, "statsmodels_version": statsmodels.__version__,
+                          "rho": [round(v, 12) for v in rho], "p": pval, "q": [float(v) for v in q]}
 
     with open(os.path.join(HERE, "regression_reference.json"), "w") as f:
         json.dump(result, f, indent=1)
