@@ -2,6 +2,7 @@ using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Engine.Sampling;
 using OmicsScreen.Engine.Trees;
+using OmicsScreen.Screening.Randomness;
 
 namespace OmicsScreen.Screening.Screen;
 
@@ -76,12 +77,12 @@ public sealed record ScreenSettings
             : Math.Clamp(featureCount, options.AutomaticDecoyFloor, options.AutomaticDecoyCeiling);
     }
 
-    /// <summary>The engine options of every forest of this screen; seed and repeat are set per forest.</summary>
-    public ForestOptions ForestOptions(SampleGrouping? subject, ulong seed, int repeat, int? featuresPerSplit = null) => new()
+    /// <summary>The engine options of every forest of this screen; its random streams (from <see cref="RandomStreams"/>) are set per forest.</summary>
+    public ForestOptions ForestOptions(SampleGrouping? subject, ForestStreams streams, int? featuresPerSplit = null) => new()
     {
         TreeCount = Options.TreesPerForest,
-        Seed = seed,
-        Repeat = repeat,
+        Seed = streams.Seed,
+        Repeat = streams.Repeat,
         ThreadCount = Options.ThreadCount,
         Tree = new TreeOptions
         {
