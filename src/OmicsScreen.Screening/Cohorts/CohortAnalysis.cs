@@ -7,6 +7,7 @@ using OmicsScreen.Screening.Screen;
 using OmicsScreen.Screening.Statistics;
 using OmicsScreen.Screening.Univariate;
 using OmicsScreen.Screening.Work;
+using OmicsScreen.Engine.Parallelism;
 
 namespace OmicsScreen.Screening.Cohorts;
 
@@ -84,7 +85,7 @@ internal static class CohortAnalysis
         // independent, so they run in parallel and are gathered by index.
         int positiveContrast = Math.Max(0, univariate.Contrasts.ToList().IndexOf(outcome.ClassNames[outcome.PositiveClass]));
         var markers = new MarkerHeterogeneity[featureCount];
-        Parallel.For(0, featureCount, new ParallelOptions { MaxDegreeOfParallelism = ThreadCount(options) },
+        Parallel.For(0, featureCount, WorkerThreads.Options(options.ThreadCount),
             i => markers[i] = Heterogeneity(panel, univariate, order[i], positiveContrast, cohortImportanceRank[order[i]]));
         FlagHeterogeneity(markers, options.QValueThreshold);
 
@@ -141,8 +142,6 @@ internal static class CohortAnalysis
 
     internal static ulong HeldOutSeed(ScreenOptions options, int cohort) =>
         RandomStreams.HeldOutScreenSeed(options.Seed, cohort);
-
-    private static int ThreadCount(ScreenOptions options) => options.ThreadCount > 0 ? options.ThreadCount : Environment.ProcessorCount;
 
     private static bool HasEnoughOfEachClass(int[] rows, ClassOutcome outcome)
     {
