@@ -14,7 +14,20 @@ public sealed record ScreenSettings
 {
     public required ScreenOptions Options { get; init; }
     public required int FeatureCount { get; init; }
+
+    /// <summary>Features tried at each split of the forests on the panel's own features (reference, each repeat's clean forest, the cohort forest).</summary>
     public required int FeaturesPerSplit { get; init; }
+
+    /// <summary>
+    /// Features tried at each split of the forests that carry a permuted copy of every feature and
+    /// the decoys (corrected importance): the same rule on their 2p + decoys columns, so an
+    /// automatic value is floor(sqrt(2p + decoys)), not the clean forests' floor(sqrt(p)).
+    /// </summary>
+    public required int CorrectedForestFeaturesPerSplit { get; init; }
+
+    /// <summary>Features tried at each split of the outcome-permutation null's forests (2p columns: copies, no decoys); 0 when none are grown.</summary>
+    public required int OutcomePermutationForestFeaturesPerSplit { get; init; }
+
     public required bool ClassBalanced { get; init; }
     public required int DecoyCount { get; init; }
 
@@ -43,13 +56,16 @@ public sealed record ScreenSettings
         // splitting a subject's replicates would flatter every estimate.
         if (panel.Subject is not null) balanced = false;
         int decoys = DecoyCountFor(options, featureCount);
-        int tried = options.FeaturesPerSplit > 0 ? Math.Min(options.FeaturesPerSplit, featureCount)
-            : Math.Max(1, (int)Math.Floor(Math.Sqrt(featureCount)));
+        // The engine's own rule (TreeOptions.ResolveFeaturesPerSplit) on each forest kind's width,
+        // so what is recorded is what the trees try.
+        var tree = new TreeOptions { FeaturesPerSplit = options.FeaturesPerSplit > 0 ? options.FeaturesPerSplit : null };
         return new ScreenSettings
         {
             Options = options,
             FeatureCount = featureCount,
-            FeaturesPerSplit = tried,
+            FeaturesPerSplit = tree.ResolveFeaturesPerSplit(featureCount),
+            CorrectedForestFeaturesPerSplit = tree.ResolveFeaturesPerSplit(2 * featureCount + decoys),
+            OutcomePermutationForestFeaturesPerSplit = options.OutcomePermutations > 0 ? tree.ResolveFeaturesPerSplit(2 * featureCount) : 0,
             ClassBalanced = balanced,
             DecoyCount = decoys,
             InteractionScan = InteractionScanRuns(options, featureCount, decoys),
