@@ -26,17 +26,9 @@ public sealed class ApplyCommand : Command, IHelpLayout
         HelpName = "COLUMN",
     };
 
-    public Option<string> Out { get; } = new("--out")
-    {
-        Description = "Folder for scores.tsv, the evaluation tables and apply_report.html.",
-        HelpName = "DIR",
-        Required = true,
-    };
+    public Option<string> Out { get; } = CommonOptions.RequiredOut("Folder for scores.tsv, the evaluation tables and apply_report.html.");
 
-    public Option<bool> Force { get; } = new("--force")
-    {
-        Description = "Write into a folder that is not empty and holds no earlier results.",
-    };
+    public Option<bool> Force { get; } = CommonOptions.Force("Write into a folder that is not empty and holds no earlier results.");
 
     public Option<bool> ShowSampleIds { get; } = new("--show-sample-ids")
     {

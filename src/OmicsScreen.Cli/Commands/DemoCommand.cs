@@ -18,29 +18,16 @@ public sealed class DemoCommand : Command, IHelpLayout
         DefaultValueFactory = _ => Path.Combine("panels", "demo"),
     };
 
-    public Option<string> ReportFolder { get; } = new("--out")
-    {
-        Description = "Folder for the demo's results and report.",
-        HelpName = "DIR",
-        DefaultValueFactory = _ => Path.Combine("reports", "demo"),
-    };
+    public Option<string> ReportFolder { get; } = CommonOptions.Out("Folder for the demo's results and report.", Path.Combine("reports", "demo"));
 
-    public Option<ulong> Seed { get; } = new("--seed")
-    {
-        Description = "Seed of the simulated study (the same seed gives byte-identical files).",
-        HelpName = "S",
-        DefaultValueFactory = _ => new DemoStudyOptions().Seed,
-    };
+    public Option<ulong> Seed { get; } = CommonOptions.Seed("Seed of the simulated study (the same seed gives byte-identical files).", new DemoStudyOptions().Seed);
 
     public Option<bool> PanelOnly { get; } = new("--panel-only")
     {
         Description = "Only write the demo panel; do not run the screen on it.",
     };
 
-    public Option<bool> Quiet { get; } = new("--quiet")
-    {
-        Description = "No progress display.",
-    };
+    public Option<bool> Quiet { get; } = CommonOptions.Quiet();
 
     public IReadOnlyList<HelpSection> HelpSections => [new("Run", [PanelFolder, ReportFolder, Seed, PanelOnly, Quiet])];
 

@@ -55,18 +55,9 @@ public sealed class GrowCommand : Command, IHelpLayout
     /// <summary>The earlier spelling of --balance on, kept working but not shown.</summary>
     public Option<bool> Balanced { get; } = new("--balanced") { Hidden = true };
 
-    public Option<ulong> Seed { get; } = new("--seed")
-    {
-        Description = "Seed of every random draw; the same seed gives the same forest on any number of threads.",
-        HelpName = "S",
-        DefaultValueFactory = _ => 1,
-    };
+    public Option<ulong> Seed { get; } = CommonOptions.Seed("Seed of every random draw; the same seed gives the same forest on any number of threads.", 1);
 
-    public Option<int?> Threads { get; } = new("--threads")
-    {
-        Description = "Threads to grow trees on. Default: all cores.",
-        HelpName = "N",
-    };
+    public Option<int?> Threads { get; } = CommonOptions.Threads("Threads to grow trees on. Default: all cores.");
 
     public Option<string?> ImportanceFile { get; } = new("--importance-out")
     {
@@ -122,7 +113,7 @@ public sealed class GrowCommand : Command, IHelpLayout
             SampleFraction = parse.GetValue(SampleFraction),
             Balance = parse.GetValue(Balanced) ? BalanceMode.On : parse.GetValue(Balance),
             Seed = parse.GetValue(Seed),
-            ThreadCount = ScreenOptionChecks.Given(parse.GetValue(Threads), "--threads", 1, "leave it out to use all cores"),
+            ThreadCount = CommonOptions.ThreadCount(parse, Threads),
             ImportanceFile = parse.GetValue(ImportanceFile),
             Json = parse.GetValue(Json),
         })));

@@ -14,28 +14,13 @@ public sealed class MergeCommand : Command, IHelpLayout
         Arity = ArgumentArity.OneOrMore,
     };
 
-    public Option<string> Out { get; } = new("--out")
-    {
-        Description = "Results folder.",
-        HelpName = "DIR",
-        Required = true,
-    };
+    public Option<string> Out { get; } = CommonOptions.RequiredOut("Results folder.");
 
-    public Option<bool> Force { get; } = new("--force")
-    {
-        Description = "Write into a non-empty folder that does not hold an earlier screen's results.",
-    };
+    public Option<bool> Force { get; } = CommonOptions.Force("Write into a non-empty folder that does not hold an earlier screen's results.");
 
-    public Option<int> Threads { get; } = new("--threads")
-    {
-        HelpName = "N",
-        Description = "Threads to use for the work a merge does itself. Default: all cores.",
-    };
+    public Option<int?> Threads { get; } = CommonOptions.Threads("Threads to use for the work a merge does itself. Default: all cores.");
 
-    public Option<bool> Quiet { get; } = new("--quiet")
-    {
-        Description = "No progress display.",
-    };
+    public Option<bool> Quiet { get; } = CommonOptions.Quiet();
 
     public IReadOnlyList<HelpSection> HelpSections => [new("Run", [Out, Force, Threads, Quiet])];
 
@@ -58,7 +43,7 @@ public sealed class MergeCommand : Command, IHelpLayout
             OutputFolder = parse.GetValue(Out)!,
             Force = parse.GetValue(Force),
             Quiet = parse.GetValue(Quiet),
-            ThreadCount = parse.GetValue(Threads),
+            ThreadCount = CommonOptions.ThreadCount(parse, Threads),
         })));
     }
 }

@@ -16,16 +16,9 @@ public sealed class ScreenCommand : Command, IHelpLayout
 
     public PanelInputOptions Input { get; } = new();
 
-    public Option<string?> Out { get; } = new("--out")
-    {
-        Description = "Results folder. Default: a folder named after the panel file in reports/.",
-        HelpName = "DIR",
-    };
+    public Option<string?> Out { get; } = CommonOptions.Out("Results folder. Default: a folder named after the panel file in reports/.");
 
-    public Option<bool> Force { get; } = new("--force")
-    {
-        Description = "Write into a non-empty folder that does not hold an earlier screen's results.",
-    };
+    public Option<bool> Force { get; } = CommonOptions.Force("Write into a non-empty folder that does not hold an earlier screen's results.");
 
     public Option<bool> Resume { get; } = new("--resume")
     {
@@ -161,28 +154,16 @@ public sealed class ScreenCommand : Command, IHelpLayout
         DefaultValueFactory = _ => Defaults.CurveMaxPanelSize,
     };
 
-    public Option<ulong> Seed { get; } = new("--seed")
-    {
-        HelpName = "S",
-        Description = "Seed of the whole run; the same seed gives the same results on any number of threads.",
-        DefaultValueFactory = _ => Defaults.Seed,
-    };
+    public Option<ulong> Seed { get; } = CommonOptions.Seed("Seed of the whole run; the same seed gives the same results on any number of threads.", Defaults.Seed);
 
-    public Option<int?> Threads { get; } = new("--threads")
-    {
-        HelpName = "N",
-        Description = "Threads to use. Default: all cores.",
-    };
+    public Option<int?> Threads { get; } = CommonOptions.Threads("Threads to use. Default: all cores.");
 
     public Option<bool> ShowSampleIds { get; } = new("--show-sample-ids")
     {
         Description = "Put sample identifiers in the report's charts (chart descriptions and each point's hover title). Off by default: identifiers can be personal data.",
     };
 
-    public Option<bool> Quiet { get; } = new("--quiet")
-    {
-        Description = "No progress display.",
-    };
+    public Option<bool> Quiet { get; } = CommonOptions.Quiet();
 
     public Option<bool> Json { get; } = new("--json")
     {
@@ -259,7 +240,7 @@ public sealed class ScreenCommand : Command, IHelpLayout
                 CurveFoldRepeats = parse.GetValue(CurveRepeats),
                 CurveInnerPairs = parse.GetValue(CurveInnerPairs),
                 CurveMaxPanelSize = parse.GetValue(MaxPanelSize),
-                ThreadCount = ScreenOptionChecks.Given(parse.GetValue(Threads), "--threads", 1, "leave it out to use all cores"),
+                ThreadCount = CommonOptions.ThreadCount(parse, Threads),
             },
         })));
     }

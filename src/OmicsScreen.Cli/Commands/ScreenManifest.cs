@@ -2,6 +2,7 @@ using System.Reflection;
 using OmicsScreen.Data;
 using OmicsScreen.Reporting.Screen;
 using OmicsScreen.Screening.Screen;
+using OmicsScreen.Engine.Parallelism;
 
 namespace OmicsScreen.Cli.Commands;
 
@@ -26,7 +27,7 @@ internal static class ScreenManifest
             started_utc = started.ToString("O"),
             finished_utc = finished.ToString("O"),
             cores = Environment.ProcessorCount,
-            threads = settings.Options.ThreadCount > 0 ? settings.Options.ThreadCount : Environment.ProcessorCount,
+            threads = WorkerThreads.Resolve(settings.Options.ThreadCount),
             seconds = new Dictionary<string, double>(result.StageSeconds.ToDictionary(kv => StageKey(kv.Key), kv => Math.Round(kv.Value, 3)))
             {
                 ["loading"] = Math.Round(loadSeconds, 3),
@@ -52,6 +53,10 @@ internal static class ScreenManifest
             resolved = new
             {
                 class_balanced = settings.ClassBalanced,
+                // parameters.features_per_split is the clean forests' value; the wider forests resolve on their own width.
+                features_per_split_corrected_forest = settings.CorrectedForestFeaturesPerSplit,
+                features_per_split_outcome_permutation_forest = settings.OutcomePermutationForestFeaturesPerSplit > 0
+                    ? settings.OutcomePermutationForestFeaturesPerSplit : (int?)null,
                 mean_selected_per_repeat = result.Stability.MeanSelectedPerRepeat,
                 repeats = settings.RepeatCount,
             },

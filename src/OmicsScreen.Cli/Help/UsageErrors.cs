@@ -36,9 +36,18 @@ internal static class UsageErrors
                 previousWasUnknownOption = false;
             }
         }
+        bool argumentsReported = false;
         foreach (var error in parse.Errors)
         {
             if (IsAboutUnmatched(error.Message, unknown)) continue;
+            // The parser says "Required argument missing" once per missing argument without naming
+            // it; one line naming them all, with the verb's usage, says what to add.
+            if (error.Message.StartsWith("Required argument missing", StringComparison.Ordinal))
+            {
+                if (!argumentsReported) console.Error.WriteLine($"error: {MissingArguments(parse, command)}");
+                argumentsReported = true;
+                continue;
+            }
             if (error.Message.StartsWith("Required command", StringComparison.Ordinal))
             {
                 if (unknown.Count == 0)
@@ -49,6 +58,16 @@ internal static class UsageErrors
         }
         console.Error.WriteLine($"Run `{Path(command)} --help` for the options and examples.");
         return ExitCode.Usage;
+    }
+
+    /// <summary>"MODEL and PANEL are missing: `omicsscreen apply MODEL PANEL`." (every argument without a value, in order).</summary>
+    internal static string MissingArguments(ParseResult parse, Command command)
+    {
+        var missing = command.Arguments.Where(a => !a.Hidden && parse.GetResult(a) is not { Tokens.Count: > 0 }).Select(a => a.Name).ToList();
+        string usage = Path(command) + string.Concat(command.Arguments.Where(a => !a.Hidden).Select(a => " " + a.Name));
+        if (missing.Count == 0) return $"an argument is missing: `{usage}`.";
+        string names = missing.Count == 1 ? missing[0] : string.Join(", ", missing.Take(missing.Count - 1)) + " and " + missing[^1];
+        return $"{names} {(missing.Count == 1 ? "is" : "are")} missing: `{usage}`.";
     }
 
     private static string VerbHint(string typed, Command root)

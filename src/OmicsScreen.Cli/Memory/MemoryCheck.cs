@@ -4,6 +4,7 @@ using OmicsScreen.Cli.Console;
 using OmicsScreen.Data;
 using OmicsScreen.Data.Sizing;
 using OmicsScreen.Screening.Screen;
+using OmicsScreen.Engine.Parallelism;
 
 namespace OmicsScreen.Cli.Memory;
 
@@ -30,7 +31,7 @@ internal static class MemoryCheck
     public static bool Passes(CliConsole console, ScreenRunOptions options)
     {
         if (PanelDimensionReader.TryRead(options.Panel) is not { } dimensions) return true;
-        int threads = options.Screen.ThreadCount > 0 ? options.Screen.ThreadCount : Environment.ProcessorCount;
+        int threads = WorkerThreads.Resolve(options.Screen.ThreadCount);
         var estimate = Estimate(dimensions, options.Screen, threads);
         long? available = options.MemoryLimit is null ? AvailableMemory.Bytes() : null;
         long? budget = options.MemoryLimit ?? (available is { } a ? (long)(a * AvailableShare) : null);

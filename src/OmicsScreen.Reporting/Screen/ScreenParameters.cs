@@ -13,7 +13,7 @@ public static class ScreenParameters
     [
         new("--trees", nameof(ScreenOptions.TreesPerForest), "Trees per forest", s => s.Options.TreesPerForest, s => Integer(s.Options.TreesPerForest)),
         new("--features-per-split", nameof(ScreenOptions.FeaturesPerSplit), "Features tried at each split", s => s.FeaturesPerSplit,
-            s => s.Options.FeaturesPerSplit > 0 ? Integer(s.FeaturesPerSplit) : Integer(s.FeaturesPerSplit) + " (square root of the feature count)"),
+            FeaturesPerSplitText),
         new("--min-leaf", nameof(ScreenOptions.MinLeafSize), "Smallest leaf (samples)", s => s.Options.MinLeafSize, s => Integer(s.Options.MinLeafSize)),
         new("--balance", nameof(ScreenOptions.Balance), "Class-balanced trees", s => BalanceText(s.Options.Balance),
             s => (s.ClassBalanced ? "yes" : "no") + " (" + BalanceText(s.Options.Balance) + ")"),
@@ -44,6 +44,25 @@ public static class ScreenParameters
         new("--threads", nameof(ScreenOptions.ThreadCount), "Threads", s => s.Options.ThreadCount > 0 ? s.Options.ThreadCount : null,
             s => s.Options.ThreadCount > 0 ? Integer(s.Options.ThreadCount) : "all cores"),
     ];
+
+    /// <summary>
+    /// What each forest kind tried: the clean forests, the forests carrying permuted copies and
+    /// decoys (wider, so an automatic value is larger there), the outcome-permutation forests, and
+    /// a panel's forest (the square root of its own marker count).
+    /// </summary>
+    private static string FeaturesPerSplitText(ScreenSettings s)
+    {
+        bool automatic = s.Options.FeaturesPerSplit <= 0;
+        string text = Integer(s.FeaturesPerSplit) + (automatic ? " (square root of the feature count)" : "");
+        if (s.CorrectedForestFeaturesPerSplit != s.FeaturesPerSplit)
+            text += "; " + Integer(s.CorrectedForestFeaturesPerSplit) + " in the forests carrying permuted copies and decoys ("
+                + Integer(2 * s.FeatureCount + s.DecoyCount) + " columns)";
+        if (s.OutcomePermutationForestFeaturesPerSplit > 0 && s.OutcomePermutationForestFeaturesPerSplit != s.FeaturesPerSplit)
+            text += "; " + Integer(s.OutcomePermutationForestFeaturesPerSplit) + " in the outcome-permutation forests ("
+                + Integer(2 * s.FeatureCount) + " columns)";
+        if (automatic) text += "; a panel's forest tries the square root of its marker count";
+        return text;
+    }
 
     /// <summary>The option's own spelling of a shortlist rule.</summary>
     public static string RuleText(ShortlistRule rule) => rule == ShortlistRule.QValue ? "q-value" : "decoy-bound";

@@ -2,11 +2,12 @@ using MathNet.Numerics.Distributions;
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Panels;
-using OmicsScreen.Engine.Randomness;
+using OmicsScreen.Screening.Randomness;
 using OmicsScreen.Screening.Screen;
 using OmicsScreen.Screening.Statistics;
 using OmicsScreen.Screening.Univariate;
 using OmicsScreen.Screening.Work;
+using OmicsScreen.Engine.Parallelism;
 
 namespace OmicsScreen.Screening.Cohorts;
 
@@ -30,14 +31,7 @@ internal static class CohortAnalysis
     /// </summary>
     private const double HeterogeneityMinimumAucSpread = 0.10;
 
-    /// <summary>Repeat coordinate of the forests that score a held-out cohort: clear of the held-out screen's own repeats.</summary>
-    private const int HeldOutScoringRepeat = 1 << 20;
     private const double ConfoundingCramersV = 0.5;
-
-    // Index slots of SeedSchedule for the cohort check's streams, clear of the screen's own.
-    private const int CohortScreenSlot = 2000;
-    private const int HeldOutSlot = 3000;
-    private const int CohortForestRepeat = int.MaxValue - 1;
 
     public static CohortResult Run(Panel panel, BinnedMatrix matrix, ScreenSettings settings, IReadOnlyList<int> order,
         UnivariateTable univariate, ScreenWork work, Action<int, int>? progress,
@@ -75,7 +69,7 @@ internal static class CohortAnalysis
 
         // How well the features predict the cohort, and each feature's importance for it.
         var cohortOutcome = new ClassOutcome(cohort.ColumnName, cohort.LevelNames, levels);
-        var cohortOptions = settings.ForestOptions(panel.Subject, options.Seed, CohortForestRepeat);
+        var cohortOptions = settings.ForestOptions(panel.Subject, RandomStreams.CohortForest(options.Seed));
         var cohortForest = ForestTrainer.Train(matrix, cohortOutcome, cohortOptions with
         {
             Sampling = cohortOptions.Sampling with { ClassBalanced = false },
@@ -91,7 +85,7 @@ internal static class CohortAnalysis
         // independent, so they run in parallel and are gathered by index.
         int positiveContrast = Math.Max(0, univariate.Contrasts.ToList().IndexOf(outcome.ClassNames[outcome.PositiveClass]));
         var markers = new MarkerHeterogeneity[featureCount];
-        Parallel.For(0, featureCount, new ParallelOptions { MaxDegreeOfParallelism = ThreadCount(options) },
+        Parallel.For(0, featureCount, WorkerThreads.Options(options.ThreadCount),
             i => markers[i] = Heterogeneity(panel, univariate, order[i], positiveContrast, cohortImportanceRank[order[i]]));
         FlagHeterogeneity(markers, options.QValueThreshold);
 
@@ -144,12 +138,10 @@ internal static class CohortAnalysis
     }
 
     internal static ulong CohortScreenSeed(ScreenOptions options, int cohort) =>
-        SeedSchedule.Derive(options.Seed, 0, CohortScreenSlot + cohort, SeedPurpose.Resampling);
+        RandomStreams.CohortScreenSeed(options.Seed, cohort);
 
     internal static ulong HeldOutSeed(ScreenOptions options, int cohort) =>
-        SeedSchedule.Derive(options.Seed, 0, HeldOutSlot + cohort, SeedPurpose.Resampling);
-
-    private static int ThreadCount(ScreenOptions options) => options.ThreadCount > 0 ? options.ThreadCount : Environment.ProcessorCount;
+        RandomStreams.HeldOutScreenSeed(options.Seed, cohort);
 
     private static bool HasEnoughOfEachClass(int[] rows, ClassOutcome outcome)
     {
@@ -274,7 +266,7 @@ internal static class CohortAnalysis
     {
         var outcome = panel.Outcome;
         var selected = matrix.SelectFeatures(features);
-        var forestOptions = settings.ForestOptions(panel.Subject, seed, HeldOutScoringRepeat);
+        var forestOptions = settings.ForestOptions(panel.Subject, RandomStreams.HeldOutScoring(seed));
         forestOptions = forestOptions with { Tree = forestOptions.Tree with { FeaturesPerSplit = null } };
         var forest = ForestTrainer.Train(selected, outcome, forestOptions, training);
         var prediction = forest.Predict(selected);

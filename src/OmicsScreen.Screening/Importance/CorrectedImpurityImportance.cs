@@ -1,7 +1,7 @@
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Panels;
-using OmicsScreen.Engine.Randomness;
+using OmicsScreen.Screening.Randomness;
 
 namespace OmicsScreen.Screening.Importance;
 
@@ -55,8 +55,8 @@ public static class CorrectedImpurityImportance
     /// <summary>
     /// Columns [real 0..p-1, permuted copy of each real feature, one decoy per listed source]. The
     /// permuted copies are drawn afresh for each repeat: they only correct the bias of impurity
-    /// importance. The decoys are permuted once per run, from Derive(runSeed, DecoyPlan.DecoyRepeat,
-    /// 0, PermutedCopy) (<see cref="DecoyPlan"/>), and every repeat reuses them: like a real null feature, a decoy then keeps
+    /// importance. The decoys are permuted once per run, from <see cref="RandomStreams.DecoyPermutationSeed"/>
+    /// (<see cref="DecoyPlan"/>), and every repeat reuses them: like a real null feature, a decoy then keeps
     /// its chance association with the outcome in every repeat, so its averaged importance and its
     /// selection frequency follow the law of a null feature's. Decoy i never reuses the permutation of copy i.
     /// </summary>
@@ -66,7 +66,7 @@ public static class CorrectedImpurityImportance
         for (int f = 0; f < allFeatures.Length; f++) allFeatures[f] = f;
         var withCopies = matrix.WithPermutedCopies(allFeatures, runSeed, repeat, threadCount);
         if (decoySources.IsEmpty) return withCopies;
-        ulong decoySeed = SeedSchedule.Derive(runSeed, DecoyPlan.DecoyRepeat, 0, SeedPurpose.PermutedCopy);
+        ulong decoySeed = RandomStreams.DecoyPermutationSeed(runSeed);
         return withCopies.WithPermutedCopies(decoySources, decoySeed, 0, threadCount);
     }
 }

@@ -1,5 +1,5 @@
 using OmicsScreen.Engine.Panels;
-using OmicsScreen.Engine.Randomness;
+using OmicsScreen.Screening.Randomness;
 
 namespace OmicsScreen.Screening.Importance;
 
@@ -10,17 +10,11 @@ namespace OmicsScreen.Screening.Importance;
 /// </summary>
 public sealed record DecoyPlan(int[] Sources, ulong PermutationSeed)
 {
-    /// <summary>Repeat coordinate of the decoys' streams: one per run, shared by every repeat.</summary>
-    public const int DecoyRepeat = int.MaxValue - 2;
-
-    /// <summary>Index slot of the decoy-source draw.</summary>
-    private const int SourceStream = 2;
-
     public int DecoyCount => Sources.Length;
 
     /// <summary>
     /// Every feature in turn when there are at least as many decoys as features, otherwise a uniform
-    /// random subset; the permutations come from Derive(runSeed, DecoyRepeat, 0, PermutedCopy).
+    /// random subset; the permutations come from <see cref="RandomStreams.DecoyPermutationSeed"/>.
     /// </summary>
     public static DecoyPlan For(int featureCount, int decoyCount, ulong runSeed)
     {
@@ -33,7 +27,7 @@ public sealed record DecoyPlan(int[] Sources, ulong PermutationSeed)
         {
             var all = new int[featureCount];
             for (int f = 0; f < featureCount; f++) all[f] = f;
-            var random = SeedSchedule.Generator(runSeed, DecoyRepeat, SourceStream, SeedPurpose.Resampling);
+            var random = RandomStreams.DecoySources(runSeed);
             // Partial Fisher-Yates: the first decoyCount entries are a uniform random subset.
             for (int i = 0; i < decoyCount; i++)
             {
@@ -43,7 +37,7 @@ public sealed record DecoyPlan(int[] Sources, ulong PermutationSeed)
             all.AsSpan(0, decoyCount).CopyTo(sources);
             Array.Sort(sources);
         }
-        return new DecoyPlan(sources, SeedSchedule.Derive(runSeed, DecoyRepeat, 0, SeedPurpose.PermutedCopy));
+        return new DecoyPlan(sources, RandomStreams.DecoyPermutationSeed(runSeed));
     }
 
     /// <summary>
@@ -56,7 +50,7 @@ public sealed record DecoyPlan(int[] Sources, ulong PermutationSeed)
     {
         var permutation = new int[sampleCount];
         for (int s = 0; s < sampleCount; s++) permutation[s] = s;
-        SeedSchedule.Generator(PermutationSeed, 0, decoy, SeedPurpose.PermutedCopy).Shuffle(permutation.AsSpan());
+        RandomStreams.DecoyPermutation(PermutationSeed, decoy).Shuffle(permutation.AsSpan());
         return permutation;
     }
 

@@ -1,6 +1,7 @@
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Panels;
+using OmicsScreen.Engine.Parallelism;
 
 namespace OmicsScreen.Screening.Importance;
 
@@ -128,7 +129,7 @@ public static class OutOfBagPermutationImportance
     /// <summary>Runs work(worker, tree) for every tree; trees are handed out by an atomic counter and each result is stored by tree index.</summary>
     private static void ForEachTree<TWorker>(Forest forest, int threadCount, Func<TWorker> createWorker, Action<TWorker, int> work)
     {
-        int threads = Math.Max(1, Math.Min(threadCount > 0 ? threadCount : Environment.ProcessorCount, forest.TreeCount));
+        int threads = Math.Max(1, Math.Min(WorkerThreads.Resolve(threadCount), forest.TreeCount));
         int nextTree = -1;
         Parallel.For(0, threads, new ParallelOptions { MaxDegreeOfParallelism = threads }, _ =>
         {

@@ -1,6 +1,7 @@
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Randomness;
+using OmicsScreen.Screening.Randomness;
 using OmicsScreen.Engine.Trees;
 
 namespace OmicsScreen.Screening.Importance;
@@ -59,15 +60,15 @@ internal sealed class OutOfBagTreeScorer
 
     /// <summary>The seed all of one tree's permutations derive from; a function of the forest and the tree only.</summary>
     public static ulong TreeSeed(Forest forest, int treeIndex) =>
-        SeedSchedule.Derive(forest.Options.Seed, forest.Options.Repeat, forest.FirstTree + treeIndex, SeedPurpose.Permutation);
+        RandomStreams.PermutationImportanceTree(new ForestStreams(forest.Options.Seed, forest.Options.Repeat), forest.FirstTree + treeIndex);
 
     /// <summary>The generator permuting one feature in one tree.</summary>
     public static Xoshiro256StarStar FeatureGenerator(ulong treeSeed, int feature) =>
-        SeedSchedule.Generator(treeSeed, 0, feature, SeedPurpose.Permutation);
+        RandomStreams.FeaturePermutation(treeSeed, feature);
 
     /// <summary>The generator permuting one group in one tree; repeat coordinate 1 keeps it apart from feature streams.</summary>
     public static Xoshiro256StarStar GroupGenerator(ulong treeSeed, int group) =>
-        SeedSchedule.Generator(treeSeed, 1, group, SeedPurpose.Permutation);
+        RandomStreams.GroupPermutation(treeSeed, group);
 
     public int RowCount => _rowCount;
 

@@ -1,7 +1,7 @@
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Panels;
-using OmicsScreen.Engine.Randomness;
+using OmicsScreen.Screening.Randomness;
 
 namespace OmicsScreen.Screening.Importance;
 
@@ -39,7 +39,7 @@ public static class OutcomePermutationNull
         var rowClasses = new int[rows.Length];
         for (int s = 0; s < permutations; s++)
         {
-            ulong permutationSeed = SeedSchedule.Derive(options.Seed, options.Repeat, s, SeedPurpose.OutcomePermutation);
+            ulong permutationSeed = RandomStreams.OutcomePermutationSeed(new ForestStreams(options.Seed, options.Repeat), s);
             var permuted = PermuteOutcome(outcome, rows, rowClasses, permutationSeed);
             var nullImportance = CorrectedImpurityImportance.Measure(matrix, permuted, trainingRows, [],
                 options with { Seed = permutationSeed }).Features;
@@ -58,7 +58,7 @@ public static class OutcomePermutationNull
     {
         var classes = outcome.SampleClasses.ToArray();
         for (int i = 0; i < rows.Length; i++) rowClasses[i] = classes[rows[i]];
-        var generator = SeedSchedule.Generator(permutationSeed, 0, 0, SeedPurpose.OutcomePermutation);
+        var generator = RandomStreams.OutcomeShuffle(permutationSeed);
         generator.Shuffle(rowClasses.AsSpan());
         for (int i = 0; i < rows.Length; i++) classes[rows[i]] = rowClasses[i];
         return new ClassOutcome(outcome.ColumnName, outcome.ClassNames, classes, outcome.PositiveClass);

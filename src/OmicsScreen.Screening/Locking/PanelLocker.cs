@@ -2,6 +2,7 @@ using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Engine.Trees;
+using OmicsScreen.Screening.Randomness;
 using OmicsScreen.Screening.Screen;
 
 namespace OmicsScreen.Screening.Locking;
@@ -13,8 +14,8 @@ namespace OmicsScreen.Screening.Locking;
 /// </summary>
 public static class PanelLocker
 {
-    /// <summary>A repeat index of its own, so the locked forest draws streams no screen forest uses.</summary>
-    public const int LockRepeat = int.MaxValue - 1;
+    /// <summary>Repeat coordinate of the locked forest's streams (<see cref="RandomStreams.LockedPanelForest"/>).</summary>
+    public const int LockRepeat = RandomStreams.LockRepeat;
 
     /// <summary>
     /// Keeps the first k markers of the shortlist (k = <see cref="PanelLockOptions.PanelSize"/>, or
@@ -32,7 +33,7 @@ public static class PanelLocker
         var markers = new int[size];
         for (int i = 0; i < size; i++) markers[i] = result.Shortlist[i].Forest.FeatureIndex;
         // The panel forest tries floor(sqrt(k)) features per split of its own k, as the panel-size curve does.
-        var screenOptions = result.Settings.ForestOptions(panel.Subject, options.Seed, LockRepeat);
+        var screenOptions = result.Settings.ForestOptions(panel.Subject, RandomStreams.LockedPanelForest(options.Seed));
         var forestOptions = screenOptions with
         {
             TreeCount = options.TreeCount,

@@ -1,5 +1,6 @@
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Engine.Randomness;
+using OmicsScreen.Screening.Randomness;
 
 namespace OmicsScreen.Screening.Resampling;
 
@@ -24,7 +25,7 @@ public static class HalfSamplePairs
         var second = new List<int>();
         for (int pair = 0; pair < pairCount; pair++)
         {
-            var random = SeedSchedule.Generator(runSeed, pair, ResamplingStreams.HalfSamples, SeedPurpose.Resampling);
+            var random = RandomStreams.HalfSamples(runSeed, pair);
             first.Clear();
             second.Clear();
             // Which half gets the odd unit of a stratum alternates from a random start, so the

@@ -1,5 +1,6 @@
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Engine.Randomness;
+using OmicsScreen.Screening.Randomness;
 
 namespace OmicsScreen.Screening.Resampling;
 
@@ -22,7 +23,7 @@ public static class StratifiedFolds
         var members = new List<int>[foldCount];
         for (int repeat = 0; repeat < repeatCount; repeat++)
         {
-            var random = SeedSchedule.Generator(runSeed, repeat, ResamplingStreams.OuterFolds, SeedPurpose.Resampling);
+            var random = RandomStreams.OuterFolds(runSeed, repeat);
             for (int f = 0; f < foldCount; f++) members[f] = [];
             // Deal each stratum's shuffled units round-robin, continuing where the previous
             // stratum stopped, so fold sizes differ by at most one unit.

@@ -2,7 +2,7 @@ using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Metrics;
 using OmicsScreen.Engine.Panels;
-using OmicsScreen.Engine.Randomness;
+using OmicsScreen.Screening.Randomness;
 using OmicsScreen.Screening.Resampling;
 using OmicsScreen.Screening.Statistics;
 using OmicsScreen.Screening.Work;
@@ -18,9 +18,6 @@ namespace OmicsScreen.Screening.Screen;
 /// </summary>
 internal static class PanelSizeEstimator
 {
-    /// <summary>Index slot offset of the outer folds' inner-screen seeds (kept clear of the main screen's streams).</summary>
-    private const int InnerSeedSlot = 1000;
-
     /// <summary>1, 2, 3, 5, 8, 13, 21, ... (Fibonacci steps) up to the limit, always ending at the limit.</summary>
     public static int[] SizeGrid(int limit)
     {
@@ -37,13 +34,7 @@ internal static class PanelSizeEstimator
 
     /// <summary>Seed of the inner screen of an outer fold.</summary>
     internal static ulong InnerSeed(ScreenOptions options, OuterFold fold) =>
-        SeedSchedule.Derive(options.Seed, fold.Repeat, InnerSeedSlot + fold.Fold, SeedPurpose.Resampling);
-
-    /// <summary>
-    /// Repeat coordinate of the scoring forests of a fold (one per panel size, then one for the
-    /// fold's locked panel): far above any inner-screen repeat, whose streams share the fold's seed.
-    /// </summary>
-    private const int ScoringRepeatBase = 1 << 20;
+        RandomStreams.CurveFoldScreenSeed(options.Seed, fold.Repeat, fold.Fold);
 
     /// <summary>The sizes on the curve: the Fibonacci grid up to the limit, and the shortlist's length if it is within it.</summary>
     public static int[] SizesFor(int limit, int shortlistLength)
@@ -91,8 +82,8 @@ internal static class PanelSizeEstimator
             var innerOrder = innerScreens[i].Order;
             for (int s = 0; s < sizes.Length; s++)
             {
-                (selectionAware[i, s], selectionAwareError[i, s], selectionAwareProbabilities[i, s]) = Score(matrix, panel, settings, innerOrder.AsSpan(0, sizes[s]), fold, innerSeed, ScoringRepeatBase + s, binary);
-                (optimistic[i, s], optimisticError[i, s], _) = Score(matrix, panel, settings, fullOrder.AsSpan(0, sizes[s]), fold, innerSeed, ScoringRepeatBase + s, binary);
+                (selectionAware[i, s], selectionAwareError[i, s], selectionAwareProbabilities[i, s]) = Score(matrix, panel, settings, innerOrder.AsSpan(0, sizes[s]), fold, RandomStreams.PanelScoring(innerSeed, s), binary);
+                (optimistic[i, s], optimisticError[i, s], _) = Score(matrix, panel, settings, fullOrder.AsSpan(0, sizes[s]), fold, RandomStreams.PanelScoring(innerSeed, s), binary);
             }
             foldDone?.Invoke(i + 1, folds.Count);
         }
@@ -155,7 +146,7 @@ internal static class PanelSizeEstimator
                 probabilities = selectionAwareProbabilities[i, onGrid];
             }
             else
-                (lockedScores[i], _, probabilities) = Score(matrix, panel, settings, panelFeatures, fold, InnerSeed(options, fold), ScoringRepeatBase + sizes.Length, binary);
+                (lockedScores[i], _, probabilities) = Score(matrix, panel, settings, panelFeatures, fold, RandomStreams.PanelScoring(InnerSeed(options, fold), sizes.Length), binary);
             AddOutOfFold(outcome, fold, probabilities, outOfFoldScores, outOfFoldPositive);
         }
         double lockedMean = lockedScores.Average();
@@ -199,12 +190,12 @@ internal static class PanelSizeEstimator
 
     /// <summary>Grows a forest on the fold's training rows using the given features and scores the test rows.</summary>
     private static (double Score, double Error, double[] Probabilities) Score(BinnedMatrix matrix, Panel panel, ScreenSettings settings,
-        ReadOnlySpan<int> features, OuterFold fold, ulong seed, int scoringRepeat, bool binary)
+        ReadOnlySpan<int> features, OuterFold fold, ForestStreams streams, bool binary)
     {
         var outcome = panel.Outcome;
         var selected = matrix.SelectFeatures(features);
         // The panel forest tries floor(sqrt(k)) features per split of its own k, whatever the screen used.
-        var forestOptions = settings.ForestOptions(panel.Subject, seed, scoringRepeat);
+        var forestOptions = settings.ForestOptions(panel.Subject, streams);
         forestOptions = forestOptions with { Tree = forestOptions.Tree with { FeaturesPerSplit = null } };
         var forest = ForestTrainer.Train(selected, outcome, forestOptions, fold.TrainingRows);
         var prediction = forest.Predict(selected);

@@ -1,8 +1,8 @@
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Panels;
-using OmicsScreen.Engine.Randomness;
 using OmicsScreen.Screening.Importance;
+using OmicsScreen.Screening.Randomness;
 using OmicsScreen.Screening.Resampling;
 using OmicsScreen.Screening.Statistics;
 
@@ -46,7 +46,7 @@ internal static class RepeatScreen
     {
         int featureCount = matrix.FeatureCount, decoyCount = result.DecoyCount;
         result.TrainingSampleCounts[row] = rows.Length;
-        var options = settings.ForestOptions(subject, runSeed, repeat);
+        var options = settings.ForestOptions(subject, RandomStreams.ScreenRepeat(runSeed, repeat));
 
         var forest = ForestTrainer.Train(matrix, outcome, options, rows);
         ImpurityImportance.From(forest).MeanDecrease.CopyTo(result.Row(result.Impurity, row));

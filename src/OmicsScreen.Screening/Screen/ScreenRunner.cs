@@ -4,6 +4,7 @@ using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Screening.Cohorts;
 using OmicsScreen.Screening.Importance;
+using OmicsScreen.Screening.Randomness;
 using OmicsScreen.Screening.Statistics;
 using OmicsScreen.Screening.Univariate;
 using OmicsScreen.Screening.Work;
@@ -17,9 +18,6 @@ namespace OmicsScreen.Screening.Screen;
 /// </summary>
 public static class ScreenRunner
 {
-    /// <summary>Repeat index of the reference forest's random streams; far above any half-sample repeat.</summary>
-    private const int ReferenceRepeat = int.MaxValue;
-
     /// <param name="store">
     /// Where finished work units are kept and found: units already in it are not computed again
     /// (resuming a killed run), new ones are saved as soon as they finish.
@@ -48,7 +46,7 @@ public static class ScreenRunner
         Finish(ScreenStage.UnivariateStatistics);
 
         progress?.Report(new ScreenProgress(ScreenStage.ReferenceForest, 0, 1));
-        var referenceForest = ForestTrainer.Train(matrix, panel.Outcome, settings.ForestOptions(panel.Subject, options.Seed, ReferenceRepeat));
+        var referenceForest = ForestTrainer.Train(matrix, panel.Outcome, settings.ForestOptions(panel.Subject, RandomStreams.ReferenceForest(options.Seed)));
         var votes = new OutOfBagVotes(referenceForest, panel.Outcome);
         var reference = new ReferenceForestSummary(votes.Error, votes.PerClassError.ToArray(), votes.Auc, votes.ErrorCurve.ToArray());
         Finish(ScreenStage.ReferenceForest);
@@ -63,9 +61,9 @@ public static class ScreenRunner
         {
             progress?.Report(new ScreenProgress(ScreenStage.OutcomePermutations, 0, options.OutcomePermutations));
             var observed = CorrectedImpurityImportance.Measure(matrix, panel.Outcome, null, [],
-                settings.ForestOptions(panel.Subject, options.Seed, ReferenceRepeat));
+                settings.ForestOptions(panel.Subject, RandomStreams.ReferenceForest(options.Seed)));
             outcomePermutationP = OutcomePermutationNull.PValues(matrix, panel.Outcome, null, observed.Features,
-                options.OutcomePermutations, settings.ForestOptions(panel.Subject, options.Seed, ReferenceRepeat),
+                options.OutcomePermutations, settings.ForestOptions(panel.Subject, RandomStreams.ReferenceForest(options.Seed)),
                 new Progress<int>(done => progress?.Report(new ScreenProgress(ScreenStage.OutcomePermutations, done, options.OutcomePermutations))));
             Finish(ScreenStage.OutcomePermutations);
         }

@@ -2,6 +2,7 @@ using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Engine.Sampling;
 using OmicsScreen.Engine.Trees;
+using OmicsScreen.Screening.Randomness;
 
 namespace OmicsScreen.Screening.Screen;
 
@@ -13,7 +14,20 @@ public sealed record ScreenSettings
 {
     public required ScreenOptions Options { get; init; }
     public required int FeatureCount { get; init; }
+
+    /// <summary>Features tried at each split of the forests on the panel's own features (reference, each repeat's clean forest, the cohort forest).</summary>
     public required int FeaturesPerSplit { get; init; }
+
+    /// <summary>
+    /// Features tried at each split of the forests that carry a permuted copy of every feature and
+    /// the decoys (corrected importance): the same rule on their 2p + decoys columns, so an
+    /// automatic value is floor(sqrt(2p + decoys)), not the clean forests' floor(sqrt(p)).
+    /// </summary>
+    public required int CorrectedForestFeaturesPerSplit { get; init; }
+
+    /// <summary>Features tried at each split of the outcome-permutation null's forests (2p columns: copies, no decoys); 0 when none are grown.</summary>
+    public required int OutcomePermutationForestFeaturesPerSplit { get; init; }
+
     public required bool ClassBalanced { get; init; }
     public required int DecoyCount { get; init; }
 
@@ -42,13 +56,16 @@ public sealed record ScreenSettings
         // splitting a subject's replicates would flatter every estimate.
         if (panel.Subject is not null) balanced = false;
         int decoys = DecoyCountFor(options, featureCount);
-        int tried = options.FeaturesPerSplit > 0 ? Math.Min(options.FeaturesPerSplit, featureCount)
-            : Math.Max(1, (int)Math.Floor(Math.Sqrt(featureCount)));
+        // The engine's own rule (TreeOptions.ResolveFeaturesPerSplit) on each forest kind's width,
+        // so what is recorded is what the trees try.
+        var tree = new TreeOptions { FeaturesPerSplit = options.FeaturesPerSplit > 0 ? options.FeaturesPerSplit : null };
         return new ScreenSettings
         {
             Options = options,
             FeatureCount = featureCount,
-            FeaturesPerSplit = tried,
+            FeaturesPerSplit = tree.ResolveFeaturesPerSplit(featureCount),
+            CorrectedForestFeaturesPerSplit = tree.ResolveFeaturesPerSplit(2 * featureCount + decoys),
+            OutcomePermutationForestFeaturesPerSplit = options.OutcomePermutations > 0 ? tree.ResolveFeaturesPerSplit(2 * featureCount) : 0,
             ClassBalanced = balanced,
             DecoyCount = decoys,
             InteractionScan = InteractionScanRuns(options, featureCount, decoys),
@@ -76,12 +93,12 @@ public sealed record ScreenSettings
             : Math.Clamp(featureCount, options.AutomaticDecoyFloor, options.AutomaticDecoyCeiling);
     }
 
-    /// <summary>The engine options of every forest of this screen; seed and repeat are set per forest.</summary>
-    public ForestOptions ForestOptions(SampleGrouping? subject, ulong seed, int repeat, int? featuresPerSplit = null) => new()
+    /// <summary>The engine options of every forest of this screen; its random streams (from <see cref="RandomStreams"/>) are set per forest.</summary>
+    public ForestOptions ForestOptions(SampleGrouping? subject, ForestStreams streams, int? featuresPerSplit = null) => new()
     {
         TreeCount = Options.TreesPerForest,
-        Seed = seed,
-        Repeat = repeat,
+        Seed = streams.Seed,
+        Repeat = streams.Repeat,
         ThreadCount = Options.ThreadCount,
         Tree = new TreeOptions
         {

@@ -1,5 +1,6 @@
 using System.Numerics;
 using OmicsScreen.Engine.Panels;
+using OmicsScreen.Engine.Parallelism;
 
 namespace OmicsScreen.Screening.Univariate;
 
@@ -46,7 +47,7 @@ public static class PairwiseInteractionScan
         // every sample whose side is known (measured, or below detection: lower than any measured).
         var high = new ulong[columnCount * words];
         var valid = new ulong[columnCount * words];
-        var parallel = new ParallelOptions { MaxDegreeOfParallelism = threadCount > 0 ? threadCount : Environment.ProcessorCount };
+        var parallel = WorkerThreads.Options(threadCount);
         Parallel.For(0, columnCount, parallel, () => new double[rows.Length], (c, _, scratch) =>
         {
             var matrix = c < partnerCount ? partners : others!;

@@ -1,5 +1,6 @@
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Screening.Statistics;
+using OmicsScreen.Engine.Parallelism;
 
 namespace OmicsScreen.Screening.Univariate;
 
@@ -71,7 +72,7 @@ public static class UnivariateScreen
         ArgumentNullException.ThrowIfNull(samples);
         int[] contrastClasses = outcome.ClassCount == 2 ? [outcome.PositiveClass] : Enumerable.Range(0, outcome.ClassCount).ToArray();
         var pValues = new double[matrix.FeatureCount];
-        var parallel = new ParallelOptions { MaxDegreeOfParallelism = threadCount > 0 ? threadCount : Environment.ProcessorCount };
+        var parallel = WorkerThreads.Options(threadCount);
         Parallel.For(0, matrix.FeatureCount, parallel,
             () => new FeatureRankWorkspace(samples.Length, outcome.ClassCount),
             (feature, _, workspace) =>

@@ -1,9 +1,10 @@
+using OmicsScreen.TestSupport.ExternalTools;
 namespace OmicsScreen.Cli.Tests.Workflow;
 
 /// <summary>
 /// The Slurm examples run through a real single-node Slurm that workflows/slurm/ci_single_node.sh
-/// starts on this machine. Only on CI (CI=true), which runs as root; elsewhere these return early,
-/// because they install and start system daemons.
+/// starts on this machine. Only on CI (CI=true), which runs as root; elsewhere they are reported
+/// skipped, because they install and start system daemons.
 /// </summary>
 /// <remarks>Both tests sit in one class so xunit never runs them at once (they use the same ports).</remarks>
 public sealed class SlurmWorkflowTests : IDisposable
@@ -14,12 +15,9 @@ public sealed class SlurmWorkflowTests : IDisposable
 
     public void Dispose() => _folder.Dispose();
 
-    private static bool OnCi => string.Equals(System.Environment.GetEnvironmentVariable("CI"), "true", StringComparison.OrdinalIgnoreCase);
-
-    [Fact]
+    [RequiresToolFact(ExternalTool.Slurm)]
     public void The_slurm_job_array_and_its_merge_job_reproduce_the_tables_of_a_single_screen()
     {
-        if (!OnCi) return;
         var deadline = DateTime.UtcNow + TimeBound;
         var baseline = SingleScreenBaseline.Create(_folder.Path, deadline);
 
@@ -33,11 +31,10 @@ public sealed class SlurmWorkflowTests : IDisposable
         MergedResults.AssertSameAsSingleScreen(baseline.Results, merged, 4);
     }
 
-    [Fact]
+    [RequiresToolFact(ExternalTool.Slurm, ExternalTool.Snakemake)]
     public void Snakemake_with_the_slurm_profile_runs_the_unchanged_workflow_through_slurm()
     {
-        if (!OnCi) return;
-        Assert.True(SnakemakeTool.AvailableOrFailOnCi());
+        ExternalTools.Require(ExternalTool.Snakemake);
         var deadline = DateTime.UtcNow + TimeBound;
         var baseline = SingleScreenBaseline.Create(_folder.Path, deadline);
 
@@ -46,7 +43,7 @@ public sealed class SlurmWorkflowTests : IDisposable
         string[] snakemake = workflow.Arguments(workflow.WriteConfig(baseline.Panel, merged),
             "--profile", RepositoryFolder.Workflows("snakemake", "profiles", "slurm"));
         var run = ChildProcess.Run("bash",
-            [RepositoryFolder.Workflows("slurm", "ci_single_node.sh"), "--run", SnakemakeTool.Executable!, .. snakemake],
+            [RepositoryFolder.Workflows("slurm", "ci_single_node.sh"), "--run", ExternalTools.SnakemakeExecutable!, .. snakemake],
             _folder.Path, deadline, workflow.Environment);
         Assert.True(run.Succeeded, run.Output + MergedResults.LogsIn(merged + ".logs"));
 

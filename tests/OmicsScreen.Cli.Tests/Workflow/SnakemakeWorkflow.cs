@@ -1,4 +1,5 @@
 using System.Text.Json;
+using OmicsScreen.TestSupport.ExternalTools;
 
 namespace OmicsScreen.Cli.Tests.Workflow;
 
@@ -42,5 +43,5 @@ internal sealed class SnakemakeWorkflow(string workFolder)
         ["--snakefile", RepositoryFolder.Workflows("snakemake", "Snakefile"), "--configfile", configFile, "--directory", workFolder, .. options];
 
     public ChildProcess.Outcome Run(string configFile, DateTime deadline, params string[] options) =>
-        ChildProcess.Run(SnakemakeTool.Executable!, Arguments(configFile, options), workFolder, deadline, Environment);
+        ChildProcess.Run(ExternalTools.SnakemakeExecutable!, Arguments(configFile, options), workFolder, deadline, Environment);
 }

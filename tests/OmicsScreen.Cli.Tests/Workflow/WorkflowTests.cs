@@ -1,4 +1,5 @@
 using System.Globalization;
+using OmicsScreen.TestSupport.ExternalTools;
 
 namespace OmicsScreen.Cli.Tests.Workflow;
 
@@ -14,10 +15,10 @@ public sealed class WorkflowTests : IDisposable
 
     public void Dispose() => _folder.Dispose();
 
-    [Fact]
+    [RequiresToolFact(ExternalTool.Snakemake)]
     public void Four_parts_run_by_snakemake_merge_into_the_tables_of_a_single_screen()
     {
-        if (!SnakemakeTool.AvailableOrFailOnCi()) return;
+        ExternalTools.Require(ExternalTool.Snakemake);
         var deadline = DateTime.UtcNow + TimeBound;
         var baseline = SingleScreenBaseline.Create(_folder.Path, deadline);
 
@@ -36,10 +37,10 @@ public sealed class WorkflowTests : IDisposable
         Assert.True(File.Exists(Path.Combine(merged + ".logs", "merge.log")), "log of the merge");
     }
 
-    [Fact]
+    [RequiresToolFact(ExternalTool.Snakemake)]
     public void The_slurm_profile_plans_one_job_per_part_and_one_merge_without_changing_the_workflow()
     {
-        if (!SnakemakeTool.AvailableOrFailOnCi()) return;
+        ExternalTools.Require(ExternalTool.Snakemake);
         var deadline = DateTime.UtcNow + TimeSpan.FromMinutes(2);
         var workflow = new SnakemakeWorkflow(_folder.Path);
         string config = workflow.WriteConfig(WorkflowPanel.Write(_folder.Path), Path.Combine(_folder.Path, "merged"));
@@ -51,10 +52,10 @@ public sealed class WorkflowTests : IDisposable
         Assert.Matches(@"merge_parts\s+1\s", plan.Output);
     }
 
-    [Fact]
+    [RequiresToolFact(ExternalTool.Snakemake)]
     public void The_workflow_refuses_screen_arguments_that_each_job_must_set_itself()
     {
-        if (!SnakemakeTool.AvailableOrFailOnCi()) return;
+        ExternalTools.Require(ExternalTool.Snakemake);
         var deadline = DateTime.UtcNow + TimeSpan.FromMinutes(2);
         var workflow = new SnakemakeWorkflow(_folder.Path);
         string config = workflow.WriteConfig(WorkflowPanel.Write(_folder.Path), Path.Combine(_folder.Path, "merged"),

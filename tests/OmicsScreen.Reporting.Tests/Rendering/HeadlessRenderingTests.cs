@@ -1,6 +1,7 @@
 using System.Text.RegularExpressions;
 using OmicsScreen.Reporting.Html;
 using OmicsScreen.Reporting.Tests.Support;
+using OmicsScreen.TestSupport.ExternalTools;
 
 namespace OmicsScreen.Reporting.Tests.Rendering;
 
@@ -25,10 +26,10 @@ public sealed class HeadlessRenderingTests : IDisposable
         return new Uri(path).AbsoluteUri;
     }
 
-    [Fact]
+    [RequiresToolFact(ExternalTool.Chromium)]
     public void Browser_dom_shows_every_axis_label_and_table_row_and_runs_no_script()
     {
-        if (!HeadlessChromium.AvailableOrFailOnCi()) return;
+        ExternalTools.Require(ExternalTool.Chromium);
         string dom = HeadlessChromium.Run(Path.Combine(_directory, "profile-dom"), "--dump-dom", WriteReport());
 
         foreach (var label in SampleReport.AxisLabels) Assert.Contains(">" + label + "<", dom);
@@ -41,10 +42,10 @@ public sealed class HeadlessRenderingTests : IDisposable
         Assert.Contains("&lt;script&gt;alert(1)&lt;/script&gt;", dom);
     }
 
-    [Fact]
+    [RequiresToolFact(ExternalTool.Chromium)]
     public void Browser_screenshot_of_the_report_is_not_blank()
     {
-        if (!HeadlessChromium.AvailableOrFailOnCi()) return;
+        ExternalTools.Require(ExternalTool.Chromium);
         string screenshot = Path.Combine(_directory, "report.png");
         HeadlessChromium.Run(Path.Combine(_directory, "profile-shot"), "--screenshot=" + screenshot, "--window-size=1000,1400", WriteReport());
 

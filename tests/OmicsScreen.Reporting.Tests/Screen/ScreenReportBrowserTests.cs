@@ -2,6 +2,7 @@ using System.Text.RegularExpressions;
 using OmicsScreen.Reporting.Html;
 using OmicsScreen.Reporting.Screen;
 using OmicsScreen.Reporting.Tests.Support;
+using OmicsScreen.TestSupport.ExternalTools;
 
 namespace OmicsScreen.Reporting.Tests.Screen;
 
@@ -38,10 +39,10 @@ public sealed class ScreenReportBrowserTests : IDisposable
         return (dom, lines);
     }
 
-    [Fact]
+    [RequiresToolFact(ExternalTool.Chromium)]
     public void Console_check_catches_a_blocked_network_request()
     {
-        if (!HeadlessChromium.AvailableOrFailOnCi()) return;
+        ExternalTools.Require(ExternalTool.Chromium);
         // Control for the test below: a page under the report's policy that asks for a remote image must leave a console line.
         string page = "<!DOCTYPE html><html><head><meta http-equiv=\"Content-Security-Policy\" content=\"" + HtmlBuilder.ContentSecurityPolicy.Replace("'", "&#39;")
             + "\"/></head><body><img src=\"http://example.invalid/x.png\"/></body></html>";
@@ -51,10 +52,10 @@ public sealed class ScreenReportBrowserTests : IDisposable
         Assert.NotEmpty(console);
     }
 
-    [Fact]
+    [RequiresToolFact(ExternalTool.Chromium)]
     public void Browser_shows_the_report_without_console_errors_or_network_requests()
     {
-        if (!HeadlessChromium.AvailableOrFailOnCi()) return;
+        ExternalTools.Require(ExternalTool.Chromium);
         var result = ScreenReportSample.Result;
         var (dom, console) = Open(WritePage("report.html", ScreenReport.Render(ScreenReportSample.Input())), "profile-dom");
 
@@ -74,10 +75,10 @@ public sealed class ScreenReportBrowserTests : IDisposable
         Assert.Equal(result.Shortlist.Count + 1, Regex.Matches(table.Value, "<tr>").Count); // + header row
     }
 
-    [Fact]
+    [RequiresToolFact(ExternalTool.Chromium)]
     public void Browser_screenshot_of_the_report_is_not_blank()
     {
-        if (!HeadlessChromium.AvailableOrFailOnCi()) return;
+        ExternalTools.Require(ExternalTool.Chromium);
         string screenshot = Path.Combine(_directory, "report.png");
         string url = WritePage("report.html", ScreenReport.Render(ScreenReportSample.Input()));
         HeadlessChromium.Run(Path.Combine(_directory, "profile-shot"), "--screenshot=" + screenshot, "--window-size=1200,1600", url);

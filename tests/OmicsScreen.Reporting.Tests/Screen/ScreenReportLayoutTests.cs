@@ -3,6 +3,7 @@ using System.Text.RegularExpressions;
 using OmicsScreen.Reporting.Html;
 using OmicsScreen.Reporting.Screen;
 using OmicsScreen.Reporting.Tests.Support;
+using OmicsScreen.TestSupport.ExternalTools;
 
 namespace OmicsScreen.Reporting.Tests.Screen;
 
@@ -56,10 +57,10 @@ public sealed partial class ScreenReportLayoutTests : IDisposable
         return wide.Groups[1].Value;
     }
 
-    [Fact]
+    [RequiresToolFact(ExternalTool.Chromium)]
     public void Width_check_catches_a_table_wider_than_the_page()
     {
-        if (!HeadlessChromium.AvailableOrFailOnCi()) return;
+        ExternalTools.Require(ExternalTool.Chromium);
         // Control for the test below: sixteen unbreakable numeric columns cannot fit.
         var columns = Enumerable.Range(1, 16).Select(i => new HtmlTableColumn("Column " + i, ColumnAlignment.Numeric)).ToArray();
         var table = new HtmlTable("Too wide", columns);
@@ -69,10 +70,10 @@ public sealed partial class ScreenReportLayoutTests : IDisposable
         Assert.StartsWith("Too wide", WideTables(html, "control"));
     }
 
-    [Fact]
+    [RequiresToolFact(ExternalTool.Chromium)]
     public void No_table_is_wider_than_a_1280_pixel_window()
     {
-        if (!HeadlessChromium.AvailableOrFailOnCi()) return;
+        ExternalTools.Require(ExternalTool.Chromium);
         // Real paths and digests are long unbroken strings: the file tables must wrap them.
         var input = ScreenReportSample.Input() with
         {
@@ -83,10 +84,10 @@ public sealed partial class ScreenReportLayoutTests : IDisposable
         Assert.True(wide.Length == 0, "Tables wider than the page: " + wide);
     }
 
-    [Fact]
+    [RequiresToolFact(ExternalTool.Chromium, ExternalTool.PdfToText)]
     public void Printed_on_A4_every_shortlist_header_is_on_the_page_of_its_table()
     {
-        if (!HeadlessChromium.AvailableOrFailOnCi() || !PdfTextAvailableOrFailOnCi()) return;
+        ExternalTools.Require(ExternalTool.Chromium, ExternalTool.PdfToText);
         string path = Path.Combine(_directory, "report.html");
         File.WriteAllText(path, ScreenReport.Render(ScreenReportSample.Input()));
         string pdf = Path.Combine(_directory, "report.pdf");
@@ -120,13 +121,5 @@ public sealed partial class ScreenReportLayoutTests : IDisposable
         process.WaitForExit();
         Assert.Equal(0, process.ExitCode);
         return text.Split('\f').Select(page => Regex.Replace(page, "\\s+", " ").Trim()).ToList();
-    }
-
-    private static bool PdfTextAvailableOrFailOnCi()
-    {
-        bool installed = File.Exists("/usr/bin/pdftotext");
-        bool onCi = string.Equals(Environment.GetEnvironmentVariable("CI"), "true", StringComparison.OrdinalIgnoreCase);
-        Assert.False(onCi && !installed, "/usr/bin/pdftotext is missing; CI installs poppler-utils with .ci/install-packages.");
-        return installed;
     }
 }

@@ -40,6 +40,11 @@ public sealed partial class ScreenReportVocabularyTests
             Assert.Contains(parameter.Label + " (" + parameter.Option + ")", Text);
         }
         Assert.DoesNotMatch(@"\(--threads\)\s+0\b", Text);
+        // Issue 16: the report names what the wider forests tried, not only the clean forests' value.
+        var settings = ScreenReportSample.Result.Settings;
+        string featuresPerSplit = ScreenParameters.All.Single(p => p.Option == "--features-per-split").Text(settings);
+        Assert.Contains(settings.CorrectedForestFeaturesPerSplit + " in the forests carrying permuted copies and decoys", featuresPerSplit);
+        Assert.NotEqual(settings.FeaturesPerSplit, settings.CorrectedForestFeaturesPerSplit);
         Assert.DoesNotMatch(@"\(--per-repeat-cap\)\s+0\b", Text);
     }
 }

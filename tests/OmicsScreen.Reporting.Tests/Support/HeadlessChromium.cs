@@ -13,20 +13,6 @@ internal static class HeadlessChromium
 
     private static readonly TimeSpan Timeout = TimeSpan.FromSeconds(40);
 
-    public static bool IsInstalled => File.Exists(Executable);
-
-    /// <summary>
-    /// True when Chromium can be used. On CI (CI=true), which installs it with .ci/install-packages,
-    /// a missing browser fails the calling test; elsewhere the test may return early.
-    /// </summary>
-    public static bool AvailableOrFailOnCi()
-    {
-        if (IsInstalled) return true;
-        bool onCi = string.Equals(Environment.GetEnvironmentVariable("CI"), "true", StringComparison.OrdinalIgnoreCase);
-        Assert.False(onCi, $"{Executable} is missing; CI installs it with .ci/install-packages.");
-        return false;
-    }
-
     /// <summary>Runs Chromium with the isolation flags plus <paramref name="arguments"/>; returns standard output.</summary>
     public static string Run(string profileDirectory, params string[] arguments)
     {

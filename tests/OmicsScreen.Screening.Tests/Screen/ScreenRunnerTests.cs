@@ -82,6 +82,16 @@ public class ScreenRunnerTests
         var settings = ScreenSettings.Resolve(new ScreenOptions(), panel);
         Assert.Equal(2000, settings.DecoyCount);
         Assert.Equal(44, settings.FeaturesPerSplit);
+        // Each forest kind resolves on its own width (Breiman's floor(sqrt(columns)), common
+        // practice): the corrected forest has 2 x 2,000 features + 2,000 decoys = 6,000 columns,
+        // floor(sqrt(6000)) = 77; no outcome-permutation forests are grown by default.
+        Assert.Equal(77, settings.CorrectedForestFeaturesPerSplit);
+        Assert.Equal(0, settings.OutcomePermutationForestFeaturesPerSplit);
+        // The outcome-permutation forests carry the copies only: floor(sqrt(4000)) = 63.
+        Assert.Equal(63, ScreenSettings.Resolve(new ScreenOptions { OutcomePermutations = 10 }, panel).OutcomePermutationForestFeaturesPerSplit);
+        // A value given by the user is tried in every forest kind.
+        var given = ScreenSettings.Resolve(new ScreenOptions { FeaturesPerSplit = 30, OutcomePermutations = 10 }, panel);
+        Assert.Equal((30, 30, 30), (given.FeaturesPerSplit, given.CorrectedForestFeaturesPerSplit, given.OutcomePermutationForestFeaturesPerSplit));
         Assert.True(settings.ClassBalanced);
         // One decoy per feature within the automatic floor and ceiling.
         var capped = ScreenSettings.Resolve(new ScreenOptions { AutomaticDecoyCeiling = 1000 }, panel);
