@@ -14,9 +14,10 @@ public static class BenchmarkRegistry
         AddLoadCases(cases);
         foreach (var point in ScalingPlan.Points) cases.Add(("scaling", point));
         cases.Add(("scaling", ScalingPlan.ScreenCheck));
-        cases.Add(("forest", new ForestTrainingCase("forest-200x20000", 200, 20_000)));
-        cases.Add(("forest", new ForestTrainingCase("forest-1000x2000", 1_000, 2_000)));
-        cases.Add(("forest", new ForestTrainingCase("forest-4000x500", 4_000, 500)));
+        cases.Add(("forest", new ForestTrainingCase("forest-200x20000", 200, 20_000, 0.1)));
+        cases.Add(("forest", new ForestTrainingCase("forest-1000x2000", 1_000, 2_000, 0.2)));
+        cases.Add(("forest", new ForestTrainingCase("forest-4000x500", 4_000, 500, 0.5)));
+        cases.Add(("grow-process", new GrowProcessCase("grow-process-1000x2000", 1_000, 2_000)));
         cases.Add(("interaction-scan", new InteractionScanCase(150, 1_000, 1_000)));
         cases.Add(("interaction-scan", new InteractionScanCase(200, 10_000, 5_000)));
         cases.Add(("interaction-scan", new InteractionScanCase(1_000, 5_000, 5_000)));

@@ -49,7 +49,7 @@ public sealed class BinMapper
                 for (int feature = c * chunk; feature < end; feature++)
                 {
                     codes[feature] = new byte[matrix.SampleCount];
-                    bins[feature] = BinFeature(matrix.Column(feature), matrix.States(feature), codes[feature], scratch.Values, scratch.Samples);
+                    bins[feature] = BinFeature(matrix.Column(feature), matrix.States(feature), codes[feature], scratch.Values, scratch.Samples, scratch.Sorter);
                 }
                 return scratch;
             },
@@ -59,18 +59,20 @@ public sealed class BinMapper
         return new BinnedMatrix(matrix.FeatureNames, matrix.SampleCount, codes, bins, sources, new bool[featureCount]);
     }
 
-    /// <summary>One thread's sort buffers: measured values and, parallel to them, their samples.</summary>
+    /// <summary>One thread's sort buffers: measured values and, parallel to them, their samples, and the sort's own.</summary>
     private sealed class BinScratch(int sampleCount)
     {
         public readonly float[] Values = new float[sampleCount];
         public readonly int[] Samples = new int[sampleCount];
+        public readonly FloatRadixSort Sorter = new(sampleCount);
     }
 
     /// <summary>
     /// Finds one feature's bins and writes its codes; the scratch spans hold at least one entry per sample.
     /// </summary>
     /// <remarks>
-    /// The measured values are sorted together with their sample numbers, so once the bounds are
+    /// The measured values are sorted together with their sample numbers (a radix sort, see
+    /// <see cref="FloatRadixSort"/>), so once the bounds are
     /// known each sample's code is read off by one walk up the sorted values (the bin advances
     /// while the value exceeds its upper bound), instead of a binary search per cell, whose
     /// unpredictable branches cost most of the binning time. The walk gives exactly the code
@@ -78,7 +80,7 @@ public sealed class BinMapper
     /// </remarks>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal FeatureBins BinFeature(ReadOnlySpan<float> values, ReadOnlySpan<CellState> states, Span<byte> codes,
-        Span<float> sortScratch, Span<int> sampleScratch)
+        Span<float> sortScratch, Span<int> sampleScratch, FloatRadixSort sorter)
     {
         int measuredCount = 0;
         for (int s = 0; s < values.Length; s++)
@@ -92,7 +94,7 @@ public sealed class BinMapper
         }
         var sorted = sortScratch[..measuredCount];
         var sortedSamples = sampleScratch[..measuredCount];
-        sorted.Sort(sortedSamples);
+        sorter.Sort(sorted, sortedSamples);
 
         int distinctCount = 0;
         for (int i = 0; i < sorted.Length; i++)
