@@ -164,8 +164,18 @@ internal static class HostileInputCorpus
         // Sample sheets.
         yield return new("a UTF-16 sample sheet with BOM loads", "m.csv", Text(Valid), null, ExitCode.Success, ["samples"],
             SampleSheetBytes: [.. Encoding.Unicode.GetPreamble(), .. Encoding.Unicode.GetBytes(Sheet)]);
-        yield return new("a gzip sample sheet", "m.csv", Text(Valid), null, ExitCode.InputError, ["s.csv", "gzip", "decompress"],
-            SampleSheetBytes: Gzip(Sheet));
+        // Sheets are read like the matrix: gzip told by content, comment lines above the header skipped and counted.
+        yield return new("a gzip sample sheet with comment lines loads and is stated", "m.csv", Text(Valid), null, ExitCode.Success,
+            ["sample sheet", "gzip-compressed", "2 comment lines above the header, skipped"],
+            SampleSheetBytes: Gzip("# exported by an invented LIMS\n! study \"invented\"\n" + Sheet));
+        yield return new("a gzip feature sheet with a comment line loads and is stated", "m.csv", Text(Valid), Sheet, ExitCode.Success,
+            ["feature sheet", "gzip-compressed; 1 comment line above the header, skipped", "display names in 'display_name'"],
+            FeatureSheetBytes: Gzip("# panel v2\nfeature,display_name\nf1,Marker one\nf2,Marker two\n"));
+        yield return new("a comment line inside a feature sheet's data", "m.csv", Text(Valid), Sheet, ExitCode.InputError,
+            ["f.csv", "line 3", "comment line inside the data", "above the header"],
+            FeatureSheet: "feature,display_name\nf1,Marker one\n# f2 to follow\nf2,Marker two\n");
+        yield return new("a truncated gzip sample sheet", "m.csv", Text(Valid), null, ExitCode.InputError, ["s.csv", "truncated", "gzip -t"],
+            SampleSheetBytes: Gzip(Sheet)[..^5]);
         yield return new("a Latin-1 accent in a sheet id", "m.csv", Text(Valid), null, ExitCode.InputError, ["s.csv", "line 3", "not valid UTF-8"],
             SampleSheetBytes: Latin1.GetBytes(Sheet.Replace("s2,", "s\u00e92,")));
         yield return new("an empty outcome value", "m.csv", Text(Valid), Sheet.Replace("s1,case", "s1,"),
