@@ -148,6 +148,12 @@ internal static class HostileInputCorpus
             ["long table", "12 rows", "sample 'sample', feature 'feature', value 'value'"], ["--long"]);
         yield return new("a long table with a repeated sample and feature", "long.csv", Text(LongValid + "s3,f2,6.5\n"), Sheet,
             ExitCode.InputError, ["long.csv", "line 14", "sample 's3' and feature 'f2' occur again (first on line", "one row per sample and feature"], ["--long"]);
+        yield return new("a long table with a feature the feature sheet lacks", "long.csv", Text(LongValid), Sheet,
+            ExitCode.InputError, ["f.csv", "features do not match", "1 in long.csv but not in f.csv ('f2')", "--drop-unmatched"], ["--long"],
+            FeatureSheet: "feature,display_name\nf1,Marker one\n");
+        yield return new("a feature twice in a features-in-rows file with describing columns", "m.tsv",
+            Text("gene_id\tsymbol\ts1\ts2\ts3\ts4\ts5\ts6\nf1\tGENE0\t1\t2\t3\t4\t5\t6\nf1\tGENE1\t3\t4\t5\t6\t7\t9\n"), Sheet,
+            ExitCode.InputError, ["m.tsv", "'f1'", "more than once"], ["--features-in-rows"]);
         yield return new("a long table without a value column", "long.csv", Text(LongValid.Replace("value", "npx")), Sheet,
             ExitCode.InputError, ["long.csv", "no column 'value'", "--value-column"], ["--long"]);
         yield return new("a long table flag that is neither set nor clear", "long.csv", Text(WithQualityColumn(LongValid).Replace("s4,f1,7,ok", "s4,f1,7,maybe")), Sheet,
