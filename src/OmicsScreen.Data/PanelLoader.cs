@@ -59,7 +59,7 @@ public static class PanelLoader
             var (kept, joined, found) = FeatureSheetJoin.Join(raw, descriptions, featureSheet, options, findings);
             if (kept.Length != raw.Matrix.FeatureCount) raw = raw.WithFeatures(kept);
             descriptions = joined;
-            featureSheetFound = found;
+            featureSheetFound = found with { Compression = featureSheet.Gzip ? "gzip" : null, CommentLineCount = featureSheet.CommentLineCount };
         }
         else if (options.DisplayNameColumn is { } displayName && descriptions.DisplayNames is null)
             throw PanelInputException.At(options.MatrixPath, null, null,
@@ -67,7 +67,13 @@ public static class PanelLoader
                 "Give the display names in a feature sheet (--feature-sheet) or name a describing column of the matrix file.");
         var (panel, dropped) = PanelAssembler.Assemble(raw, sheet, options, findings);
         var inspection = PanelInspector.Inspect(panel, raw.Source, options.SampleSheetPath, dropped, options, findings)
-            with { FeatureColumns = featureColumns, FeatureSheet = featureSheetFound };
+            with
+            {
+                FeatureColumns = featureColumns,
+                FeatureSheet = featureSheetFound,
+                SampleSheetCompression = sheet is { Gzip: true } ? "gzip" : null,
+                SampleSheetCommentLineCount = sheet?.CommentLineCount ?? 0,
+            };
         var inputs = new List<InputFileRecord> { matrixRecord.GetAwaiter().GetResult() };
         if (options.SampleSheetPath is { } path) inputs.Add(Record(path));
         if (options.FeatureSheetPath is { } featureSheetPath) inputs.Add(Record(featureSheetPath));

@@ -9,6 +9,9 @@ public sealed record ApplyHeadline
     public required string Report { get; init; }
     public required int Samples { get; init; }
     public required IReadOnlyList<string> Markers { get; init; }
+
+    /// <summary>The markers' lab-facing names by id, as the locked panel recorded them; empty when the discovery inputs named none.</summary>
+    public required IReadOnlyDictionary<string, string> MarkerDisplayNames { get; init; }
     public required IReadOnlyDictionary<string, int> Called { get; init; }
     public required string PositiveClass { get; init; }
     public required double? Threshold { get; init; }
@@ -20,7 +23,7 @@ public sealed record ApplyHeadline
     public required IReadOnlyList<string> Warnings { get; init; }
 
     public static ApplyHeadline Of(LockedPanel model, LockedPanelScores scores, LockedPanelPerformance? performance, string folder,
-        IReadOnlyList<string> discoveryOverlap)
+        IReadOnlyList<string> discoveryOverlap, IReadOnlyDictionary<string, string> displayNames)
     {
         var called = new SortedDictionary<string, int>(StringComparer.Ordinal);
         foreach (var name in scores.ClassNames) called[name] = 0;
@@ -31,6 +34,7 @@ public sealed record ApplyHeadline
             Report = Path.Combine(folder, ApplyRun.ReportFileName),
             Samples = scores.SampleCount,
             Markers = model.MarkerNames,
+            MarkerDisplayNames = displayNames,
             Called = called,
             PositiveClass = model.ClassNames[model.PositiveClass],
             Threshold = model.Threshold,

@@ -81,7 +81,7 @@ internal static class ApplyRun
         if (options.Json)
         {
             foreach (var warning in scores.Warnings) console.Error.WriteLine($"warning: {TextTable.Printable(warning.Message)}");
-            ManifestJson.Write(console.Out, ApplyHeadline.Of(model, scores, performance, folder.Path, overlap));
+            ManifestJson.Write(console.Out, ApplyHeadline.Of(model, scores, performance, folder.Path, overlap, displayNames));
         }
         else PrintSummary(console, model, scores, performance, folder.Path, displayNames);
         return ExitCode.Success;

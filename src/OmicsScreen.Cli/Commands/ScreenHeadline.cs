@@ -26,15 +26,21 @@ public sealed record ScreenHeadline
     public required int? RecommendedPanelSize { get; init; }
     public required int LockedPanelSize { get; init; }
     public required IReadOnlyList<string> LockedPanel { get; init; }
+
+    /// <summary>The locked markers' lab-facing names by id, as locked_panel.json records them; empty without display names.</summary>
+    public required IReadOnlyDictionary<string, string> LockedPanelDisplayNames { get; init; }
+
     public required double LockedPanelEstimate { get; init; }
 
-    /// <summary>One shortlisted marker, with the columns of shortlist.tsv a reader needs first.</summary>
-    public sealed record ShortlistedMarker(int Rank, string Feature, double SelectionFrequency, double MedianRank, double QValue,
-        string Direction, double Auc, int RedundancyGroup);
+    /// <summary>One shortlisted marker, with the columns of shortlist.tsv a reader needs first; DisplayName is null when the inputs name none.</summary>
+    public sealed record ShortlistedMarker(int Rank, string Feature, string? DisplayName, double SelectionFrequency, double MedianRank,
+        double QValue, string Direction, double Auc, int RedundancyGroup);
 
     public static ScreenHeadline Of(LoadedPanel loaded, ScreenResult result, string folder)
     {
         var options = result.Settings.Options;
+        var labels = MarkerLabels.Of(loaded);
+        var lockedPanel = result.Shortlist.Take(result.LockedPanelSize).Select(e => e.Forest.Feature).ToList();
         return new ScreenHeadline
         {
             ResultsFolder = folder,
@@ -49,12 +55,19 @@ public sealed record ScreenHeadline
             OutOfBagAuc = result.ReferenceForest.OutOfBagAuc,
             MinFrequency = options.FrequencyThreshold,
             MaxQ = options.QValueThreshold,
-            Shortlist = result.Shortlist.Select(e => new ShortlistedMarker(e.Rank, e.Forest.Feature, e.Forest.SelectionFrequency,
-                e.Forest.MedianRank, e.Forest.QValue, ScreenTables.DirectionText(e.Univariate), e.Univariate.Auc, e.RedundancyGroup)).ToList(),
+            Shortlist = result.Shortlist.Select(e => new ShortlistedMarker(e.Rank, e.Forest.Feature, NameOrNull(labels, e.Forest.FeatureIndex),
+                e.Forest.SelectionFrequency, e.Forest.MedianRank, e.Forest.QValue, ScreenTables.DirectionText(e.Univariate), e.Univariate.Auc,
+                e.RedundancyGroup)).ToList(),
             RecommendedPanelSize = result.PanelSize?.RecommendedSize,
             LockedPanelSize = result.LockedPanelSize,
-            LockedPanel = result.Shortlist.Take(result.LockedPanelSize).Select(e => e.Forest.Feature).ToList(),
+            LockedPanel = lockedPanel,
+            LockedPanelDisplayNames = MarkerLabels.DisplayNames(loaded, lockedPanel) is { } names
+                ? names.ToDictionary(p => p.Key, p => p.Value!.GetValue<string>(), StringComparer.Ordinal)
+                : new Dictionary<string, string>(StringComparer.Ordinal),
             LockedPanelEstimate = result.LockedPanelEstimate,
         };
     }
+
+    private static string? NameOrNull(FeatureLabels labels, int featureIndex) =>
+        labels.HasDisplayNames && labels.DisplayName(featureIndex) is { Length: > 0 } name ? name : null;
 }

@@ -20,7 +20,7 @@ internal static class InspectionPrinter
         if (i.CommentLineCount > 0) facts.Add("comment lines", $"{Count(i.CommentLineCount)} above the header ('#' or '!'), skipped");
         if (i.LongTable is { } longTable) facts.Add("long table", LongTableText(longTable));
         if (i.FeatureColumns is { } describing) facts.Add("feature columns", FeatureColumnsText(describing));
-        if (i.SampleSheetPath is not null) facts.Add("sample sheet", i.SampleSheetPath);
+        if (i.SampleSheetPath is not null) facts.Add("sample sheet", i.SampleSheetPath + SheetReading(i.SampleSheetCompression, i.SampleSheetCommentLineCount));
         if (i.FeatureSheet is { } featureSheet)
         {
             facts.Add("feature sheet", FeatureSheetText(featureSheet));
@@ -101,9 +101,18 @@ internal static class InspectionPrinter
         _ => format.ToString(),
     };
 
+    /// <summary>How a sheet was read, in brackets, when it was compressed or had comment lines; "" otherwise.</summary>
+    private static string SheetReading(string? compression, int commentLines)
+    {
+        var parts = new List<string>();
+        if (compression is not null) parts.Add($"{compression}-compressed");
+        if (commentLines > 0) parts.Add($"{Count(commentLines)} comment line{(commentLines == 1 ? "" : "s")} above the header, skipped");
+        return parts.Count == 0 ? "" : " (" + string.Join("; ", parts) + ")";
+    }
+
     private static string FeatureSheetText(FeatureSheetFound sheet)
     {
-        string text = $"{sheet.Path}: ids in '{sheet.IdColumn}'";
+        string text = $"{sheet.Path}{SheetReading(sheet.Compression, sheet.CommentLineCount)}: ids in '{sheet.IdColumn}'";
         if (sheet.DisplayNameColumn is { } display) text += $", display names in '{display}'";
         if (sheet.AnnotationColumns.Count > 0) text += ", annotations " + string.Join(", ", sheet.AnnotationColumns.Select(c => $"'{c}'"));
         if (sheet.MatrixOnlyFeatures.Count > 0) text += $"; {Count(sheet.MatrixOnlyFeatures.Count)} matrix features not in the sheet dropped";

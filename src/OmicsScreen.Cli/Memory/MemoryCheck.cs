@@ -47,21 +47,10 @@ internal static class MemoryCheck
         return false;
     }
 
-    /// <summary>The peak estimate for a sized file; the reader's buffers depend on the format.</summary>
+    /// <summary>The peak estimate for a sized file; the reader's buffers depend on the format and layout.</summary>
     internal static MemoryEstimate Estimate(PanelDimensions dimensions, ScreenOptions screen, int threads) =>
         MemoryEstimate.ForScreen(dimensions.SampleCount, dimensions.FeatureCount, screen, threads,
-            loaderMatrixCopies: LoaderMatrixCopies(dimensions));
-
-    /// <summary>
-    /// Text is parsed into columns that are then gathered into file order (one more matrix);
-    /// Parquet is read a column at a time (little); Arrow holds every record batch, the whole file.
-    /// </summary>
-    private static double LoaderMatrixCopies(PanelDimensions dimensions) => dimensions.Format switch
-    {
-        MatrixFileFormat.DelimitedText => 1,
-        MatrixFileFormat.Parquet => 0.25,
-        _ => Math.Max(1, dimensions.FileBytes / (4.0 * dimensions.SampleCount * dimensions.FeatureCount)),
-    };
+            loaderMatrixCopies: dimensions.LoaderMatrixCopies);
 
     /// <summary>The refusal: the estimate against the budget, its largest terms, and each option that would lower it, by how much.</summary>
     internal static List<string> Refusal(PanelDimensions dimensions, ScreenOptions screen, int threads, MemoryEstimate estimate,

@@ -15,4 +15,10 @@ public sealed record FeatureSheetFound(string Path, string IdColumn, string? Dis
     IReadOnlyList<string> MatrixOnlyFeatures, IReadOnlyList<string> SheetOnlyFeatures)
 {
     public long CensoredCellTotal => CensoredCells.Sum(c => (long)c.Cells);
+
+    /// <summary>"gzip" when the sheet was decompressed while reading; null otherwise.</summary>
+    public string? Compression { get; init; }
+
+    /// <summary>Comment lines ('#' or '!') skipped above the sheet's header.</summary>
+    public int CommentLineCount { get; init; }
 }

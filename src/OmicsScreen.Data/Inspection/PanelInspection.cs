@@ -23,6 +23,10 @@ public sealed record PanelInspection
     public LongTableFound? LongTable { get; init; }
     public required PanelLayout Layout { get; init; }
     public string? SampleSheetPath { get; init; }
+    /// <summary>"gzip" when the sample sheet was decompressed while reading; null otherwise.</summary>
+    public string? SampleSheetCompression { get; init; }
+    /// <summary>Comment lines ('#' or '!') skipped above the sample sheet's header.</summary>
+    public int SampleSheetCommentLineCount { get; init; }
 
     public required int SampleCount { get; init; }
     public required int FeatureCount { get; init; }

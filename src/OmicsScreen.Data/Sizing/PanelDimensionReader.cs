@@ -41,7 +41,7 @@ public static class PanelDimensionReader
         {
             if (format != MatrixFileFormat.DelimitedText) return null;
             var (samples, features) = LongTableReader.CountDimensions(path, options);
-            return samples > 0 && features > 0 ? new PanelDimensions(samples, features, format, new FileInfo(path).Length) : null;
+            return samples > 0 && features > 0 ? new PanelDimensions(samples, features, format, new FileInfo(path).Length, PanelLayout.Long) : null;
         }
         IReadOnlyList<string> columns;
         long rows;
@@ -68,7 +68,7 @@ public static class PanelDimensionReader
         int rowCount = checked((int)rows);
         long fileBytes = new FileInfo(path).Length;
         if (options.Layout == PanelLayout.FeaturesInRows)
-            return new PanelDimensions(columns.Count - 1, rowCount, format, fileBytes);
+            return new PanelDimensions(columns.Count - 1, rowCount, format, fileBytes, PanelLayout.FeaturesInRows);
         var roles = SampleColumnRoles.Resolve(columns, options, path, isTableRow: format != MatrixFileFormat.DelimitedText);
         return new PanelDimensions(rowCount, roles.FeatureColumns.Length, format, fileBytes);
     }

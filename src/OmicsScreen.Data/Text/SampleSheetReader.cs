@@ -2,7 +2,11 @@ using nietras.SeparatedValues;
 
 namespace OmicsScreen.Data.Text;
 
-/// <summary>Reads a CSV/TSV sample sheet as text, every value trimmed, with the same delimiter rules as matrices.</summary>
+/// <summary>
+/// Reads a CSV/TSV sample or feature sheet as text, every value trimmed, with the same rules as
+/// matrices: delimiter detection, gzip found by content, comment lines above the header skipped
+/// and counted, a comment line inside the data refused.
+/// </summary>
 /// <remarks>
 /// Every column stays text: sample ids such as "007" must not become numbers, and the outcome
 /// may be coded 0/1. A general data-frame loader would infer column types, so Sep is used here too.
@@ -43,11 +47,18 @@ internal static class SampleSheetReader
             .From(text);
         string[]? header = null;
         List<string>[] columns = [];
+        int commentLines = 0;
         var lines = new List<long>();
         foreach (var row in reader)
         {
             if (row.ColCount == 1 && row[0].Span.Trim().IsEmpty) continue;
-            if (header is null && DelimiterDetector.IsCommentAboveHeader(row[0].Span)) continue;
+            if (DelimiterDetector.IsComment(row[0].Span))
+            {
+                // Below the header such a row would become a sample (or feature) named '#...'.
+                if (header is not null) throw DelimiterDetector.CommentInsideData(path, row.LineNumberFrom);
+                commentLines++;
+                continue;
+            }
             if (header is null)
             {
                 header = new string[row.ColCount];
@@ -71,27 +82,29 @@ internal static class SampleSheetReader
                 $"Add one row per {rowNoun} to the {role}.");
         var arrays = new string[columns.Length][];
         for (int c = 0; c < arrays.Length; c++) arrays[c] = columns[c].ToArray();
-        return new SampleSheet(path, delimiter, header, arrays, lines.ToArray());
+        return new SampleSheet(path, delimiter, header, arrays, lines.ToArray())
+        {
+            Gzip = TextInput.IsGzip(path),
+            CommentLineCount = commentLines,
+        };
     }
 
     /// <summary>
-    /// Refuses a compressed or binary sheet before parsing, which would otherwise see one garbled
-    /// "header" and report no sample rows. A UTF-16 sheet starts with its byte-order mark
-    /// (FF FE or FE FF) and is decoded as text, so its zero bytes are expected.
+    /// Refuses a binary sheet before parsing, which would otherwise see one garbled "header" and
+    /// report no sample rows. A gzip sheet is judged by its decompressed bytes, as the matrix is. A
+    /// UTF-16 sheet starts with its byte-order mark (FF FE or FE FF) and is decoded as text, so its
+    /// zero bytes are expected.
     /// </summary>
     private static void EnsureText(string path, string role)
     {
         Span<byte> head = stackalloc byte[4096];
         int length;
-        using (var stream = File.OpenRead(path)) length = stream.ReadAtLeast(head, head.Length, throwOnEndOfStream: false);
+        using (var stream = TextInput.Open(path)) length = stream.ReadAtLeast(head, head.Length, throwOnEndOfStream: false);
         head = head[..length];
-        // Gzip member header: ID1 = 0x1F, ID2 = 0x8B (RFC 1952, section 2.3.1).
-        if (head.StartsWith((ReadOnlySpan<byte>)[0x1F, 0x8B]))
-            throw PanelInputException.At(path, null, null, "is gzip-compressed.",
-                $"Decompress it first (gunzip) and give the uncompressed CSV/TSV {role}.");
         bool utf16 = head.StartsWith((ReadOnlySpan<byte>)[0xFF, 0xFE]) || head.StartsWith((ReadOnlySpan<byte>)[0xFE, 0xFF]);
         if (!utf16 && head.Contains((byte)0))
-            throw PanelInputException.At(path, null, null, "is not a text file (it holds zero bytes).",
-                $"Give the {role} as CSV or TSV text; Excel workbooks must be saved as CSV first.");
+            throw PanelInputException.At(path, null, null,
+                TextInput.IsGzip(path) ? "is gzip-compressed but does not hold text (it holds zero bytes)." : "is not a text file (it holds zero bytes).",
+                $"Give the {role} as CSV or TSV text, plain or gzip-compressed; Excel workbooks must be saved as CSV first.");
     }
 }

@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text;
+using System.Text.Json.Nodes;
 
 namespace OmicsScreen.Cli.Tests.Commands;
 
@@ -65,6 +66,42 @@ public sealed class FeatureNamesCommandTests : IDisposable
         Assert.Equal(ExitCode.Success, apply.ExitCode);
         Assert.Contains("Markers (matched by id):", apply.Out);
         Assert.Contains("(f1)", apply.Out);
+    }
+
+    [Fact]
+    public void Screen_json_and_apply_json_carry_the_display_names_of_the_shortlist_and_the_locked_panel()
+    {
+        string matrix = LongPanel();
+        // f3 has no display name: its entry must say so (null), not repeat the id.
+        string sheet = _folder.File("features.csv", "feature,display_name\nf1,Lab IL6\nf2,Lab TNF\nf3,\nf4,Lab GLU\nf5,Lab LAC\n");
+        string results = Path.Combine(_folder.Path, "results");
+
+        var screen = CliHarness.Run("screen", matrix, "--long", "--outcome", "status", "--feature-sheet", sheet, "--out", results,
+            "--pairs", "3", "--trees", "50", "--curve-folds", "2", "--curve-inner-pairs", "1", "--max-panel-size", "2", "--quiet", "--json");
+
+        Assert.True(screen.ExitCode == ExitCode.Success, screen.Error);
+        var json = JsonNode.Parse(screen.Out)!.AsObject();
+        var expected = new Dictionary<string, string?> { ["f1"] = "Lab IL6", ["f2"] = "Lab TNF", ["f3"] = null, ["f4"] = "Lab GLU", ["f5"] = "Lab LAC" };
+        var shortlist = json["shortlist"]!.AsArray();
+        // f1 is shifted by 4 units between the classes (see LongPanel): it must be shortlisted.
+        Assert.Contains(shortlist, m => m!["feature"]!.GetValue<string>() == "f1");
+        foreach (var marker in shortlist)
+            Assert.Equal(expected[marker!["feature"]!.GetValue<string>()], marker["display_name"]?.GetValue<string>());
+        var locked = json["locked_panel"]!.AsArray().Select(m => m!.GetValue<string>()).ToList();
+        Assert.NotEmpty(locked);
+        var lockedNames = json["locked_panel_display_names"]!.AsObject();
+        Assert.Equal(locked.Where(m => expected[m] is not null).Order(StringComparer.Ordinal), lockedNames.Select(p => p.Key).Order(StringComparer.Ordinal));
+        foreach (var (id, name) in lockedNames) Assert.Equal(expected[id], name!.GetValue<string>());
+
+        var wide = new StringBuilder("sample_id,f5,f4,f3,f2,f1\n");
+        for (int s = 0; s < 6; s++) wide.Append(CultureInfo.InvariantCulture, $"N{s},1,1,1,1,{(s < 3 ? 6.5 : 2.5)}\n");
+        var apply = CliHarness.Run("apply", json["locked_panel_file"]!.GetValue<string>(), _folder.File("new.csv", wide.ToString()),
+            "--out", Path.Combine(_folder.Path, "applied"), "--json");
+
+        Assert.True(apply.ExitCode == ExitCode.Success, apply.Error);
+        var applied = JsonNode.Parse(apply.Out)!.AsObject();
+        var applyNames = applied["marker_display_names"]!.AsObject();
+        Assert.Equal(lockedNames.Select(p => (p.Key, p.Value!.GetValue<string>())), applyNames.Select(p => (p.Key, p.Value!.GetValue<string>())));
     }
 
     [Fact]

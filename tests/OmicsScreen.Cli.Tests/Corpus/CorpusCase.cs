@@ -16,7 +16,8 @@ public sealed record CorpusCase(
     string[] Fragments,
     string[]? ExtraArguments = null,
     byte[]? SampleSheetBytes = null,
-    string? FeatureSheet = null)
+    string? FeatureSheet = null,
+    byte[]? FeatureSheetBytes = null)
 {
     public override string ToString() => Name;
 }

@@ -148,6 +148,12 @@ internal static class HostileInputCorpus
             ["long table", "12 rows", "sample 'sample', feature 'feature', value 'value'"], ["--long"]);
         yield return new("a long table with a repeated sample and feature", "long.csv", Text(LongValid + "s3,f2,6.5\n"), Sheet,
             ExitCode.InputError, ["long.csv", "line 14", "sample 's3' and feature 'f2' occur again (first on line", "one row per sample and feature"], ["--long"]);
+        yield return new("a long table with a feature the feature sheet lacks", "long.csv", Text(LongValid), Sheet,
+            ExitCode.InputError, ["f.csv", "features do not match", "1 in long.csv but not in f.csv ('f2')", "--drop-unmatched"], ["--long"],
+            FeatureSheet: "feature,display_name\nf1,Marker one\n");
+        yield return new("a feature twice in a features-in-rows file with describing columns", "m.tsv",
+            Text("gene_id\tsymbol\ts1\ts2\ts3\ts4\ts5\ts6\nf1\tGENE0\t1\t2\t3\t4\t5\t6\nf1\tGENE1\t3\t4\t5\t6\t7\t9\n"), Sheet,
+            ExitCode.InputError, ["m.tsv", "'f1'", "more than once"], ["--features-in-rows"]);
         yield return new("a long table without a value column", "long.csv", Text(LongValid.Replace("value", "npx")), Sheet,
             ExitCode.InputError, ["long.csv", "no column 'value'", "--value-column"], ["--long"]);
         yield return new("a long table flag that is neither set nor clear", "long.csv", Text(WithQualityColumn(LongValid).Replace("s4,f1,7,ok", "s4,f1,7,maybe")), Sheet,
@@ -164,8 +170,18 @@ internal static class HostileInputCorpus
         // Sample sheets.
         yield return new("a UTF-16 sample sheet with BOM loads", "m.csv", Text(Valid), null, ExitCode.Success, ["samples"],
             SampleSheetBytes: [.. Encoding.Unicode.GetPreamble(), .. Encoding.Unicode.GetBytes(Sheet)]);
-        yield return new("a gzip sample sheet", "m.csv", Text(Valid), null, ExitCode.InputError, ["s.csv", "gzip", "decompress"],
-            SampleSheetBytes: Gzip(Sheet));
+        // Sheets are read like the matrix: gzip told by content, comment lines above the header skipped and counted.
+        yield return new("a gzip sample sheet with comment lines loads and is stated", "m.csv", Text(Valid), null, ExitCode.Success,
+            ["sample sheet", "gzip-compressed", "2 comment lines above the header, skipped"],
+            SampleSheetBytes: Gzip("# exported by an invented LIMS\n! study \"invented\"\n" + Sheet));
+        yield return new("a gzip feature sheet with a comment line loads and is stated", "m.csv", Text(Valid), Sheet, ExitCode.Success,
+            ["feature sheet", "gzip-compressed; 1 comment line above the header, skipped", "display names in 'display_name'"],
+            FeatureSheetBytes: Gzip("# panel v2\nfeature,display_name\nf1,Marker one\nf2,Marker two\n"));
+        yield return new("a comment line inside a feature sheet's data", "m.csv", Text(Valid), Sheet, ExitCode.InputError,
+            ["f.csv", "line 3", "comment line inside the data", "above the header"],
+            FeatureSheet: "feature,display_name\nf1,Marker one\n# f2 to follow\nf2,Marker two\n");
+        yield return new("a truncated gzip sample sheet", "m.csv", Text(Valid), null, ExitCode.InputError, ["s.csv", "truncated", "gzip -t"],
+            SampleSheetBytes: Gzip(Sheet)[..^5]);
         yield return new("a Latin-1 accent in a sheet id", "m.csv", Text(Valid), null, ExitCode.InputError, ["s.csv", "line 3", "not valid UTF-8"],
             SampleSheetBytes: Latin1.GetBytes(Sheet.Replace("s2,", "s\u00e92,")));
         yield return new("an empty outcome value", "m.csv", Text(Valid), Sheet.Replace("s1,case", "s1,"),

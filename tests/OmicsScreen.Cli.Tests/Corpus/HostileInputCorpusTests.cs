@@ -73,7 +73,8 @@ public sealed class HostileInputCorpusTests : IDisposable
         var arguments = new List<string> { verb, matrixPath, "--outcome", "status" };
         if (corpusCase.SampleSheetBytes is not null) arguments.AddRange(["--samples", _folder.File("s.csv", corpusCase.SampleSheetBytes)]);
         else if (corpusCase.SampleSheet is not null) arguments.AddRange(["--samples", _folder.File("s.csv", corpusCase.SampleSheet)]);
-        if (corpusCase.FeatureSheet is not null) arguments.AddRange(["--feature-sheet", _folder.File("f.csv", corpusCase.FeatureSheet)]);
+        if (corpusCase.FeatureSheetBytes is not null) arguments.AddRange(["--feature-sheet", _folder.File("f.csv", corpusCase.FeatureSheetBytes)]);
+        else if (corpusCase.FeatureSheet is not null) arguments.AddRange(["--feature-sheet", _folder.File("f.csv", corpusCase.FeatureSheet)]);
         if (corpusCase.ExtraArguments is not null) arguments.AddRange(corpusCase.ExtraArguments);
         return arguments;
     }

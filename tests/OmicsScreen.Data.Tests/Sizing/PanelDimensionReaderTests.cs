@@ -112,4 +112,32 @@ public class PanelDimensionReaderTests
         File.WriteAllBytes(path, bytes[..(bytes.Length / 2)]);
         Assert.Null(PanelDimensionReader.TryRead(SyntheticPanels.MixedOptions(path, layout)));
     }
+
+    [Theory]
+    [InlineData(16, 16)]
+    [InlineData(17, 32)]
+    [InlineData(300, 512)]
+    [InlineData(1024, 1024)]
+    public void A_long_table_is_estimated_to_hold_its_columns_at_the_capacity_their_doubling_reaches(int samples, int capacity)
+    {
+        // LongTableReader grows each feature's values (4 bytes) and states (1 byte) by doubling from 16 rows:
+        // capacity x 5 bytes against the panel's 4 bytes per sample, in float32 matrices.
+        var sized = new PanelDimensions(samples, 100, MatrixFileFormat.DelimitedText, 1L << 20, PanelLayout.Long);
+
+        Assert.Equal(1.25 * capacity / samples, sized.LoaderMatrixCopies, 12);
+        // Wide text, plain or gzip, gathers its parsed columns into one more matrix, whatever the file's size.
+        Assert.Equal(1, (sized with { Layout = PanelLayout.SamplesInRows }).LoaderMatrixCopies);
+    }
+
+    [Fact]
+    public void A_long_file_is_sized_with_its_layout_for_the_estimate()
+    {
+        using var folder = new TempFolder();
+        string path = folder.Write("long.csv", "sample,feature,value,status\ns1,A,1,x\ns1,B,2,x\ns2,A,3,y\ns3,B,4,y\n");
+
+        var sized = PanelDimensionReader.TryRead(new PanelLoadOptions { MatrixPath = path, OutcomeColumn = "status", Layout = PanelLayout.Long });
+
+        // Counted by hand from the rows above: samples s1..s3, features A and B.
+        Assert.Equal(new PanelDimensions(3, 2, MatrixFileFormat.DelimitedText, new FileInfo(path).Length, PanelLayout.Long), sized);
+    }
 }

@@ -37,6 +37,45 @@ public class LongTableTests
     }
 
     [Fact]
+    public void Per_row_detection_limits_mark_every_cell_under_its_limit_and_no_other_in_a_whole_panel()
+    {
+        // 40 samples x 25 features, values and limits from fixed arithmetic patterns; a third of the rows have no
+        // limit, and some values equal their limit exactly (not under it: measured). Expected states are computed
+        // cell by cell from the same patterns (common practice: a value under the limit of detection is "< LOD").
+        const int samples = 40, features = 25;
+        static float ValueOf(int s, int f) => (s * 37 + f * 11) % 50 / 10f;
+        static float LimitOf(int s, int f) => (s + f) % 3 == 0 ? float.NaN : (s * 13 + f * 7) % 30 / 10f;
+        var text = new StringBuilder("sample,feature,value,lod,status\n");
+        for (int f = 0; f < features; f++)
+            for (int s = 0; s < samples; s++)
+            {
+                float limit = LimitOf(s, f);
+                text.Append(FormattableString.Invariant($"S{s},F{f},{ValueOf(s, f):R},{(float.IsNaN(limit) ? "" : limit.ToString("R", System.Globalization.CultureInfo.InvariantCulture))},{(s % 2 == 0 ? "a" : "b")}\n"));
+            }
+        using var folder = new TempFolder();
+        string path = folder.Write("long.csv", text.ToString());
+
+        var loaded = PanelLoader.Load(Options(path) with { DetectionLimitColumn = "lod" });
+        var m = loaded.Panel.Matrix;
+
+        long under = 0, equal = 0;
+        for (int f = 0; f < features; f++)
+            for (int s = 0; s < samples; s++)
+            {
+                float value = ValueOf(s, f), limit = LimitOf(s, f);
+                bool below = !float.IsNaN(limit) && value < limit;
+                under += below ? 1 : 0;
+                equal += value == limit ? 1 : 0;
+                Assert.Equal(below ? CellState.BelowDetection : CellState.Measured, m.State(f, s));
+                Assert.Equal(below ? limit : value, m.Value(f, s));
+            }
+        // The patterns give both kinds of cell, and ties at the limit, so the check above is not empty.
+        Assert.InRange(under, 50, samples * features - 50);
+        Assert.True(equal > 0);
+        Assert.Equal(under, loaded.Inspection.LongTable!.CellsBelowRowLimit);
+    }
+
+    [Fact]
     public void Flags_mark_below_detection_and_failed_quality_cells_and_pairs_without_a_row_are_missing()
     {
         using var folder = new TempFolder();
