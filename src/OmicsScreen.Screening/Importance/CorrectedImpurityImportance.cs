@@ -37,19 +37,35 @@ public static class CorrectedImpurityImportance
         ArgumentNullException.ThrowIfNull(outcome);
         ArgumentNullException.ThrowIfNull(options);
         int featureCount = matrix.FeatureCount;
-        foreach (int source in decoySources)
-            if ((uint)source >= (uint)featureCount) throw new ArgumentException($"Decoy source {source} is out of range.");
+        CheckDecoySources(decoySources, featureCount);
 
         var augmented = Augment(matrix, decoySources, options.Seed, options.Repeat, options.ThreadCount);
         var forest = ForestTrainer.Train(augmented, outcome, options, trainingRows);
         var decrease = ImpurityImportance.From(forest).MeanDecrease;
 
+        return FromAugmented(decrease, featureCount, decoySources);
+    }
+
+    /// <summary>
+    /// AIR from a forest grown on <see cref="Augment"/>'s columns: each real feature's importance
+    /// minus its permuted copy's, each decoy's minus its source's permuted copy's. Any impurity-type
+    /// importance works (Gini, variance, log-rank statistic).
+    /// </summary>
+    internal static CorrectedImportance FromAugmented(ReadOnlySpan<double> importance, int featureCount, ReadOnlySpan<int> decoySources)
+    {
         var features = new double[featureCount];
-        for (int f = 0; f < featureCount; f++) features[f] = decrease[f] - decrease[featureCount + f];
+        for (int f = 0; f < featureCount; f++) features[f] = importance[f] - importance[featureCount + f];
         var decoys = new double[decoySources.Length];
         for (int i = 0; i < decoys.Length; i++)
-            decoys[i] = decrease[2 * featureCount + i] - decrease[featureCount + decoySources[i]];
+            decoys[i] = importance[2 * featureCount + i] - importance[featureCount + decoySources[i]];
         return new CorrectedImportance(features, decoys, decoySources.ToArray());
+    }
+
+    /// <summary>Checks that every decoy source names a real feature.</summary>
+    internal static void CheckDecoySources(ReadOnlySpan<int> decoySources, int featureCount)
+    {
+        foreach (int source in decoySources)
+            if ((uint)source >= (uint)featureCount) throw new ArgumentException($"Decoy source {source} is out of range.");
     }
 
     /// <summary>

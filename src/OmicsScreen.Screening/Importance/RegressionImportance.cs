@@ -1,6 +1,7 @@
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
-using OmicsScreen.Engine.Randomness;
+using OmicsScreen.Engine.Parallelism;
+using OmicsScreen.Screening.Randomness;
 using OmicsScreen.Engine.Regression;
 
 namespace OmicsScreen.Screening.Importance;
@@ -24,16 +25,10 @@ public static class RegressionImportance
         ArgumentNullException.ThrowIfNull(matrix);
         ArgumentNullException.ThrowIfNull(options);
         int featureCount = matrix.FeatureCount;
-        foreach (int source in decoySources)
-            if ((uint)source >= (uint)featureCount) throw new ArgumentException($"Decoy source {source} is out of range.");
+        CorrectedImpurityImportance.CheckDecoySources(decoySources, featureCount);
         var augmented = CorrectedImpurityImportance.Augment(matrix, decoySources, options.Seed, options.Repeat, options.ThreadCount);
         var decrease = RegressionForestTrainer.Train(augmented, outcome, options, trainingRows).MeanImpurityDecrease();
-        var features = new double[featureCount];
-        for (int f = 0; f < featureCount; f++) features[f] = decrease[f] - decrease[featureCount + f];
-        var decoys = new double[decoySources.Length];
-        for (int i = 0; i < decoys.Length; i++)
-            decoys[i] = decrease[2 * featureCount + i] - decrease[featureCount + decoySources[i]];
-        return new CorrectedImportance(features, decoys, decoySources.ToArray());
+        return CorrectedImpurityImportance.FromAugmented(decrease, featureCount, decoySources);
     }
 
     /// <summary>
@@ -52,7 +47,7 @@ public static class RegressionImportance
         if (outcome.Length != forest.SampleCount) throw new ArgumentException("The outcome must have one value per sample.");
         var y = outcome.ToArray();
         var perTree = new TreePermutationScores[forest.TreeCount];
-        int threads = Math.Min(threadCount > 0 ? threadCount : Environment.ProcessorCount, Math.Max(1, forest.TreeCount));
+        int threads = Math.Min(WorkerThreads.Resolve(threadCount), Math.Max(1, forest.TreeCount));
         int next = -1;
         Parallel.For(0, threads, new ParallelOptions { MaxDegreeOfParallelism = threads }, _ =>
         {
@@ -75,21 +70,13 @@ public static class RegressionImportance
         for (int i = 0; i < rows.Length; i++) baseError += (y[rows[i]] - baseline[i]) * (y[rows[i]] - baseline[i]);
         var used = SplitFeatures(tree);
         var rises = new double[used.Length];
-        // Seeds as for class forests (OutOfBagTreeScorer.TreeSeed / FeatureGenerator): a function of
+        // Seeds as for class forests (the registry's permutation-importance streams): a function of
         // (seed, repeat, tree, feature) only.
-        ulong treeSeed = SeedSchedule.Derive(forest.Options.Seed, forest.Options.Repeat, t, SeedPurpose.Permutation);
+        ulong treeSeed = RandomStreams.PermutationImportanceTree(new ForestStreams(forest.Options.Seed, forest.Options.Repeat), t);
         for (int k = 0; k < used.Length; k++)
         {
             int feature = used[k];
-            var source = matrix.Codes(feature);
-            for (int i = 0; i < rows.Length; i++) codes[i] = source[rows[i]];
-            var generator = SeedSchedule.Generator(treeSeed, 0, feature, SeedPurpose.Permutation);
-            // Fisher-Yates shuffle of the out-of-bag rows' codes.
-            for (int i = rows.Length - 1; i > 0; i--)
-            {
-                int j = generator.NextInt(i + 1);
-                (codes[i], codes[j]) = (codes[j], codes[i]);
-            }
+            PermutedCodes.Fill(matrix, feature, rows, treeSeed, codes);
             double error = 0;
             for (int i = 0; i < rows.Length; i++)
             {

@@ -1,6 +1,7 @@
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
-using OmicsScreen.Engine.Randomness;
+using OmicsScreen.Engine.Parallelism;
+using OmicsScreen.Screening.Randomness;
 using OmicsScreen.Engine.Survival;
 using OmicsScreen.Screening.Statistics.Survival;
 
@@ -30,16 +31,10 @@ public static class SurvivalImportance
         ArgumentNullException.ThrowIfNull(matrix);
         ArgumentNullException.ThrowIfNull(options);
         int featureCount = matrix.FeatureCount;
-        foreach (int source in decoySources)
-            if ((uint)source >= (uint)featureCount) throw new ArgumentException($"Decoy source {source} is out of range.");
+        CorrectedImpurityImportance.CheckDecoySources(decoySources, featureCount);
         var augmented = CorrectedImpurityImportance.Augment(matrix, decoySources, options.Seed, options.Repeat, options.ThreadCount);
         var statistic = SurvivalForestTrainer.Train(augmented, followUp, options, trainingRows).MeanSplitStatistic();
-        var features = new double[featureCount];
-        for (int f = 0; f < featureCount; f++) features[f] = statistic[f] - statistic[featureCount + f];
-        var decoys = new double[decoySources.Length];
-        for (int i = 0; i < decoys.Length; i++)
-            decoys[i] = statistic[2 * featureCount + i] - statistic[featureCount + decoySources[i]];
-        return new CorrectedImportance(features, decoys, decoySources.ToArray());
+        return CorrectedImpurityImportance.FromAugmented(statistic, featureCount, decoySources);
     }
 
     /// <summary>
@@ -55,7 +50,7 @@ public static class SurvivalImportance
         if (matrix.FeatureCount != forest.FeatureCount || matrix.SampleCount != forest.SampleCount)
             throw new ArgumentException("The matrix must be the one the forest was grown on.");
         var perTree = new TreePermutationScores[forest.TreeCount];
-        int threads = Math.Min(threadCount > 0 ? threadCount : Environment.ProcessorCount, Math.Max(1, forest.TreeCount));
+        int threads = Math.Min(WorkerThreads.Resolve(threadCount), Math.Max(1, forest.TreeCount));
         int next = -1;
         Parallel.For(0, threads, new ParallelOptions { MaxDegreeOfParallelism = threads }, _ =>
         {
@@ -80,18 +75,11 @@ public static class SurvivalImportance
         var drops = new double[features.Length];
         var codes = new byte[rows.Length];
         var risk = new double[rows.Length];
-        ulong treeSeed = SeedSchedule.Derive(forest.Options.Seed, forest.Options.Repeat, t, SeedPurpose.Permutation);
+        ulong treeSeed = RandomStreams.PermutationImportanceTree(new ForestStreams(forest.Options.Seed, forest.Options.Repeat), t);
         for (int k = 0; k < features.Length; k++)
         {
             int feature = features[k];
-            var source = matrix.Codes(feature);
-            for (int i = 0; i < rows.Length; i++) codes[i] = source[rows[i]];
-            var generator = SeedSchedule.Generator(treeSeed, 0, feature, SeedPurpose.Permutation);
-            for (int i = rows.Length - 1; i > 0; i--)
-            {
-                int j = generator.NextInt(i + 1);
-                (codes[i], codes[j]) = (codes[j], codes[i]);
-            }
+            PermutedCodes.Fill(matrix, feature, rows, treeSeed, codes);
             for (int i = 0; i < rows.Length; i++) risk[i] = tree.Mortality[tree.LeafOf(matrix, rows[i], feature, codes[i])];
             drops[k] = baseline.Concordance - Concordance(forest.FollowUp, rows, risk).Concordance;
         }
