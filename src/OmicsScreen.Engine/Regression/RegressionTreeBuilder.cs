@@ -69,10 +69,10 @@ internal sealed class RegressionTreeBuilder
         while (_pending.Count > 0)
         {
             var (start, end, depth, parent, isLeft) = _pending.Pop();
-            int node = _buffer.Add(parent, isLeft);
-            var (weight, sum, constant) = SumNode(start, end);
             int nodeRows = end - start;
-            _buffer.SetNode(node, weight > 0 ? sum / weight : 0.0, nodeRows);
+            int node = _buffer.Add(parent, isLeft, nodeRows);
+            var (weight, sum, constant) = SumNode(start, end);
+            _buffer.SetMean(node, weight > 0 ? sum / weight : 0.0);
 
             if (depth >= options.MaxDepth || nodeRows < 2 * options.MinLeafSize || nodeRows < 2 || constant || weight <= 0)
                 continue;
@@ -82,7 +82,8 @@ internal sealed class RegressionTreeBuilder
             if (decrease + 1e-12 < options.MinImpurityDecrease) continue;
 
             var bins = matrix.Bins(best.Feature);
-            int middle = Partition(matrix.Codes(best.Feature), start, end, best, bins.MissingCode);
+            int middle = RowPartition.Split(matrix.Codes(best.Feature), _rows, _weights, _targets, start, end,
+                best.BinThreshold, bins.MissingCode, best.Routing);
             _buffer.SetSplit(node, best.Feature, best.BinThreshold, bins.UpperBound(best.BinThreshold), bins.MissingCode,
                 best.Routing, decrease);
             _pending.Push((middle, end, depth + 1, node, false));
@@ -245,97 +246,37 @@ internal sealed class RegressionTreeBuilder
         best = SplitScanner.Record(feature, binThreshold, score, leftRows, rightRows, hasMissing, hasBelow, missingLeft, belowLeft);
     }
 
-    /// <summary>Moves the rows going left to the front of the slice; returns where the right child starts.</summary>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private int Partition(ReadOnlySpan<byte> codes, int start, int end, in SplitCandidate split, byte missingCode)
-    {
-        byte threshold = split.BinThreshold;
-        var routing = split.Routing;
-        int low = start, high = end - 1;
-        // Invariant: rows before low go left, rows after high go right.
-        while (low <= high)
-        {
-            if (BranchRule.GoesLeft(codes[_rows[low]], threshold, missingCode, routing)) { low++; continue; }
-            (_rows[low], _rows[high]) = (_rows[high], _rows[low]);
-            (_targets[low], _targets[high]) = (_targets[high], _targets[low]);
-            (_weights[low], _weights[high]) = (_weights[high], _weights[low]);
-            high--;
-        }
-        return low;
-    }
 }
 
-/// <summary>Growable node arrays reused across trees; copied once into an exactly sized <see cref="RegressionTree"/>.</summary>
+/// <summary>A <see cref="SplitTopologyBuffer"/> with each node's mean and variance decrease, reused across trees.</summary>
 internal sealed class RegressionTreeBuffer
 {
-    private int _count;
-    private int[] _features = new int[64];
-    private byte[] _binThresholds = new byte[64];
-    private float[] _thresholds = new float[64];
-    private byte[] _missingCodes = new byte[64];
-    private UnmeasuredRouting[] _routing = new UnmeasuredRouting[64];
-    private int[] _left = new int[64];
-    private int[] _right = new int[64];
+    private readonly SplitTopologyBuffer _topology = new();
     private double[] _means = new double[64];
     private double[] _decreases = new double[64];
-    private int[] _sampleCounts = new int[64];
 
-    public void Clear() => _count = 0;
+    public void Clear() => _topology.Clear();
 
-    /// <summary>Appends a leaf and links it to its parent; returns its index.</summary>
-    public int Add(int parent, bool isLeft)
+    public int Add(int parent, bool isLeft, int sampleCount)
     {
-        if (_count == _features.Length) Grow();
-        int node = _count++;
-        _features[node] = -1;
-        _binThresholds[node] = 0;
-        _thresholds[node] = float.NaN;
-        _missingCodes[node] = 0;
-        _routing[node] = UnmeasuredRouting.BothRight;
-        _left[node] = -1;
-        _right[node] = -1;
-        _decreases[node] = 0;
-        if (parent >= 0)
+        int node = _topology.Add(parent, isLeft, sampleCount);
+        if (_means.Length < _topology.Capacity)
         {
-            if (isLeft) _left[parent] = node;
-            else _right[parent] = node;
+            Array.Resize(ref _means, _topology.Capacity);
+            Array.Resize(ref _decreases, _topology.Capacity);
         }
+        _decreases[node] = 0;
         return node;
     }
 
-    public void SetNode(int node, double mean, int sampleCount)
-    {
-        _means[node] = mean;
-        _sampleCounts[node] = sampleCount;
-    }
+    public void SetMean(int node, double mean) => _means[node] = mean;
 
     public void SetSplit(int node, int feature, byte binThreshold, float threshold, byte missingCode,
         UnmeasuredRouting routing, double decrease)
     {
-        _features[node] = feature;
-        _binThresholds[node] = binThreshold;
-        _thresholds[node] = threshold;
-        _missingCodes[node] = missingCode;
-        _routing[node] = routing;
+        _topology.SetSplit(node, feature, binThreshold, threshold, missingCode, routing);
         _decreases[node] = decrease;
     }
 
-    public RegressionTree ToTree() => new(_features[.._count], _binThresholds[.._count], _thresholds[.._count],
-        _missingCodes[.._count], _routing[.._count], _left[.._count], _right[.._count], _means[.._count],
-        _decreases[.._count], _sampleCounts[.._count]);
-
-    private void Grow()
-    {
-        int size = _features.Length * 2;
-        Array.Resize(ref _features, size);
-        Array.Resize(ref _binThresholds, size);
-        Array.Resize(ref _thresholds, size);
-        Array.Resize(ref _missingCodes, size);
-        Array.Resize(ref _routing, size);
-        Array.Resize(ref _left, size);
-        Array.Resize(ref _right, size);
-        Array.Resize(ref _means, size);
-        Array.Resize(ref _decreases, size);
-        Array.Resize(ref _sampleCounts, size);
-    }
+    public RegressionTree ToTree() => new(_topology.ToTopology(), _means[.._topology.Count], _decreases[.._topology.Count]);
 }

@@ -67,7 +67,7 @@ public sealed class SurvivalForest
         for (int s = 0; s < risk.Length; s++)
         {
             double sum = 0;
-            foreach (var tree in _trees) sum += tree.Mortality[tree.LeafOf(matrix, s)];
+            foreach (var tree in _trees) sum += tree.MortalityOf(matrix, s);
             risk[s] = sum / _trees.Length;
         }
         return risk;
@@ -83,7 +83,7 @@ public sealed class SurvivalForest
         var hazard = new double[FollowUp.EventTimes.Length];
         foreach (var tree in _trees)
         {
-            int leaf = tree.LeafOf(matrix, sample);
+            int leaf = tree.Topology.LeafOf(matrix, sample);
             for (int g = 0; g < hazard.Length; g++) hazard[g] += tree.CumulativeHazard(leaf, g);
         }
         for (int g = 0; g < hazard.Length; g++) hazard[g] /= _trees.Length;

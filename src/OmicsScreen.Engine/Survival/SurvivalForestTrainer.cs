@@ -46,7 +46,7 @@ public static class SurvivalForestTrainer
                 var splitting = SeedSchedule.Generator(options.Seed, options.Repeat, tree, SeedPurpose.Splitting);
                 var grown = builder.Grow(matrix, draw.InBagRows, draw.InBagWeights, options.Tree, ref splitting);
                 var mortality = new double[left.Length];
-                for (int i = 0; i < left.Length; i++) mortality[i] = grown.Mortality[grown.LeafOf(matrix, left[i])];
+                for (int i = 0; i < left.Length; i++) mortality[i] = grown.MortalityOf(matrix, left[i]);
                 trees[tree] = grown;
                 oobRows[tree] = left;
                 oobMortality[tree] = mortality;

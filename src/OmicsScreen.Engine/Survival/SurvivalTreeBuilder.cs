@@ -82,10 +82,10 @@ internal sealed class SurvivalTreeBuilder
         while (_pending.Count > 0)
         {
             var (start, end, depth, parent, isLeft) = _pending.Pop();
-            int node = _buffer.Add(parent, isLeft);
-            int m = BuildGrid(start, end);
             int nodeRows = end - start;
-            _buffer.SetNode(node, Mortality(m, globalEventCount), nodeRows);
+            int node = _buffer.Add(parent, isLeft, nodeRows);
+            int m = BuildGrid(start, end);
+            _buffer.SetMortality(node, Mortality(m, globalEventCount));
 
             var best = SplitCandidate.None;
             if (depth < options.MaxDepth && nodeRows >= 2 * options.MinLeafSize && nodeRows >= 2 && m > 0)
@@ -96,7 +96,8 @@ internal sealed class SurvivalTreeBuilder
                 continue;
             }
             var bins = matrix.Bins(best.Feature);
-            int middle = Partition(matrix.Codes(best.Feature), start, end, best, bins.MissingCode);
+            int middle = RowPartition.Split(matrix.Codes(best.Feature), _rows, _weights, [], start, end,
+                best.BinThreshold, bins.MissingCode, best.Routing);
             _buffer.SetSplit(node, best.Feature, best.BinThreshold, bins.UpperBound(best.BinThreshold), bins.MissingCode,
                 best.Routing, best.Score);
             _pending.Push((middle, end, depth + 1, node, false));
@@ -286,39 +287,14 @@ internal sealed class SurvivalTreeBuilder
         best = SplitScanner.Record(feature, binThreshold, score, leftRows, rightRows, hasMissing, hasBelow, missingLeft, belowLeft);
     }
 
-    /// <summary>Moves the rows going left to the front of the slice; returns where the right child starts.</summary>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private int Partition(ReadOnlySpan<byte> codes, int start, int end, in SplitCandidate split, byte missingCode)
-    {
-        byte threshold = split.BinThreshold;
-        var routing = split.Routing;
-        int low = start, high = end - 1;
-        // Invariant: rows before low go left, rows after high go right.
-        while (low <= high)
-        {
-            if (BranchRule.GoesLeft(codes[_rows[low]], threshold, missingCode, routing)) { low++; continue; }
-            (_rows[low], _rows[high]) = (_rows[high], _rows[low]);
-            (_weights[low], _weights[high]) = (_weights[high], _weights[low]);
-            high--;
-        }
-        return low;
-    }
 }
 
-/// <summary>Growable node arrays reused across trees; copied once into an exactly sized <see cref="SurvivalTree"/>.</summary>
+/// <summary>A <see cref="SplitTopologyBuffer"/> with each node's mortality, split statistic and leaf hazard, reused across trees.</summary>
 internal sealed class SurvivalTreeBuffer
 {
-    private int _count;
-    private int[] _features = new int[64];
-    private byte[] _binThresholds = new byte[64];
-    private float[] _thresholds = new float[64];
-    private byte[] _missingCodes = new byte[64];
-    private UnmeasuredRouting[] _routing = new UnmeasuredRouting[64];
-    private int[] _left = new int[64];
-    private int[] _right = new int[64];
+    private readonly SplitTopologyBuffer _topology = new();
     private double[] _mortality = new double[64];
     private double[] _statistics = new double[64];
-    private int[] _sampleCounts = new int[64];
     private int[] _hazardStarts = new int[64];
     private int[] _hazardCounts = new int[64];
     private readonly List<int> _hazardTimes = [];
@@ -326,38 +302,29 @@ internal sealed class SurvivalTreeBuffer
 
     public void Clear()
     {
-        _count = 0;
+        _topology.Clear();
         _hazardTimes.Clear();
         _hazards.Clear();
     }
 
-    public int Add(int parent, bool isLeft)
+    public int Add(int parent, bool isLeft, int sampleCount)
     {
-        if (_count == _features.Length) Grow();
-        int node = _count++;
-        _features[node] = -1;
-        _binThresholds[node] = 0;
-        _thresholds[node] = float.NaN;
-        _missingCodes[node] = 0;
-        _routing[node] = UnmeasuredRouting.BothRight;
-        _left[node] = -1;
-        _right[node] = -1;
+        int node = _topology.Add(parent, isLeft, sampleCount);
+        if (_mortality.Length < _topology.Capacity)
+        {
+            int size = _topology.Capacity;
+            Array.Resize(ref _mortality, size);
+            Array.Resize(ref _statistics, size);
+            Array.Resize(ref _hazardStarts, size);
+            Array.Resize(ref _hazardCounts, size);
+        }
         _statistics[node] = 0;
         _hazardStarts[node] = _hazardTimes.Count;
         _hazardCounts[node] = 0;
-        if (parent >= 0)
-        {
-            if (isLeft) _left[parent] = node;
-            else _right[parent] = node;
-        }
         return node;
     }
 
-    public void SetNode(int node, double mortality, int sampleCount)
-    {
-        _mortality[node] = mortality;
-        _sampleCounts[node] = sampleCount;
-    }
+    public void SetMortality(int node, double mortality) => _mortality[node] = mortality;
 
     /// <summary>Stores a leaf's Nelson-Aalen steps: at each grid time, the hazard summed up to it.</summary>
     public void SetLeafHazard(int node, ReadOnlySpan<int> grid, ReadOnlySpan<double> deaths, ReadOnlySpan<double> atRisk)
@@ -377,33 +344,14 @@ internal sealed class SurvivalTreeBuffer
     public void SetSplit(int node, int feature, byte binThreshold, float threshold, byte missingCode,
         UnmeasuredRouting routing, double statistic)
     {
-        _features[node] = feature;
-        _binThresholds[node] = binThreshold;
-        _thresholds[node] = threshold;
-        _missingCodes[node] = missingCode;
-        _routing[node] = routing;
+        _topology.SetSplit(node, feature, binThreshold, threshold, missingCode, routing);
         _statistics[node] = statistic;
     }
 
-    public SurvivalTree ToTree() => new(_features[.._count], _binThresholds[.._count], _thresholds[.._count],
-        _missingCodes[.._count], _routing[.._count], _left[.._count], _right[.._count], _mortality[.._count],
-        _statistics[.._count], _sampleCounts[.._count], _hazardStarts[.._count], _hazardCounts[.._count],
-        _hazardTimes.ToArray(), _hazards.ToArray());
-
-    private void Grow()
+    public SurvivalTree ToTree()
     {
-        int size = _features.Length * 2;
-        Array.Resize(ref _features, size);
-        Array.Resize(ref _binThresholds, size);
-        Array.Resize(ref _thresholds, size);
-        Array.Resize(ref _missingCodes, size);
-        Array.Resize(ref _routing, size);
-        Array.Resize(ref _left, size);
-        Array.Resize(ref _right, size);
-        Array.Resize(ref _mortality, size);
-        Array.Resize(ref _statistics, size);
-        Array.Resize(ref _sampleCounts, size);
-        Array.Resize(ref _hazardStarts, size);
-        Array.Resize(ref _hazardCounts, size);
+        int count = _topology.Count;
+        return new(_topology.ToTopology(), _mortality[..count], _statistics[..count], _hazardStarts[..count],
+            _hazardCounts[..count], _hazardTimes.ToArray(), _hazards.ToArray());
     }
 }

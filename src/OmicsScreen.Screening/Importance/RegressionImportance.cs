@@ -68,7 +68,7 @@ public static class RegressionImportance
         var baseline = forest.OutOfBagPredictions(t);
         double baseError = 0;
         for (int i = 0; i < rows.Length; i++) baseError += (y[rows[i]] - baseline[i]) * (y[rows[i]] - baseline[i]);
-        var used = SplitFeatures(tree);
+        var used = tree.Topology.SplitFeatures();
         var rises = new double[used.Length];
         // Seeds as for class forests (the registry's permutation-importance streams): a function of
         // (seed, repeat, tree, feature) only.
@@ -80,7 +80,7 @@ public static class RegressionImportance
             double error = 0;
             for (int i = 0; i < rows.Length; i++)
             {
-                double residual = y[rows[i]] - tree.NodeMeans[tree.LeafOf(matrix, rows[i], feature, codes[i])];
+                double residual = y[rows[i]] - tree.NodeMeans[tree.Topology.LeafOf(matrix, rows[i], feature, codes[i])];
                 error += residual * residual;
             }
             rises[k] = (error - baseError) / rows.Length;
@@ -88,13 +88,6 @@ public static class RegressionImportance
         // The per-tree summary is shared with class forests, whose first score is the accuracy drop;
         // here it carries the rise in squared error (the second, the Brier rise, is unused).
         return new TreePermutationScores(used, rises, rises);
-    }
-
-    private static int[] SplitFeatures(RegressionTree tree)
-    {
-        var used = new SortedSet<int>();
-        foreach (int f in tree.Features) if (f >= 0) used.Add(f);
-        return used.ToArray();
     }
 }
 

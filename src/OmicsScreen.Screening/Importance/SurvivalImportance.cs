@@ -69,9 +69,7 @@ public static class SurvivalImportance
         var baseline = Concordance(forest.FollowUp, rows, forest.OutOfBagMortality(t).ToArray());
         if (baseline.ComparablePairs == 0) return TreePermutationScores.Empty;
         var tree = forest.Tree(t);
-        var used = new SortedSet<int>();
-        foreach (int f in tree.Features) if (f >= 0) used.Add(f);
-        var features = used.ToArray();
+        var features = tree.Topology.SplitFeatures();
         var drops = new double[features.Length];
         var codes = new byte[rows.Length];
         var risk = new double[rows.Length];
@@ -80,7 +78,7 @@ public static class SurvivalImportance
         {
             int feature = features[k];
             PermutedCodes.Fill(matrix, feature, rows, treeSeed, codes);
-            for (int i = 0; i < rows.Length; i++) risk[i] = tree.Mortality[tree.LeafOf(matrix, rows[i], feature, codes[i])];
+            for (int i = 0; i < rows.Length; i++) risk[i] = tree.Mortality[tree.Topology.LeafOf(matrix, rows[i], feature, codes[i])];
             drops[k] = baseline.Concordance - Concordance(forest.FollowUp, rows, risk).Concordance;
         }
         return new TreePermutationScores(features, drops, drops);
