@@ -43,14 +43,7 @@ public sealed class RegressionForest
     public double[] Predict(BinnedMatrix matrix)
     {
         ArgumentNullException.ThrowIfNull(matrix);
-        var predictions = new double[matrix.SampleCount];
-        for (int s = 0; s < predictions.Length; s++)
-        {
-            double sum = 0;
-            foreach (var tree in _trees) sum += tree.Predict(matrix, s);
-            predictions[s] = sum / _trees.Length;
-        }
-        return predictions;
+        return Average(matrix.SampleCount, (tree, s) => tree.Predict(matrix, s));
     }
 
     /// <summary>The forest's prediction for every sample of a raw matrix with the training panel's features.</summary>
@@ -58,11 +51,17 @@ public sealed class RegressionForest
     {
         ArgumentNullException.ThrowIfNull(matrix);
         if (matrix.FeatureCount != FeatureCount) throw new ArgumentException("The matrix must have the training panel's features.");
-        var predictions = new double[matrix.SampleCount];
+        return Average(matrix.SampleCount, (tree, s) => tree.Predict(matrix, s));
+    }
+
+    /// <summary>Each sample's mean over the trees of their prediction (Breiman 2001, section 11).</summary>
+    private double[] Average(int sampleCount, Func<RegressionTree, int, double> predict)
+    {
+        var predictions = new double[sampleCount];
         for (int s = 0; s < predictions.Length; s++)
         {
             double sum = 0;
-            foreach (var tree in _trees) sum += tree.Predict(matrix, s);
+            foreach (var tree in _trees) sum += predict(tree, s);
             predictions[s] = sum / _trees.Length;
         }
         return predictions;
