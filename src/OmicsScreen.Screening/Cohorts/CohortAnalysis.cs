@@ -92,20 +92,7 @@ internal static class CohortAnalysis
         FlagHeterogeneity(markers, options.QValueThreshold);
 
         // Leave one cohort out: screen the others, score the held-out one.
-        var heldOut = new List<HeldOutCohort>();
-        foreach (int c in heldOutCohorts)
-        {
-            cancellation.ThrowIfCancellationRequested();
-            var training = TrainingRowsWithout(panel, c);
-            // The panel is what the procedure locks when the held-out cohort is not there: the other
-            // cohorts' own shortlist, up to the curve's size limit; their size choice never sees it.
-            var shortlist = work.HeldOutScreen(c).Shortlist;
-            var panelFeatures = shortlist.AsSpan(0, Math.Min(shortlist.Length, options.CurveMaxPanelSize)).ToArray();
-            heldOut.Add(panelFeatures.Length == 0
-                ? new HeldOutCohort(cohort.LevelNames[c], rowsOf[c].Length, 0, double.NaN, ConfidenceInterval.Undefined(0.95), double.NaN)
-                : ScoreHeldOut(context, panelFeatures, training, rowsOf[c], cohort.LevelNames[c], HeldOutSeed(options, c)));
-            Done(++done, steps);
-        }
+        var heldOut = LeaveOneCohortOut.Validate(context, work, heldOutCohorts, rowsOf, () => Done(++done, steps));
 
         return new CohortResult(cohort.ColumnName, cohort.LevelNames, screenable.Select(c => cohort.LevelNames[c]).ToArray(),
             concordance, markers, heldOut, cohortAccuracy, largestShare, cramersV, associationP, cramersV >= ConfoundingCramersV);
@@ -261,34 +248,6 @@ internal static class CohortAnalysis
         double v = Math.Sqrt(chiSquare / (n * smaller));
         int degrees = (usedRows - 1) * (usedColumns - 1);
         return (v, ChiSquared.CDF(degrees, chiSquare) is var cdf ? 1 - cdf : double.NaN);
-    }
-
-    private static HeldOutCohort ScoreHeldOut(ScreenContext context, int[] features, int[] training, int[] test, string cohortName, ulong seed)
-    {
-        var outcome = context.Outcome;
-        var selected = context.Matrix.SelectFeatures(features);
-        var forestOptions = context.Settings.ForestOptions(context.Subject, RandomStreams.HeldOutScoring(seed));
-        forestOptions = forestOptions with { Tree = forestOptions.Tree with { FeaturesPerSplit = null } };
-        var forest = ForestTrainer.Train(selected, outcome, forestOptions, training);
-        var prediction = forest.Predict(selected);
-        int wrong = 0;
-        var positives = new List<double>();
-        var negatives = new List<double>();
-        foreach (int row in test)
-        {
-            if (prediction.PredictedClasses[row] != outcome.SampleClasses[row]) wrong++;
-            double probability = prediction.Probability(row, outcome.PositiveClass);
-            (outcome.SampleClasses[row] == outcome.PositiveClass ? positives : negatives).Add(probability);
-        }
-        double auc = double.NaN;
-        var interval = ConfidenceInterval.Undefined(0.95);
-        if (outcome.ClassCount == 2 && positives.Count > 0 && negatives.Count > 0)
-        {
-            var estimate = DeLong.Estimate(positives.ToArray(), negatives.ToArray());
-            auc = estimate.Auc;
-            interval = AucInterval.Compute(estimate.Auc, estimate.StandardError);
-        }
-        return new HeldOutCohort(cohortName, test.Length, features.Length, auc, interval, (double)wrong / test.Length);
     }
 
     /// <summary>

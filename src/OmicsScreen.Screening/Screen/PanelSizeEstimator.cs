@@ -188,32 +188,13 @@ internal static class PanelSizeEstimator
         return (double)right / fold.TestRows.Length;
     }
 
-    /// <summary>Grows a forest on the fold's training rows using the given features and scores the test rows.</summary>
+    /// <summary>A panel scored on the fold's test rows (<see cref="PanelScorer"/>): AUC with two classes, accuracy with more.</summary>
     private static (double Score, double Error, double[] Probabilities) Score(ScreenContext context,
         ReadOnlySpan<int> features, OuterFold fold, ForestStreams streams)
     {
-        var outcome = context.Outcome;
-        bool binary = outcome.ClassCount == 2;
-        var selected = context.Matrix.SelectFeatures(features);
-        // The panel forest tries floor(sqrt(k)) features per split of its own k, whatever the screen used.
-        var forestOptions = context.Settings.ForestOptions(context.Subject, streams);
-        forestOptions = forestOptions with { Tree = forestOptions.Tree with { FeaturesPerSplit = null } };
-        var forest = ForestTrainer.Train(selected, outcome, forestOptions, fold.TrainingRows);
-        var prediction = forest.Predict(selected);
-        var classes = outcome.SampleClasses;
-        int wrong = 0;
-        var scores = new double[fold.TestRows.Length];
-        var positive = new bool[fold.TestRows.Length];
-        for (int i = 0; i < fold.TestRows.Length; i++)
-        {
-            int row = fold.TestRows[i];
-            if (prediction.PredictedClasses[row] != classes[row]) wrong++;
-            scores[i] = prediction.Probability(row, outcome.PositiveClass);
-            positive[i] = classes[row] == outcome.PositiveClass;
-        }
-        double error = (double)wrong / fold.TestRows.Length;
-        double score = binary ? MannWhitneyAuc.Compute(scores, positive) : 1 - error;
-        return (score, error, scores);
+        var scored = PanelScorer.Score(context, features, fold.TrainingRows, fold.TestRows, streams);
+        double score = context.Outcome.ClassCount == 2 ? MannWhitneyAuc.Compute(scored.PositiveProbabilities, scored.IsPositive) : 1 - scored.Error;
+        return (score, scored.Error, scored.PositiveProbabilities);
     }
 
     /// <summary>Mean and sample SD of one column over the folds, leaving out <paramref name="skippedRow"/> (-1 for none); SD is NaN with fewer than two folds.</summary>
