@@ -2,7 +2,6 @@ using System.Reflection;
 using OmicsScreen.Data;
 using OmicsScreen.Reporting.Screen;
 using OmicsScreen.Screening.Screen;
-using OmicsScreen.Engine.Parallelism;
 
 namespace OmicsScreen.Cli.Commands;
 
@@ -27,7 +26,7 @@ internal static class ScreenManifest
             started_utc = started.ToString("O"),
             finished_utc = finished.ToString("O"),
             cores = Environment.ProcessorCount,
-            threads = WorkerThreads.Resolve(settings.Options.ThreadCount),
+            threads = settings.ThreadCount,
             seconds = new Dictionary<string, double>(result.StageSeconds.ToDictionary(kv => StageKey(kv.Key), kv => Math.Round(kv.Value, 3)))
             {
                 ["loading"] = Math.Round(loadSeconds, 3),

@@ -12,7 +12,6 @@ using OmicsScreen.Reporting.Screen;
 using OmicsScreen.Reporting.Univariate;
 using OmicsScreen.Screening.Screen;
 using OmicsScreen.Screening.Work;
-using OmicsScreen.Engine.Parallelism;
 
 namespace OmicsScreen.Cli.Commands;
 
@@ -175,7 +174,7 @@ internal static class ScreenRun
             using var stream = File.OpenRead(Path.Combine(folder.Path, name));
             tables.Add(new ReportedFile("result table", name, Convert.ToHexStringLower(SHA256.HashData(stream))));
         }
-        int threads = WorkerThreads.Resolve(result.Settings.Options.ThreadCount);
+        int threads = result.Settings.ThreadCount;
         return new ScreenReportInput(loaded.Panel, result, inputs, LayoutText(options.Panel), tables,
             string.Join(' ', options.CommandLine.Select(ScreenManifest.ShellQuote)), ScreenManifest.Version(), started, finished, loadSeconds,
             Environment.ProcessorCount, threads, options.ShowSampleIds, Warnings: Warnings(options, loaded, withSampleIds: options.ShowSampleIds),

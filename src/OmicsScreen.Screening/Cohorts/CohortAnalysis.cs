@@ -33,13 +33,15 @@ internal static class CohortAnalysis
 
     private const double ConfoundingCramersV = 0.5;
 
-    public static CohortResult Run(Panel panel, BinnedMatrix matrix, ScreenSettings settings, IReadOnlyList<int> order,
-        UnivariateTable univariate, ScreenWork work, Action<int, int>? progress,
-        CancellationToken cancellation)
+    /// <summary>The cohort check; progress is reported per cohort screen, and every inner screen honours the context's cancellation.</summary>
+    public static CohortResult Run(ScreenContext context, IReadOnlyList<int> order, UnivariateTable univariate, ScreenWork work)
     {
+        var (panel, matrix, settings) = (context.Panel, context.Matrix, context.Settings);
         var cohort = panel.Cohort ?? throw new ArgumentException("The panel names no cohort.");
         var outcome = panel.Outcome;
         var options = settings.Options;
+        var cancellation = context.Cancellation;
+        void Done(int step, int total) => context.Report(ScreenStage.Cohorts, step, total);
         int featureCount = panel.FeatureCount;
         var levels = cohort.SampleLevels.ToArray();
         var rowsOf = RowsOfCohorts(panel);
@@ -56,7 +58,7 @@ internal static class CohortAnalysis
             var screen = work.CohortScreen(c);
             cohortOrders[c] = screen.Order;
             cohortImportance[c] = screen.MeanCorrected;
-            progress?.Invoke(++done, steps);
+            Done(++done, steps);
         }
         var concordance = new List<CohortConcordance>();
         for (int i = 0; i < screenable.Length; i++)
@@ -77,7 +79,7 @@ internal static class CohortAnalysis
         double cohortAccuracy = 1 - new OutOfBagVotes(cohortForest, cohortOutcome).Error;
         var cohortImportanceRank = RankDescending(ImpurityImportance.From(cohortForest).MeanDecrease);
         double largestShare = rowsOf.Max(r => r.Length) / (double)panel.SampleCount;
-        progress?.Invoke(++done, steps);
+        Done(++done, steps);
 
         var (cramersV, associationP) = OutcomeCohortAssociation(outcome, cohort);
 
@@ -85,25 +87,12 @@ internal static class CohortAnalysis
         // independent, so they run in parallel and are gathered by index.
         int positiveContrast = Math.Max(0, univariate.Contrasts.ToList().IndexOf(outcome.ClassNames[outcome.PositiveClass]));
         var markers = new MarkerHeterogeneity[featureCount];
-        Parallel.For(0, featureCount, WorkerThreads.Options(options.ThreadCount),
+        Parallel.For(0, featureCount, WorkerThreads.Options(context.ThreadCount),
             i => markers[i] = Heterogeneity(panel, univariate, order[i], positiveContrast, cohortImportanceRank[order[i]]));
         FlagHeterogeneity(markers, options.QValueThreshold);
 
         // Leave one cohort out: screen the others, score the held-out one.
-        var heldOut = new List<HeldOutCohort>();
-        foreach (int c in heldOutCohorts)
-        {
-            cancellation.ThrowIfCancellationRequested();
-            var training = TrainingRowsWithout(panel, c);
-            // The panel is what the procedure locks when the held-out cohort is not there: the other
-            // cohorts' own shortlist, up to the curve's size limit; their size choice never sees it.
-            var shortlist = work.HeldOutScreen(c).Shortlist;
-            var panelFeatures = shortlist.AsSpan(0, Math.Min(shortlist.Length, options.CurveMaxPanelSize)).ToArray();
-            heldOut.Add(panelFeatures.Length == 0
-                ? new HeldOutCohort(cohort.LevelNames[c], rowsOf[c].Length, 0, double.NaN, ConfidenceInterval.Undefined(0.95), double.NaN)
-                : ScoreHeldOut(matrix, panel, settings, panelFeatures, training, rowsOf[c], cohort.LevelNames[c], HeldOutSeed(options, c)));
-            progress?.Invoke(++done, steps);
-        }
+        var heldOut = LeaveOneCohortOut.Validate(context, work, heldOutCohorts, rowsOf, () => Done(++done, steps));
 
         return new CohortResult(cohort.ColumnName, cohort.LevelNames, screenable.Select(c => cohort.LevelNames[c]).ToArray(),
             concordance, markers, heldOut, cohortAccuracy, largestShare, cramersV, associationP, cramersV >= ConfoundingCramersV);
@@ -259,35 +248,6 @@ internal static class CohortAnalysis
         double v = Math.Sqrt(chiSquare / (n * smaller));
         int degrees = (usedRows - 1) * (usedColumns - 1);
         return (v, ChiSquared.CDF(degrees, chiSquare) is var cdf ? 1 - cdf : double.NaN);
-    }
-
-    private static HeldOutCohort ScoreHeldOut(BinnedMatrix matrix, Panel panel, ScreenSettings settings, int[] features,
-        int[] training, int[] test, string cohortName, ulong seed)
-    {
-        var outcome = panel.Outcome;
-        var selected = matrix.SelectFeatures(features);
-        var forestOptions = settings.ForestOptions(panel.Subject, RandomStreams.HeldOutScoring(seed));
-        forestOptions = forestOptions with { Tree = forestOptions.Tree with { FeaturesPerSplit = null } };
-        var forest = ForestTrainer.Train(selected, outcome, forestOptions, training);
-        var prediction = forest.Predict(selected);
-        int wrong = 0;
-        var positives = new List<double>();
-        var negatives = new List<double>();
-        foreach (int row in test)
-        {
-            if (prediction.PredictedClasses[row] != outcome.SampleClasses[row]) wrong++;
-            double probability = prediction.Probability(row, outcome.PositiveClass);
-            (outcome.SampleClasses[row] == outcome.PositiveClass ? positives : negatives).Add(probability);
-        }
-        double auc = double.NaN;
-        var interval = ConfidenceInterval.Undefined(0.95);
-        if (outcome.ClassCount == 2 && positives.Count > 0 && negatives.Count > 0)
-        {
-            var estimate = DeLong.Estimate(positives.ToArray(), negatives.ToArray());
-            auc = estimate.Auc;
-            interval = AucInterval.Compute(estimate.Auc, estimate.StandardError);
-        }
-        return new HeldOutCohort(cohortName, test.Length, features.Length, auc, interval, (double)wrong / test.Length);
     }
 
     /// <summary>

@@ -58,11 +58,11 @@ internal static class PanelSizeEstimator
         return chosen >= 0 ? sizes[chosen] : Math.Min(listLength, sizes[allowed - 1]);
     }
 
-    public static PanelSizeCurve Estimate(BinnedMatrix matrix, Panel panel, ScreenSettings settings, int[] fullOrder,
-        int shortlistLength, ScreenWork work, Action<int, int>? foldDone, CancellationToken cancellation)
+    /// <summary>The curve over the outer folds of <paramref name="work"/>; progress is reported per fold.</summary>
+    public static PanelSizeCurve Estimate(ScreenContext context, int[] fullOrder, int shortlistLength, ScreenWork work)
     {
-        var options = settings.Options;
-        var outcome = panel.Outcome;
+        var (matrix, options) = (context.Matrix, context.Options);
+        var outcome = context.Outcome;
         bool binary = outcome.ClassCount == 2;
         var folds = work.CurveFolds;
         int limit = Math.Min(options.CurveMaxPanelSize, matrix.FeatureCount);
@@ -75,17 +75,17 @@ internal static class PanelSizeEstimator
         var innerScreens = new InnerScreenResult[folds.Count];
         for (int i = 0; i < folds.Count; i++)
         {
-            cancellation.ThrowIfCancellationRequested();
+            context.Cancellation.ThrowIfCancellationRequested();
             var fold = folds[i];
             ulong innerSeed = InnerSeed(options, fold);
-            innerScreens[i] = work.CurveFoldScreen(i, cancellation);
+            innerScreens[i] = work.CurveFoldScreen(i);
             var innerOrder = innerScreens[i].Order;
             for (int s = 0; s < sizes.Length; s++)
             {
-                (selectionAware[i, s], selectionAwareError[i, s], selectionAwareProbabilities[i, s]) = Score(matrix, panel, settings, innerOrder.AsSpan(0, sizes[s]), fold, RandomStreams.PanelScoring(innerSeed, s), binary);
-                (optimistic[i, s], optimisticError[i, s], _) = Score(matrix, panel, settings, fullOrder.AsSpan(0, sizes[s]), fold, RandomStreams.PanelScoring(innerSeed, s), binary);
+                (selectionAware[i, s], selectionAwareError[i, s], selectionAwareProbabilities[i, s]) = Score(context, innerOrder.AsSpan(0, sizes[s]), fold, RandomStreams.PanelScoring(innerSeed, s));
+                (optimistic[i, s], optimisticError[i, s], _) = Score(context, fullOrder.AsSpan(0, sizes[s]), fold, RandomStreams.PanelScoring(innerSeed, s));
             }
-            foldDone?.Invoke(i + 1, folds.Count);
+            context.Report(ScreenStage.PanelSizeCurve, i + 1, folds.Count);
         }
 
         var points = new PanelSizePoint[sizes.Length];
@@ -146,7 +146,7 @@ internal static class PanelSizeEstimator
                 probabilities = selectionAwareProbabilities[i, onGrid];
             }
             else
-                (lockedScores[i], _, probabilities) = Score(matrix, panel, settings, panelFeatures, fold, RandomStreams.PanelScoring(InnerSeed(options, fold), sizes.Length), binary);
+                (lockedScores[i], _, probabilities) = Score(context, panelFeatures, fold, RandomStreams.PanelScoring(InnerSeed(options, fold), sizes.Length));
             AddOutOfFold(outcome, fold, probabilities, outOfFoldScores, outOfFoldPositive);
         }
         double lockedMean = lockedScores.Average();
@@ -188,31 +188,13 @@ internal static class PanelSizeEstimator
         return (double)right / fold.TestRows.Length;
     }
 
-    /// <summary>Grows a forest on the fold's training rows using the given features and scores the test rows.</summary>
-    private static (double Score, double Error, double[] Probabilities) Score(BinnedMatrix matrix, Panel panel, ScreenSettings settings,
-        ReadOnlySpan<int> features, OuterFold fold, ForestStreams streams, bool binary)
+    /// <summary>A panel scored on the fold's test rows (<see cref="PanelScorer"/>): AUC with two classes, accuracy with more.</summary>
+    private static (double Score, double Error, double[] Probabilities) Score(ScreenContext context,
+        ReadOnlySpan<int> features, OuterFold fold, ForestStreams streams)
     {
-        var outcome = panel.Outcome;
-        var selected = matrix.SelectFeatures(features);
-        // The panel forest tries floor(sqrt(k)) features per split of its own k, whatever the screen used.
-        var forestOptions = settings.ForestOptions(panel.Subject, streams);
-        forestOptions = forestOptions with { Tree = forestOptions.Tree with { FeaturesPerSplit = null } };
-        var forest = ForestTrainer.Train(selected, outcome, forestOptions, fold.TrainingRows);
-        var prediction = forest.Predict(selected);
-        var classes = outcome.SampleClasses;
-        int wrong = 0;
-        var scores = new double[fold.TestRows.Length];
-        var positive = new bool[fold.TestRows.Length];
-        for (int i = 0; i < fold.TestRows.Length; i++)
-        {
-            int row = fold.TestRows[i];
-            if (prediction.PredictedClasses[row] != classes[row]) wrong++;
-            scores[i] = prediction.Probability(row, outcome.PositiveClass);
-            positive[i] = classes[row] == outcome.PositiveClass;
-        }
-        double error = (double)wrong / fold.TestRows.Length;
-        double score = binary ? MannWhitneyAuc.Compute(scores, positive) : 1 - error;
-        return (score, error, scores);
+        var scored = PanelScorer.Score(context, features, fold.TrainingRows, fold.TestRows, streams);
+        double score = context.Outcome.ClassCount == 2 ? MannWhitneyAuc.Compute(scored.PositiveProbabilities, scored.IsPositive) : 1 - scored.Error;
+        return (score, scored.Error, scored.PositiveProbabilities);
     }
 
     /// <summary>Mean and sample SD of one column over the folds, leaving out <paramref name="skippedRow"/> (-1 for none); SD is NaN with fewer than two folds.</summary>

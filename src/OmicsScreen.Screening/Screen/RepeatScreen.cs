@@ -21,17 +21,15 @@ namespace OmicsScreen.Screening.Screen;
 /// </remarks>
 internal static class RepeatScreen
 {
-    public static RepeatImportances Run(BinnedMatrix matrix, ClassOutcome outcome, SampleGrouping? subject,
-        ReadOnlySpan<int> eligibleRows, ScreenSettings settings, ulong runSeed, int pairCount, int decoyCount,
-        Action<int>? repeatDone, CancellationToken cancellation)
+    /// <summary>All 2 x <paramref name="pairCount"/> repeats of a screen at <paramref name="runSeed"/> on the eligible rows.</summary>
+    public static RepeatImportances Run(ScreenContext context, ReadOnlySpan<int> eligibleRows, ulong runSeed, int pairCount)
     {
-        var halves = HalfSamplePairs.Draw(outcome, subject, eligibleRows, pairCount, runSeed);
-        var result = new RepeatImportances(halves.Length, matrix.FeatureCount, decoyCount);
+        var halves = HalfSamplePairs.Draw(context.Outcome, context.Subject, eligibleRows, pairCount, runSeed);
+        var result = new RepeatImportances(halves.Length, context.Matrix.FeatureCount, context.Settings.DecoyCount);
         for (int repeat = 0; repeat < halves.Length; repeat++)
         {
-            cancellation.ThrowIfCancellationRequested();
-            RunOne(matrix, outcome, subject, halves[repeat], settings, runSeed, repeat, result, repeat);
-            repeatDone?.Invoke(repeat + 1);
+            context.Cancellation.ThrowIfCancellationRequested();
+            RunOne(context, halves[repeat], RandomStreams.ScreenRepeat(runSeed, repeat), result, repeat);
         }
         return result;
     }
@@ -39,18 +37,20 @@ internal static class RepeatScreen
     /// <summary>
     /// One repeat on the half-sample <paramref name="rows"/>, written into row
     /// <paramref name="row"/> of <paramref name="result"/>. Its random streams come from
-    /// (run seed, repeat) alone, so a repeat computed on its own equals the same repeat of a loop.
+    /// <paramref name="streams"/> (run seed, repeat) alone, so a repeat computed on its own equals
+    /// the same repeat of a loop.
     /// </summary>
-    internal static void RunOne(BinnedMatrix matrix, ClassOutcome outcome, SampleGrouping? subject, int[] rows,
-        ScreenSettings settings, ulong runSeed, int repeat, RepeatImportances result, int row)
+    internal static void RunOne(ScreenContext context, int[] rows, ForestStreams streams, RepeatImportances result, int row)
     {
+        var (matrix, outcome, settings) = (context.Matrix, context.Outcome, context.Settings);
         int featureCount = matrix.FeatureCount, decoyCount = result.DecoyCount;
+        ulong runSeed = streams.Seed;
         result.TrainingSampleCounts[row] = rows.Length;
-        var options = settings.ForestOptions(subject, RandomStreams.ScreenRepeat(runSeed, repeat));
+        var options = settings.ForestOptions(context.Subject, streams);
 
         var forest = ForestTrainer.Train(matrix, outcome, options, rows);
         ImpurityImportance.From(forest).MeanDecrease.CopyTo(result.Row(result.Impurity, row));
-        var permutation = OutOfBagPermutationImportance.Measure(forest, matrix, outcome, settings.Options.ThreadCount);
+        var permutation = OutOfBagPermutationImportance.Measure(forest, matrix, outcome, context.ThreadCount);
         permutation.MeanAccuracyDrop.CopyTo(result.Row(result.Permutation, row));
 
         var decoySources = DecoyPlan.For(featureCount, decoyCount, runSeed).Sources;

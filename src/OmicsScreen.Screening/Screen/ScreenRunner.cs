@@ -37,7 +37,8 @@ public static class ScreenRunner
         }
 
         progress?.Report(new ScreenProgress(ScreenStage.Binning, 0, 1));
-        var matrix = new BinMapper().Bin(panel.Matrix, options.ThreadCount);
+        var matrix = new BinMapper().Bin(panel.Matrix, settings.ThreadCount);
+        var context = new ScreenContext(panel, matrix, settings, progress, cancellation);
         Finish(ScreenStage.Binning);
 
         progress?.Report(new ScreenProgress(ScreenStage.UnivariateStatistics, 0, 1));
@@ -51,9 +52,8 @@ public static class ScreenRunner
         var reference = new ReferenceForestSummary(votes.Error, votes.PerClassError.ToArray(), votes.Auc, votes.ErrorCurve.ToArray());
         Finish(ScreenStage.ReferenceForest);
 
-        var work = new ScreenWork(panel, matrix, settings, store, computeMissing);
-        int repeatCount = settings.RepeatCount;
-        var repeats = work.MainRepeats(done => progress?.Report(new ScreenProgress(ScreenStage.Repeats, done, repeatCount)), cancellation);
+        var work = new ScreenWork(context, store, computeMissing);
+        var repeats = work.MainRepeats();
         Finish(ScreenStage.Repeats);
 
         double[] outcomePermutationP = [];
@@ -70,7 +70,7 @@ public static class ScreenRunner
 
         var allRows = Enumerable.Range(0, panel.SampleCount).ToArray();
         var plan = DecoyPlan.For(panel.FeatureCount, settings.DecoyCount, options.Seed);
-        var direct = DirectTestEvidence.Compute(panel, allRows, plan, settings.InteractionScan, options.ThreadCount);
+        var direct = DirectTestEvidence.Compute(panel, allRows, plan, settings.InteractionScan, settings.ThreadCount);
         var decoyEvidence = DecoyEvidence.From(repeats, direct);
         var features = ScreenAggregation.Summarise(repeats, panel.Matrix.FeatureNames, decoyEvidence, outcomePermutationP, direct);
         var order = ScreenAggregation.OrderOf(features);
@@ -93,7 +93,7 @@ public static class ScreenRunner
         for (int g = 1; g <= (groups.Length == 0 ? 0 : groups.Max()); g++)
             groupMembers.Add(shortlisted.Where((_, i) => groups[i] == g).ToArray());
         var groupImportance = groupMembers.Count == 0 ? []
-            : OutOfBagPermutationImportance.MeasureGroups(referenceForest, matrix, panel.Outcome, groupMembers, options.ThreadCount);
+            : OutOfBagPermutationImportance.MeasureGroups(referenceForest, matrix, panel.Outcome, groupMembers, settings.ThreadCount);
         int positiveContrast = ContrastOfPositiveClass(univariate, panel);
         var shortlist = shortlisted.Select((f, i) => new ShortlistEntry(i + 1, features[f], groups[i], groupImportance[groups[i] - 1],
             univariate.Row(f, positiveContrast), univariateRanks[f])).ToList();
@@ -103,8 +103,7 @@ public static class ScreenRunner
         {
             int foldTotal = options.CurveFolds * options.CurveFoldRepeats;
             progress?.Report(new ScreenProgress(ScreenStage.PanelSizeCurve, 0, foldTotal));
-            curve = PanelSizeEstimator.Estimate(matrix, panel, settings, order, shortlisted.Count, work,
-                (done, total) => progress?.Report(new ScreenProgress(ScreenStage.PanelSizeCurve, done, total)), cancellation);
+            curve = PanelSizeEstimator.Estimate(context, order, shortlisted.Count, work);
             Finish(ScreenStage.PanelSizeCurve);
         }
 
@@ -112,8 +111,7 @@ public static class ScreenRunner
         if (panel.Cohort is { LevelCount: >= 2 })
         {
             progress?.Report(new ScreenProgress(ScreenStage.Cohorts, 0, 1));
-            cohorts = CohortAnalysis.Run(panel, matrix, settings, order, univariate, work,
-                (done, total) => progress?.Report(new ScreenProgress(ScreenStage.Cohorts, done, total)), cancellation);
+            cohorts = CohortAnalysis.Run(context, order, univariate, work);
             Finish(ScreenStage.Cohorts);
         }
 
@@ -140,12 +138,12 @@ public static class ScreenRunner
         ArgumentNullException.ThrowIfNull(panel);
         var settings = ScreenSettings.Resolve(options, panel);
         progress?.Report(new ScreenProgress(ScreenStage.Binning, 0, 1));
-        var matrix = new BinMapper().Bin(panel.Matrix, options.ThreadCount);
-        var work = new ScreenWork(panel, matrix, settings, store);
+        var matrix = new BinMapper().Bin(panel.Matrix, settings.ThreadCount);
+        var work = new ScreenWork(new ScreenContext(panel, matrix, settings, progress, cancellation), store);
         for (int i = 0; i < units.Count; i++)
         {
             progress?.Report(new ScreenProgress(ScreenStage.WorkUnits, i, units.Count));
-            work.Obtain(units[i], cancellation);
+            work.Obtain(units[i]);
         }
         progress?.Report(new ScreenProgress(ScreenStage.WorkUnits, units.Count, units.Count));
     }

@@ -1,4 +1,5 @@
 using OmicsScreen.Engine.Forests;
+using OmicsScreen.Engine.Parallelism;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Engine.Sampling;
 using OmicsScreen.Engine.Trees;
@@ -30,6 +31,9 @@ public sealed record ScreenSettings
 
     public required bool ClassBalanced { get; init; }
     public required int DecoyCount { get; init; }
+
+    /// <summary>Worker threads of every step: the option, or every core for 0, resolved once here.</summary>
+    public required int ThreadCount { get; init; }
 
     /// <summary>Whether the pairwise interaction scan runs (never without decoys, which calibrate it).</summary>
     public required bool InteractionScan { get; init; }
@@ -68,6 +72,7 @@ public sealed record ScreenSettings
             OutcomePermutationForestFeaturesPerSplit = options.OutcomePermutations > 0 ? tree.ResolveFeaturesPerSplit(2 * featureCount) : 0,
             ClassBalanced = balanced,
             DecoyCount = decoys,
+            ThreadCount = WorkerThreads.Resolve(options.ThreadCount),
             InteractionScan = InteractionScanRuns(options, featureCount, decoys),
         };
     }
@@ -99,7 +104,7 @@ public sealed record ScreenSettings
         TreeCount = Options.TreesPerForest,
         Seed = streams.Seed,
         Repeat = streams.Repeat,
-        ThreadCount = Options.ThreadCount,
+        ThreadCount = ThreadCount,
         Tree = new TreeOptions
         {
             FeaturesPerSplit = featuresPerSplit ?? (Options.FeaturesPerSplit > 0 ? Options.FeaturesPerSplit : null),

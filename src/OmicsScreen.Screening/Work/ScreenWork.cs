@@ -2,6 +2,7 @@ using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Screening.Cohorts;
 using OmicsScreen.Screening.Importance;
+using OmicsScreen.Screening.Randomness;
 using OmicsScreen.Screening.Resampling;
 using OmicsScreen.Screening.Screen;
 
@@ -15,6 +16,7 @@ namespace OmicsScreen.Screening.Work;
 /// </summary>
 internal sealed class ScreenWork
 {
+    private readonly ScreenContext _context;
     private readonly Panel _panel;
     private readonly BinnedMatrix _matrix;
     private readonly ScreenSettings _settings;
@@ -24,11 +26,10 @@ internal sealed class ScreenWork
     private IReadOnlyList<OuterFold>? _folds;
 
     /// <param name="computeMissing">False when every unit must come from the store (merging parts); a missing one is then an error.</param>
-    public ScreenWork(Panel panel, BinnedMatrix matrix, ScreenSettings settings, IWorkUnitStore? store, bool computeMissing = true)
+    public ScreenWork(ScreenContext context, IWorkUnitStore? store, bool computeMissing = true)
     {
-        _panel = panel;
-        _matrix = matrix;
-        _settings = settings;
+        _context = context;
+        (_panel, _matrix, _settings) = (context.Panel, context.Matrix, context.Settings);
         _store = store;
         _computeMissing = computeMissing;
     }
@@ -48,33 +49,34 @@ internal sealed class ScreenWork
         Enumerable.Range(0, _panel.SampleCount).ToArray(), _settings.Options.CurveFolds, _settings.Options.CurveFoldRepeats,
         _settings.Options.Seed);
 
-    /// <summary>All repeats of the main screen, assembled in repeat order.</summary>
-    public RepeatImportances MainRepeats(Action<int>? repeatDone, CancellationToken cancellation)
+    /// <summary>All repeats of the main screen, assembled in repeat order; progress reported per repeat.</summary>
+    public RepeatImportances MainRepeats()
     {
         int repeatCount = _settings.RepeatCount;
         var all = new RepeatImportances(repeatCount, _matrix.FeatureCount, _settings.DecoyCount);
         for (int r = 0; r < repeatCount; r++)
         {
-            cancellation.ThrowIfCancellationRequested();
-            var one = (RepeatUnitResult)Obtain(new WorkUnit(WorkUnitKind.Repeat, r), cancellation);
+            var one = (RepeatUnitResult)Obtain(new WorkUnit(WorkUnitKind.Repeat, r));
             all.CopyRepeatFrom(one.Row, 0, r);
-            repeatDone?.Invoke(r + 1);
+            _context.Report(ScreenStage.Repeats, r + 1, repeatCount);
         }
         return all;
     }
 
-    public InnerScreenResult CurveFoldScreen(int fold, CancellationToken cancellation = default) =>
-        (InnerScreenResult)Obtain(new WorkUnit(WorkUnitKind.CurveFold, fold), cancellation);
+    public InnerScreenResult CurveFoldScreen(int fold) => (InnerScreenResult)Obtain(new WorkUnit(WorkUnitKind.CurveFold, fold));
 
-    public InnerScreenResult CohortScreen(int cohort, CancellationToken cancellation = default) =>
-        (InnerScreenResult)Obtain(new WorkUnit(WorkUnitKind.CohortScreen, cohort), cancellation);
+    public InnerScreenResult CohortScreen(int cohort) => (InnerScreenResult)Obtain(new WorkUnit(WorkUnitKind.CohortScreen, cohort));
 
-    public InnerScreenResult HeldOutScreen(int cohort, CancellationToken cancellation = default) =>
-        (InnerScreenResult)Obtain(new WorkUnit(WorkUnitKind.HeldOutScreen, cohort), cancellation);
+    public InnerScreenResult HeldOutScreen(int cohort) => (InnerScreenResult)Obtain(new WorkUnit(WorkUnitKind.HeldOutScreen, cohort));
 
-    /// <summary>The unit's result from the store, or computed (and then saved).</summary>
-    public WorkUnitResult Obtain(WorkUnit unit, CancellationToken cancellation)
+    /// <summary>
+    /// The unit's result from the store, or computed (and then saved). Every unit, inner screens
+    /// included, stops between repeats when the context's cancellation is requested.
+    /// </summary>
+    public WorkUnitResult Obtain(WorkUnit unit)
     {
+        var cancellation = _context.Cancellation;
+        cancellation.ThrowIfCancellationRequested();
         if (_store is not null && _store.TryLoad(unit, out var stored))
         {
             ReusedCount++;
@@ -82,13 +84,13 @@ internal sealed class ScreenWork
         }
         if (!_computeMissing)
             throw new InvalidOperationException($"Work unit {unit.Name} is in none of the stored parts.");
-        var result = Compute(unit, cancellation);
+        var result = Compute(unit);
         ComputedCount++;
         _store?.Save(unit, result);
         return result;
     }
 
-    private WorkUnitResult Compute(WorkUnit unit, CancellationToken cancellation)
+    private WorkUnitResult Compute(WorkUnit unit)
     {
         var options = _settings.Options;
         switch (unit.Kind)
@@ -96,19 +98,18 @@ internal sealed class ScreenWork
             case WorkUnitKind.Repeat:
                 {
                     var row = new RepeatImportances(1, _matrix.FeatureCount, _settings.DecoyCount);
-                    RepeatScreen.RunOne(_matrix, _panel.Outcome, _panel.Subject, Halves[unit.Index], _settings, options.Seed,
-                        unit.Index, row, 0);
+                    RepeatScreen.RunOne(_context, Halves[unit.Index], RandomStreams.ScreenRepeat(options.Seed, unit.Index), row, 0);
                     return new RepeatUnitResult(row);
                 }
             case WorkUnitKind.CurveFold:
                 {
                     var fold = CurveFolds[unit.Index];
-                    return InnerScreen(fold.TrainingRows, PanelSizeEstimator.InnerSeed(options, fold), cancellation);
+                    return InnerScreen(fold.TrainingRows, PanelSizeEstimator.InnerSeed(options, fold));
                 }
             case WorkUnitKind.CohortScreen:
-                return InnerScreen(CohortAnalysis.RowsOfCohorts(_panel)[unit.Index], CohortAnalysis.CohortScreenSeed(options, unit.Index), cancellation);
+                return InnerScreen(CohortAnalysis.RowsOfCohorts(_panel)[unit.Index], CohortAnalysis.CohortScreenSeed(options, unit.Index));
             case WorkUnitKind.HeldOutScreen:
-                return InnerScreen(CohortAnalysis.TrainingRowsWithout(_panel, unit.Index), CohortAnalysis.HeldOutSeed(options, unit.Index), cancellation);
+                return InnerScreen(CohortAnalysis.TrainingRowsWithout(_panel, unit.Index), CohortAnalysis.HeldOutSeed(options, unit.Index));
             default:
                 throw new ArgumentOutOfRangeException(nameof(unit));
         }
@@ -119,12 +120,11 @@ internal sealed class ScreenWork
     /// screen (fewer repeats): the building block of the curve and the cohort checks, so what they
     /// measure is the procedure whose panel is locked.
     /// </summary>
-    private InnerScreenResult InnerScreen(int[] rows, ulong seed, CancellationToken cancellation)
+    private InnerScreenResult InnerScreen(int[] rows, ulong seed)
     {
-        var repeats = RepeatScreen.Run(_matrix, _panel.Outcome, _panel.Subject, rows, _settings, seed,
-            _settings.Options.CurveInnerPairs, _settings.DecoyCount, repeatDone: null, cancellation);
+        var repeats = RepeatScreen.Run(_context, rows, seed, _settings.Options.CurveInnerPairs);
         var plan = DecoyPlan.For(_matrix.FeatureCount, _settings.DecoyCount, seed);
-        var direct = DirectTestEvidence.Compute(_panel, rows, plan, _settings.InteractionScan, _settings.Options.ThreadCount);
+        var direct = DirectTestEvidence.Compute(_panel, rows, plan, _settings.InteractionScan, _context.ThreadCount);
         var decoys = DecoyEvidence.From(repeats, direct);
         var features = ScreenAggregation.Summarise(repeats, _matrix.FeatureNames, decoys, [], direct);
         var order = ScreenAggregation.OrderOf(features);

@@ -1,0 +1,56 @@
+using OmicsScreen.Screening.Randomness;
+using OmicsScreen.Screening.Screen;
+using OmicsScreen.Screening.Statistics;
+using OmicsScreen.Screening.Work;
+
+namespace OmicsScreen.Screening.Cohorts;
+
+/// <summary>
+/// Leave-one-cohort-out validation, one of the cohort check's analyses: for each cohort, the
+/// screen of the other cohorts locks a panel, and a forest on that panel, grown on the other
+/// cohorts, is scored on the held-out one (<see cref="PanelScorer"/>, as the panel-size curve
+/// scores a fold), so the held-out cohort never takes part in choosing or fitting its panel.
+/// </summary>
+internal static class LeaveOneCohortOut
+{
+    /// <param name="heldOutCohorts">Cohorts that can be held out (<see cref="CohortAnalysis.HeldOutCohorts"/>).</param>
+    /// <param name="rowsOf">The samples of each cohort.</param>
+    /// <param name="cohortDone">Told after each held-out cohort.</param>
+    public static List<HeldOutCohort> Validate(ScreenContext context, ScreenWork work, int[] heldOutCohorts, int[][] rowsOf, Action cohortDone)
+    {
+        var cohort = context.Panel.Cohort ?? throw new ArgumentException("The panel names no cohort.");
+        var heldOut = new List<HeldOutCohort>();
+        foreach (int c in heldOutCohorts)
+        {
+            context.Cancellation.ThrowIfCancellationRequested();
+            var training = CohortAnalysis.TrainingRowsWithout(context.Panel, c);
+            // The panel is what the procedure locks when the held-out cohort is not there: the other
+            // cohorts' own shortlist, up to the curve's size limit; their size choice never sees it.
+            var shortlist = work.HeldOutScreen(c).Shortlist;
+            var panelFeatures = shortlist.AsSpan(0, Math.Min(shortlist.Length, context.Options.CurveMaxPanelSize)).ToArray();
+            heldOut.Add(panelFeatures.Length == 0
+                ? new HeldOutCohort(cohort.LevelNames[c], rowsOf[c].Length, 0, double.NaN, ConfidenceInterval.Undefined(0.95), double.NaN)
+                : Score(context, panelFeatures, training, rowsOf[c], cohort.LevelNames[c], CohortAnalysis.HeldOutSeed(context.Options, c)));
+            cohortDone();
+        }
+        return heldOut;
+    }
+
+    /// <summary>The held-out cohort's AUC with its DeLong (1988) 95% interval (two classes, both present) and error.</summary>
+    private static HeldOutCohort Score(ScreenContext context, int[] features, int[] training, int[] test, string cohortName, ulong seed)
+    {
+        var scored = PanelScorer.Score(context, features, training, test, RandomStreams.HeldOutScoring(seed));
+        var positives = new List<double>();
+        var negatives = new List<double>();
+        for (int i = 0; i < test.Length; i++) (scored.IsPositive[i] ? positives : negatives).Add(scored.PositiveProbabilities[i]);
+        double auc = double.NaN;
+        var interval = ConfidenceInterval.Undefined(0.95);
+        if (context.Outcome.ClassCount == 2 && positives.Count > 0 && negatives.Count > 0)
+        {
+            var estimate = DeLong.Estimate(positives.ToArray(), negatives.ToArray());
+            auc = estimate.Auc;
+            interval = AucInterval.Compute(estimate.Auc, estimate.StandardError);
+        }
+        return new HeldOutCohort(cohortName, test.Length, features.Length, auc, interval, scored.Error);
+    }
+}
