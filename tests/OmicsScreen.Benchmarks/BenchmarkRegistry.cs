@@ -6,7 +6,7 @@ public static class BenchmarkRegistry
     public static IReadOnlyList<(string Suite, IBenchmarkCase Case)> All { get; } = Build();
 
     /// <summary>Summaries printed after their suite's cases have run.</summary>
-    public static IReadOnlyList<ISuiteReport> Reports { get; } = [new ScalingReport(), new ForestReport()];
+    public static IReadOnlyList<ISuiteReport> Reports { get; } = [new ScalingReport(), new ForestReport(), new GrowProcessReport()];
 
     private static List<(string, IBenchmarkCase)> Build()
     {
