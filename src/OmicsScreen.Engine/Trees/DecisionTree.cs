@@ -1,4 +1,3 @@
-using System.Runtime.CompilerServices;
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Panels;
 
@@ -16,17 +15,9 @@ namespace OmicsScreen.Engine.Trees;
 /// </remarks>
 public sealed class DecisionTree
 {
-    private readonly int[] _features;
-    private readonly byte[] _binThresholds;
-    private readonly float[] _thresholds;
-    private readonly byte[] _missingCodes;
-    private readonly UnmeasuredRouting[] _routing;
-    private readonly int[] _leftChildren;
-    private readonly int[] _rightChildren;
     private readonly double[] _classWeights;
     private readonly int[] _nodeClasses;
     private readonly double[] _impurityDecreases;
-    private readonly int[] _sampleCounts;
 
     /// <param name="missingCodes">Per node, the missing code (= value bin count) of its split feature.</param>
     /// <param name="classWeights">Per node, classCount weighted sample counts, node-major.</param>
@@ -36,29 +27,15 @@ public sealed class DecisionTree
         UnmeasuredRouting[] routing, int[] leftChildren, int[] rightChildren, double[] classWeights,
         int[] nodeClasses, double[] impurityDecreases, int[] sampleCounts)
     {
+        // The shape checks its own arrays (lengths, children after their parent).
+        Topology = new SplitTopology(features, binThresholds, thresholds, missingCodes, routing, leftChildren, rightChildren, sampleCounts);
         int nodeCount = features.Length;
-        if (nodeCount < 1) throw new ArgumentException("A tree has at least a root.");
-        if (binThresholds.Length != nodeCount || thresholds.Length != nodeCount || missingCodes.Length != nodeCount
-            || routing.Length != nodeCount || leftChildren.Length != nodeCount || rightChildren.Length != nodeCount
-            || nodeClasses.Length != nodeCount || impurityDecreases.Length != nodeCount || sampleCounts.Length != nodeCount
-            || classWeights.Length != nodeCount * classCount)
+        if (nodeClasses.Length != nodeCount || impurityDecreases.Length != nodeCount || classWeights.Length != nodeCount * classCount)
             throw new ArgumentException("Every node array must have one entry per node.");
-        for (int node = 0; node < nodeCount; node++)
-            if (features[node] >= 0 && ((uint)leftChildren[node] >= (uint)nodeCount || (uint)rightChildren[node] >= (uint)nodeCount
-                || leftChildren[node] <= node || rightChildren[node] <= node))
-                throw new ArgumentException($"Node {node} has a child out of range.");
         ClassCount = classCount;
-        _features = features;
-        _binThresholds = binThresholds;
-        _thresholds = thresholds;
-        _missingCodes = missingCodes;
-        _routing = routing;
-        _leftChildren = leftChildren;
-        _rightChildren = rightChildren;
         _classWeights = classWeights;
         _nodeClasses = nodeClasses;
         _impurityDecreases = impurityDecreases;
-        _sampleCounts = sampleCounts;
     }
 
     /// <summary>The parallel node arrays a tree holds, each an object with its own header.</summary>
@@ -73,105 +50,62 @@ public sealed class DecisionTree
         sizeof(int) + sizeof(byte) + sizeof(float) + sizeof(byte) + sizeof(byte) + 2 * sizeof(int) + sizeof(int)
         + sizeof(double) + sizeof(int) + classCount * sizeof(double);
 
-    public int NodeCount => _features.Length;
+    /// <summary>The tree's splits and children, shared in form with regression and survival trees.</summary>
+    public SplitTopology Topology { get; }
+
+    public int NodeCount => Topology.NodeCount;
     public int ClassCount { get; }
 
     /// <summary>Split feature of each node; -1 at leaves.</summary>
-    public ReadOnlySpan<int> Features => _features;
-    public ReadOnlySpan<byte> BinThresholds => _binThresholds;
+    public ReadOnlySpan<int> Features => Topology.Features;
+    public ReadOnlySpan<byte> BinThresholds => Topology.BinThresholds;
     /// <summary>Split thresholds in the feature's original units.</summary>
-    public ReadOnlySpan<float> Thresholds => _thresholds;
-    public ReadOnlySpan<UnmeasuredRouting> Routing => _routing;
-    public ReadOnlySpan<int> LeftChildren => _leftChildren;
-    public ReadOnlySpan<int> RightChildren => _rightChildren;
+    public ReadOnlySpan<float> Thresholds => Topology.Thresholds;
+    public ReadOnlySpan<UnmeasuredRouting> Routing => Topology.Routing;
+    public ReadOnlySpan<int> LeftChildren => Topology.LeftChildren;
+    public ReadOnlySpan<int> RightChildren => Topology.RightChildren;
     /// <summary>Weighted class counts of every node, node-major (ClassCount per node).</summary>
     public ReadOnlySpan<double> ClassWeights => _classWeights;
     public ReadOnlySpan<int> NodeClasses => _nodeClasses;
     public ReadOnlySpan<double> ImpurityDecreases => _impurityDecreases;
     /// <summary>Distinct training samples that reached each node.</summary>
-    public ReadOnlySpan<int> NodeSampleCounts => _sampleCounts;
+    public ReadOnlySpan<int> NodeSampleCounts => Topology.NodeSampleCounts;
 
-    public bool IsLeaf(int node) => _features[node] < 0;
+    public bool IsLeaf(int node) => Topology.IsLeaf(node);
 
     public int SplitCount
     {
         get
         {
             int count = 0;
-            foreach (int f in _features) if (f >= 0) count++;
+            foreach (int f in Topology.Features) if (f >= 0) count++;
             return count;
         }
     }
 
     /// <summary>The distinct features this tree splits on, in increasing order.</summary>
-    public int[] SplitFeatures()
-    {
-        var used = new SortedSet<int>();
-        foreach (int f in _features) if (f >= 0) used.Add(f);
-        return used.ToArray();
-    }
+    public int[] SplitFeatures() => Topology.SplitFeatures();
 
     /// <summary>Whether a sample with this code of the node's feature goes to the left child.</summary>
-    public bool GoesLeft(int node, byte code) =>
-        BranchRule.GoesLeft(code, _binThresholds[node], _missingCodes[node], _routing[node]);
+    public bool GoesLeft(int node, byte code) => Topology.GoesLeft(node, code);
 
     /// <summary>The leaf a sample of a binned matrix reaches.</summary>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    public int LeafOf(BinnedMatrix matrix, int sample)
-    {
-        int node = 0;
-        while (_features[node] >= 0)
-        {
-            byte code = matrix.Codes(_features[node])[sample];
-            node = GoesLeft(node, code) ? _leftChildren[node] : _rightChildren[node];
-        }
-        return node;
-    }
+    public int LeafOf(BinnedMatrix matrix, int sample) => Topology.LeafOf(matrix, sample);
 
     /// <summary>
     /// The leaf a sample reaches when its code of one feature is replaced, without copying
     /// anything: what permutation importance needs to score a permuted feature.
     /// </summary>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    public int LeafOf(BinnedMatrix matrix, int sample, int replacedFeature, byte replacementCode)
-    {
-        int node = 0;
-        while (_features[node] >= 0)
-        {
-            int feature = _features[node];
-            byte code = feature == replacedFeature ? replacementCode : matrix.Codes(feature)[sample];
-            node = GoesLeft(node, code) ? _leftChildren[node] : _rightChildren[node];
-        }
-        return node;
-    }
+    public int LeafOf(BinnedMatrix matrix, int sample, int replacedFeature, byte replacementCode) =>
+        Topology.LeafOf(matrix, sample, replacedFeature, replacementCode);
 
     /// <summary>The leaf a sample of a raw matrix (same features as the training panel) reaches.</summary>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    public int LeafOf(FeatureMatrix matrix, int sample)
-    {
-        int node = 0;
-        while (_features[node] >= 0)
-        {
-            int feature = _features[node];
-            var state = matrix.State(feature, sample);
-            float value = matrix.Value(feature, sample);
-            bool left;
-            if (state == CellState.BelowDetection) left = (_routing[node] & UnmeasuredRouting.BelowDetectionLeft) != 0;
-            else if (state == CellState.Missing || float.IsNaN(value)) left = (_routing[node] & UnmeasuredRouting.MissingLeft) != 0;
-            else left = value <= _thresholds[node];
-            node = left ? _leftChildren[node] : _rightChildren[node];
-        }
-        return node;
-    }
+    public int LeafOf(FeatureMatrix matrix, int sample) => Topology.LeafOf(matrix, sample);
 
-    public int PredictClass(BinnedMatrix matrix, int sample) => _nodeClasses[LeafOf(matrix, sample)];
+    public int PredictClass(BinnedMatrix matrix, int sample) => _nodeClasses[Topology.LeafOf(matrix, sample)];
 
-    public int PredictClass(FeatureMatrix matrix, int sample) => _nodeClasses[LeafOf(matrix, sample)];
+    public int PredictClass(FeatureMatrix matrix, int sample) => _nodeClasses[Topology.LeafOf(matrix, sample)];
 
     /// <summary>Adds each feature's total weighted impurity decrease in this tree to totals.</summary>
-    public void AddImpurityDecreases(Span<double> totals)
-    {
-        for (int node = 0; node < _features.Length; node++)
-            if (_features[node] >= 0) totals[_features[node]] += _impurityDecreases[node];
-    }
+    public void AddImpurityDecreases(Span<double> totals) => Topology.AddPerSplitFeature(_impurityDecreases, totals);
 }
