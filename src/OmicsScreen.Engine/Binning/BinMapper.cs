@@ -1,3 +1,4 @@
+using OmicsScreen.Engine.Parallelism;
 using System.Runtime.CompilerServices;
 using OmicsScreen.Engine.Panels;
 
@@ -37,7 +38,7 @@ public sealed class BinMapper
         int featureCount = matrix.FeatureCount;
         var codes = new byte[featureCount][];
         var bins = new FeatureBins[featureCount];
-        var parallel = new ParallelOptions { MaxDegreeOfParallelism = threadCount > 0 ? threadCount : Environment.ProcessorCount };
+        var parallel = WorkerThreads.Options(threadCount);
         // Chunks of features per task: on a wide panel a feature is a few microseconds of work.
         const int chunk = 64;
         int chunkCount = (featureCount + chunk - 1) / chunk;

@@ -1,3 +1,4 @@
+using OmicsScreen.Engine.Parallelism;
 using System.Runtime.CompilerServices;
 using System.Runtime.InteropServices;
 using System.Runtime.Intrinsics.X86;
@@ -136,7 +137,7 @@ public sealed class BinnedMatrix
         // on any number of threads. Chunks of columns keep the per-task overhead small.
         const int chunk = 256;
         int chunkCount = (listed.Length + chunk - 1) / chunk;
-        var parallel = new ParallelOptions { MaxDegreeOfParallelism = threadCount > 0 ? threadCount : Environment.ProcessorCount };
+        var parallel = WorkerThreads.Options(threadCount);
         Parallel.For(0, chunkCount, parallel, c =>
         {
             int end = Math.Min(listed.Length, (c + 1) * chunk);

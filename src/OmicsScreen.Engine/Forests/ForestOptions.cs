@@ -1,3 +1,4 @@
+using OmicsScreen.Engine.Parallelism;
 using OmicsScreen.Engine.Sampling;
 using OmicsScreen.Engine.Trees;
 
@@ -21,7 +22,7 @@ public sealed record ForestOptions
 
     public static ForestOptions Default { get; } = new();
 
-    public int ResolveThreadCount() => ThreadCount > 0 ? ThreadCount : Environment.ProcessorCount;
+    public int ResolveThreadCount() => WorkerThreads.Resolve(ThreadCount);
 
     public void Validate(int sampleCount)
     {

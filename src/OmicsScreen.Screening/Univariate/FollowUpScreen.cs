@@ -1,3 +1,4 @@
+using OmicsScreen.Engine.Parallelism;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Screening.Statistics;
 using OmicsScreen.Screening.Statistics.Survival;
@@ -38,7 +39,7 @@ public static class FollowUpScreen
         var times = time.ToArray();
         var events = eventObserved.ToArray();
         var rows = new FollowUpMarker[matrix.FeatureCount];
-        var parallel = new ParallelOptions { MaxDegreeOfParallelism = threadCount > 0 ? threadCount : Environment.ProcessorCount };
+        var parallel = WorkerThreads.Options(threadCount);
         Parallel.For(0, matrix.FeatureCount, parallel, () => (Rank: new double[times.Length], Model: new double[times.Length]),
             (feature, _, buffers) =>
             {

@@ -1,3 +1,4 @@
+using OmicsScreen.Engine.Parallelism;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Screening.Statistics;
 
@@ -29,7 +30,7 @@ public static class MeasuredOutcomeScreen
         if (outcome.Length != matrix.SampleCount) throw new ArgumentException("The outcome needs one value per sample.");
         var y = outcome.ToArray();
         var rows = new MeasuredOutcomeMarker[matrix.FeatureCount];
-        var parallel = new ParallelOptions { MaxDegreeOfParallelism = threadCount > 0 ? threadCount : Environment.ProcessorCount };
+        var parallel = WorkerThreads.Options(threadCount);
         Parallel.For(0, matrix.FeatureCount, parallel, () => new double[matrix.SampleCount], (feature, _, x) =>
         {
             var (missing, below) = MarkerValues.RankScale(matrix, feature, x);
