@@ -13,8 +13,21 @@ public sealed record PanelLoadOptions
     /// <summary>Optional CSV/TSV sample sheet joined to the matrix on sample id.</summary>
     public string? SampleSheetPath { get; init; }
 
-    /// <summary>The outcome column, in the sample sheet or as an annotation column of the matrix file.</summary>
-    public required string OutcomeColumn { get; init; }
+    /// <summary>
+    /// The outcome column, in the sample sheet or as an annotation column of the matrix file: classes
+    /// or a measured quantity (see <see cref="OutcomeKind"/>). Null when the outcome is a time to an
+    /// event, named by <see cref="FollowUpColumn"/> and <see cref="EventColumn"/> instead.
+    /// </summary>
+    public string? OutcomeColumn { get; init; }
+
+    /// <summary>Whether <see cref="OutcomeColumn"/> holds classes or a measured quantity; default: decided from its values.</summary>
+    public OutcomeKindChoice OutcomeKind { get; init; } = OutcomeKindChoice.Auto;
+
+    /// <summary>The follow-up time column of a time-to-event outcome (numbers, not negative).</summary>
+    public string? FollowUpColumn { get; init; }
+
+    /// <summary>The event column of a time-to-event outcome: 1/0, true/false or yes/no (1: event observed, 0: censored).</summary>
+    public string? EventColumn { get; init; }
 
     public string? CohortColumn { get; init; }
 
@@ -80,10 +93,13 @@ public sealed record PanelLoadOptions
     /// <summary>Limits read from the feature sheet before the matrix, applied by the readers as they build columns.</summary>
     internal DetectionLimits? FeatureLimits { get; init; }
 
-    /// <summary>The columns that describe samples rather than measure them: outcome, cohort, subject and annotations.</summary>
+    /// <summary>The columns that describe samples rather than measure them: outcome (or follow-up and event), cohort, subject and annotations.</summary>
     internal HashSet<string> SampleAttributeNames()
     {
-        var names = new HashSet<string>(StringComparer.Ordinal) { OutcomeColumn };
+        var names = new HashSet<string>(StringComparer.Ordinal);
+        if (OutcomeColumn is not null) names.Add(OutcomeColumn);
+        if (FollowUpColumn is not null) names.Add(FollowUpColumn);
+        if (EventColumn is not null) names.Add(EventColumn);
         if (CohortColumn is not null) names.Add(CohortColumn);
         if (SubjectColumn is not null) names.Add(SubjectColumn);
         foreach (var name in AnnotationColumns) names.Add(name);

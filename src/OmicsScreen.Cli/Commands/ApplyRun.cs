@@ -96,7 +96,8 @@ internal static class ApplyRun
             return (matrix, null, [input]);
         }
         // No EnsureScreenable: a cohort of one class can still be scored and its error measured.
-        var loaded = PanelLoader.Load(options.ToLoadOptions());
+        // But a locked panel scores classes, so a measured outcome is refused before anything is written.
+        var loaded = PanelLoader.Load(options.ToLoadOptions()).EnsureClasses();
         return (loaded.Panel.Matrix, loaded.Panel.Outcome, loaded.Inputs);
     }
 

@@ -19,7 +19,7 @@ public sealed class CheckCommand : Command, IHelpLayout
 
     public IReadOnlyList<HelpSection> HelpSections =>
     [
-        new("Input", [Input.SampleSheet, Input.Outcome, Input.PositiveClass, Input.Subject, Input.SampleIdColumn, Input.Annotations,
+        new("Input", [Input.SampleSheet, Input.Outcome, Input.OutcomeKind, Input.FollowUp, Input.Event, Input.PositiveClass, Input.Subject, Input.SampleIdColumn, Input.Annotations,
             Input.FeatureSheet, Input.DetectionLimit, Input.FeaturesInRows, Input.Long, Input.FeatureColumns, Input.ValueColumn,
             Input.BelowDetectionFlag, Input.QualityFlag, Input.DisplayName, Input.DropUnmatched, Input.FeatureBlock, Input.KeepFeatures]),
         new("Cohorts", [Input.Cohort]),

@@ -20,11 +20,31 @@ public sealed class PanelInputOptions
         HelpName = "SHEET",
     };
 
-    public Option<string> Outcome { get; } = new("--outcome")
+    public Option<string?> Outcome { get; } = new("--outcome")
     {
-        Description = "Column holding each sample's class (in the sample sheet, or a text column of the matrix file).",
+        Description = "Column holding each sample's outcome (in the sample sheet, or a text column of the matrix file): "
+            + "its class, or a measured quantity. A time to an event is named by --follow-up and --event instead.",
         HelpName = "COLUMN",
-        Required = true,
+    };
+
+    public Option<OutcomeKindChoice> OutcomeKind { get; } = new("--outcome-kind")
+    {
+        Description = "How --outcome is read: classes, measured (a quantity), or auto: a column of numbers "
+            + "with many different values is measured, anything else classes.",
+        HelpName = "KIND",
+        DefaultValueFactory = _ => OutcomeKindChoice.Auto,
+    };
+
+    public Option<string?> FollowUp { get; } = new("--follow-up")
+    {
+        Description = "Column holding each sample's follow-up time (one unit, not negative) for a time-to-event outcome; use with --event instead of --outcome.",
+        HelpName = "COLUMN",
+    };
+
+    public Option<string?> Event { get; } = new("--event")
+    {
+        Description = "Column saying whether the event was observed at the end of follow-up: 1/0, true/false or yes/no (0: censored).",
+        HelpName = "COLUMN",
     };
 
     public Option<string?> Cohort { get; } = new("--cohort")
@@ -138,6 +158,9 @@ public sealed class PanelInputOptions
         command.Arguments.Add(Panel);
         command.Options.Add(SampleSheet);
         command.Options.Add(Outcome);
+        command.Options.Add(OutcomeKind);
+        command.Options.Add(FollowUp);
+        command.Options.Add(Event);
         command.Options.Add(Cohort);
         command.Options.Add(Subject);
         command.Options.Add(PositiveClass);
@@ -161,7 +184,10 @@ public sealed class PanelInputOptions
     {
         MatrixPath = parse.GetValue(Panel)!,
         SampleSheetPath = parse.GetValue(SampleSheet),
-        OutcomeColumn = parse.GetValue(Outcome)!,
+        OutcomeColumn = OutcomeColumnOf(parse),
+        OutcomeKind = parse.GetValue(OutcomeKind),
+        FollowUpColumn = parse.GetValue(FollowUp),
+        EventColumn = parse.GetValue(Event),
         CohortColumn = parse.GetValue(Cohort),
         SubjectColumn = parse.GetValue(Subject),
         PositiveClass = parse.GetValue(PositiveClass),
@@ -179,6 +205,26 @@ public sealed class PanelInputOptions
         FeatureBlock = parse.GetValue(FeatureBlock) is { } block ? ParseBlock(block) : null,
         KeepFeatures = parse.GetValue(KeepFeatures) is { } list ? ReadFeatureList(list) : null,
     };
+
+    /// <summary>
+    /// The outcome is named one way: --outcome, or --follow-up with --event; anything else is a
+    /// usage error that says which option to add or drop.
+    /// </summary>
+    private string? OutcomeColumnOf(ParseResult parse)
+    {
+        string? outcome = parse.GetValue(Outcome), followUp = parse.GetValue(FollowUp), eventColumn = parse.GetValue(Event);
+        if (followUp is not null || eventColumn is not null)
+        {
+            if (outcome is not null)
+                throw new CommandInputException("--outcome and --follow-up/--event name two different outcomes; give --outcome for classes or a measured quantity, or --follow-up and --event for a time to an event.");
+            if (followUp is null || eventColumn is null)
+                throw new CommandInputException($"a time-to-event outcome needs both columns: add {(followUp is null ? "--follow-up COLUMN (the follow-up time)" : "--event COLUMN (1 event observed, 0 censored)")}.");
+            if (parse.GetResult(OutcomeKind) is { Implicit: false })
+                throw new CommandInputException("--outcome-kind says how --outcome is read; leave it out with --follow-up and --event.");
+            return null;
+        }
+        return outcome ?? throw new CommandInputException("name the outcome: --outcome COLUMN (classes or a measured quantity), or --follow-up COLUMN and --event COLUMN (a time to an event).");
+    }
 
     /// <summary>The layout the options say; --features-in-rows and --long together are a usage error.</summary>
     public PanelLayout LayoutOf(ParseResult parse)

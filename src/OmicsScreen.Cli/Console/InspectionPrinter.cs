@@ -3,6 +3,8 @@ using System.Text.Json;
 using System.Text.Json.Serialization;
 using OmicsScreen.Data;
 using OmicsScreen.Data.Inspection;
+using OmicsScreen.Cli.Commands;
+using OmicsScreen.Engine.Panels;
 
 namespace OmicsScreen.Cli.Console;
 
@@ -32,7 +34,7 @@ internal static class InspectionPrinter
         }
         facts.Add("samples", Count(i.SampleCount));
         facts.Add("features", Count(i.FeatureCount));
-        facts.Add("outcome", $"{i.OutcomeColumn}: " + string.Join(", ", i.Classes.Select(c => $"{c.Name} {c.SampleCount}")) + $" (positive class: {i.PositiveClass})");
+        AddOutcomeFacts(facts, i, OutcomeSummary.Of(loaded.Panel));
         if (i.CohortColumn is not null)
             facts.Add("cohorts", $"{i.CohortColumn}: " + string.Join(", ", i.Cohorts.Select(c => $"{c.Name} {c.SampleCount}")));
         if (i.SubjectColumn is not null) facts.Add("subjects", $"{i.SubjectColumn}: {Count(i.SubjectCount)}");
@@ -71,7 +73,9 @@ internal static class InspectionPrinter
             findings.WriteTo(output);
         }
         output.WriteLine();
-        output.WriteLine(i.CanScreen ? "Verdict: the panel can be screened." : "Verdict: the panel cannot be screened until the errors are fixed.");
+        output.WriteLine(!i.CanScreen ? "Verdict: the panel cannot be screened until the errors are fixed."
+            : i.OutcomeKind == OutcomeKind.Classes ? "Verdict: the panel can be screened."
+            : "Verdict: the panel reads cleanly, but this version screens, grows and applies panels of classes only.");
     }
 
     public static void WriteJson(LoadedPanel loaded, TextWriter output)
@@ -85,12 +89,37 @@ internal static class InspectionPrinter
         };
         var document = new
         {
-            can_screen = loaded.Inspection.CanScreen,
+            can_screen = CheckRun.CanScreen(loaded),
             inspection = loaded.Inspection,
+            outcome = OutcomeSummary.Of(loaded.Panel),
             inputs = loaded.Inputs,
         };
         output.WriteLine(JsonSerializer.Serialize(document, options));
     }
+
+    /// <summary>The outcome rows: classes with counts, or the kind in words and its summary.</summary>
+    private static void AddOutcomeFacts(TextTable facts, PanelInspection i, OutcomeSummary summary)
+    {
+        if (summary.Measured is { } m)
+        {
+            facts.Add("outcome", $"{i.OutcomeColumn}: a measured quantity (--outcome-kind classes reads its values as classes instead)");
+            facts.Add("outcome values", $"{Count(m.Samples)} samples, {Count(m.Missing)} missing; min {Number(m.Min)}, quartiles {Number(m.LowerQuartile)} / "
+                + $"{Number(m.Median)} / {Number(m.UpperQuartile)}, max {Number(m.Max)}");
+            return;
+        }
+        if (summary.FollowUp is { } f)
+        {
+            facts.Add("outcome", $"time to event: follow-up '{i.OutcomeColumn}', event '{i.EventColumn}'");
+            facts.Add("events", $"{Count(f.Events)} events, {Count(f.Censored)} censored, of {Count(f.Samples)} samples; "
+                + $"{Count(f.TiedEventTimes)} event times shared by several events");
+            facts.Add("median survival", (f.MedianSurvival is { } median ? Number(median) : "not reached") + " (Kaplan-Meier)");
+            facts.Add("median follow-up", (f.MedianFollowUp is { } followUp ? Number(followUp) : "not reached") + " (reverse Kaplan-Meier)");
+            return;
+        }
+        facts.Add("outcome", $"{i.OutcomeColumn}: " + string.Join(", ", i.Classes.Select(c => $"{c.Name} {c.SampleCount}")) + $" (positive class: {i.PositiveClass})");
+    }
+
+    private static string Number(double value) => value.ToString("G6", CultureInfo.InvariantCulture);
 
     private static string FormatName(MatrixFileFormat format, string? delimiter) => format switch
     {

@@ -36,7 +36,9 @@ internal sealed class PanelAssembler
 
     private Panel Build(List<InspectionFinding> findings)
     {
-        var outcome = BuildOutcome(Require(_options.OutcomeColumn, "outcome", findings));
+        var kept = _join.KeptSamples;
+        var matrix = kept.Length == _raw.Matrix.SampleCount ? _raw.Matrix : _raw.Matrix.SelectSamples(kept);
+        object outcome = BuildAnyOutcome(matrix.SampleIds, findings);
         var cohort = _options.CohortColumn is { } cohortName ? Grouping(Require(cohortName, "cohort", findings), findings) : null;
         var subject = _options.SubjectColumn is { } subjectName ? Grouping(Require(subjectName, "subject", findings), findings) : null;
 
@@ -53,9 +55,36 @@ internal sealed class PanelAssembler
             }
         }
 
-        var kept = _join.KeptSamples;
-        var matrix = kept.Length == _raw.Matrix.SampleCount ? _raw.Matrix : _raw.Matrix.SelectSamples(kept);
-        return new Panel(matrix, outcome, cohort, subject, extra);
+        return outcome switch
+        {
+            FollowUpOutcome followUp => new Panel(matrix, followUp, cohort, subject, extra),
+            MeasuredOutcome measured => new Panel(matrix, measured, cohort, subject, extra),
+            _ => new Panel(matrix, (ClassOutcome)outcome, cohort, subject, extra),
+        };
+    }
+
+    /// <summary>
+    /// The outcome of the kind the options ask for: a time to an event when follow-up and event
+    /// columns are named; otherwise the outcome column as classes or as a measured quantity,
+    /// forced by --outcome-kind or, by default, decided from its values.
+    /// </summary>
+    private object BuildAnyOutcome(IReadOnlyList<string> sampleIds, List<InspectionFinding> findings)
+    {
+        if (_options.FollowUpColumn is { } timeName && _options.EventColumn is { } eventName)
+        {
+            var timeColumn = Require(timeName, "follow-up time", findings);
+            var eventColumn = Require(eventName, "event", findings);
+            var times = OutcomeValues.Times(timeColumn, sampleIds, IsTableRow(timeColumn), findings);
+            var events = OutcomeValues.Events(eventColumn, sampleIds, IsTableRow(eventColumn));
+            return new FollowUpOutcome(timeName, eventName, times, events);
+        }
+        var outcomeName = _options.OutcomeColumn
+            ?? throw new InvalidOperationException("The load options name neither an outcome column nor follow-up and event columns.");
+        var column = Require(outcomeName, "outcome", findings);
+        bool measured = _options.OutcomeKind == OutcomeKindChoice.Measured
+            || (_options.OutcomeKind == OutcomeKindChoice.Auto && OutcomeValues.LooksLikeMeasurement(column.Values));
+        if (measured) return new MeasuredOutcome(outcomeName, OutcomeValues.Measured(column, sampleIds, IsTableRow(column)));
+        return BuildOutcome(column);
     }
 
     private int SheetIdColumn() =>

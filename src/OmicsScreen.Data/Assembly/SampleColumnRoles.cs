@@ -105,7 +105,10 @@ internal sealed class SampleColumnRoles
     /// </summary>
     private static void CheckRoleColumnsSpelling(IReadOnlyList<string> header, PanelLoadOptions options, string filePath, bool isTableRow)
     {
-        var roles = new List<(string Option, string Name)> { ("--outcome", options.OutcomeColumn) };
+        var roles = new List<(string Option, string Name)>();
+        if (options.OutcomeColumn is { } outcome) roles.Add(("--outcome", outcome));
+        if (options.FollowUpColumn is { } followUp) roles.Add(("--follow-up", followUp));
+        if (options.EventColumn is { } eventColumn) roles.Add(("--event", eventColumn));
         if (options.CohortColumn is { } cohort) roles.Add(("--cohort", cohort));
         if (options.SubjectColumn is { } subject) roles.Add(("--subject", subject));
         foreach (var annotation in options.AnnotationColumns) roles.Add(("--annotation", annotation));
@@ -125,7 +128,7 @@ internal sealed class SampleColumnRoles
     /// <summary>The fix for a text cell in a feature column, when the outcome column named is not in the file at all.</summary>
     internal static string? OutcomeNotInHeaderFix(IReadOnlyList<string> header, PanelLoadOptions options, string textColumn)
     {
-        if (options.SampleSheetPath is not null || IndexOf(header, options.OutcomeColumn) >= 0) return null;
+        if (options.SampleSheetPath is not null || options.OutcomeColumn is null || IndexOf(header, options.OutcomeColumn) >= 0) return null;
         return $"The file has no column '{Display.Name(options.OutcomeColumn)}' named by --outcome. If '{Display.Name(textColumn)}' holds each sample's class, use --outcome {Display.Name(textColumn)}; "
             + "if it describes samples in another way, name it with --annotation.";
     }

@@ -1,3 +1,5 @@
+using OmicsScreen.Engine.Panels;
+
 namespace OmicsScreen.Data.Inspection;
 
 /// <summary>
@@ -31,10 +33,16 @@ public sealed record PanelInspection
     public required int SampleCount { get; init; }
     public required int FeatureCount { get; init; }
 
+    /// <summary>Classes, a measured quantity or a time to an event.</summary>
+    public OutcomeKind OutcomeKind { get; init; } = OutcomeKind.Classes;
+    /// <summary>The outcome column; for a time to an event, the follow-up time column.</summary>
     public required string OutcomeColumn { get; init; }
-    /// <summary>Classes in class-code order (ordinal by name), with sample counts.</summary>
+    /// <summary>The event column of a time-to-event outcome; null for the other kinds.</summary>
+    public string? EventColumn { get; init; }
+    /// <summary>Classes in class-code order (ordinal by name), with sample counts; empty unless the outcome is classes.</summary>
     public required IReadOnlyList<LevelCount> Classes { get; init; }
-    public required string PositiveClass { get; init; }
+    /// <summary>The class scored as positive; null unless the outcome is classes.</summary>
+    public string? PositiveClass { get; init; }
 
     public string? CohortColumn { get; init; }
     public IReadOnlyList<LevelCount> Cohorts { get; init; } = [];

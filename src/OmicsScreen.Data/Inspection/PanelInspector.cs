@@ -15,17 +15,26 @@ internal static class PanelInspector
     /// <summary>Samples-to-features ratio (and minimum samples) beyond which the orientation looks swapped.</summary>
     private const int OrientationRatio = 20;
     private const int OrientationMinimumSamples = 1000;
+    /// <summary>
+    /// Events needed before survival statistics mean much: fewer than 10 is refused, fewer than 50
+    /// warned (common practice: about 10 events per candidate predictor for a Cox model, Peduzzi
+    /// et al. 1995, and far more for a screen of many markers).
+    /// </summary>
+    private const int TooFewEvents = 10;
+    private const int FewEvents = 50;
 
     public static PanelInspection Inspect(Panel panel, MatrixSource source, string? sampleSheetPath,
         IReadOnlyList<string> droppedSamples, PanelLoadOptions options, List<InspectionFinding> findings)
     {
         var matrix = panel.Matrix;
         var scan = ScanFeatures(matrix);
-        var outcome = panel.Outcome;
-        var classes = new LevelCount[outcome.ClassCount];
-        for (int c = 0; c < classes.Length; c++) classes[c] = new LevelCount(outcome.ClassNames[c], outcome.ClassCounts[c]);
+        var outcome = panel.Kind == OutcomeKind.Classes ? panel.Outcome : null;
+        var classes = new LevelCount[outcome?.ClassCount ?? 0];
+        for (int c = 0; c < classes.Length; c++) classes[c] = new LevelCount(outcome!.ClassNames[c], outcome.ClassCounts[c]);
 
-        AddClassFindings(outcome, options, findings);
+        if (outcome is not null) AddClassFindings(outcome, options, findings);
+        if (panel.Measured is { } measured) AddMeasuredFinding(measured, options, findings);
+        if (panel.FollowUp is { } followUp) AddFollowUpFindings(followUp, findings);
         AddSubjectFinding(panel.Subject, findings);
         AddFeatureFindings(matrix, scan, findings);
         AddOrientationFinding(matrix, options.Layout, findings);
@@ -45,12 +54,14 @@ internal static class PanelInspector
             SampleSheetPath = sampleSheetPath,
             SampleCount = matrix.SampleCount,
             FeatureCount = matrix.FeatureCount,
-            OutcomeColumn = outcome.ColumnName,
+            OutcomeKind = panel.Kind,
+            OutcomeColumn = panel.OutcomeColumn,
+            EventColumn = panel.FollowUp?.EventColumn,
             Classes = classes,
-            PositiveClass = outcome.ClassNames[outcome.PositiveClass],
+            PositiveClass = outcome is null ? null : outcome.ClassNames[outcome.PositiveClass],
             CohortColumn = panel.Cohort?.ColumnName,
             Cohorts = panel.Cohort is { } cohort ? Levels(cohort) : [],
-            ClassesByCohort = panel.Cohort is { } grouping ? CrossTable(outcome, grouping) : [],
+            ClassesByCohort = panel.Cohort is { } grouping && outcome is not null ? CrossTable(outcome, grouping) : [],
             SubjectColumn = panel.Subject?.ColumnName,
             SubjectCount = panel.Subject?.LevelCount ?? 0,
             MissingFraction = cellCount == 0 ? 0 : (double)scan.MissingCells / cellCount,
@@ -115,22 +126,6 @@ internal static class PanelInspector
         return new FeatureScan(missingPerFeature, missingCells, belowCells, belowFeatures, constant, allMissing, beyondPrecision);
     }
 
-    /// <summary>
-    /// True when every class label is a number and most samples are alone in their class: a
-    /// continuous variable (an age, a concentration) named as the outcome.
-    /// </summary>
-    private static bool LooksLikeMeasurement(ClassOutcome outcome)
-    {
-        int singletons = 0;
-        for (int c = 0; c < outcome.ClassCount; c++)
-        {
-            if (!double.TryParse(outcome.ClassNames[c], System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out _))
-                return false;
-            if (outcome.ClassCounts[c] == 1) singletons++;
-        }
-        return outcome.ClassCount > 10 && singletons * 4 > outcome.ClassCount;
-    }
-
     private static bool SameValue(float a, float b) => a == b || (float.IsNaN(a) && float.IsNaN(b));
 
     /// <summary>A screen draws complementary halves of the subjects; a single subject leaves one half empty.</summary>
@@ -144,6 +139,27 @@ internal static class PanelInspector
                 $"Every sample belongs to one subject of '{subject.ColumnName}', so resampling by subject leaves nothing to compare; a screen needs at least two subjects. Check that the subject column names the person each sample comes from, or leave out --subject.")));
     }
 
+    /// <summary>States the kind in one line, with the way back to classes, when it was decided from the values.</summary>
+    private static void AddMeasuredFinding(MeasuredOutcome measured, PanelLoadOptions options, List<InspectionFinding> findings)
+    {
+        if (options.OutcomeKind != OutcomeKindChoice.Auto) return;
+        var distinct = new HashSet<double>();
+        foreach (double value in measured.Values) distinct.Add(value);
+        findings.Add(new InspectionFinding(FindingSeverity.Note, "outcome-measured", Invariant(
+            $"The outcome '{measured.ColumnName}' holds {distinct.Count} different numbers for {measured.SampleCount} samples, so it is read as a measured quantity; add --outcome-kind classes to read its values as class labels instead.")));
+    }
+
+    private static void AddFollowUpFindings(FollowUpOutcome followUp, List<InspectionFinding> findings)
+    {
+        int events = followUp.EventCount;
+        if (events < TooFewEvents)
+            findings.Add(new InspectionFinding(FindingSeverity.Error, "too-few-events", Invariant(
+                $"'{followUp.EventColumn}' records {events} events among {followUp.SampleCount} samples; survival statistics need at least {TooFewEvents} (common practice), and a screen of many markers far more. Check the event coding (1 = event observed), or follow the samples longer.")));
+        else if (events < FewEvents)
+            findings.Add(new InspectionFinding(FindingSeverity.Warning, "few-events", Invariant(
+                $"'{followUp.EventColumn}' records only {events} events among {followUp.SampleCount} samples; with fewer than {FewEvents} (common practice) prognostic markers are found unreliably.")));
+    }
+
     private static void AddClassFindings(ClassOutcome outcome, PanelLoadOptions options, List<InspectionFinding> findings)
     {
         string column = outcome.ColumnName;
@@ -153,11 +169,11 @@ internal static class PanelInspector
                 $"The outcome '{column}' has a single class '{outcome.ClassNames[0]}' ({outcome.SampleCount} samples); a screen needs at least two classes. Check that the outcome column is the right one and that no class was dropped by the sample-sheet join.")));
             return;
         }
-        if (LooksLikeMeasurement(outcome))
+        if (OutcomeValues.LooksLikeMeasurement(outcome.ClassNames, outcome.ClassCounts))
         {
-            // One sentence instead of one error per value: a numeric column was named as the outcome.
+            // Only reached when classes were forced: one sentence instead of one error per value.
             findings.Add(new InspectionFinding(FindingSeverity.Error, "outcome-not-classes", Invariant(
-                $"The outcome '{column}' holds {outcome.ClassCount} different numbers for {outcome.SampleCount} samples, so it looks like a measurement, not classes. Give --outcome the column that names each sample's class (such as case/control), or group the values into a few classes in the sample sheet.")));
+                $"The outcome '{column}' holds {outcome.ClassCount} different numbers for {outcome.SampleCount} samples and is read as classes because of --outcome-kind classes, so most classes have a single sample. Leave out --outcome-kind to read it as a measured quantity, or group the values into a few classes in the sample sheet.")));
             return;
         }
         for (int c = 0; c < outcome.ClassCount; c++)

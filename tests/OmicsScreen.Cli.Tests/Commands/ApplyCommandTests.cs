@@ -86,6 +86,23 @@ public class ApplyCommandTests
     }
 
     [Fact]
+    public void A_measured_outcome_is_refused_before_anything_is_written()
+    {
+        using var folder = new TempFolder();
+        string model = WriteModel(folder);
+        string test = folder.File("test.csv", WdbcRows("test", drop: ["diagnosis"]));
+        var ids = File.ReadAllLines(test).Skip(1).Select(line => line.Split(',')[0]).ToArray();
+        // An invented score with a different value per sample: read as a measured quantity.
+        string sheet = folder.File("sheet.csv", "sample_id,score\n" + string.Concat(ids.Select((id, i) => FormattableString.Invariant($"{id},{i * 0.37 + 2}\n"))));
+        string results = Path.Combine(folder.Path, "applied");
+        var run = CliHarness.Run("apply", model, test, "--samples", sheet, "--outcome", "score", "--out", results);
+        Assert.Equal(ExitCode.NotScreenable, run.ExitCode);
+        Assert.Contains("'score' is a measured quantity", run.Error);
+        Assert.Contains("omicsscreen check", run.Error);
+        Assert.False(Directory.Exists(results));
+    }
+
+    [Fact]
     public void Without_an_outcome_samples_are_scored_and_nothing_is_evaluated()
     {
         using var folder = new TempFolder();

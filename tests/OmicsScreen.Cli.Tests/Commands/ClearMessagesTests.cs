@@ -92,7 +92,7 @@ public sealed class ClearMessagesTests : IDisposable
     }
 
     [Fact]
-    public void A_numeric_outcome_is_one_sentence_not_one_error_per_value()
+    public void A_numeric_outcome_is_read_as_measured_and_screen_refuses_it_in_one_sentence()
     {
         var rows = new System.Text.StringBuilder("sample_id,age,f1,f2\n");
         for (int s = 0; s < 60; s++) rows.Append(System.FormattableString.Invariant($"s{s},{40 + s * 0.5},{s % 7},{s % 5}\n"));
@@ -102,9 +102,13 @@ public sealed class ClearMessagesTests : IDisposable
         Assert.Equal(ExitCode.NotScreenable, run.ExitCode);
         var lines = Lines(run.Error);
         Assert.Single(lines);
-        Assert.Contains("looks like a measurement, not classes", lines[0]);
-        Assert.Contains("--outcome", lines[0]);
+        Assert.Contains("'age' is a measured quantity", lines[0]);
+        Assert.Contains("panels of classes only", lines[0]);
+        Assert.Contains("omicsscreen check", lines[0]);
+        Assert.Contains("--outcome-kind classes", lines[0]);
         Assert.DoesNotContain("single sample", lines[0]);
+        // Refused before any work: nothing is left in the results folder.
+        Assert.False(Directory.Exists(Path.Combine(_folder.Path, "out")) && Directory.EnumerateFiles(Path.Combine(_folder.Path, "out"), "*", SearchOption.AllDirectories).Any());
     }
 
     [Fact]

@@ -31,6 +31,7 @@ public sealed class ParseTests
     {
         "--part" or "--feature-block" => "1/2",
         "--memory-limit" => "8G",
+        "--outcome-kind" => "measured",
         _ when option.ValueType == typeof(int) || option.ValueType == typeof(int?) => "3",
         _ when option.ValueType == typeof(double) || option.ValueType == typeof(double?) => "0.25",
         _ when option.ValueType == typeof(ulong) => "9",
