@@ -11,7 +11,7 @@ using OmicsScreen.TestSupport;
 namespace OmicsScreen.Benchmarks;
 
 /// <summary>
-/// Regression or survival forests (issues 17 and 18) on a simulated panel: 500 trees, floor(sqrt(p))
+/// Regression or survival forests (issues 17 and 18) on a simulated panel: the case's trees, floor(sqrt(p))
 /// features per split, leaves down to one sample, bootstrap, all cores, seeds 1..3. Prints the
 /// median training time and the out-of-bag error (MSE, or 1 - Harrell's C) beside ranger's on the
 /// same panel and seeds when Rscript and ranger are installed (reference/outcomes/outcome_forests_ranger.R).
@@ -21,9 +21,8 @@ namespace OmicsScreen.Benchmarks;
 /// Time to event: hazard 0.1 exp(0.5 (x1 + x2 + x3)), censoring uniform on (0, 20).
 /// The generator is seeded (42), so every run and ranger see the same values.
 /// </remarks>
-public sealed class OutcomeForestCase(string name, bool timeToEvent, int sampleCount, int featureCount) : IBenchmarkCase
+public sealed class OutcomeForestCase(string name, bool timeToEvent, int sampleCount, int featureCount, int treeCount) : IBenchmarkCase
 {
-    public const int TreeCount = 500;
     public const int SeedCount = 3;
 
     public string Name => name;
@@ -49,7 +48,7 @@ public sealed class OutcomeForestCase(string name, bool timeToEvent, int sampleC
         }
         var start = new ProcessStartInfo("/usr/bin/Rscript") { RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false };
         foreach (var arg in new[] { script, panelPath, timeToEvent ? "survival" : "measured", SeedCount.ToString(CultureInfo.InvariantCulture),
-                     TreeCount.ToString(CultureInfo.InvariantCulture), Environment.ProcessorCount.ToString(CultureInfo.InvariantCulture) })
+                     treeCount.ToString(CultureInfo.InvariantCulture), Environment.ProcessorCount.ToString(CultureInfo.InvariantCulture) })
             start.ArgumentList.Add(arg);
         using var process = Process.Start(start)!;
         var output = process.StandardOutput.ReadToEnd();
@@ -80,7 +79,7 @@ public sealed class OutcomeForestCase(string name, bool timeToEvent, int sampleC
         var errors = new double[SeedCount];
         for (int run = 0; run < SeedCount; run++)
         {
-            var options = new ForestOptions { TreeCount = TreeCount, Seed = (ulong)(run + 1) };
+            var options = new ForestOptions { TreeCount = treeCount, Seed = (ulong)(run + 1) };
             watch.Restart();
             if (followUp is null)
             {
@@ -97,6 +96,7 @@ public sealed class OutcomeForestCase(string name, bool timeToEvent, int sampleC
         }
         var figures = new List<string>
         {
+            string.Create(CultureInfo.InvariantCulture, $"trees={treeCount}"),
             string.Create(CultureInfo.InvariantCulture, $"bin_s={binSeconds:F3}"),
             string.Create(CultureInfo.InvariantCulture, $"train_median_s={Median(seconds):F3}"),
             string.Create(CultureInfo.InvariantCulture, $"error_mean={errors.Average():F4}"),

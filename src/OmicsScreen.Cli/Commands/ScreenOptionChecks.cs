@@ -1,5 +1,6 @@
 using System.Globalization;
 using OmicsScreen.Screening.Importance;
+using OmicsScreen.Screening.Randomness;
 using OmicsScreen.Screening.Screen;
 
 namespace OmicsScreen.Cli.Commands;
@@ -25,6 +26,9 @@ internal static class ScreenOptionChecks
         Require(o.OutcomePermutations >= 0, "--outcome-permutations", o.OutcomePermutations, "must be 0 or more");
         Require(o.RedundancyCorrelation > 0 && o.RedundancyCorrelation <= 1, "--redundancy-rho", o.RedundancyCorrelation, "must be above 0 and at most 1 (for example 0.7)");
         Require(o.CurveFolds == 0 || o.CurveFolds >= 2, "--curve-folds", o.CurveFolds, "must be at least 2 (or 0 to skip the panel-size curve)");
+        // Each fold's inner screen has its own seed from a family of RandomStreams.SlotFamilyWidth.
+        Require(o.CurveFolds < RandomStreams.SlotFamilyWidth, "--curve-folds", o.CurveFolds,
+            FormattableString.Invariant($"must be below {RandomStreams.SlotFamilyWidth} (5 or 10 folds are usual)"));
         Require(o.CurveFoldRepeats >= 1, "--curve-repeats", o.CurveFoldRepeats, "must be at least 1");
         Require(o.CurveInnerPairs >= 1, "--curve-inner-pairs", o.CurveInnerPairs, "must be at least 1");
         Require(o.CurveMaxPanelSize >= 1, "--max-panel-size", o.CurveMaxPanelSize, "must be at least 1");

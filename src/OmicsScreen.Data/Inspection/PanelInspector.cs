@@ -36,6 +36,7 @@ internal static class PanelInspector
         if (panel.Measured is { } measured) AddMeasuredFinding(measured, options, findings);
         if (panel.FollowUp is { } followUp) AddFollowUpFindings(followUp, findings);
         AddSubjectFinding(panel.Subject, findings);
+        AddCohortFinding(panel.Cohort, findings);
         AddFeatureFindings(matrix, scan, findings);
         AddOrientationFinding(matrix, options.Layout, findings);
         AddCaseOnlyDifferenceFinding(matrix.SampleIds, "sample ids", findings);
@@ -129,6 +130,20 @@ internal static class PanelInspector
     private static bool SameValue(float a, float b) => a == b || (float.IsNaN(a) && float.IsNaN(b));
 
     /// <summary>A screen draws complementary halves of the subjects; a single subject leaves one half empty.</summary>
+    /// <summary>
+    /// The cohort check screens each cohort and each leave-one-out set with its own seeds, a
+    /// family of at most 999 (Screening's RandomStreams.SlotFamilyWidth); so many levels mostly
+    /// mean a sample id named as the cohort.
+    /// </summary>
+    public const int MaxCohorts = 999;
+
+    private static void AddCohortFinding(SampleGrouping? cohort, List<InspectionFinding> findings)
+    {
+        if (cohort is null || cohort.LevelCount <= MaxCohorts) return;
+        findings.Add(new InspectionFinding(FindingSeverity.Error, "too-many-cohorts", Invariant(
+            $"The cohort column '{cohort.ColumnName}' has {cohort.LevelCount} different values; the cohort check compares at most {MaxCohorts} cohorts. Check that --cohort names the recruitment centre, cohort or batch (not a sample or subject id), or leave out --cohort.")));
+    }
+
     private static void AddSubjectFinding(SampleGrouping? subject, List<InspectionFinding> findings)
     {
         if (subject is null) return;

@@ -244,6 +244,9 @@ internal static class MisuseCorpus
         yield return new("10 --curve-folds larger than the sample count", s =>
                 ["screen", s.Panel(), "--samples", s.Sheet(), "--outcome", "status", "--curve-folds", "10", "--out", s.PathOf("r"), "--quiet"],
             ExitCode.Usage, ["--curve-folds 10", "the panel has 6", "or 0 to skip the panel-size curve"]);
+        yield return new("10 --curve-folds past the inner screens' seed family", s =>
+                ["screen", s.Panel(), "--samples", s.Sheet(), "--outcome", "status", "--curve-folds", "1000", "--out", s.PathOf("r"), "--quiet"],
+            ExitCode.Usage, ["--curve-folds", "1000", "must be below 1000"]);
         yield return new("10 --subject with three mixed-class subjects and 2 curve folds", s =>
             {
                 var (matrix, sheet) = s.SubjectPanel(3);

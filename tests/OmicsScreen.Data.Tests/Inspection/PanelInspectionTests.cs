@@ -28,6 +28,22 @@ public sealed class PanelInspectionTests : IDisposable
     }
 
     [Fact]
+    public void A_cohort_column_with_more_levels_than_the_cohort_check_takes_is_an_error_with_the_fix()
+    {
+        // Common practice of this project: the cohort check seeds each cohort's screens from a family
+        // of at most 999; a thousand cohorts is almost always a sample id named as the cohort.
+        var path = _folder.File("many-cohorts.csv");
+        var rows = Enumerable.Range(0, 1000).Select(i => $"S{i},{(i % 2 == 0 ? "case" : "control")},C{i},{i % 7},{i % 5}");
+        File.WriteAllText(path, "sample_id,status,centre,M1,M2\n" + string.Join("\n", rows) + "\n");
+        var loaded = PanelLoader.Load(new PanelLoadOptions { MatrixPath = path, OutcomeColumn = "status", CohortColumn = "centre" });
+        var finding = Assert.Single(loaded.Inspection.Findings, f => f.Code == "too-many-cohorts");
+        Assert.Equal(FindingSeverity.Error, finding.Severity);
+        Assert.Contains("1000 different values", finding.Message);
+        Assert.Contains("--cohort", finding.Message);
+        Assert.False(loaded.Inspection.CanScreen);
+    }
+
+    [Fact]
     public void Inspection_counts_classes_cohorts_and_the_class_by_cohort_table()
     {
         var path = _folder.File("panel.parquet");
