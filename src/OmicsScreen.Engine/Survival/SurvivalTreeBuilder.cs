@@ -14,10 +14,11 @@ namespace OmicsScreen.Engine.Survival;
 /// At a node with distinct event times t_1..t_m, at-risk weights Y_k and event weights d_k, a
 /// split's statistic is |Σ_k (d_kL - Y_kL d_k/Y_k)| / sqrt(Σ_k (Y_kL/Y_k)(1 - Y_kL/Y_k)((Y_k - d_k)/(Y_k - 1)) d_k),
 /// the standardised two-sample log-rank statistic of the left child (as ranger computes it;
-/// Wright &amp; Ziegler 2017). Per feature the node's rows are counted by code into at-risk and event
-/// weights per event time, so every cut point is scored in O(m) from running sums: O(rows + codes·m)
-/// per feature. Weights are bootstrap counts (times sample weights), i.e. a drawn row counts as
-/// often as it was drawn. Feature draws, stopping rules and unmeasured-cell routing follow the
+/// Wright &amp; Ziegler 2017). Both sums are additive over the left child's rows once the node's
+/// grid sums are known, except the variance's square term, which a Fenwick tree over the at-risk
+/// counts keeps (see <see cref="LeftChildLogRank"/>): so a feature costs O(rows log m) whatever
+/// its number of cut points, instead of O(codes x m). Weights are bootstrap counts (times sample
+/// weights), i.e. a drawn row counts as often as it was drawn. Feature draws, stopping rules and unmeasured-cell routing follow the
 /// classification builder.
 /// </remarks>
 internal sealed class SurvivalTreeBuilder
@@ -33,15 +34,21 @@ internal sealed class SurvivalTreeBuilder
     private readonly int[] _rowEvent;
     private readonly double[] _atRisk;   // Y_k, k < m
     private readonly double[] _deaths;   // d_k
-    private readonly double[] _leftEnds; // left child's weight by at-risk count q (0..m)
-    private readonly double[] _leftDeaths;
-    // Per code: weights by at-risk count q (m + 1), event weights by k (m), row count (1).
-    private readonly double[] _codeSums;
+    private readonly double[] _leftEnds; // weight by at-risk count q (0..m), while building the grid
+    // Sums over the grid below q (0..m) and each row's additive terms (see PrepareRowTerms).
+    private readonly double[] _cumulativeE;
+    private readonly double[] _cumulativeA;
+    private readonly double[] _cumulativeB;
+    private readonly double[] _rowNumerator;
+    private readonly double[] _rowLinear;
+    private double _varianceFloor;
+    private int _nodeStart;
+    // The node's rows grouped by code of the feature being searched (local indices).
+    private readonly int[] _codeStarts = new int[260];
+    private readonly int[] _codeFill = new int[260];
+    private readonly int[] _byCode;
     private readonly byte[] _valueCodes = new byte[256];
-    private readonly bool[] _codeHit = new bool[258];
-    private readonly byte[] _hitCodes = new byte[258];
-    private int _hitCount;
-    private int _stride;
+    private readonly LeftChildLogRank _left;
     private int _valueEntryCount;
     private int _missingCode;
     private readonly Stack<(int Start, int End, int Depth, int Parent, bool IsLeft)> _pending = new();
@@ -60,8 +67,13 @@ internal sealed class SurvivalTreeBuilder
         _atRisk = new double[maxEvents + 1];
         _deaths = new double[maxEvents + 1];
         _leftEnds = new double[maxEvents + 1];
-        _leftDeaths = new double[maxEvents + 1];
-        _codeSums = new double[258 * (2 * maxEvents + 2)];
+        _cumulativeE = new double[maxEvents + 1];
+        _cumulativeA = new double[maxEvents + 1];
+        _cumulativeB = new double[maxEvents + 1];
+        _rowNumerator = new double[maxRows];
+        _rowLinear = new double[maxRows];
+        _byCode = new int[maxRows];
+        _left = new LeftChildLogRank(maxEvents + 1);
     }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
@@ -89,7 +101,10 @@ internal sealed class SurvivalTreeBuilder
 
             var best = SplitCandidate.None;
             if (depth < options.MaxDepth && nodeRows >= 2 * options.MinLeafSize && nodeRows >= 2 && m > 0)
+            {
+                _nodeStart = start;
                 best = FindSplit(matrix, start, end, m, featuresPerSplit, options.MinLeafSize, ref generator);
+            }
             if (!best.IsFound || best.Score + 1e-12 < options.MinImpurityDecrease)
             {
                 _buffer.SetLeafHazard(node, _grid.AsSpan(0, m), _deaths.AsSpan(0, m), _atRisk.AsSpan(0, m));
@@ -167,7 +182,7 @@ internal sealed class SurvivalTreeBuilder
     {
         var best = SplitCandidate.None;
         var order = _featureOrder.AsSpan();
-        _stride = 2 * m + 2;
+        PrepareRowTerms(start, end, m);
         int tried = 0;
         // Features drawn one at a time without replacement; a feature constant in the node is not counted.
         for (int next = 0; next < order.Length && tried < featuresPerSplit; next++)
@@ -176,7 +191,7 @@ internal sealed class SurvivalTreeBuilder
             (order[next], order[pick]) = (order[pick], order[next]);
             int feature = order[next];
             int valueBins = matrix.ValueBinCount(feature);
-            Fill(matrix.Codes(feature), start, end, m, valueBins);
+            GroupByCode(matrix.Codes(feature), start, end, valueBins);
             int groups = _valueEntryCount + (RowsOf(_missingCode) > 0 ? 1 : 0) + (RowsOf(_missingCode + 1) > 0 ? 1 : 0);
             if (groups <= 1) continue;
             tried++;
@@ -185,108 +200,176 @@ internal sealed class SurvivalTreeBuilder
         return best;
     }
 
-    /// <summary>Rows of the node with this code in the last fill (the count sits last in the code's entry).</summary>
-    private double RowsOf(int code) => _codeHit[code] ? _codeSums[code * _stride + _stride - 1] : 0;
-
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private void Fill(ReadOnlySpan<byte> codes, int start, int end, int m, int valueBinCount)
+    /// <summary>
+    /// Per node: the cumulative sums over the event grid that make the log-rank statistic of a
+    /// left child additive over its rows. With e_k = d_k/Y_k and c_k = d_k (Y_k - d_k)/(Y_k - 1)
+    /// (0 when Y_k &lt;= 1), and E, A, B the sums of e_k, c_k/Y_k, c_k/Y_k^2 over k &lt; q:
+    /// numerator = Σ_{i in L} w_i ([event_i] - E(q_i)); variance = Σ_{i in L} w_i A(q_i) -
+    /// Σ_{i,j in L} w_i w_j B(min(q_i, q_j)), since Y_kL = Σ_{i in L} w_i [k &lt; q_i].
+    /// </summary>
+    private void PrepareRowTerms(int start, int end, int m)
     {
-        // Clear what the previous fill touched (its stride may differ: it may be another node's).
-        for (int j = 0; j < _hitCount; j++)
+        double e = 0, a = 0, b = 0, scale = 0;
+        for (int k = 0; k < m; k++)
         {
-            int code = _hitCodes[j];
-            _codeHit[code] = false;
+            _cumulativeB[k] = b;
+            double y = _atRisk[k], d = _deaths[k];
+            _cumulativeE[k] = e;
+            _cumulativeA[k] = a;
+            if (y <= 0 || d <= 0) continue;
+            e += d / y;
+            if (y > 1)
+            {
+                double c = d * (y - d) / (y - 1);
+                a += c / y;
+                b += c / (y * y);
+                scale += c;
+            }
         }
-        _hitCount = 0;
-        _missingCode = valueBinCount;
-        int stride = _stride;
-        var sums = _codeSums.AsSpan();
+        _cumulativeE[m] = e;
+        _cumulativeA[m] = a;
+        _cumulativeB[m] = b;
+        // The variance is a difference of sums of up to Σ c_k; below this it is rounding, not information.
+        _varianceFloor = 1e-12 * Math.Max(scale, 1e-300);
         for (int i = start; i < end; i++)
         {
-            int code = codes[_rows[i]];
-            int at = code * stride;
-            if (!_codeHit[code])
-            {
-                _codeHit[code] = true;
-                _hitCodes[_hitCount++] = (byte)code;
-                sums.Slice(at, stride).Clear();
-            }
+            int local = i - start;
+            int q = _rowRisk[local];
             double w = _weights[i];
-            sums[at + _rowRisk[i - start]] += w;
-            int k = _rowEvent[i - start];
-            if (k >= 0) sums[at + m + 1 + k] += w;
-            sums[at + 2 * m + 1] += 1;
+            _rowNumerator[local] = w * ((_rowEvent[local] >= 0 ? 1.0 : 0.0) - _cumulativeE[q]);
+            _rowLinear[local] = w * _cumulativeA[q];
         }
+    }
+
+    /// <summary>Rows of the node with this code in the last grouping.</summary>
+    private double RowsOf(int code) => _codeStarts[code + 1] - _codeStarts[code];
+
+    /// <summary>Orders the node's rows (local indices) by code with a counting sort; lists the value codes present.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private void GroupByCode(ReadOnlySpan<byte> codes, int start, int end, int valueBinCount)
+    {
+        _missingCode = valueBinCount;
+        var starts = _codeStarts.AsSpan(0, valueBinCount + 3);
+        starts.Clear();
+        for (int i = start; i < end; i++) starts[codes[_rows[i]] + 1]++;
         int listed = 0;
         for (int code = 0; code < valueBinCount; code++)
-            if (_codeHit[code]) _valueCodes[listed++] = (byte)code;
+            if (starts[code + 1] > 0) _valueCodes[listed++] = (byte)code;
         _valueEntryCount = listed;
+        for (int code = 0; code < valueBinCount + 2; code++) starts[code + 1] += starts[code];
+        var fill = _codeFill.AsSpan(0, valueBinCount + 2);
+        starts[..(valueBinCount + 2)].CopyTo(fill);
+        for (int i = start; i < end; i++) _byCode[fill[codes[_rows[i]]]++] = i - start;
     }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private void Scan(int feature, int valueBinCount, int m, int nodeRows, int minLeafSize, ref SplitCandidate best)
     {
-        bool hasMissing = _codeHit[_missingCode];
-        bool hasBelow = _codeHit[_missingCode + 1];
+        bool hasMissing = RowsOf(_missingCode) > 0;
+        bool hasBelow = RowsOf(_missingCode + 1) > 0;
         for (int combination = 0; combination < 4; combination++)
         {
             bool missingLeft = (combination & 1) != 0;
             bool belowLeft = (combination & 2) != 0;
             if ((missingLeft && !hasMissing) || (belowLeft && !hasBelow)) continue;
-            Array.Clear(_leftEnds, 0, m + 1);
-            Array.Clear(_leftDeaths, 0, m + 1);
-            double leftRows = 0;
-            if (missingLeft) leftRows += AddToLeft(_missingCode, m);
-            if (belowLeft) leftRows += AddToLeft(_missingCode + 1, m);
+            _left.Reset(m);
+            if (missingLeft) AddToLeft(_missingCode);
+            if (belowLeft) AddToLeft(_missingCode + 1);
             if (_valueEntryCount == 0)
             {
                 // Only unmeasured cells here: the one split is missing versus below detection.
                 if (combination == 1 && hasBelow)
-                    Consider(feature, (byte)(valueBinCount - 1), leftRows, m, nodeRows, minLeafSize, hasMissing, hasBelow,
-                        missingLeft, belowLeft, ref best);
+                    Consider(feature, (byte)(valueBinCount - 1), nodeRows, minLeafSize, hasMissing, hasBelow, missingLeft, belowLeft, ref best);
                 continue;
             }
             for (int j = 0; j < _valueEntryCount; j++)
             {
-                leftRows += AddToLeft(_valueCodes[j], m);
-                Consider(feature, _valueCodes[j], leftRows, m, nodeRows, minLeafSize, hasMissing, hasBelow,
-                    missingLeft, belowLeft, ref best);
+                AddToLeft(_valueCodes[j]);
+                Consider(feature, _valueCodes[j], nodeRows, minLeafSize, hasMissing, hasBelow, missingLeft, belowLeft, ref best);
             }
         }
     }
 
-    private double AddToLeft(int code, int m)
+    /// <summary>Moves one code's rows into the left child, updating its running numerator and variance.</summary>
+    private void AddToLeft(int code)
     {
-        int at = code * _stride;
-        var sums = _codeSums.AsSpan(at, _stride);
-        for (int q = 0; q <= m; q++) _leftEnds[q] += sums[q];
-        for (int k = 0; k < m; k++) _leftDeaths[k] += sums[m + 1 + k];
-        return sums[2 * m + 1];
+        for (int at = _codeStarts[code]; at < _codeStarts[code + 1]; at++)
+        {
+            int local = _byCode[at];
+            _left.Add(_rowRisk[local], _weights[local + _nodeStart], _rowNumerator[local], _rowLinear[local], _cumulativeB);
+        }
     }
 
-    /// <summary>Scores the split whose left child holds the accumulated codes; keeps it when strictly better.</summary>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private void Consider(int feature, byte binThreshold, double leftRows, int m, int nodeRows, int minLeafSize,
+    /// <summary>Scores the split whose left child holds the rows added so far; keeps it when strictly better.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private void Consider(int feature, byte binThreshold, int nodeRows, int minLeafSize,
         bool hasMissing, bool hasBelow, bool missingLeft, bool belowLeft, ref SplitCandidate best)
     {
+        double leftRows = _left.Rows;
         double rightRows = nodeRows - leftRows;
         if (leftRows < minLeafSize || rightRows < minLeafSize) return;
-        double numerator = 0, variance = 0, leftAtRisk = 0;
-        for (int k = m - 1; k >= 0; k--)
-        {
-            leftAtRisk += _leftEnds[k + 1];
-            double y = _atRisk[k], d = _deaths[k];
-            if (y <= 0 || d <= 0) continue;
-            double share = leftAtRisk / y;
-            numerator += _leftDeaths[k] - share * d;
-            if (y > 1) variance += share * (1 - share) * ((y - d) / (y - 1)) * d;
-        }
-        if (!(variance > 0)) return;
-        double score = Math.Abs(numerator) / Math.Sqrt(variance);
+        double variance = _left.Variance;
+        if (!(variance > _varianceFloor)) return;
+        double score = Math.Abs(_left.Numerator) / Math.Sqrt(variance);
         if (!(score > best.Score)) return;
         best = SplitScanner.Record(feature, binThreshold, score, leftRows, rightRows, hasMissing, hasBelow, missingLeft, belowLeft);
     }
+}
 
+/// <summary>
+/// The running log-rank numerator and variance of a left child as rows are added to it, with
+/// two Fenwick trees over the at-risk count q (Fenwick 1994): one of w_j B(q_j), one of w_j, so
+/// that Σ_{j in L} w_j B(min(q, q_j)) costs O(log m) per added row.
+/// </summary>
+internal sealed class LeftChildLogRank(int capacity)
+{
+    private readonly double[] _weightedB = new double[capacity + 1];
+    private readonly double[] _weights = new double[capacity + 1];
+    private int _size;
+    private double _totalWeight;
+    private double _linear;
+    private double _quadratic;
+
+    public double Rows { get; private set; }
+    public double Numerator { get; private set; }
+    public double Variance => _linear - _quadratic;
+
+    public void Reset(int m)
+    {
+        _size = m + 1;
+        Array.Clear(_weightedB, 0, _size + 1);
+        Array.Clear(_weights, 0, _size + 1);
+        _totalWeight = _linear = _quadratic = 0;
+        Rows = Numerator = 0;
+    }
+
+    /// <summary>Adds a row with at-risk count q, weight w and its additive terms; b holds B(q) for q = 0..m.</summary>
+    public void Add(int q, double w, double numerator, double linear, double[] b)
+    {
+        // Σ_{j in L} w_j B(min(q, q_j)) = Σ_{q_j <= q} w_j B(q_j) + B(q) Σ_{q_j > q} w_j.
+        double below = Prefix(_weightedB, q), weightBelow = Prefix(_weights, q);
+        double cross = below + b[q] * (_totalWeight - weightBelow);
+        _quadratic += 2 * w * cross + w * w * b[q];
+        _linear += linear;
+        Numerator += numerator;
+        Rows += 1;
+        _totalWeight += w;
+        Update(_weightedB, q, w * b[q]);
+        Update(_weights, q, w);
+    }
+
+    /// <summary>Sum of the entries at positions 0..q.</summary>
+    private double Prefix(double[] tree, int q)
+    {
+        double sum = 0;
+        for (int i = q + 1; i > 0; i -= i & -i) sum += tree[i];
+        return sum;
+    }
+
+    private void Update(double[] tree, int q, double value)
+    {
+        for (int i = q + 1; i <= _size; i += i & -i) tree[i] += value;
+    }
 }
 
 /// <summary>A <see cref="SplitTopologyBuffer"/> with each node's mortality, split statistic and leaf hazard, reused across trees.</summary>

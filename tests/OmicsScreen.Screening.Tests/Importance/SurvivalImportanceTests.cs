@@ -2,7 +2,10 @@ using System.Text.Json;
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Survival;
+using OmicsScreen.Engine.Sampling;
+using OmicsScreen.Engine.Trees;
 using OmicsScreen.Screening.Importance;
+using OmicsScreen.Screening.Statistics.Survival;
 using OmicsScreen.TestSupport;
 using Xunit.Abstractions;
 
@@ -66,6 +69,34 @@ public class SurvivalImportanceTests(ITestOutputHelper output)
             double se = StandardDeviation(values) / Math.Sqrt(values.Length);
             Assert.InRange(mean, -3 * se, 3 * se);
         }
+    }
+
+    [Theory]
+    [InlineData(1, 20)]
+    [InlineData(2, 3)]
+    [InlineData(3, 3)]
+    [InlineData(4, 1)]
+    public void Each_root_split_statistic_is_the_log_rank_statistic_of_its_two_groups(int seed, int featuresPerSplit)
+    {
+        // The tree scores a cut by the standardised two-sample log-rank statistic; LogRankTest gives
+        // its square (checked against R's survdiff in StatisticsTests), so |Z| = sqrt(chi-square)
+        // for the very groups the chosen cut makes (every row once, weight 1).
+        var (matrix, followUp) = SurvivalForestData.Load();
+        var forest = SurvivalForestTrainer.Train(new BinMapper().Bin(matrix), followUp, new ForestOptions
+        {
+            TreeCount = 1,
+            Seed = (ulong)seed,
+            Sampling = new SamplingOptions { Drawing = SampleDrawing.Subsample, SubsampleFraction = 1.0 },
+            Tree = new TreeOptions { MaxDepth = 1, FeaturesPerSplit = featuresPerSplit },
+        });
+        var tree = forest.Tree(0);
+        int feature = tree.Features[0];
+        Assert.True(feature >= 0);
+        var column = matrix.Column(feature);
+        var right = new bool[followUp.SampleCount];
+        for (int s = 0; s < right.Length; s++) right[s] = column[s] > tree.Thresholds[0];
+        var test = LogRankTest.TwoGroups(followUp.Times, followUp.Events, right);
+        Assert.Equal(Math.Sqrt(test.ChiSquare), tree.SplitStatistics[0], 1e-9);
     }
 
     [Fact]
