@@ -26,12 +26,20 @@ public sealed class DecisionTree
     public DecisionTree(int classCount, int[] features, byte[] binThresholds, float[] thresholds, byte[] missingCodes,
         UnmeasuredRouting[] routing, int[] leftChildren, int[] rightChildren, double[] classWeights,
         int[] nodeClasses, double[] impurityDecreases, int[] sampleCounts)
-    {
         // The shape checks its own arrays (lengths, children after their parent).
-        Topology = new SplitTopology(features, binThresholds, thresholds, missingCodes, routing, leftChildren, rightChildren, sampleCounts);
-        int nodeCount = features.Length;
+        : this(classCount, new SplitTopology(features, binThresholds, thresholds, missingCodes, routing, leftChildren, rightChildren, sampleCounts),
+            classWeights, nodeClasses, impurityDecreases)
+    {
+    }
+
+    /// <summary>A tree from its shape and its per-node class values.</summary>
+    public DecisionTree(int classCount, SplitTopology topology, double[] classWeights, int[] nodeClasses, double[] impurityDecreases)
+    {
+        ArgumentNullException.ThrowIfNull(topology);
+        int nodeCount = topology.NodeCount;
         if (nodeClasses.Length != nodeCount || impurityDecreases.Length != nodeCount || classWeights.Length != nodeCount * classCount)
             throw new ArgumentException("Every node array must have one entry per node.");
+        Topology = topology;
         ClassCount = classCount;
         _classWeights = classWeights;
         _nodeClasses = nodeClasses;

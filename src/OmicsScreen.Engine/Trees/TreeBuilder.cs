@@ -79,11 +79,11 @@ internal sealed class TreeBuilder
         while (_pending.Count > 0)
         {
             var pending = _pending.Pop();
-            int node = _buffer.Add(pending.Parent, pending.IsLeft);
+            int node = _buffer.Add(pending.Parent, pending.IsLeft, pending.End - pending.Start);
             var totals = _nodeTotals.AsSpan();
             SumNode(pending.Start, pending.End, totals);
             var classWeights = totals[.._classCount];
-            _buffer.SetNode(node, classWeights, pending.End - pending.Start, MajorityClass(classWeights, ref generator));
+            _buffer.SetNode(node, classWeights, MajorityClass(classWeights, ref generator));
 
             int nodeRows = pending.End - pending.Start;
             if (pending.Depth >= options.MaxDepth || nodeRows < 2 * options.MinLeafSize || nodeRows < 2 || IsPure(classWeights))
