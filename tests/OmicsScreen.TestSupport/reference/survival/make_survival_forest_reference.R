@@ -50,11 +50,19 @@ univariate <- lapply(1:p, function(j) {
 score_p <- sapply(univariate, function(u) u$score_p)
 q <- p.adjust(score_p, "BH")
 for (j in 1:p) univariate[[j]]$q <- q[j]
+# Per-cohort Cox models of x1 and x2 in two invented cohorts (samples 1-100, 101-200), the marker
+# in units of its SD over all 200 samples: log hazard ratio and standard error per cohort.
+cohort_cox <- lapply(c("x1", "x2"), function(m) {
+  v <- d[[m]] / sd(d[[m]])
+  fits <- lapply(list(1:100, 101:200), function(rows) coxph(Surv(time, status) ~ v[rows], data = d[rows, ]))
+  list(marker = m, log_hr = sapply(fits, function(f) unname(coef(f))), se = sapply(fits, function(f) unname(sqrt(diag(vcov(f))))))
+})
 out <- list(
   versions = list(R = as.character(getRversion()), ranger = as.character(packageVersion("ranger")),
                   survival = as.character(packageVersion("survival"))),
   events = sum(status), samples = n,
   univariate = univariate,
+  cohort_cox = cohort_cox,
   root_split = list(marker = info$splitvarName[1], threshold = info$splitval[1]),
   forest = list(trees = 500, features_per_split = floor(sqrt(p)), seeds = seeds,
                 ranger_prediction_error = ranger_error,
