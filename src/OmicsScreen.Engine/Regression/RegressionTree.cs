@@ -26,13 +26,6 @@ public sealed class RegressionTree
     }
 
     public SplitTopology Topology { get; }
-    public int NodeCount => Topology.NodeCount;
-    /// <summary>Split feature of each node; -1 at leaves.</summary>
-    public ReadOnlySpan<int> Features => Topology.Features;
-    /// <summary>Split thresholds in the feature's original units.</summary>
-    public ReadOnlySpan<float> Thresholds => Topology.Thresholds;
-    public ReadOnlySpan<int> LeftChildren => Topology.LeftChildren;
-    public ReadOnlySpan<int> RightChildren => Topology.RightChildren;
     /// <summary>Weighted mean outcome of each node's in-bag samples; the prediction at leaves.</summary>
     public ReadOnlySpan<double> NodeMeans => _nodeMeans;
     public ReadOnlySpan<double> ImpurityDecreases => _impurityDecreases;

@@ -35,12 +35,6 @@ public sealed class SurvivalTree
     }
 
     public SplitTopology Topology { get; }
-    public int NodeCount => Topology.NodeCount;
-    public ReadOnlySpan<int> Features => Topology.Features;
-    public ReadOnlySpan<float> Thresholds => Topology.Thresholds;
-    public ReadOnlySpan<int> LeftChildren => Topology.LeftChildren;
-    public ReadOnlySpan<int> RightChildren => Topology.RightChildren;
-
     /// <summary>Per node, the mortality of its samples' Nelson-Aalen hazard (meaningful at leaves).</summary>
     public ReadOnlySpan<double> Mortality => _mortality;
 

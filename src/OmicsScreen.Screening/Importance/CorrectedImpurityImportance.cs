@@ -33,17 +33,25 @@ public static class CorrectedImpurityImportance
     public static CorrectedImportance Measure(BinnedMatrix matrix, ClassOutcome outcome, int[]? trainingRows,
         ReadOnlySpan<int> decoySources, ForestOptions options)
     {
-        ArgumentNullException.ThrowIfNull(matrix);
         ArgumentNullException.ThrowIfNull(outcome);
+        return MeasureWith(matrix, decoySources, options,
+            augmented => ImpurityImportance.From(ForestTrainer.Train(augmented, outcome, options, trainingRows)).MeanDecrease.ToArray());
+    }
+
+    /// <summary>
+    /// The corrected importance of any outcome kind: grows a forest on <see cref="Augment"/>'s columns
+    /// with importanceOf (which returns one impurity-type importance per column: Gini, variance or
+    /// log-rank statistic) and reads AIR off it with <see cref="FromAugmented"/>.
+    /// </summary>
+    internal static CorrectedImportance MeasureWith(BinnedMatrix matrix, ReadOnlySpan<int> decoySources, ForestOptions options,
+        Func<BinnedMatrix, double[]> importanceOf)
+    {
+        ArgumentNullException.ThrowIfNull(matrix);
         ArgumentNullException.ThrowIfNull(options);
         int featureCount = matrix.FeatureCount;
         CheckDecoySources(decoySources, featureCount);
-
         var augmented = Augment(matrix, decoySources, options.Seed, options.Repeat, options.ThreadCount);
-        var forest = ForestTrainer.Train(augmented, outcome, options, trainingRows);
-        var decrease = ImpurityImportance.From(forest).MeanDecrease;
-
-        return FromAugmented(decrease, featureCount, decoySources);
+        return FromAugmented(importanceOf(augmented), featureCount, decoySources);
     }
 
     /// <summary>
@@ -51,7 +59,7 @@ public static class CorrectedImpurityImportance
     /// minus its permuted copy's, each decoy's minus its source's permuted copy's. Any impurity-type
     /// importance works (Gini, variance, log-rank statistic).
     /// </summary>
-    internal static CorrectedImportance FromAugmented(ReadOnlySpan<double> importance, int featureCount, ReadOnlySpan<int> decoySources)
+    private static CorrectedImportance FromAugmented(ReadOnlySpan<double> importance, int featureCount, ReadOnlySpan<int> decoySources)
     {
         var features = new double[featureCount];
         for (int f = 0; f < featureCount; f++) features[f] = importance[f] - importance[featureCount + f];
@@ -62,7 +70,7 @@ public static class CorrectedImpurityImportance
     }
 
     /// <summary>Checks that every decoy source names a real feature.</summary>
-    internal static void CheckDecoySources(ReadOnlySpan<int> decoySources, int featureCount)
+    private static void CheckDecoySources(ReadOnlySpan<int> decoySources, int featureCount)
     {
         foreach (int source in decoySources)
             if ((uint)source >= (uint)featureCount) throw new ArgumentException($"Decoy source {source} is out of range.");

@@ -25,7 +25,7 @@ public static class OutOfBagPermutationImportance
     {
         var classes = Validate(forest, matrix, outcome);
         var perTree = new TreePermutationScores[forest.TreeCount];
-        ForEachTree(forest, threadCount, () => new OutOfBagTreeScorer(matrix, classes), (scorer, t) =>
+        TreeWork.ForEach(forest.TreeCount, threadCount, () => new OutOfBagTreeScorer(matrix, classes), (scorer, t) =>
         {
             var tree = forest.Tree(t);
             var outOfBag = forest.OutOfBag(t);
@@ -97,7 +97,7 @@ public static class OutOfBagPermutationImportance
                 if ((uint)member >= (uint)forest.FeatureCount) throw new ArgumentException($"Group {g} names feature {member}, out of range.");
         }
         var perTree = new double[forest.TreeCount][];
-        ForEachTree(forest, threadCount, () => (Scorer: new OutOfBagTreeScorer(matrix, classes), Used: new bool[forest.FeatureCount]),
+        TreeWork.ForEach(forest.TreeCount, threadCount, () => (Scorer: new OutOfBagTreeScorer(matrix, classes), Used: new bool[forest.FeatureCount]),
             (worker, t) =>
             {
                 var tree = forest.Tree(t);
@@ -127,18 +127,6 @@ public static class OutOfBagPermutationImportance
     }
 
     /// <summary>Runs work(worker, tree) for every tree; trees are handed out by an atomic counter and each result is stored by tree index.</summary>
-    private static void ForEachTree<TWorker>(Forest forest, int threadCount, Func<TWorker> createWorker, Action<TWorker, int> work)
-    {
-        int threads = Math.Max(1, Math.Min(WorkerThreads.Resolve(threadCount), forest.TreeCount));
-        int nextTree = -1;
-        Parallel.For(0, threads, new ParallelOptions { MaxDegreeOfParallelism = threads }, _ =>
-        {
-            var worker = createWorker();
-            int tree;
-            while ((tree = Interlocked.Increment(ref nextTree)) < forest.TreeCount) work(worker, tree);
-        });
-    }
-
     private static int[] Validate(Forest forest, BinnedMatrix matrix, ClassOutcome outcome)
     {
         ArgumentNullException.ThrowIfNull(forest);

@@ -1,6 +1,5 @@
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
-using OmicsScreen.Engine.Parallelism;
 using OmicsScreen.Screening.Randomness;
 using OmicsScreen.Engine.Regression;
 
@@ -22,13 +21,9 @@ public static class RegressionImportance
     public static CorrectedImportance MeasureCorrected(BinnedMatrix matrix, ReadOnlySpan<double> outcome, int[]? trainingRows,
         ReadOnlySpan<int> decoySources, ForestOptions options)
     {
-        ArgumentNullException.ThrowIfNull(matrix);
-        ArgumentNullException.ThrowIfNull(options);
-        int featureCount = matrix.FeatureCount;
-        CorrectedImpurityImportance.CheckDecoySources(decoySources, featureCount);
-        var augmented = CorrectedImpurityImportance.Augment(matrix, decoySources, options.Seed, options.Repeat, options.ThreadCount);
-        var decrease = RegressionForestTrainer.Train(augmented, outcome, options, trainingRows).MeanImpurityDecrease();
-        return CorrectedImpurityImportance.FromAugmented(decrease, featureCount, decoySources);
+        var y = outcome.ToArray();
+        return CorrectedImpurityImportance.MeasureWith(matrix, decoySources, options,
+            augmented => RegressionForestTrainer.Train(augmented, y, options, trainingRows).MeanImpurityDecrease());
     }
 
     /// <summary>
@@ -47,15 +42,8 @@ public static class RegressionImportance
         if (outcome.Length != forest.SampleCount) throw new ArgumentException("The outcome must have one value per sample.");
         var y = outcome.ToArray();
         var perTree = new TreePermutationScores[forest.TreeCount];
-        int threads = Math.Min(WorkerThreads.Resolve(threadCount), Math.Max(1, forest.TreeCount));
-        int next = -1;
-        Parallel.For(0, threads, new ParallelOptions { MaxDegreeOfParallelism = threads }, _ =>
-        {
-            var codes = new byte[forest.SampleCount];
-            int t;
-            while ((t = Interlocked.Increment(ref next)) < forest.TreeCount)
-                perTree[t] = ScoreTree(forest, t, matrix, y, codes);
-        });
+        TreeWork.ForEach(forest.TreeCount, threadCount, () => new byte[forest.SampleCount],
+            (codes, t) => perTree[t] = ScoreTree(forest, t, matrix, y, codes));
         var summary = TreeScoreSummary.Summarise(perTree, forest.FeatureCount);
         return new ErrorRiseImportance(summary.MeanAccuracyDrop, summary.StandardError);
     }

@@ -1,6 +1,5 @@
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
-using OmicsScreen.Engine.Parallelism;
 using OmicsScreen.Screening.Randomness;
 using OmicsScreen.Engine.Survival;
 using OmicsScreen.Screening.Statistics.Survival;
@@ -21,20 +20,16 @@ public static class SurvivalImportance
         ArgumentNullException.ThrowIfNull(forest);
         var risk = forest.OutOfBagRisk();
         var kept = Enumerable.Range(0, risk.Length).Where(s => !double.IsNaN(risk[s])).ToArray();
-        return Concordance(forest.FollowUp, kept, kept.Select(s => risk[s]).ToArray());
+        var (time, events) = FollowUpOf(forest.FollowUp, kept);
+        return HarrellConcordance.Estimate(time, events, kept.Select(s => risk[s]).ToArray());
     }
 
     /// <summary>AIR_j = mean log-rank statistic of j minus that of its permuted copy; decoys likewise.</summary>
     public static CorrectedImportance MeasureCorrected(BinnedMatrix matrix, FollowUpTimes followUp, int[]? trainingRows,
         ReadOnlySpan<int> decoySources, ForestOptions options)
     {
-        ArgumentNullException.ThrowIfNull(matrix);
-        ArgumentNullException.ThrowIfNull(options);
-        int featureCount = matrix.FeatureCount;
-        CorrectedImpurityImportance.CheckDecoySources(decoySources, featureCount);
-        var augmented = CorrectedImpurityImportance.Augment(matrix, decoySources, options.Seed, options.Repeat, options.ThreadCount);
-        var statistic = SurvivalForestTrainer.Train(augmented, followUp, options, trainingRows).MeanSplitStatistic();
-        return CorrectedImpurityImportance.FromAugmented(statistic, featureCount, decoySources);
+        return CorrectedImpurityImportance.MeasureWith(matrix, decoySources, options,
+            augmented => SurvivalForestTrainer.Train(augmented, followUp, options, trainingRows).MeanSplitStatistic());
     }
 
     /// <summary>
@@ -50,14 +45,7 @@ public static class SurvivalImportance
         if (matrix.FeatureCount != forest.FeatureCount || matrix.SampleCount != forest.SampleCount)
             throw new ArgumentException("The matrix must be the one the forest was grown on.");
         var perTree = new TreePermutationScores[forest.TreeCount];
-        int threads = Math.Min(WorkerThreads.Resolve(threadCount), Math.Max(1, forest.TreeCount));
-        int next = -1;
-        Parallel.For(0, threads, new ParallelOptions { MaxDegreeOfParallelism = threads }, _ =>
-        {
-            int t;
-            while ((t = Interlocked.Increment(ref next)) < forest.TreeCount)
-                perTree[t] = ScoreTree(forest, t, matrix);
-        });
+        TreeWork.ForEach(forest.TreeCount, threadCount, () => 0, (_, t) => perTree[t] = ScoreTree(forest, t, matrix));
         var summary = TreeScoreSummary.Summarise(perTree, forest.FeatureCount);
         return new ErrorRiseImportance(summary.MeanAccuracyDrop, summary.StandardError);
     }
@@ -66,7 +54,9 @@ public static class SurvivalImportance
     {
         var rows = forest.OutOfBagRows(t).ToArray();
         if (rows.Length < 2) return TreePermutationScores.Empty;
-        var baseline = Concordance(forest.FollowUp, rows, forest.OutOfBagMortality(t).ToArray());
+        // The rows' follow-up is gathered once; every permuted feature is scored against it.
+        var (time, events) = FollowUpOf(forest.FollowUp, rows);
+        var baseline = HarrellConcordance.Estimate(time, events, forest.OutOfBagMortality(t));
         if (baseline.ComparablePairs == 0) return TreePermutationScores.Empty;
         var tree = forest.Tree(t);
         var features = tree.Topology.SplitFeatures();
@@ -79,12 +69,12 @@ public static class SurvivalImportance
             int feature = features[k];
             PermutedCodes.Fill(matrix, feature, rows, treeSeed, codes);
             for (int i = 0; i < rows.Length; i++) risk[i] = tree.Mortality[tree.Topology.LeafOf(matrix, rows[i], feature, codes[i])];
-            drops[k] = baseline.Concordance - Concordance(forest.FollowUp, rows, risk).Concordance;
+            drops[k] = baseline.Concordance - HarrellConcordance.Estimate(time, events, risk).Concordance;
         }
         return new TreePermutationScores(features, drops, drops);
     }
 
-    private static ConcordanceEstimate Concordance(FollowUpTimes followUp, int[] rows, double[] risk)
+    private static (double[] Time, bool[] Events) FollowUpOf(FollowUpTimes followUp, int[] rows)
     {
         var time = new double[rows.Length];
         var events = new bool[rows.Length];
@@ -93,6 +83,6 @@ public static class SurvivalImportance
             time[i] = followUp.Times[rows[i]];
             events[i] = followUp.Events[rows[i]];
         }
-        return HarrellConcordance.Estimate(time, events, risk);
+        return (time, events);
     }
 }

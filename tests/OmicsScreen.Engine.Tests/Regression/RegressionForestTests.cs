@@ -36,7 +36,7 @@ public class RegressionForestTests(ITestOutputHelper output)
             Sampling = AllRows,
             Tree = new TreeOptions { MaxDepth = 3, FeaturesPerSplit = matrix.FeatureCount },
         });
-        Assert.Equal(tree.GetProperty("node_count").GetInt32(), forest.Tree(0).NodeCount);
+        Assert.Equal(tree.GetProperty("node_count").GetInt32(), forest.Tree(0).Topology.NodeCount);
         var expected = tree.GetProperty("train_predictions").EnumerateArray().Select(v => v.GetDouble()).ToArray();
         var predicted = forest.Predict(binned);
         for (int s = 0; s < expected.Length; s++) Assert.Equal(expected[s], predicted[s], 1e-8);
@@ -114,11 +114,11 @@ public class RegressionForestTests(ITestOutputHelper output)
             Tree = new TreeOptions { MaxDepth = 1 },
         }, sampleWeights: [2, 1, 1, 1]);
         var tree = forest.Tree(0);
-        Assert.Equal(3, tree.NodeCount);
-        Assert.Equal(2.5f, tree.Thresholds[0]);
+        Assert.Equal(3, tree.Topology.NodeCount);
+        Assert.Equal(2.5f, tree.Topology.Thresholds[0]);
         Assert.Equal(14.0 / 5, tree.NodeMeans[0], 12);
-        Assert.Equal(4.0 / 3, tree.NodeMeans[tree.LeftChildren[0]], 12);
-        Assert.Equal(5.0, tree.NodeMeans[tree.RightChildren[0]], 12);
+        Assert.Equal(4.0 / 3, tree.NodeMeans[tree.Topology.LeftChildren[0]], 12);
+        Assert.Equal(5.0, tree.NodeMeans[tree.Topology.RightChildren[0]], 12);
         Assert.Equal((16.0 / 3 + 50 - 39.2) / 5, tree.ImpurityDecreases[0], 12);
     }
 

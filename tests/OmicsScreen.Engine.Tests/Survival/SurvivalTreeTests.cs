@@ -33,8 +33,8 @@ public class SurvivalTreeTests
             Tree = new TreeOptions { MaxDepth = 1, FeaturesPerSplit = matrix.FeatureCount },
         });
         var tree = forest.Tree(0);
-        Assert.Equal(root.GetProperty("marker").GetString(), matrix.FeatureNames[tree.Features[0]]);
-        Assert.Equal(root.GetProperty("threshold").GetDouble(), tree.Thresholds[0], 1e-4);
+        Assert.Equal(root.GetProperty("marker").GetString(), matrix.FeatureNames[tree.Topology.Features[0]]);
+        Assert.Equal(root.GetProperty("threshold").GetDouble(), tree.Topology.Thresholds[0], 1e-4);
     }
 
     [Fact]
@@ -62,11 +62,11 @@ public class SurvivalTreeTests
             Tree = new TreeOptions { MaxDepth = 1 },
         });
         var tree = forest.Tree(0);
-        Assert.Equal(1.5f, tree.Thresholds[0]);
+        Assert.Equal(1.5f, tree.Topology.Thresholds[0]);
         Assert.Equal(Math.Sqrt(3), tree.SplitStatistics[0], 12);
         // Right leaf {t=3, 5, 8}: Nelson-Aalen steps 1/3, 1/3 + 1/2, 1/3 + 1/2 + 1 at event times 3, 5, 8
         // (indices 1, 2, 3 of the training event times 2, 3, 5, 8), 0 before.
-        int right = tree.RightChildren[0];
+        int right = tree.Topology.RightChildren[0];
         Assert.Equal(0.0, tree.CumulativeHazard(right, 0), 12);
         Assert.Equal(1.0 / 3, tree.CumulativeHazard(right, 1), 12);
         Assert.Equal(1.0 / 3 + 0.5, tree.CumulativeHazard(right, 2), 12);
@@ -74,7 +74,7 @@ public class SurvivalTreeTests
         // Mortality (Ishwaran et al. 2008): the hazard summed over the four event times.
         Assert.Equal(0 + 1.0 / 3 + (1.0 / 3 + 0.5) + (1.0 / 3 + 0.5 + 1), tree.Mortality[right], 12);
         // Left leaf {t=2}: hazard 1 from time 2 on, mortality 4.
-        Assert.Equal(4.0, tree.Mortality[tree.LeftChildren[0]], 12);
+        Assert.Equal(4.0, tree.Mortality[tree.Topology.LeftChildren[0]], 12);
     }
 
     [Fact]

@@ -63,7 +63,7 @@ public class RegressionImportanceTests
         Assert.Equal(one.StandardError, two.StandardError);
         var used = new HashSet<int>();
         for (int t = 0; t < forest.TreeCount; t++)
-            foreach (int f in forest.Tree(t).Features) if (f >= 0) used.Add(f);
+            foreach (int f in forest.Tree(t).Topology.Features) if (f >= 0) used.Add(f);
         for (int f = 0; f < matrix.FeatureCount; f++)
             if (!used.Contains(f)) Assert.Equal(0.0, one.MeanRise[f]);
     }

@@ -90,11 +90,11 @@ public class SurvivalImportanceTests(ITestOutputHelper output)
             Tree = new TreeOptions { MaxDepth = 1, FeaturesPerSplit = featuresPerSplit },
         });
         var tree = forest.Tree(0);
-        int feature = tree.Features[0];
+        int feature = tree.Topology.Features[0];
         Assert.True(feature >= 0);
         var column = matrix.Column(feature);
         var right = new bool[followUp.SampleCount];
-        for (int s = 0; s < right.Length; s++) right[s] = column[s] > tree.Thresholds[0];
+        for (int s = 0; s < right.Length; s++) right[s] = column[s] > tree.Topology.Thresholds[0];
         var test = LogRankTest.TwoGroups(followUp.Times, followUp.Events, right);
         Assert.Equal(Math.Sqrt(test.ChiSquare), tree.SplitStatistics[0], 1e-9);
     }
