@@ -30,15 +30,7 @@ public sealed class FollowUpOutcome
 
     public FollowUpOutcome SelectSamples(ReadOnlySpan<int> samples)
     {
-        var times = new double[samples.Length];
-        var events = new bool[samples.Length];
-        var allTimes = FollowUp.Times;
-        var allEvents = FollowUp.Events;
-        for (int i = 0; i < samples.Length; i++)
-        {
-            times[i] = allTimes[samples[i]];
-            events[i] = allEvents[samples[i]];
-        }
-        return new FollowUpOutcome(TimeColumn, EventColumn, times, events);
+        var selected = FollowUp.SelectSamples(samples);
+        return new FollowUpOutcome(TimeColumn, EventColumn, selected.Times, selected.Events);
     }
 }

@@ -53,6 +53,19 @@ public sealed class FollowUpTimes
     /// <summary>Per sample, the index of its event time, or -1 when censored.</summary>
     public ReadOnlySpan<int> EventIndices => _eventIndices;
 
+    /// <summary>The follow-up of the given samples, in that order, indexed afresh.</summary>
+    public FollowUpTimes SelectSamples(ReadOnlySpan<int> samples)
+    {
+        var times = new double[samples.Length];
+        var events = new bool[samples.Length];
+        for (int i = 0; i < samples.Length; i++)
+        {
+            times[i] = _times[samples[i]];
+            events[i] = _events[samples[i]];
+        }
+        return new FollowUpTimes(times, events);
+    }
+
     public int EventCount
     {
         get
