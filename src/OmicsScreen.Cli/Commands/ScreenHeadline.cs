@@ -56,7 +56,7 @@ public sealed record ScreenHeadline
             MinFrequency = options.FrequencyThreshold,
             MaxQ = options.QValueThreshold,
             Shortlist = result.Shortlist.Select(e => new ShortlistedMarker(e.Rank, e.Forest.Feature, NameOrNull(labels, e.Forest.FeatureIndex),
-                e.Forest.SelectionFrequency, e.Forest.MedianRank, e.Forest.QValue, ScreenTables.DirectionText(e.Univariate), e.Univariate.Auc,
+                e.Forest.SelectionFrequency, e.Forest.MedianRank, e.Forest.QValue, ScreenTables.DirectionText(e.Univariate!), e.Univariate!.Auc,
                 e.RedundancyGroup)).ToList(),
             RecommendedPanelSize = result.PanelSize?.RecommendedSize,
             LockedPanelSize = result.LockedPanelSize,

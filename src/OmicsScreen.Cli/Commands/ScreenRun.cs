@@ -222,8 +222,8 @@ internal static class ScreenRun
                     e.Forest.SelectionFrequency.ToString("0.00", CultureInfo.InvariantCulture),
                     e.Forest.MedianRank.ToString("0.0", CultureInfo.InvariantCulture),
                     e.Forest.QValue.ToString("0.###", CultureInfo.InvariantCulture),
-                    ScreenTables.DirectionText(e.Univariate),
-                    e.Univariate.Auc.ToString("0.000", CultureInfo.InvariantCulture),
+                    ScreenTables.DirectionText(e.Univariate!),
+                    e.Univariate!.Auc.ToString("0.000", CultureInfo.InvariantCulture),
                     e.RedundancyGroup.ToString(CultureInfo.InvariantCulture));
             table.WriteTo(output);
         }

@@ -1,3 +1,4 @@
+using OmicsScreen.Engine.Panels;
 using OmicsScreen.Reporting.Html;
 using OmicsScreen.Screening.Screen;
 
@@ -48,36 +49,64 @@ internal static class ScreenReportTables
         return table;
     }
 
-    /// <summary>Each shortlisted marker on its own: direction, effect size, AUC and its rank by rank test among all features.</summary>
+    /// <summary>Each shortlisted marker on its own: direction, effect size with its interval, and its rank by the univariate test among all features.</summary>
     public static HtmlTable ShortlistStatistics(ScreenResult result, FeatureLabels labels)
     {
-        var table = new HtmlTable(ShortlistStatisticsCaption,
-        [
+        string[] effects = result.Kind switch
+        {
+            OutcomeKind.Measured => ["Spearman rho [95% CI]"],
+            OutcomeKind.TimeToEvent => ["Harrell's C [95% CI]", "Hazard ratio per SD [95% CI]"],
+            _ => ["log2 ratio", "AUC [95% CI]"],
+        };
+        var headers = new List<HtmlTableColumn>
+        {
             new("Rank", ColumnAlignment.Numeric),
             new(labels.HasDisplayNames ? "Marker (feature id)" : "Feature"),
             new("Direction"),
-            new("log2 ratio", ColumnAlignment.Numeric),
-            new("AUC [95% CI]"),
-            new("Univariate rank", ColumnAlignment.Numeric),
-            new("Acts with"),
-        ])
-        { FirstColumnIsRowHeader = false };
+        };
+        headers.AddRange(effects.Select(e => new HtmlTableColumn(e, e == "log2 ratio" ? ColumnAlignment.Numeric : ColumnAlignment.Text)));
+        headers.Add(new("Univariate rank", ColumnAlignment.Numeric));
+        if (result.Kind == OutcomeKind.Classes) headers.Add(new("Acts with"));
+        var table = new HtmlTable(ShortlistStatisticsCaption, headers) { FirstColumnIsRowHeader = false };
         foreach (var entry in result.Shortlist)
         {
-            var univariate = entry.Univariate;
-            int partner = ActsWith(entry.Forest);
-            table.AddRow(
+            var cells = new List<string>
+            {
                 ReportNumber.Integer(entry.Rank),
                 labels.Label(entry.Forest.FeatureIndex, entry.Forest.Feature),
-                ScreenTables.DirectionText(univariate),
-                ReportNumber.Fixed(univariate.Log2MedianRatio, 2),
-                ReportNumber.Fixed(univariate.Auc, 3) + " [" + ReportNumber.Fixed(univariate.AucInterval.Lower, 3) + ", "
-                    + ReportNumber.Fixed(univariate.AucInterval.Upper, 3) + "]",
-                ReportNumber.Integer(entry.UnivariateRank),
-                partner < 0 ? "" : labels.Label(partner, result.Features[partner].Feature));
+                entry.Univariate is { } row ? ScreenTables.DirectionText(row) : ScreenTables.DirectionOf(result, entry.Forest.FeatureIndex),
+            };
+            switch (result.Kind)
+            {
+                case OutcomeKind.Measured:
+                    var measured = entry.Measured!;
+                    cells.Add(WithInterval(measured.Rho, measured.Interval.Lower, measured.Interval.Upper, 3));
+                    break;
+                case OutcomeKind.TimeToEvent:
+                    var followUp = entry.FollowUp!;
+                    cells.Add(WithInterval(followUp.Concordance.Concordance, followUp.Concordance.Interval.Lower, followUp.Concordance.Interval.Upper, 3));
+                    cells.Add(ReportNumber.Significant(followUp.HazardRatioPerSd, 3) + " [" + ReportNumber.Significant(followUp.HazardRatioInterval.Lower, 3)
+                        + ", " + ReportNumber.Significant(followUp.HazardRatioInterval.Upper, 3) + "]");
+                    break;
+                default:
+                    var univariate = entry.Univariate!;
+                    cells.Add(ReportNumber.Fixed(univariate.Log2MedianRatio, 2));
+                    cells.Add(WithInterval(univariate.Auc, univariate.AucInterval.Lower, univariate.AucInterval.Upper, 3));
+                    break;
+            }
+            cells.Add(ReportNumber.Integer(entry.UnivariateRank));
+            if (result.Kind == OutcomeKind.Classes)
+            {
+                int partner = ActsWith(entry.Forest);
+                cells.Add(partner < 0 ? "" : labels.Label(partner, result.Features[partner].Feature));
+            }
+            table.AddRow([.. cells]);
         }
         return table;
     }
+
+    private static string WithInterval(double value, double lower, double upper, int decimals) =>
+        ReportNumber.Fixed(value, decimals) + " [" + ReportNumber.Fixed(lower, decimals) + ", " + ReportNumber.Fixed(upper, decimals) + "]";
 
     /// <summary>
     /// The partner the interaction scan names for a marker whose evidence lies in the pair rather
@@ -129,7 +158,7 @@ internal static class ScreenReportTables
                         : "shortlisted, alone in its redundancy group";
                 }
             }
-            table.AddRow(ReportNumber.Integer(i + 1), feature, role, ScreenTables.DirectionText(result.Univariate.Row(featureIndex, 0)));
+            table.AddRow(ReportNumber.Integer(i + 1), feature, role, ScreenTables.DirectionOf(result, featureIndex));
         }
         return table;
     }

@@ -1,3 +1,4 @@
+using OmicsScreen.Engine.Panels;
 using OmicsScreen.Reporting.Tables;
 using OmicsScreen.Screening.Screen;
 using OmicsScreen.Screening.Univariate;
@@ -30,19 +31,19 @@ public static class ScreenTables
             TsvColumn<ShortlistEntry>.Number("corrected_importance_sd", e => e.Forest.CorrectedSd, Importance),
             TsvColumn<ShortlistEntry>.Number("permutation_importance", e => e.Forest.PermutationMean, Importance),
             TsvColumn<ShortlistEntry>.Number("permutation_importance_sd", e => e.Forest.PermutationSd, Importance),
-            TsvColumn<ShortlistEntry>.Number("gini_decrease", e => e.Forest.ImpurityMean, Importance),
-            TsvColumn<ShortlistEntry>.Number("gini_decrease_sd", e => e.Forest.ImpuritySd, Importance),
+            TsvColumn<ShortlistEntry>.Number(ImpurityColumn(result.Kind), e => e.Forest.ImpurityMean, Importance),
+            TsvColumn<ShortlistEntry>.Number(ImpurityColumn(result.Kind) + "_sd", e => e.Forest.ImpuritySd, Importance),
             TsvColumn<ShortlistEntry>.Number("group_permutation_importance", e => e.GroupPermutationImportance, Importance),
             TsvColumn<ShortlistEntry>.Number("p_value", e => e.Forest.PValue, Probability),
             TsvColumn<ShortlistEntry>.Number("q_value", e => e.Forest.QValue, Probability),
-            TsvColumn<ShortlistEntry>.Text("direction", e => DirectionText(e.Univariate)),
-            TsvColumn<ShortlistEntry>.Number("log2_median_ratio", e => e.Univariate.Log2MedianRatio, NumberFormat.Fixed(3)),
-            TsvColumn<ShortlistEntry>.Number("auc", e => e.Univariate.Auc, NumberFormat.Fixed(4)),
-            TsvColumn<ShortlistEntry>.Number("auc_low95", e => e.Univariate.AucInterval.Lower, NumberFormat.Fixed(4)),
-            TsvColumn<ShortlistEntry>.Number("auc_high95", e => e.Univariate.AucInterval.Upper, NumberFormat.Fixed(4)),
-            TsvColumn<ShortlistEntry>.Number("rank_test_q", e => e.Univariate.QValue, Probability),
-            TsvColumn<ShortlistEntry>.Integer("univariate_rank", e => e.UnivariateRank),
         };
+        columns.AddRange(result.Kind switch
+        {
+            OutcomeKind.Measured => MeasuredColumns(),
+            OutcomeKind.TimeToEvent => FollowUpColumns(),
+            _ => ClassColumns(),
+        });
+        columns.Add(TsvColumn<ShortlistEntry>.Integer("univariate_rank", e => e.UnivariateRank));
         AddLabelColumns(columns, labels, e => e.Forest.FeatureIndex);
         return new TsvTableWriter<ShortlistEntry>(columns).Write(writer, result.Shortlist);
     }
@@ -63,8 +64,8 @@ public static class ScreenTables
             TsvColumn<FeatureSummary>.Number("corrected_importance_sd", f => f.CorrectedSd, Importance),
             TsvColumn<FeatureSummary>.Number("permutation_importance", f => f.PermutationMean, Importance),
             TsvColumn<FeatureSummary>.Number("permutation_importance_sd", f => f.PermutationSd, Importance),
-            TsvColumn<FeatureSummary>.Number("gini_decrease", f => f.ImpurityMean, Importance),
-            TsvColumn<FeatureSummary>.Number("gini_decrease_sd", f => f.ImpuritySd, Importance),
+            TsvColumn<FeatureSummary>.Number(ImpurityColumn(result.Kind), f => f.ImpurityMean, Importance),
+            TsvColumn<FeatureSummary>.Number(ImpurityColumn(result.Kind) + "_sd", f => f.ImpuritySd, Importance),
             TsvColumn<FeatureSummary>.Number("null_p", f => f.NullP, Probability),
             TsvColumn<FeatureSummary>.Number("outcome_permutation_p", f => f.OutcomePermutationP, Probability),
             TsvColumn<FeatureSummary>.Number("rank_test_p", f => f.RankTestP, Probability),
@@ -98,6 +99,48 @@ public static class ScreenTables
         return new TsvTableWriter<PanelSizePoint>(columns).Write(writer, curve.Points);
     }
 
+    /// <summary>The uncorrected impurity importance is named for what it sums: Gini decrease, variance decrease or log-rank statistic.</summary>
+    public static string ImpurityColumn(OutcomeKind kind) => kind switch
+    {
+        OutcomeKind.Measured => "variance_decrease",
+        OutcomeKind.TimeToEvent => "log_rank_statistic",
+        _ => "gini_decrease",
+    };
+
+    /// <summary>The positive class against the rest: direction, median ratio, AUC with interval, rank-test q.</summary>
+    private static TsvColumn<ShortlistEntry>[] ClassColumns() =>
+    [
+        TsvColumn<ShortlistEntry>.Text("direction", e => DirectionText(e.Univariate!)),
+        TsvColumn<ShortlistEntry>.Number("log2_median_ratio", e => e.Univariate!.Log2MedianRatio, NumberFormat.Fixed(3)),
+        TsvColumn<ShortlistEntry>.Number("auc", e => e.Univariate!.Auc, NumberFormat.Fixed(4)),
+        TsvColumn<ShortlistEntry>.Number("auc_low95", e => e.Univariate!.AucInterval.Lower, NumberFormat.Fixed(4)),
+        TsvColumn<ShortlistEntry>.Number("auc_high95", e => e.Univariate!.AucInterval.Upper, NumberFormat.Fixed(4)),
+        TsvColumn<ShortlistEntry>.Number("rank_test_q", e => e.Univariate!.QValue, Probability),
+    ];
+
+    /// <summary>Spearman's rho with its Fisher-z interval and q against a measured outcome.</summary>
+    private static TsvColumn<ShortlistEntry>[] MeasuredColumns() =>
+    [
+        TsvColumn<ShortlistEntry>.Text("direction", e => e.Measured!.Direction),
+        TsvColumn<ShortlistEntry>.Number("spearman_rho", e => e.Measured!.Rho, NumberFormat.Fixed(4)),
+        TsvColumn<ShortlistEntry>.Number("rho_low95", e => e.Measured!.Interval.Lower, NumberFormat.Fixed(4)),
+        TsvColumn<ShortlistEntry>.Number("rho_high95", e => e.Measured!.Interval.Upper, NumberFormat.Fixed(4)),
+        TsvColumn<ShortlistEntry>.Number("rank_test_q", e => e.Measured!.QValue, Probability),
+    ];
+
+    /// <summary>Harrell's C with its interval, the Cox hazard ratio per SD with its Wald interval, and the score test's q.</summary>
+    private static TsvColumn<ShortlistEntry>[] FollowUpColumns() =>
+    [
+        TsvColumn<ShortlistEntry>.Text("direction", e => e.FollowUp!.Direction),
+        TsvColumn<ShortlistEntry>.Number("concordance", e => e.FollowUp!.Concordance.Concordance, NumberFormat.Fixed(4)),
+        TsvColumn<ShortlistEntry>.Number("concordance_low95", e => e.FollowUp!.Concordance.Interval.Lower, NumberFormat.Fixed(4)),
+        TsvColumn<ShortlistEntry>.Number("concordance_high95", e => e.FollowUp!.Concordance.Interval.Upper, NumberFormat.Fixed(4)),
+        TsvColumn<ShortlistEntry>.Number("hazard_ratio_per_sd", e => e.FollowUp!.HazardRatioPerSd, NumberFormat.Significant(4)),
+        TsvColumn<ShortlistEntry>.Number("hazard_ratio_low95", e => e.FollowUp!.HazardRatioInterval.Lower, NumberFormat.Significant(4)),
+        TsvColumn<ShortlistEntry>.Number("hazard_ratio_high95", e => e.FollowUp!.HazardRatioInterval.Upper, NumberFormat.Significant(4)),
+        TsvColumn<ShortlistEntry>.Number("rank_test_q", e => e.FollowUp!.QValue, Probability),
+    ];
+
     /// <summary>
     /// The display name right after the feature id, and each annotation column at the end under
     /// its own name (prefixed feature_ when a column of the table already has that name).
@@ -117,6 +160,18 @@ public static class ScreenTables
             while (!taken.Add(SpreadsheetSafeText.Sanitise(header))) header = "feature_" + header;
             columns.Add(TsvColumn<TRecord>.Text(header, r => values[featureIndex(r)]));
         }
+    }
+
+    /// <summary>A feature's direction in words for any outcome kind (for classes, against the first contrast).</summary>
+    public static string DirectionOf(ScreenResult result, int featureIndex)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        return result.Kind switch
+        {
+            OutcomeKind.Measured => result.MeasuredMarkers[featureIndex].Direction,
+            OutcomeKind.TimeToEvent => result.FollowUpMarkers[featureIndex].Direction,
+            _ => DirectionText(result.Univariate.Row(featureIndex, 0)),
+        };
     }
 
     /// <summary>"higher in case" style text: what a lab reads first about a marker.</summary>

@@ -42,7 +42,7 @@ internal static class LeaveOneCohortOut
         var scored = PanelScorer.Score(context, features, training, test, RandomStreams.HeldOutScoring(seed));
         var positives = new List<double>();
         var negatives = new List<double>();
-        for (int i = 0; i < test.Length; i++) (scored.IsPositive[i] ? positives : negatives).Add(scored.PositiveProbabilities[i]);
+        for (int i = 0; i < test.Length; i++) (scored.IsPositive[i] ? positives : negatives).Add(scored.Predictions[i]);
         double auc = double.NaN;
         var interval = ConfidenceInterval.Undefined(0.95);
         if (context.Outcome.ClassCount == 2 && positives.Count > 0 && negatives.Count > 0)

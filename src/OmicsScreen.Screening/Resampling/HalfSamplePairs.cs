@@ -6,7 +6,8 @@ namespace OmicsScreen.Screening.Resampling;
 
 /// <summary>
 /// Complementary pairs of half-samples (Shah &amp; Samworth 2013, JRSS-B 75(1)): each pair splits
-/// the eligible units into two disjoint halves, stratified by class, so every unit is used by
+/// the eligible units into two disjoint halves, stratified (by class, or the strata of
+/// another outcome kind: <see cref="ResamplingStrata"/>), so every unit is used by
 /// exactly one member of each pair. The pairs are what the stability bounds assume.
 /// </summary>
 public static class HalfSamplePairs
@@ -16,10 +17,16 @@ public static class HalfSamplePairs
     /// halves of pair i, as ascending panel row indices. Pair i depends on (runSeed, i) only.
     /// </summary>
     public static int[][] Draw(ClassOutcome outcome, SampleGrouping? subject, ReadOnlySpan<int> eligibleRows,
+        int pairCount, ulong runSeed) =>
+        Draw(ResamplingStrata.Of(outcome), subject, eligibleRows, pairCount, runSeed);
+
+    /// <summary>As above, with the halves balanced over any outcome kind's strata.</summary>
+    public static int[][] Draw(ResamplingStrata strata, SampleGrouping? subject, ReadOnlySpan<int> eligibleRows,
         int pairCount, ulong runSeed)
     {
+        ArgumentNullException.ThrowIfNull(strata);
         ArgumentOutOfRangeException.ThrowIfLessThan(pairCount, 1);
-        var units = SamplingUnits.Build(outcome, subject, eligibleRows);
+        var units = SamplingUnits.Build(strata, subject, eligibleRows);
         var halves = new int[2 * pairCount][];
         var first = new List<int>();
         var second = new List<int>();

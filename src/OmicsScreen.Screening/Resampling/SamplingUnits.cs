@@ -3,7 +3,7 @@ using OmicsScreen.Engine.Panels;
 namespace OmicsScreen.Screening.Resampling;
 
 /// <summary>
-/// The units that resampling draws, grouped into class strata: single samples, or whole
+/// The units that resampling draws, grouped into strata (<see cref="ResamplingStrata"/>): single samples, or whole
 /// subjects when a subject grouping is given, so replicates or repeat visits of one person are
 /// never split between a training part and its test part (Karpievitch et al. 2009).
 /// </summary>
@@ -17,14 +17,14 @@ internal sealed class SamplingUnits
     public int UnitCount => Strata.Sum(s => s.Length);
 
     /// <summary>
-    /// Groups the eligible rows into units and strata. A subject's stratum is the class of most of
-    /// its samples (ties to the lower class code), which keeps folds balanced when a subject's
+    /// Groups the eligible rows into units and strata. A subject's stratum is the stratum of most of
+    /// its samples (ties to the lower code), which keeps folds balanced when a subject's
     /// samples share an outcome, the usual case.
     /// </summary>
-    public static SamplingUnits Build(ClassOutcome outcome, SampleGrouping? subject, ReadOnlySpan<int> rows)
+    public static SamplingUnits Build(ResamplingStrata sampleStrata, SampleGrouping? subject, ReadOnlySpan<int> rows)
     {
-        var classes = outcome.SampleClasses;
-        var strata = new List<int[]>[outcome.ClassCount];
+        var classes = sampleStrata.SampleStrata;
+        var strata = new List<int[]>[sampleStrata.StratumCount];
         for (int c = 0; c < strata.Length; c++) strata[c] = [];
         if (subject is null)
         {
@@ -39,7 +39,7 @@ internal sealed class SamplingUnits
                 if (!bySubject.TryGetValue(levels[row], out var members)) bySubject[levels[row]] = members = [];
                 members.Add(row);
             }
-            var votes = new int[outcome.ClassCount];
+            var votes = new int[sampleStrata.StratumCount];
             foreach (var members in bySubject.Values)
             {
                 Array.Clear(votes);

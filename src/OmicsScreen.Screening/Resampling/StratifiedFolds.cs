@@ -5,18 +5,24 @@ using OmicsScreen.Screening.Randomness;
 namespace OmicsScreen.Screening.Resampling;
 
 /// <summary>
-/// Repeated K-fold splits, stratified by class and grouped by subject, for the outer loop of an
+/// Repeated K-fold splits, stratified (by class, or another outcome kind's strata) and grouped by subject, for the outer loop of an
 /// selection-aware estimate: each fold's test part is never seen by the screen that is scored on it
 /// (Ambroise &amp; McLachlan 2002, PNAS 99(10)).
 /// </summary>
 public static class StratifiedFolds
 {
     public static IReadOnlyList<OuterFold> Draw(ClassOutcome outcome, SampleGrouping? subject, ReadOnlySpan<int> eligibleRows,
+        int foldCount, int repeatCount, ulong runSeed) =>
+        Draw(ResamplingStrata.Of(outcome), subject, eligibleRows, foldCount, repeatCount, runSeed);
+
+    /// <summary>As above, stratified by any outcome kind's strata.</summary>
+    public static IReadOnlyList<OuterFold> Draw(ResamplingStrata strata, SampleGrouping? subject, ReadOnlySpan<int> eligibleRows,
         int foldCount, int repeatCount, ulong runSeed)
     {
+        ArgumentNullException.ThrowIfNull(strata);
         ArgumentOutOfRangeException.ThrowIfLessThan(foldCount, 2);
         ArgumentOutOfRangeException.ThrowIfLessThan(repeatCount, 1);
-        var units = SamplingUnits.Build(outcome, subject, eligibleRows);
+        var units = SamplingUnits.Build(strata, subject, eligibleRows);
         if (units.UnitCount < foldCount)
             throw new ArgumentException($"{foldCount} folds need at least {foldCount} samples (or subjects); there are {units.UnitCount}.");
         var folds = new List<OuterFold>(foldCount * repeatCount);

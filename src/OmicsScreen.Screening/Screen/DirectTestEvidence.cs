@@ -17,13 +17,15 @@ internal sealed record DirectTestEvidence(
     double[] DecoyInteractionP,
     int[] InteractionPartners)
 {
-    public static DirectTestEvidence Compute(Panel panel, int[] rows, DecoyPlan decoys, bool interactionScan, int threadCount)
+    /// <summary>The rank test of the outcome's kind (<see cref="ScreenOutcome.RankTestPValues"/>) and, where the settings run it, the interaction scan.</summary>
+    public static DirectTestEvidence Compute(ScreenContext context, int[] rows, DecoyPlan decoys)
     {
-        var featureRankP = UnivariateScreen.RankTestPValues(panel.Matrix, panel.Outcome, rows, threadCount);
+        var (panel, threadCount) = (context.Panel, context.ThreadCount);
+        var featureRankP = context.ScreenOutcome.RankTestPValues(panel.Matrix, rows, threadCount);
         if (decoys.DecoyCount == 0) return new DirectTestEvidence(featureRankP, [], [], [], []);
         var decoyValues = decoys.Values(panel.Matrix);
-        var decoyRankP = UnivariateScreen.RankTestPValues(decoyValues, panel.Outcome, rows, threadCount);
-        if (!interactionScan) return new DirectTestEvidence(featureRankP, decoyRankP, [], [], []);
+        var decoyRankP = context.ScreenOutcome.RankTestPValues(decoyValues, rows, threadCount);
+        if (!context.Settings.InteractionScan) return new DirectTestEvidence(featureRankP, decoyRankP, [], [], []);
 
         // A decoy is scanned against the real features, as a real feature is against the others,
         // so its largest chi-square has the law of a null feature's (its own source is one more

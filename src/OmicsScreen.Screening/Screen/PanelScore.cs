@@ -1,8 +1,10 @@
 namespace OmicsScreen.Screening.Screen;
 
 /// <summary>
-/// A k-marker panel's forest scored on held-out samples, in the order of the test rows: each
-/// one's probability of the positive class (the share of trees voting for it), its true class
-/// against the positive one, and the share of samples whose majority vote is wrong.
+/// A k-marker panel's forest scored on held-out samples, in the order of the test rows.
 /// </summary>
-internal sealed record PanelScore(double[] PositiveProbabilities, bool[] IsPositive, double Error);
+/// <param name="Score">AUC (two classes), accuracy (more classes), R² (measured outcome) or Harrell's C (follow-up); higher is better.</param>
+/// <param name="Error">Share of wrong majority votes, mean squared error, or 1 - C.</param>
+/// <param name="Predictions">Each test sample's probability of the positive class, predicted value, or risk score.</param>
+/// <param name="IsPositive">Each test sample's class against the positive one; empty for other outcome kinds.</param>
+internal sealed record PanelScore(double Score, double Error, double[] Predictions, bool[] IsPositive);

@@ -13,24 +13,9 @@ internal static class PanelScorer
     public static PanelScore Score(ScreenContext context, ReadOnlySpan<int> features, int[] trainingRows, ReadOnlySpan<int> testRows,
         ForestStreams streams)
     {
-        var outcome = context.Outcome;
-        var selected = context.Matrix.SelectFeatures(features);
         // The panel forest tries floor(sqrt(k)) features per split of its own k, whatever the screen used.
         var forestOptions = context.Settings.ForestOptions(context.Subject, streams);
         forestOptions = forestOptions with { Tree = forestOptions.Tree with { FeaturesPerSplit = null } };
-        var forest = ForestTrainer.Train(selected, outcome, forestOptions, trainingRows);
-        var prediction = forest.Predict(selected);
-        var classes = outcome.SampleClasses;
-        int wrong = 0;
-        var probabilities = new double[testRows.Length];
-        var positive = new bool[testRows.Length];
-        for (int i = 0; i < testRows.Length; i++)
-        {
-            int row = testRows[i];
-            if (prediction.PredictedClasses[row] != classes[row]) wrong++;
-            probabilities[i] = prediction.Probability(row, outcome.PositiveClass);
-            positive[i] = classes[row] == outcome.PositiveClass;
-        }
-        return new PanelScore(probabilities, positive, (double)wrong / testRows.Length);
+        return context.ScreenOutcome.ScorePanel(context.Matrix, features, trainingRows, testRows, forestOptions);
     }
 }

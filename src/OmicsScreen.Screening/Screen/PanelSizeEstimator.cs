@@ -62,8 +62,9 @@ internal static class PanelSizeEstimator
     public static PanelSizeCurve Estimate(ScreenContext context, int[] fullOrder, int shortlistLength, ScreenWork work)
     {
         var (matrix, options) = (context.Matrix, context.Options);
-        var outcome = context.Outcome;
-        bool binary = outcome.ClassCount == 2;
+        var model = context.ScreenOutcome;
+        // Only a two-class outcome has the pooled out-of-fold ROC curve.
+        bool binary = model.ScoreName == "auc";
         var folds = work.CurveFolds;
         int limit = Math.Min(options.CurveMaxPanelSize, matrix.FeatureCount);
         var sizes = SizesFor(limit, shortlistLength);
@@ -71,7 +72,7 @@ internal static class PanelSizeEstimator
         var selectionAwareError = new double[folds.Count, sizes.Length];
         var optimistic = new double[folds.Count, sizes.Length];
         var optimisticError = new double[folds.Count, sizes.Length];
-        var selectionAwareProbabilities = new double[folds.Count, sizes.Length][];
+        var selectionAwareScores = new PanelScore[folds.Count, sizes.Length];
         var innerScreens = new InnerScreenResult[folds.Count];
         for (int i = 0; i < folds.Count; i++)
         {
@@ -82,8 +83,11 @@ internal static class PanelSizeEstimator
             var innerOrder = innerScreens[i].Order;
             for (int s = 0; s < sizes.Length; s++)
             {
-                (selectionAware[i, s], selectionAwareError[i, s], selectionAwareProbabilities[i, s]) = Score(context, innerOrder.AsSpan(0, sizes[s]), fold, RandomStreams.PanelScoring(innerSeed, s));
-                (optimistic[i, s], optimisticError[i, s], _) = Score(context, fullOrder.AsSpan(0, sizes[s]), fold, RandomStreams.PanelScoring(innerSeed, s));
+                var aware = Score(context, innerOrder.AsSpan(0, sizes[s]), fold, RandomStreams.PanelScoring(innerSeed, s));
+                var flattered = Score(context, fullOrder.AsSpan(0, sizes[s]), fold, RandomStreams.PanelScoring(innerSeed, s));
+                selectionAwareScores[i, s] = aware;
+                (selectionAware[i, s], selectionAwareError[i, s]) = (aware.Score, aware.Error);
+                (optimistic[i, s], optimisticError[i, s]) = (flattered.Score, flattered.Error);
             }
             context.Report(ScreenStage.PanelSizeCurve, i + 1, folds.Count);
         }
@@ -122,9 +126,10 @@ internal static class PanelSizeEstimator
             if (listLength == 0)
             {
                 withoutPanel++;
-                lockedScores[i] = ChanceScore(outcome, fold, binary);
                 // A fold that locks nothing calls every held-out sample alike.
-                AddOutOfFold(outcome, fold, null, outOfFoldScores, outOfFoldPositive);
+                var chance = model.ChanceScore(fold.TrainingRows, fold.TestRows);
+                lockedScores[i] = chance.Score;
+                AddOutOfFold(chance, outOfFoldScores, outOfFoldPositive);
                 continue;
             }
             var otherMeans = new double[sizes.Length];
@@ -139,20 +144,18 @@ internal static class PanelSizeEstimator
             sizeSum += size;
             var panelFeatures = inner.Shortlist.AsSpan(0, size);
             int onGrid = Array.IndexOf(sizes, size);
-            double[] probabilities;
+            PanelScore locked;
             if (onGrid >= 0 && panelFeatures.SequenceEqual(inner.Order.AsSpan(0, size)))
-            {
-                lockedScores[i] = selectionAware[i, onGrid];
-                probabilities = selectionAwareProbabilities[i, onGrid];
-            }
+                locked = selectionAwareScores[i, onGrid];
             else
-                (lockedScores[i], _, probabilities) = Score(context, panelFeatures, fold, RandomStreams.PanelScoring(InnerSeed(options, fold), sizes.Length));
-            AddOutOfFold(outcome, fold, probabilities, outOfFoldScores, outOfFoldPositive);
+                locked = Score(context, panelFeatures, fold, RandomStreams.PanelScoring(InnerSeed(options, fold), sizes.Length));
+            lockedScores[i] = locked.Score;
+            AddOutOfFold(locked, outOfFoldScores, outOfFoldPositive);
         }
         double lockedMean = lockedScores.Average();
         double lockedSd = lockedScores.Length < 2 ? double.NaN
             : Math.Sqrt(lockedScores.Sum(v => (v - lockedMean) * (v - lockedMean)) / (lockedScores.Length - 1));
-        return new PanelSizeCurve(binary ? "auc" : "accuracy", points, chosen >= 0 ? sizes[chosen] : sizes[^1],
+        return new PanelSizeCurve(model.ScoreName, points, chosen >= 0 ? sizes[chosen] : sizes[^1],
             options.CurveFolds, options.CurveFoldRepeats)
         {
             LockedSize = lockedSize,
@@ -165,37 +168,17 @@ internal static class PanelSizeEstimator
         };
     }
 
-    /// <summary>Appends a fold's held-out probabilities (0.5 for every sample when the fold locked nothing) and their classes.</summary>
-    private static void AddOutOfFold(ClassOutcome outcome, OuterFold fold, double[]? probabilities, List<double> scores, List<bool> positive)
+    /// <summary>Appends a fold's held-out probabilities of the positive class and the samples' classes (two classes only).</summary>
+    private static void AddOutOfFold(PanelScore scored, List<double> scores, List<bool> positive)
     {
-        for (int i = 0; i < fold.TestRows.Length; i++)
-        {
-            scores.Add(probabilities is null ? 0.5 : probabilities[i]);
-            positive.Add(outcome.SampleClasses[fold.TestRows[i]] == outcome.PositiveClass);
-        }
+        if (scored.IsPositive.Length == 0) return;
+        scores.AddRange(scored.Predictions);
+        positive.AddRange(scored.IsPositive);
     }
 
-    /// <summary>What a fold scores when its procedure locks nothing: AUC 0.5, or the accuracy of always calling the training part's largest class.</summary>
-    private static double ChanceScore(ClassOutcome outcome, OuterFold fold, bool binary)
-    {
-        if (binary) return 0.5;
-        var counts = new int[outcome.ClassCount];
-        foreach (int row in fold.TrainingRows) counts[outcome.SampleClasses[row]]++;
-        int largest = 0;
-        for (int c = 1; c < counts.Length; c++) if (counts[c] > counts[largest]) largest = c;
-        int right = 0;
-        foreach (int row in fold.TestRows) if (outcome.SampleClasses[row] == largest) right++;
-        return (double)right / fold.TestRows.Length;
-    }
-
-    /// <summary>A panel scored on the fold's test rows (<see cref="PanelScorer"/>): AUC with two classes, accuracy with more.</summary>
-    private static (double Score, double Error, double[] Probabilities) Score(ScreenContext context,
-        ReadOnlySpan<int> features, OuterFold fold, ForestStreams streams)
-    {
-        var scored = PanelScorer.Score(context, features, fold.TrainingRows, fold.TestRows, streams);
-        double score = context.Outcome.ClassCount == 2 ? MannWhitneyAuc.Compute(scored.PositiveProbabilities, scored.IsPositive) : 1 - scored.Error;
-        return (score, scored.Error, scored.PositiveProbabilities);
-    }
+    /// <summary>A panel scored on the fold's test rows (<see cref="PanelScorer"/>) in the outcome kind's score.</summary>
+    private static PanelScore Score(ScreenContext context, ReadOnlySpan<int> features, OuterFold fold, ForestStreams streams) =>
+        PanelScorer.Score(context, features, fold.TrainingRows, fold.TestRows, streams);
 
     /// <summary>Mean and sample SD of one column over the folds, leaving out <paramref name="skippedRow"/> (-1 for none); SD is NaN with fewer than two folds.</summary>
     private static (double Mean, double Sd) MeanAndSd(double[,] values, int column, int skippedRow = -1)

@@ -11,7 +11,7 @@ namespace OmicsScreen.Screening.Screen;
 /// <summary>
 /// The repeated core of a screen: on each half-sample, one forest for the out-of-bag
 /// permutation and impurity importances, and one forest carrying permuted copies and decoys for
-/// the corrected importance; then each repeat's selection and combined rank. The two forests of a
+/// the corrected importance (of the outcome's kind: <see cref="ScreenOutcome.GrowRepeat"/>); then each repeat's selection and combined rank. The two forests of a
 /// repeat draw the same bootstrap samples (the same (seed, repeat) streams), so the repeat's
 /// importances differ only by the added columns, not by the samples.
 /// </summary>
@@ -24,7 +24,7 @@ internal static class RepeatScreen
     /// <summary>All 2 x <paramref name="pairCount"/> repeats of a screen at <paramref name="runSeed"/> on the eligible rows.</summary>
     public static RepeatImportances Run(ScreenContext context, ReadOnlySpan<int> eligibleRows, ulong runSeed, int pairCount)
     {
-        var halves = HalfSamplePairs.Draw(context.Outcome, context.Subject, eligibleRows, pairCount, runSeed);
+        var halves = HalfSamplePairs.Draw(context.ScreenOutcome.Strata, context.Subject, eligibleRows, pairCount, runSeed);
         var result = new RepeatImportances(halves.Length, context.Matrix.FeatureCount, context.Settings.DecoyCount);
         for (int repeat = 0; repeat < halves.Length; repeat++)
         {
@@ -42,21 +42,16 @@ internal static class RepeatScreen
     /// </summary>
     internal static void RunOne(ScreenContext context, int[] rows, ForestStreams streams, RepeatImportances result, int row)
     {
-        var (matrix, outcome, settings) = (context.Matrix, context.Outcome, context.Settings);
+        var (matrix, settings) = (context.Matrix, context.Settings);
         int featureCount = matrix.FeatureCount, decoyCount = result.DecoyCount;
         ulong runSeed = streams.Seed;
         result.TrainingSampleCounts[row] = rows.Length;
         var options = settings.ForestOptions(context.Subject, streams);
 
-        var forest = ForestTrainer.Train(matrix, outcome, options, rows);
-        ImpurityImportance.From(forest).MeanDecrease.CopyTo(result.Row(result.Impurity, row));
-        var permutation = OutOfBagPermutationImportance.Measure(forest, matrix, outcome, context.ThreadCount);
-        permutation.MeanAccuracyDrop.CopyTo(result.Row(result.Permutation, row));
-
         var decoySources = DecoyPlan.For(featureCount, decoyCount, runSeed).Sources;
-        var corrected = CorrectedImpurityImportance.Measure(matrix, outcome, rows, decoySources, options);
-        corrected.Features.CopyTo(result.Row(result.Corrected, row));
-        corrected.Decoys.CopyTo(result.DecoyCorrected.AsSpan(row * decoyCount, decoyCount));
+        context.ScreenOutcome.GrowRepeat(matrix, rows, options, decoySources, context.ThreadCount,
+            result.Row(result.Impurity, row), result.Row(result.Permutation, row), result.Row(result.Corrected, row),
+            result.DecoyCorrected.AsSpan(row * decoyCount, decoyCount));
 
         Select(result, row, settings.Options.RepeatSelectionLevel, settings.Options.SelectedPerRepeat);
 

@@ -14,7 +14,11 @@ internal sealed record ScreenContext(Panel Panel, BinnedMatrix Matrix, ScreenSet
 {
     public ScreenOptions Options => Settings.Options;
 
+    /// <summary>The class outcome; throws for other outcome kinds (steps that work for every kind use <see cref="ScreenOutcome"/>).</summary>
     public ClassOutcome Outcome => Panel.Outcome;
+
+    /// <summary>What the screen's steps need of the outcome, whatever its kind.</summary>
+    public ScreenOutcome ScreenOutcome { get; } = ScreenOutcome.For(Panel);
 
     public SampleGrouping? Subject => Panel.Subject;
 

@@ -8,7 +8,8 @@ namespace OmicsScreen.Screening.Screen;
 /// <param name="Order">Feature indices in the screen's final order.</param>
 /// <param name="Shortlist">The markers that pass the frequency and q-value thresholds, in order.</param>
 /// <param name="ShortlistCorrelations">Spearman correlations between shortlisted markers, in shortlist order.</param>
-/// <param name="UnivariateRanks">Per feature, rank by rank-test p-value (1 = smallest).</param>
+/// <param name="Univariate">The class rank tests; empty for other outcome kinds (<see cref="MeasuredMarkers"/>, <see cref="FollowUpMarkers"/>).</param>
+/// <param name="UnivariateRanks">Per feature, rank by the univariate p-value (1 = smallest).</param>
 /// <param name="PanelSize">Null when the curve was skipped.</param>
 /// <param name="StageSeconds">Wall time of each stage that ran.</param>
 /// <param name="Cohorts">The cohort check; null without a cohort column with at least two cohorts.</param>
@@ -36,4 +37,13 @@ public sealed record ScreenResult(
     /// locked; NaN when no panel is locked or the curve was skipped.
     /// </summary>
     public double LockedPanelEstimate { get; init; } = double.NaN;
+
+    /// <summary>Every feature's statistics against a measured outcome, in panel order; empty for other kinds.</summary>
+    public IReadOnlyList<MeasuredOutcomeMarker> MeasuredMarkers { get; init; } = [];
+
+    /// <summary>Every feature's statistics against follow-up, in panel order; empty for other kinds.</summary>
+    public IReadOnlyList<FollowUpMarker> FollowUpMarkers { get; init; } = [];
+
+    /// <summary>The outcome kind screened.</summary>
+    public OmicsScreen.Engine.Panels.OutcomeKind Kind { get; init; } = OmicsScreen.Engine.Panels.OutcomeKind.Classes;
 }

@@ -42,14 +42,23 @@ public static class ScreenRunner
         Finish(ScreenStage.Binning);
 
         progress?.Report(new ScreenProgress(ScreenStage.UnivariateStatistics, 0, 1));
-        var univariate = UnivariateScreen.Compute(panel);
-        var univariateRanks = UnivariateRanks(univariate, panel.FeatureCount);
+        var model = context.ScreenOutcome;
+        var univariate = panel.Kind == OutcomeKind.Classes ? UnivariateScreen.Compute(panel) : new UnivariateTable([], [], []);
+        var measuredMarkers = panel.Kind == OutcomeKind.Measured
+            ? MeasuredOutcomeScreen.Compute(panel.Matrix, panel.Measured!.Values, threadCount: settings.ThreadCount) : [];
+        var followUpMarkers = panel.Kind == OutcomeKind.TimeToEvent
+            ? FollowUpScreen.Compute(panel.Matrix, panel.FollowUp!.Times, panel.FollowUp.Events, threadCount: settings.ThreadCount) : [];
+        var univariateRanks = panel.Kind switch
+        {
+            OutcomeKind.Measured => RanksByPValue(measuredMarkers.Select(m => m.PValue).ToArray()),
+            OutcomeKind.TimeToEvent => RanksByPValue(followUpMarkers.Select(m => m.PValue).ToArray()),
+            _ => UnivariateRanks(univariate, panel.FeatureCount),
+        };
         Finish(ScreenStage.UnivariateStatistics);
 
         progress?.Report(new ScreenProgress(ScreenStage.ReferenceForest, 0, 1));
-        var referenceForest = ForestTrainer.Train(matrix, panel.Outcome, settings.ForestOptions(panel.Subject, RandomStreams.ReferenceForest(options.Seed)));
-        var votes = new OutOfBagVotes(referenceForest, panel.Outcome);
-        var reference = new ReferenceForestSummary(votes.Error, votes.PerClassError.ToArray(), votes.Auc, votes.ErrorCurve.ToArray());
+        var referenceForest = model.GrowReference(matrix, settings.ForestOptions(panel.Subject, RandomStreams.ReferenceForest(options.Seed)));
+        var reference = referenceForest.Summary;
         Finish(ScreenStage.ReferenceForest);
 
         var work = new ScreenWork(context, store, computeMissing);
@@ -57,7 +66,7 @@ public static class ScreenRunner
         Finish(ScreenStage.Repeats);
 
         double[] outcomePermutationP = [];
-        if (options.OutcomePermutations > 0)
+        if (options.OutcomePermutations > 0 && panel.Kind == OutcomeKind.Classes)
         {
             progress?.Report(new ScreenProgress(ScreenStage.OutcomePermutations, 0, options.OutcomePermutations));
             var observed = CorrectedImpurityImportance.Measure(matrix, panel.Outcome, null, [],
@@ -70,7 +79,7 @@ public static class ScreenRunner
 
         var allRows = Enumerable.Range(0, panel.SampleCount).ToArray();
         var plan = DecoyPlan.For(panel.FeatureCount, settings.DecoyCount, options.Seed);
-        var direct = DirectTestEvidence.Compute(panel, allRows, plan, settings.InteractionScan, settings.ThreadCount);
+        var direct = DirectTestEvidence.Compute(context, allRows, plan);
         var decoyEvidence = DecoyEvidence.From(repeats, direct);
         var features = ScreenAggregation.Summarise(repeats, panel.Matrix.FeatureNames, decoyEvidence, outcomePermutationP, direct);
         var order = ScreenAggregation.OrderOf(features);
@@ -93,10 +102,15 @@ public static class ScreenRunner
         for (int g = 1; g <= (groups.Length == 0 ? 0 : groups.Max()); g++)
             groupMembers.Add(shortlisted.Where((_, i) => groups[i] == g).ToArray());
         var groupImportance = groupMembers.Count == 0 ? []
-            : OutOfBagPermutationImportance.MeasureGroups(referenceForest, matrix, panel.Outcome, groupMembers, settings.ThreadCount);
-        int positiveContrast = ContrastOfPositiveClass(univariate, panel);
+            : referenceForest.GroupImportance?.Invoke(matrix, groupMembers, settings.ThreadCount)
+              ?? Enumerable.Repeat(double.NaN, groupMembers.Count).ToArray();
+        int positiveContrast = panel.Kind == OutcomeKind.Classes ? ContrastOfPositiveClass(univariate, panel) : -1;
         var shortlist = shortlisted.Select((f, i) => new ShortlistEntry(i + 1, features[f], groups[i], groupImportance[groups[i] - 1],
-            univariate.Row(f, positiveContrast), univariateRanks[f])).ToList();
+            positiveContrast >= 0 ? univariate.Row(f, positiveContrast) : null, univariateRanks[f])
+        {
+            Measured = measuredMarkers.Length > 0 ? measuredMarkers[f] : null,
+            FollowUp = followUpMarkers.Length > 0 ? followUpMarkers[f] : null,
+        }).ToList();
 
         PanelSizeCurve? curve = null;
         if (options.CurveFolds > 0)
@@ -108,7 +122,8 @@ public static class ScreenRunner
         }
 
         CohortResult? cohorts = null;
-        if (panel.Cohort is { LevelCount: >= 2 })
+        // The cohort check compares classes per cohort; for other outcome kinds it is not run (stated in the report).
+        if (panel.Cohort is { LevelCount: >= 2 } && panel.Kind == OutcomeKind.Classes)
         {
             progress?.Report(new ScreenProgress(ScreenStage.Cohorts, 0, 1));
             cohorts = CohortAnalysis.Run(context, order, univariate, work);
@@ -124,6 +139,9 @@ public static class ScreenRunner
         {
             LockedPanelSize = lockedSize,
             LockedPanelEstimate = lockedEstimate,
+            MeasuredMarkers = measuredMarkers,
+            FollowUpMarkers = followUpMarkers,
+            Kind = panel.Kind,
         };
     }
 
@@ -185,6 +203,14 @@ public static class ScreenRunner
         Array.Fill(best, double.PositiveInfinity);
         foreach (var row in univariate.AllSamples)
             if (!double.IsNaN(row.PValue)) best[row.FeatureIndex] = Math.Min(best[row.FeatureIndex], row.PValue);
+        return RanksByPValue(best);
+    }
+
+    /// <summary>Rank of every feature by its p-value (1 = smallest; NaN last; ties by feature order).</summary>
+    private static int[] RanksByPValue(double[] pValues)
+    {
+        int featureCount = pValues.Length;
+        var best = pValues.Select(p => double.IsNaN(p) ? double.PositiveInfinity : p).ToArray();
         var order = Enumerable.Range(0, featureCount).ToArray();
         Array.Sort(order, (a, b) => best[a] != best[b] ? best[a].CompareTo(best[b]) : a.CompareTo(b));
         var ranks = new int[featureCount];

@@ -43,7 +43,8 @@ public sealed record ScreenSettings
     {
         options.Validate();
         int featureCount = panel.FeatureCount;
-        var counts = panel.Outcome.ClassCounts;
+        // Class balance is a property of class outcomes; measured and time-to-event forests draw plain bootstraps.
+        var counts = panel.Kind == OutcomeKind.Classes ? panel.Outcome.ClassCounts : [1];
         int smallest = int.MaxValue, largest = 0;
         foreach (int count in counts)
         {
@@ -58,7 +59,7 @@ public sealed record ScreenSettings
         };
         // Grouped sampling and class balance do not combine in the engine; subjects win, since
         // splitting a subject's replicates would flatter every estimate.
-        if (panel.Subject is not null) balanced = false;
+        if (panel.Subject is not null || panel.Kind != OutcomeKind.Classes) balanced = false;
         int decoys = DecoyCountFor(options, featureCount);
         // The engine's own rule (TreeOptions.ResolveFeaturesPerSplit) on each forest kind's width,
         // so what is recorded is what the trees try.
@@ -73,7 +74,8 @@ public sealed record ScreenSettings
             ClassBalanced = balanced,
             DecoyCount = decoys,
             ThreadCount = WorkerThreads.Resolve(options.ThreadCount),
-            InteractionScan = InteractionScanRuns(options, featureCount, decoys),
+            // The scan counts 2 x 2 tables against classes; it has no counterpart for other kinds yet.
+            InteractionScan = panel.Kind == OutcomeKind.Classes && InteractionScanRuns(options, featureCount, decoys),
         };
     }
 

@@ -41,11 +41,11 @@ internal sealed class ScreenWork
     public int ComputedCount { get; private set; }
 
     /// <summary>The half-samples of the main screen's repeats, drawn once from the run seed.</summary>
-    private int[][] Halves => _halves ??= HalfSamplePairs.Draw(_panel.Outcome, _panel.Subject,
+    private int[][] Halves => _halves ??= HalfSamplePairs.Draw(_context.ScreenOutcome.Strata, _panel.Subject,
         Enumerable.Range(0, _panel.SampleCount).ToArray(), _settings.Options.HalfSamplePairs, _settings.Options.Seed);
 
     /// <summary>The outer folds of the panel-size curve.</summary>
-    public IReadOnlyList<OuterFold> CurveFolds => _folds ??= StratifiedFolds.Draw(_panel.Outcome, _panel.Subject,
+    public IReadOnlyList<OuterFold> CurveFolds => _folds ??= StratifiedFolds.Draw(_context.ScreenOutcome.Strata, _panel.Subject,
         Enumerable.Range(0, _panel.SampleCount).ToArray(), _settings.Options.CurveFolds, _settings.Options.CurveFoldRepeats,
         _settings.Options.Seed);
 
@@ -124,7 +124,7 @@ internal sealed class ScreenWork
     {
         var repeats = RepeatScreen.Run(_context, rows, seed, _settings.Options.CurveInnerPairs);
         var plan = DecoyPlan.For(_matrix.FeatureCount, _settings.DecoyCount, seed);
-        var direct = DirectTestEvidence.Compute(_panel, rows, plan, _settings.InteractionScan, _context.ThreadCount);
+        var direct = DirectTestEvidence.Compute(_context, rows, plan);
         var decoys = DecoyEvidence.From(repeats, direct);
         var features = ScreenAggregation.Summarise(repeats, _matrix.FeatureNames, decoys, [], direct);
         var order = ScreenAggregation.OrderOf(features);

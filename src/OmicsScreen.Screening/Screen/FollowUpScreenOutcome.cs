@@ -1,0 +1,145 @@
+using OmicsScreen.Engine.Binning;
+using OmicsScreen.Engine.Forests;
+using OmicsScreen.Engine.Panels;
+using OmicsScreen.Engine.Parallelism;
+using OmicsScreen.Engine.Survival;
+using OmicsScreen.Screening.Importance;
+using OmicsScreen.Screening.Resampling;
+using OmicsScreen.Screening.Statistics;
+using OmicsScreen.Screening.Statistics.Survival;
+using OmicsScreen.Screening.Univariate;
+
+namespace OmicsScreen.Screening.Screen;
+
+/// <summary>
+/// Censored follow-up: random survival forests (log-rank splits, Ishwaran et al. 2008), the
+/// out-of-bag drop in Harrell's C as permutation importance, the Cox score test on the marker's
+/// ranks beside the forest, and held-out panels scored by Harrell's C of the forest's mortality.
+/// </summary>
+internal sealed class FollowUpScreenOutcome(FollowUpOutcome outcome) : ScreenOutcome
+{
+    private readonly FollowUpTimes _followUp = outcome.FollowUp;
+
+    public override OutcomeKind Kind => OutcomeKind.TimeToEvent;
+
+    public override string ScoreName => "concordance";
+
+    public override ResamplingStrata Strata { get; } = ResamplingStrata.Of(outcome);
+
+    public override void GrowRepeat(BinnedMatrix matrix, int[] rows, ForestOptions options, ReadOnlySpan<int> decoySources,
+        int threadCount, Span<double> impurity, Span<double> permutation, Span<double> corrected, Span<double> decoys)
+    {
+        var forest = SurvivalForestTrainer.Train(matrix, _followUp, options, rows);
+        forest.MeanSplitStatistic().CopyTo(impurity);
+        SurvivalImportance.MeasurePermutation(forest, matrix, threadCount).MeanRise.CopyTo(permutation);
+        var air = SurvivalImportance.MeasureCorrected(matrix, _followUp, rows, decoySources, options);
+        air.Features.CopyTo(corrected);
+        air.Decoys.CopyTo(decoys);
+    }
+
+    /// <summary>Out-of-bag C of the reference forest; its error curve is 1 - C of the out-of-bag risk after each tree.</summary>
+    public override ReferenceForest GrowReference(BinnedMatrix matrix, ForestOptions options)
+    {
+        var forest = SurvivalForestTrainer.Train(matrix, _followUp, options);
+        var concordance = SurvivalImportance.OutOfBagConcordance(forest);
+        var summary = new ReferenceForestSummary(1 - concordance.Concordance, [], null, ErrorCurve(forest))
+        {
+            OutOfBagConcordance = concordance.Concordance,
+        };
+        return new ReferenceForest(summary, null);
+    }
+
+    private double[] ErrorCurve(SurvivalForest forest)
+    {
+        int n = forest.SampleCount;
+        var sums = new double[n];
+        var counts = new int[n];
+        var curve = new double[forest.TreeCount];
+        var kept = new List<int>(n);
+        for (int t = 0; t < forest.TreeCount; t++)
+        {
+            var rows = forest.OutOfBagRows(t);
+            var mortality = forest.OutOfBagMortality(t);
+            for (int i = 0; i < rows.Length; i++)
+            {
+                sums[rows[i]] += mortality[i];
+                counts[rows[i]]++;
+            }
+            kept.Clear();
+            for (int s = 0; s < n; s++) if (counts[s] > 0) kept.Add(s);
+            curve[t] = 1 - ConcordanceOf(kept, s => sums[s] / counts[s]);
+        }
+        return curve;
+    }
+
+    /// <summary>
+    /// The Cox score test (the log-rank type test of a continuous marker) on the marker's mid-ranks
+    /// among the rows: ranks make it as robust to skewed omics values as the class rank test.
+    /// </summary>
+    public override double[] RankTestPValues(FeatureMatrix values, int[] rows, int threadCount)
+    {
+        var times = _followUp.Times;
+        var events = _followUp.Events;
+        var pValues = new double[values.FeatureCount];
+        var time = times.ToArray();
+        var observed = events.ToArray();
+        Parallel.For(0, values.FeatureCount, WorkerThreads.Options(threadCount),
+            () => new double[values.SampleCount],
+            (feature, _, all) =>
+            {
+                MarkerValues.RankScale(values, feature, all);
+                var kept = new List<int>(rows.Length);
+                foreach (int row in rows) if (!double.IsNaN(all[row])) kept.Add(row);
+                var marker = new double[kept.Count];
+                for (int i = 0; i < marker.Length; i++) marker[i] = all[kept[i]];
+                var ranks = Ranking.Rank(marker);
+                var t = new double[kept.Count];
+                var e = new bool[kept.Count];
+                int eventCount = 0;
+                for (int i = 0; i < kept.Count; i++)
+                {
+                    t[i] = time[kept[i]];
+                    e[i] = observed[kept[i]];
+                    if (e[i]) eventCount++;
+                }
+                double p = kept.Count < 3 || eventCount == 0 ? 1 : CoxSingleMarker.Fit(t, e, ranks).ScorePValue;
+                pValues[feature] = double.IsNaN(p) ? 1 : p;
+                return all;
+            }, _ => { });
+        return pValues;
+    }
+
+    public override PanelScore ScorePanel(BinnedMatrix matrix, ReadOnlySpan<int> features, int[] trainingRows, ReadOnlySpan<int> testRows,
+        ForestOptions options)
+    {
+        var selected = matrix.SelectFeatures(features);
+        var forest = SurvivalForestTrainer.Train(selected, _followUp, options, trainingRows);
+        var all = forest.Risk(selected);
+        var risk = new double[testRows.Length];
+        for (int i = 0; i < testRows.Length; i++) risk[i] = all[testRows[i]];
+        double c = ConcordanceOf(testRows.ToArray(), i => risk[i], byPosition: true);
+        return new PanelScore(c, 1 - c, risk, []);
+    }
+
+    /// <summary>Every test sample given the same risk: Harrell's C is then 0.5 (all pairs tied).</summary>
+    public override PanelScore ChanceScore(int[] trainingRows, int[] testRows) =>
+        new(0.5, 0.5, new double[testRows.Length], []);
+
+    /// <summary>Harrell's C of a risk score over some samples; NaN with no comparable pair.</summary>
+    private double ConcordanceOf(IReadOnlyList<int> samples, Func<int, double> risk, bool byPosition = false)
+    {
+        var times = _followUp.Times;
+        var events = _followUp.Events;
+        var t = new double[samples.Count];
+        var e = new bool[samples.Count];
+        var r = new double[samples.Count];
+        for (int i = 0; i < samples.Count; i++)
+        {
+            t[i] = times[samples[i]];
+            e[i] = events[samples[i]];
+            r[i] = risk(byPosition ? i : samples[i]);
+        }
+        var estimate = HarrellConcordance.Estimate(t, e, r);
+        return estimate.ComparablePairs == 0 ? double.NaN : estimate.Concordance;
+    }
+}
