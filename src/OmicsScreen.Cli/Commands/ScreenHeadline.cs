@@ -1,5 +1,6 @@
 using OmicsScreen.Data;
 using OmicsScreen.Reporting.Screen;
+using OmicsScreen.Runs.Locking;
 using OmicsScreen.Screening.Screen;
 
 namespace OmicsScreen.Cli.Commands;

@@ -5,6 +5,7 @@ using OmicsScreen.Cli.Commands;
 using OmicsScreen.Data.Models;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Panels;
+using OmicsScreen.Runs.Locking;
 using OmicsScreen.Screening.Locking;
 using OmicsScreen.TestSupport;
 

@@ -1,6 +1,8 @@
 using System.Globalization;
 using System.Text;
 using OmicsScreen.Cli.Commands;
+using OmicsScreen.Runs.Locking;
+using OmicsScreen.Runs.Results;
 using OmicsScreen.TestSupport;
 
 namespace OmicsScreen.Cli.Tests.Corpus;
