@@ -25,8 +25,8 @@ internal static class ApplyRun
         using var folder = ResultsFolder.Open(options.OutputFolder, options.Force, ResultsKind.Apply,
             [options.ModelPath, options.MatrixPath, options.SampleSheetPath], console.Error);
         var started = DateTimeOffset.UtcNow;
-        var (model, discoveryIds) = ApplyModelFile.ReadWithDiscoveryIds(options.ModelPath);
-        var displayNames = ApplyModelFile.ReadDisplayNames(options.ModelPath);
+        var (model, discoveryIds) = LockedPanelFile.ReadWithDiscoveryIds(options.ModelPath);
+        var displayNames = LockedPanelFile.ReadDisplayNames(options.ModelPath);
         var (matrix, outcome, inputs) = LoadCohort(options);
         var overlap = DiscoveryOverlap.Warnings(model, discoveryIds, inputs, matrix.SampleIds);
         LockedPanelScores scores;
@@ -69,7 +69,7 @@ internal static class ApplyRun
             command_line = string.Join(' ', options.CommandLine.Select(ScreenManifest.ShellQuote)),
             started_utc = started.ToString("O"),
             finished_utc = DateTimeOffset.UtcNow.ToString("O"),
-            model = new { path = options.ModelPath, sha256 = ApplyModelFile.FileSha256(options.ModelPath), markers = model.MarkerNames, marker_display_names = displayNames, discovery_inputs_sha256 = model.Provenance.InputSha256 },
+            model = new { path = options.ModelPath, sha256 = LockedPanelFile.FileSha256(options.ModelPath), markers = model.MarkerNames, marker_display_names = displayNames, discovery_inputs_sha256 = model.Provenance.InputSha256 },
             inputs = inputs.Select(i => new { path = i.Path, bytes = i.ByteCount, sha256 = i.Sha256 }).ToArray(),
             outputs = folder.WrittenFiles.ToArray(),
         };

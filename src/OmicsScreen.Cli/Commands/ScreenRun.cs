@@ -152,7 +152,7 @@ internal static class ScreenRun
         if (result.Cohorts is { } cohorts) CohortTableFiles.Write(folder, cohorts);
         // The shortlist (or its prefix the curve recommends), locked for scoring new cohorts with
         // `apply`; an empty shortlist locks nothing.
-        if (result.LockedPanelSize > 0) folder.WrittenFiles.Add(ApplyModelFile.LockInto(folder.Path, loaded, result));
+        if (result.LockedPanelSize > 0) folder.WrittenFiles.Add(PanelLocking.LockInto(folder.Path, loaded, result));
         var finished = DateTimeOffset.UtcNow;
         var report = ReportInput(options, loaded, result, folder, started, finished, loadSeconds) with { MergedParts = mergedParts };
         folder.WriteText(ReportFileName, w => w.Write(ScreenReport.Render(report)));
@@ -245,7 +245,7 @@ internal static class ScreenRun
         output.WriteLine($"Results: {folder}");
         output.WriteLine($"Report: {Path.Combine(folder, ReportFileName)}");
         if (result.LockedPanelSize > 0)
-            output.WriteLine($"Locked panel for `omicsscreen apply`: {Path.Combine(folder, Data.Models.LockedPanelFile.DefaultFileName)}");
+            output.WriteLine($"Locked panel for `omicsscreen apply`: {Path.Combine(folder, LockedPanelFile.DefaultFileName)}");
         output.WriteLine("A screen is not a diagnostic test: confirm every marker in independent cohorts before any use.");
     }
 

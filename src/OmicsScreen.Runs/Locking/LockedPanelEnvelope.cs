@@ -3,14 +3,16 @@ using System.Text;
 using System.Text.Encodings.Web;
 using System.Text.Json;
 using System.Text.Json.Nodes;
+using OmicsScreen.Data;
 using OmicsScreen.Data.Output;
 
-namespace OmicsScreen.Data.Models;
+namespace OmicsScreen.Runs.Locking;
 
 /// <summary>
-/// The locked-panel file (see FORMAT.md beside this file): a JSON envelope of format name,
+/// The envelope of the locked-panel file (see FORMAT.md beside this file): format name,
 /// version and the SHA-256 of the content's canonical text, around the content itself. The
-/// envelope knows nothing of what the content means; callers encode and decode it.
+/// envelope knows nothing of what the content means; <see cref="LockedPanelFile"/> encodes and
+/// decodes it.
 /// </summary>
 /// <remarks>
 /// The canonical text is the content written compactly (no whitespace, properties in file
@@ -18,13 +20,10 @@ namespace OmicsScreen.Data.Models;
 /// that re-parses and re-writes the content gets the same text back, so any change to a value,
 /// or a file cut short, shows up as a checksum mismatch.
 /// </remarks>
-public static class LockedPanelFile
+public static class LockedPanelEnvelope
 {
     public const string FormatName = "omicsscreen-locked-panel";
     public const int FormatVersion = 1;
-
-    /// <summary>The file name a results folder holds the locked panel under.</summary>
-    public const string DefaultFileName = "locked_panel.json";
 
     private const string ChecksumMismatch = "checksum does not match: the file was changed or truncated.";
     private const string ChecksumFix = "Restore the file as it was written, or lock the panel again from the discovery results.";

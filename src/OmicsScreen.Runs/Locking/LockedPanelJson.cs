@@ -1,11 +1,12 @@
 using System.Globalization;
 using System.Text.Json.Nodes;
 using OmicsScreen.Engine.Trees;
+using OmicsScreen.Screening.Locking;
 
-namespace OmicsScreen.Screening.Locking;
+namespace OmicsScreen.Runs.Locking;
 
 /// <summary>
-/// The content of a locked-panel file as JSON (layout in src/OmicsScreen.Data/Models/FORMAT.md).
+/// The content of a locked-panel file as JSON (layout in FORMAT.md beside this file).
 /// Every float is written as its shortest round-trip text and read back exactly, so a reloaded
 /// panel gives bit-identical probabilities from raw values. Tree bin codes are not kept (see
 /// FORMAT.md): a reloaded tree answers raw-value queries only.

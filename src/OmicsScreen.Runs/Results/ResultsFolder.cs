@@ -98,7 +98,7 @@ public sealed class ResultsFolder : IDisposable
         :
         [
             "shortlist.tsv", "features.tsv", "panel_size_curve.tsv", "marker_statistics.tsv", "marker_statistics_by_cohort.tsv",
-            .. ScreenResultFiles.CohortTables, Data.Models.LockedPanelFile.DefaultFileName, ScreenResultFiles.Report,
+            .. ScreenResultFiles.CohortTables, Locking.LockedPanelFile.DefaultFileName, ScreenResultFiles.Report,
         ];
 
     private static void Check(string shown, string full, bool force, ResultsKind kind, IEnumerable<string?> inputPaths)

@@ -1,10 +1,10 @@
 using System.Text.Json.Nodes;
-using OmicsScreen.Data.Models;
-using OmicsScreen.Data.Tests.Support;
+using OmicsScreen.Data;
+using OmicsScreen.Runs.Locking;
 
-namespace OmicsScreen.Data.Tests.Models;
+namespace OmicsScreen.Runs.Tests.Locking;
 
-public class LockedPanelFileTests
+public class LockedPanelEnvelopeTests
 {
     private const string ChecksumMessage = "checksum does not match: the file was changed or truncated";
 
@@ -26,7 +26,7 @@ public class LockedPanelFileTests
     private static string Written(TempFolder folder, string name)
     {
         string path = folder.File(name);
-        LockedPanelFile.Write(path, Content());
+        LockedPanelEnvelope.Write(path, Content());
         return path;
     }
 
@@ -35,7 +35,7 @@ public class LockedPanelFileTests
     {
         using var folder = new TempFolder();
         string path = Written(folder, "model.json");
-        var content = LockedPanelFile.Read(path);
+        var content = LockedPanelEnvelope.Read(path);
         var read = content["thresholds"]!.AsArray().Select(n => n!.GetValue<float>()).ToArray();
         Assert.Equal(Thresholds.Select(BitConverter.SingleToInt32Bits), read.Select(BitConverter.SingleToInt32Bits));
         Assert.Equal(BitConverter.DoubleToInt64Bits(0.1 + 0.2), BitConverter.DoubleToInt64Bits(content["auc"]!.GetValue<double>()));
@@ -50,8 +50,8 @@ public class LockedPanelFileTests
         string path = Written(folder, "model.json");
         var lines = File.ReadAllLines(path);
         Assert.Equal("{", lines[0]);
-        Assert.Equal($"  \"format\": \"{LockedPanelFile.FormatName}\",", lines[1]);
-        Assert.Equal($"  \"version\": {LockedPanelFile.FormatVersion},", lines[2]);
+        Assert.Equal($"  \"format\": \"{LockedPanelEnvelope.FormatName}\",", lines[1]);
+        Assert.Equal($"  \"version\": {LockedPanelEnvelope.FormatVersion},", lines[2]);
         Assert.Matches("^  \"content_sha256\": \"[0-9a-f]{64}\",$", lines[3]);
     }
 
@@ -62,7 +62,7 @@ public class LockedPanelFileTests
         string path = Written(folder, "panel_a.json");
         var bytes = File.ReadAllBytes(path);
         File.WriteAllBytes(path, bytes[..(bytes.Length * 2 / 3)]);
-        var error = Assert.Throws<PanelInputException>(() => LockedPanelFile.Read(path));
+        var error = Assert.Throws<PanelInputException>(() => LockedPanelEnvelope.Read(path));
         Assert.StartsWith("panel_a.json", error.Message);
         Assert.Contains(ChecksumMessage, error.Message);
     }
@@ -75,7 +75,7 @@ public class LockedPanelFileTests
         string text = File.ReadAllText(path);
         Assert.Contains("12.345678", text);
         File.WriteAllText(path, text.Replace("12.345678", "12.345679"));
-        var error = Assert.Throws<PanelInputException>(() => LockedPanelFile.Read(path));
+        var error = Assert.Throws<PanelInputException>(() => LockedPanelEnvelope.Read(path));
         Assert.StartsWith("panel_b.json", error.Message);
         Assert.Contains(ChecksumMessage, error.Message);
     }
@@ -87,15 +87,15 @@ public class LockedPanelFileTests
         using var folder = new TempFolder();
         string path = Written(folder, "model.json");
         File.WriteAllText(path, File.ReadAllText(path).Replace("\n  ", "\n\t"));
-        Assert.NotNull(LockedPanelFile.Read(path));
+        Assert.NotNull(LockedPanelEnvelope.Read(path));
     }
 
     [Fact]
     public void Text_that_is_not_json_is_refused_as_not_a_locked_panel()
     {
         using var folder = new TempFolder();
-        string path = folder.Write("matrix.csv", "sample_id,A\nS1,1\n");
-        var error = Assert.Throws<PanelInputException>(() => LockedPanelFile.Read(path));
+        string path = folder.File("matrix.csv", "sample_id,A\nS1,1\n");
+        var error = Assert.Throws<PanelInputException>(() => LockedPanelEnvelope.Read(path));
         Assert.Equal("matrix.csv: is not a locked panel file: it is not JSON. Give the locked_panel.json of a screen's results folder.", error.Message);
     }
 
@@ -103,10 +103,10 @@ public class LockedPanelFileTests
     public void Json_of_another_format_is_refused_naming_both_formats()
     {
         using var folder = new TempFolder();
-        string path = folder.Write("manifest.json", "{\"format\": \"something-else\", \"version\": 1}");
-        var error = Assert.Throws<PanelInputException>(() => LockedPanelFile.Read(path));
+        string path = folder.File("manifest.json", "{\"format\": \"something-else\", \"version\": 1}");
+        var error = Assert.Throws<PanelInputException>(() => LockedPanelEnvelope.Read(path));
         Assert.Contains("'something-else'", error.Message);
-        Assert.Contains(LockedPanelFile.FormatName, error.Message);
+        Assert.Contains(LockedPanelEnvelope.FormatName, error.Message);
     }
 
     [Fact]
@@ -115,7 +115,7 @@ public class LockedPanelFileTests
         using var folder = new TempFolder();
         string path = Written(folder, "model.json");
         File.WriteAllText(path, File.ReadAllText(path).Replace("\"version\": 1,", "\"version\": 2,"));
-        var error = Assert.Throws<PanelInputException>(() => LockedPanelFile.Read(path));
+        var error = Assert.Throws<PanelInputException>(() => LockedPanelEnvelope.Read(path));
         Assert.Contains("format version 2", error.Message);
         Assert.Contains("reads version 1", error.Message);
     }
@@ -126,7 +126,7 @@ public class LockedPanelFileTests
         using var folder = new TempFolder();
         string path = Written(folder, "model.json");
         var error = Assert.Throws<PanelInputException>(() =>
-            LockedPanelFile.Read<int>(path, _ => throw new InvalidDataException("forest[3]: Node 2 has a child out of range.")));
+            LockedPanelEnvelope.Read<int>(path, _ => throw new InvalidDataException("forest[3]: Node 2 has a child out of range.")));
         Assert.StartsWith("model.json: the locked panel is not valid: forest[3]: Node 2 has a child out of range.", error.Message);
     }
 
@@ -134,7 +134,7 @@ public class LockedPanelFileTests
     public void A_missing_file_is_reported_as_missing()
     {
         using var folder = new TempFolder();
-        var error = Assert.Throws<PanelInputException>(() => LockedPanelFile.Read(folder.File("nothing.json")));
+        var error = Assert.Throws<PanelInputException>(() => LockedPanelEnvelope.Read(folder.File("nothing.json")));
         Assert.Contains("does not exist", error.Message);
     }
 }

@@ -1,8 +1,10 @@
 using System.Text.Json.Nodes;
 using OmicsScreen.Engine.Trees;
+using OmicsScreen.Runs.Locking;
 using OmicsScreen.Screening.Locking;
+using OmicsScreen.Screening.Tests.Locking;
 
-namespace OmicsScreen.Screening.Tests.Locking;
+namespace OmicsScreen.Runs.Tests.Locking;
 
 public class LockedPanelJsonInfinityTests
 {

@@ -1,10 +1,24 @@
 using System.Text.Json.Nodes;
+using OmicsScreen.Runs.Locking;
 using OmicsScreen.Screening.Locking;
+using OmicsScreen.Screening.Tests.Locking;
 
-namespace OmicsScreen.Screening.Tests.Locking;
+namespace OmicsScreen.Runs.Tests.Locking;
 
 public class LockedPanelJsonTests
 {
+    // Moved from Screening's PanelLockerTests with the codec: the file's text is the strictest comparison.
+    [Fact]
+    public void One_thread_and_two_threads_lock_the_same_panel_to_the_byte()
+    {
+        var train = WdbcLockedPanels.Train;
+        var markers = WdbcLockedPanels.MarkerIndices(train.Matrix);
+        var options = new PanelLockOptions { Seed = 9 };
+        var oneThread = PanelLocker.Lock(train, markers, WdbcLockedPanels.ForestOptions with { TreeCount = 40, ThreadCount = 1 }, options);
+        var twoThreads = PanelLocker.Lock(train, markers, WdbcLockedPanels.ForestOptions with { TreeCount = 40, ThreadCount = 2 }, options);
+        Assert.Equal(LockedPanelJson.ToJson(oneThread).ToJsonString(), LockedPanelJson.ToJson(twoThreads).ToJsonString());
+    }
+
     [Fact]
     public void A_panel_through_json_text_gives_bit_identical_probabilities()
     {
