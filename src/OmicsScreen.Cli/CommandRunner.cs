@@ -1,5 +1,6 @@
 using OmicsScreen.Cli.Console;
 using OmicsScreen.Data;
+using OmicsScreen.Runs;
 
 namespace OmicsScreen.Cli;
 
@@ -33,6 +34,16 @@ internal static class CommandRunner
         {
             console.Error.WriteLine($"error: {TextTable.Printable(e.Message)}");
             return e.Code;
+        }
+        catch (RunRefusedException e)
+        {
+            console.Error.WriteLine($"error: {TextTable.Printable(e.Message)}");
+            return e.Refusal switch
+            {
+                RunRefusal.Input => ExitCode.InputError,
+                RunRefusal.Output => ExitCode.OutputError,
+                _ => ExitCode.Usage,
+            };
         }
         catch (OperationCanceledException)
         {

@@ -24,7 +24,7 @@ public sealed class PanelInputException : Exception
     public string? Column { get; }
 
     /// <summary>Builds the standard message: "file, line L, column 'C': problem Fix" ("row R" for Parquet/Arrow).</summary>
-    internal static PanelInputException At(string filePath, long? line, string? column, string problem, string fix,
+    public static PanelInputException At(string filePath, long? line, string? column, string problem, string fix,
         Exception? innerException = null, bool isTableRow = false)
     {
         // A problem may quote a library's own message, which can run over several lines; the

@@ -26,7 +26,7 @@ public class SameInputEveryLayoutTests
                 LayoutWriters.WriteFeaturesWithDescriptors(panel, described);
                 return (described, PanelLayout.FeaturesInRows);
             case "long":
-                return (folder.Write("long.csv", LayoutWriters.LongText(panel)), PanelLayout.Long);
+                return (folder.File("long.csv", LayoutWriters.LongText(panel)), PanelLayout.Long);
             default:
                 string zipped = folder.File("long.csv.gz");
                 File.WriteAllBytes(zipped, GzipFile.Compress(Encoding.UTF8.GetBytes(LayoutWriters.LongText(panel))));
@@ -58,7 +58,7 @@ public class SameInputEveryLayoutTests
         using var folder = new TempFolder();
         var (path, panelLayout) = Write(layout, folder);
         var (widePath, _) = Write("samples-in-rows", folder);
-        string sheet = folder.Write("features.csv", LayoutWriters.FeatureSheet(SyntheticPanels.Mixed(), limit: 0.5f));
+        string sheet = folder.File("features.csv", LayoutWriters.FeatureSheet(SyntheticPanels.Mixed(), limit: 0.5f));
         var reference = PanelLoader.Load(SyntheticPanels.MixedOptions(widePath, PanelLayout.SamplesInRows) with { FeatureSheetPath = sheet });
 
         var loaded = PanelLoader.Load(SyntheticPanels.MixedOptions(path, panelLayout) with { FeatureSheetPath = sheet });

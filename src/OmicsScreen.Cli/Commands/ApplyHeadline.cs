@@ -1,3 +1,4 @@
+using OmicsScreen.Runs.Results;
 using OmicsScreen.Screening.Locking;
 
 namespace OmicsScreen.Cli.Commands;
@@ -31,7 +32,7 @@ public sealed record ApplyHeadline
         return new ApplyHeadline
         {
             ResultsFolder = folder,
-            Report = Path.Combine(folder, ApplyRun.ReportFileName),
+            Report = Path.Combine(folder, ApplyResultFiles.Report),
             Samples = scores.SampleCount,
             Markers = model.MarkerNames,
             MarkerDisplayNames = displayNames,

@@ -1,9 +1,13 @@
 using System.Globalization;
 using OmicsScreen.Cli.Console;
-using OmicsScreen.Cli.Output;
 using OmicsScreen.Data;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Reporting.Json;
+using OmicsScreen.Runs;
+using OmicsScreen.Runs.Apply;
+using OmicsScreen.Runs.Locking;
+using OmicsScreen.Runs.Output;
+using OmicsScreen.Runs.Results;
 using OmicsScreen.Screening.Locking;
 
 namespace OmicsScreen.Cli.Commands;
@@ -11,12 +15,6 @@ namespace OmicsScreen.Cli.Commands;
 /// <summary>Reads a locked panel and a new cohort, scores it, evaluates it when the outcome is known, and writes the results folder.</summary>
 internal static class ApplyRun
 {
-    public const string ScoresFileName = "scores.tsv";
-    public const string EvaluationFileName = "evaluation.json";
-    public const string CalibrationFileName = "calibration.tsv";
-    public const string ConfusionFileName = "confusion.tsv";
-    public const string ReportFileName = "apply_report.html";
-
     public static int Execute(CliConsole console, ApplyRunOptions options)
     {
         options.Validate();
@@ -27,8 +25,8 @@ internal static class ApplyRun
         using var folder = ResultsFolder.Open(options.OutputFolder, options.Force, ResultsKind.Apply,
             [options.ModelPath, options.MatrixPath, options.SampleSheetPath], console.Error);
         var started = DateTimeOffset.UtcNow;
-        var (model, discoveryIds) = ApplyModelFile.ReadWithDiscoveryIds(options.ModelPath);
-        var displayNames = ApplyModelFile.ReadDisplayNames(options.ModelPath);
+        var (model, discoveryIds) = LockedPanelFile.ReadWithDiscoveryIds(options.ModelPath);
+        var displayNames = LockedPanelFile.ReadDisplayNames(options.ModelPath);
         var (matrix, outcome, inputs) = LoadCohort(options);
         var overlap = DiscoveryOverlap.Warnings(model, discoveryIds, inputs, matrix.SampleIds);
         LockedPanelScores scores;
@@ -55,23 +53,23 @@ internal static class ApplyRun
 
         folder.ClearEarlierOutputs();
         var knownClasses = outcome is null ? null : KnownClassNames(outcome);
-        folder.WriteText(ScoresFileName, w => ApplyTables.WriteScores(w, scores, knownClasses));
+        folder.WriteText(ApplyResultFiles.Scores, w => ApplyTables.WriteScores(w, scores, knownClasses));
         if (performance is not null)
         {
-            folder.WriteText(EvaluationFileName, w => ManifestJson.Write(w, EvaluationDocument(model, scores, performance, overlap)));
-            folder.WriteText(CalibrationFileName, w => ApplyTables.WriteCalibration(w, performance));
-            folder.WriteText(ConfusionFileName, w => ApplyTables.WriteConfusion(w, performance));
+            folder.WriteText(ApplyResultFiles.Evaluation, w => ManifestJson.Write(w, EvaluationDocument(model, scores, performance, overlap)));
+            folder.WriteText(ApplyResultFiles.Calibration, w => ApplyTables.WriteCalibration(w, performance));
+            folder.WriteText(ApplyResultFiles.Confusion, w => ApplyTables.WriteConfusion(w, performance));
         }
-        folder.WriteText(ReportFileName, w => w.Write(ApplyReport.Build(model, scores, performance, options, overlap, displayNames)));
+        folder.WriteText(ApplyResultFiles.Report, w => w.Write(ApplyReport.Build(model, scores, performance, options.MatrixPath, options.ShowSampleIds, overlap, displayNames)));
         var manifest = new
         {
             tool = "omicsscreen",
-            version = ApplyModelFile.ToolVersion(),
+            version = ToolVersion.Current,
             command = "apply",
             command_line = string.Join(' ', options.CommandLine.Select(ScreenManifest.ShellQuote)),
             started_utc = started.ToString("O"),
             finished_utc = DateTimeOffset.UtcNow.ToString("O"),
-            model = new { path = options.ModelPath, sha256 = ApplyModelFile.FileSha256(options.ModelPath), markers = model.MarkerNames, marker_display_names = displayNames, discovery_inputs_sha256 = model.Provenance.InputSha256 },
+            model = new { path = options.ModelPath, sha256 = LockedPanelFile.FileSha256(options.ModelPath), markers = model.MarkerNames, marker_display_names = displayNames, discovery_inputs_sha256 = model.Provenance.InputSha256 },
             inputs = inputs.Select(i => new { path = i.Path, bytes = i.ByteCount, sha256 = i.Sha256 }).ToArray(),
             outputs = folder.WrittenFiles.ToArray(),
         };

@@ -1,6 +1,6 @@
 using OmicsScreen.Cli.Console;
-using OmicsScreen.Cli.Output;
 using OmicsScreen.Data;
+using OmicsScreen.Runs.Output;
 
 namespace OmicsScreen.Cli.Commands;
 

@@ -1,7 +1,7 @@
 using OmicsScreen.Cli.Console;
-using OmicsScreen.Cli.Output;
 using OmicsScreen.Data;
 using OmicsScreen.Data.Demo;
+using OmicsScreen.Runs.Output;
 using OmicsScreen.Screening.Screen;
 
 namespace OmicsScreen.Cli.Commands;

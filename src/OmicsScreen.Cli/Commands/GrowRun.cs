@@ -1,13 +1,14 @@
 using System.Diagnostics;
 using System.Globalization;
 using OmicsScreen.Cli.Console;
-using OmicsScreen.Cli.Output;
 using OmicsScreen.Data;
 using OmicsScreen.Data.Inspection;
 using OmicsScreen.Data.Output;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Reporting.Json;
 using OmicsScreen.Reporting.Tables;
+using OmicsScreen.Runs.Output;
+using OmicsScreen.Runs.Results;
 
 namespace OmicsScreen.Cli.Commands;
 

@@ -1,5 +1,6 @@
 using OmicsScreen.Data;
 using OmicsScreen.Reporting.Screen;
+using OmicsScreen.Runs.Locking;
 using OmicsScreen.Screening.Screen;
 
 namespace OmicsScreen.Cli.Commands;
@@ -45,7 +46,7 @@ public sealed record ScreenHeadline
         {
             ResultsFolder = folder,
             Report = Path.Combine(folder, ScreenRun.ReportFileName),
-            LockedPanelFile = Path.Combine(folder, Data.Models.LockedPanelFile.DefaultFileName),
+            LockedPanelFile = Path.Combine(folder, Runs.Locking.LockedPanelFile.DefaultFileName),
             Samples = loaded.Panel.SampleCount,
             Features = loaded.Panel.FeatureCount,
             Repeats = result.Settings.RepeatCount,

@@ -1,6 +1,6 @@
-using System.Reflection;
 using OmicsScreen.Data;
 using OmicsScreen.Reporting.Screen;
+using OmicsScreen.Runs;
 using OmicsScreen.Screening.Screen;
 
 namespace OmicsScreen.Cli.Commands;
@@ -19,7 +19,7 @@ internal static class ScreenManifest
         return new
         {
             tool = "omicsscreen",
-            version = Version(),
+            version = ToolVersion.Current,
             command_line = string.Join(' ', options.CommandLine.Select(ShellQuote)),
             // A merged run names its part count; its command line is the single run it equals.
             merged_from_parts = mergedParts > 0 ? mergedParts : (int?)null,
@@ -95,9 +95,6 @@ internal static class ScreenManifest
         ScreenStage.WorkUnits => "work_units",
         _ => stage.ToString(),
     };
-
-    internal static string Version() =>
-        typeof(ScreenManifest).Assembly.GetCustomAttribute<AssemblyInformationalVersionAttribute>()?.InformationalVersion ?? "unknown";
 
     /// <summary>POSIX single quotes where a word needs them, so the line can be pasted into a shell.</summary>
     internal static string ShellQuote(string word) =>

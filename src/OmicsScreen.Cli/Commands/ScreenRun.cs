@@ -3,13 +3,17 @@ using System.Globalization;
 using System.Security.Cryptography;
 using OmicsScreen.Cli.Console;
 using OmicsScreen.Cli.Memory;
-using OmicsScreen.Cli.Output;
 using OmicsScreen.Cli.Work;
 using OmicsScreen.Data;
 using OmicsScreen.Data.Inspection;
 using OmicsScreen.Reporting.Json;
 using OmicsScreen.Reporting.Screen;
 using OmicsScreen.Reporting.Univariate;
+using OmicsScreen.Runs;
+using OmicsScreen.Runs.Locking;
+using OmicsScreen.Runs.Output;
+using OmicsScreen.Runs.Results;
+using OmicsScreen.Runs.Work;
 using OmicsScreen.Screening.Screen;
 using OmicsScreen.Screening.Work;
 
@@ -20,12 +24,11 @@ internal static class ScreenRun
 {
     private const int PrintedMarkers = 15;
 
-    public const string ReportFileName = "report.html";
+    public const string ReportFileName = ScreenResultFiles.Report;
 
-    /// <summary>Name of the checkpoint folder inside a results folder while a screen runs.</summary>
-    public const string CheckpointFolderName = "checkpoint";
+    public const string CheckpointFolderName = ScreenResultFiles.CheckpointFolder;
 
-    public const string CheckpointRecordName = "run.json";
+    public const string CheckpointRecordName = ScreenResultFiles.CheckpointRecord;
 
     public static int Execute(CliConsole console, ScreenRunOptions options)
     {
@@ -55,7 +58,7 @@ internal static class ScreenRun
         ScreenFeasibility.Check(options.Screen, loaded.Panel);
 
         var settings = ScreenSettings.Resolve(options.Screen, loaded.Panel);
-        var (identity, record) = RunIdentity.Of("checkpoint", loaded, options);
+        var (identity, record) = RunIdentity.Of("checkpoint", loaded, options.Panel, options.Screen, options.ShowSampleIds, options.CommandLine);
         var checkpoint = WorkFolder.Open(Path.Combine(folder.Path, CheckpointFolderName), CheckpointRecordName,
             record, identity, loaded.Panel.FeatureCount,
             settings.DecoyCount, options.Resume, options.Force, "checkpoint",
@@ -146,10 +149,10 @@ internal static class ScreenRun
         folder.WriteText("marker_statistics.tsv", w => UnivariateTableWriter.WriteAllSamples(w, result.Univariate));
         if (result.Univariate.PerCohort.Count > 0)
             folder.WriteText("marker_statistics_by_cohort.tsv", w => UnivariateTableWriter.WritePerCohort(w, result.Univariate));
-        if (result.Cohorts is { } cohorts) CohortOutput.Write(folder, cohorts);
+        if (result.Cohorts is { } cohorts) CohortTableFiles.Write(folder, cohorts);
         // The shortlist (or its prefix the curve recommends), locked for scoring new cohorts with
         // `apply`; an empty shortlist locks nothing.
-        if (result.LockedPanelSize > 0) folder.WrittenFiles.Add(ApplyModelFile.LockInto(folder.Path, loaded, result));
+        if (result.LockedPanelSize > 0) folder.WrittenFiles.Add(PanelLocking.LockInto(folder.Path, loaded, result));
         var finished = DateTimeOffset.UtcNow;
         var report = ReportInput(options, loaded, result, folder, started, finished, loadSeconds) with { MergedParts = mergedParts };
         folder.WriteText(ReportFileName, w => w.Write(ScreenReport.Render(report)));
@@ -176,7 +179,7 @@ internal static class ScreenRun
         }
         int threads = result.Settings.ThreadCount;
         return new ScreenReportInput(loaded.Panel, result, inputs, LayoutText(options.Panel), tables,
-            string.Join(' ', options.CommandLine.Select(ScreenManifest.ShellQuote)), ScreenManifest.Version(), started, finished, loadSeconds,
+            string.Join(' ', options.CommandLine.Select(ScreenManifest.ShellQuote)), ToolVersion.Current, started, finished, loadSeconds,
             Environment.ProcessorCount, threads, options.ShowSampleIds, Warnings: Warnings(options, loaded, withSampleIds: options.ShowSampleIds),
             Labels: MarkerLabels.Of(loaded));
     }
@@ -237,12 +240,12 @@ internal static class ScreenRun
                 $"Panel-size curve: {curve.RecommendedSize} markers recommended over the whole grid, selection-aware {curve.Metric} {point.SelectionAwareAuc:0.000} +- {point.SelectionAwareAucStandardError:0.000} ({curve.FoldCount}-fold, selection inside each fold); optimistic {point.OptimisticAuc:0.000} if selection re-uses the samples."));
         }
         output.WriteLine(ErrorControlText.LockedPanelSentence(result));
-        if (result.Cohorts is { } cohorts) CohortOutput.PrintSummary(output, result, cohorts);
+        if (result.Cohorts is { } cohorts) CohortSummary.Print(output, result, cohorts);
         output.WriteLine();
         output.WriteLine($"Results: {folder}");
         output.WriteLine($"Report: {Path.Combine(folder, ReportFileName)}");
         if (result.LockedPanelSize > 0)
-            output.WriteLine($"Locked panel for `omicsscreen apply`: {Path.Combine(folder, Data.Models.LockedPanelFile.DefaultFileName)}");
+            output.WriteLine($"Locked panel for `omicsscreen apply`: {Path.Combine(folder, LockedPanelFile.DefaultFileName)}");
         output.WriteLine("A screen is not a diagnostic test: confirm every marker in independent cohorts before any use.");
     }
 

@@ -1,6 +1,8 @@
 using OmicsScreen.Cli.Commands;
 using OmicsScreen.Cli.Console;
 using OmicsScreen.Data;
+using OmicsScreen.Runs.Results;
+using OmicsScreen.Runs.Work;
 using OmicsScreen.Screening.Screen;
 using OmicsScreen.Screening.Work;
 
@@ -9,8 +11,6 @@ namespace OmicsScreen.Cli.Work;
 /// <summary>`screen --part I/N`: computes one part's work units into a part folder for a later merge.</summary>
 internal static class PartRun
 {
-    public const string RecordFileName = "part.json";
-
     public static int Execute(CliConsole console, ScreenRunOptions options, LoadedPanel loaded, RunPart part)
     {
         string shown = options.OutputFolder
@@ -22,9 +22,9 @@ internal static class PartRun
             throw new CommandInputException(
                 $"This screen has {plan.Units.Count} work units, so it can be split into at most {plan.Units.Count} parts, not {part.Count}.");
         var units = plan.UnitsOfPart(part.Index, part.Count);
-        var (identity, described) = RunIdentity.Of("part", loaded, options);
+        var (identity, described) = RunIdentity.Of("part", loaded, options.Panel, options.Screen, options.ShowSampleIds, options.CommandLine);
         var record = described with { Part = part.Index, Parts = part.Count };
-        var folder = WorkFolder.Open(shown, RecordFileName, record, identity, panel.FeatureCount, settings.DecoyCount,
+        var folder = WorkFolder.Open(shown, ScreenResultFiles.PartRecord, record, identity, panel.FeatureCount, settings.DecoyCount,
             options.Resume, options.Force, "part", shown);
         ScreenRun.PrintWarnings(console, ScreenRun.Warnings(options, loaded));
 

@@ -2,9 +2,9 @@ using System.Globalization;
 using System.Text.Json;
 using System.Text.Json.Nodes;
 using OmicsScreen.Cli.Commands;
-using OmicsScreen.Data.Models;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Panels;
+using OmicsScreen.Runs.Locking;
 using OmicsScreen.Screening.Locking;
 using OmicsScreen.TestSupport;
 
@@ -52,7 +52,7 @@ public class ApplyCommandTests
     {
         using var folder = new TempFolder();
         string model = WriteModel(folder);
-        var reloaded = ApplyModelFile.Read(model);
+        var reloaded = LockedPanelFile.Read(model);
         var (matrix, _) = WdbcData.Load();
         var before = LockedPanelScorer.Score(TrainPanel.Value, matrix);
         var after = LockedPanelScorer.Score(reloaded, matrix);
@@ -156,7 +156,7 @@ public class ApplyCommandTests
         content["forest"]![2]!["right"]!.AsArray()[0] = 100000;
         // Written through the file writer, so the checksum is right and only the structure is wrong.
         string model = Path.Combine(folder.Path, "broken.json");
-        LockedPanelFile.Write(model, content);
+        LockedPanelEnvelope.Write(model, content);
         var run = ApplyToTestRows(folder, model);
         Assert.Equal(ExitCode.InputError, run.ExitCode);
         Assert.Contains("broken.json: the locked panel is not valid: forest[2]", run.Error);
@@ -200,9 +200,9 @@ public class ApplyCommandTests
             new Screening.Screen.ScreenOptions { Seed = 5, HalfSamplePairs = 2, TreesPerForest = 40, CurveFolds = 0 });
         string results = Path.Combine(folder.Path, "screen");
         Directory.CreateDirectory(results);
-        Assert.Equal("locked_panel.json", ApplyModelFile.LockInto(results, loaded, result, panelSize: 3));
+        Assert.Equal("locked_panel.json", PanelLocking.LockInto(results, loaded, result, panelSize: 3));
 
-        var locked = ApplyModelFile.Read(Path.Combine(results, "locked_panel.json"));
+        var locked = LockedPanelFile.Read(Path.Combine(results, "locked_panel.json"));
         Assert.Equal(result.Order.Take(3).Select(f => loaded.Panel.Matrix.FeatureNames[f]), locked.MarkerNames);
         Assert.Equal(40, locked.Trees.Count);
         Assert.Equal(5UL, locked.Provenance.Seed);
@@ -227,7 +227,7 @@ public class ApplyCommandTests
         CliHarness.Run("apply", model, folder.File("test.csv", matrixText ?? WdbcRows("test")), "--outcome", "diagnosis",
             "--out", Path.Combine(folder.Path, "applied"));
 
-    private static string WriteModel(TempFolder folder) => ApplyModelFile.WriteInto(folder.Path, TrainPanel.Value);
+    private static string WriteModel(TempFolder folder) => LockedPanelFile.WriteInto(folder.Path, TrainPanel.Value);
 
     private static LockedPanel LockOnTrainRows()
     {

@@ -1,5 +1,5 @@
 using System.Security.Cryptography;
-using OmicsScreen.Cli.Output;
+using OmicsScreen.Runs.Output;
 
 namespace OmicsScreen.Cli.Tests.Corpus;
 

@@ -1,6 +1,8 @@
 using System.Globalization;
 using System.Text;
 using OmicsScreen.Cli.Commands;
+using OmicsScreen.Runs.Locking;
+using OmicsScreen.Runs.Results;
 using OmicsScreen.TestSupport;
 
 namespace OmicsScreen.Cli.Tests.Corpus;
@@ -472,7 +474,7 @@ internal static class MisuseCorpus
             yield return new($"4 apply with a locked marker {(token == "NA" ? "entirely missing" : "entirely below detection")}", s =>
                 {
                     string model = Path.Combine(s.ScreenFolder("r"), "locked_panel.json");
-                    string marker = ApplyModelFile.Read(model).MarkerNames[0];
+                    string marker = LockedPanelFile.Read(model).MarkerNames[0];
                     return ApplyTo(WdbcWithColumnSetTo(s, marker, token), model, s.PathOf("applied"));
                 },
                 ExitCode.Success, ["warning:", state, "the scores rest on the other markers only", "calls would change"],

@@ -15,9 +15,9 @@ public class FeatureSheetTests
     public void Display_names_and_annotations_are_carried_in_matrix_order_whatever_the_sheet_order()
     {
         using var folder = new TempFolder();
-        string sheet = folder.Write("features.tsv", "feature\tpanel\tdisplay_name\nF3\tinflammation\tMarker C\nF1\tmetabolic\tMarker A\nF2\t\tMarker B\n");
+        string sheet = folder.File("features.tsv", "feature\tpanel\tdisplay_name\nF3\tinflammation\tMarker C\nF1\tmetabolic\tMarker A\nF2\t\tMarker B\n");
 
-        var loaded = PanelLoader.Load(Options(folder.Write("m.csv", Matrix), sheet));
+        var loaded = PanelLoader.Load(Options(folder.File("m.csv", Matrix), sheet));
 
         // Values as written in the sheet above, put into the matrix's feature order F1, F2, F3.
         Assert.Equal(["Marker A", "Marker B", "Marker C"], loaded.Features.DisplayNames);
@@ -31,9 +31,9 @@ public class FeatureSheetTests
     public void Values_below_a_features_detection_limit_become_below_detection_cells_holding_the_limit()
     {
         using var folder = new TempFolder();
-        string sheet = folder.Write("features.csv", "feature,detection_limit\nF1,1.5\nF2,0.3\nF3,\n");
+        string sheet = folder.File("features.csv", "feature,detection_limit\nF1,1.5\nF2,0.3\nF3,\n");
 
-        var loaded = PanelLoader.Load(Options(folder.Write("m.csv", Matrix), sheet));
+        var loaded = PanelLoader.Load(Options(folder.File("m.csv", Matrix), sheet));
         var matrix = loaded.Panel.Matrix;
 
         // Common practice: a value under the limit of detection is reported as "< LOD", censored at the limit.
@@ -55,9 +55,9 @@ public class FeatureSheetTests
     public void A_below_detection_token_without_its_own_limit_takes_the_features_limit()
     {
         using var folder = new TempFolder();
-        string sheet = folder.Write("features.csv", "feature,detection_limit\nF1,\nF2,\nF3,0.5\n");
+        string sheet = folder.File("features.csv", "feature,detection_limit\nF1,\nF2,\nF3,0.5\n");
 
-        var matrix = PanelLoader.Load(Options(folder.Write("m.csv", Matrix), sheet)).Panel.Matrix;
+        var matrix = PanelLoader.Load(Options(folder.File("m.csv", Matrix), sheet)).Panel.Matrix;
 
         Assert.Equal(0.5f, matrix.Value(2, 0));
         Assert.Equal(CellState.BelowDetection, matrix.State(2, 0));
@@ -69,8 +69,8 @@ public class FeatureSheetTests
     public void Features_in_only_one_file_are_refused_naming_both_lists_or_dropped_with_a_warning()
     {
         using var folder = new TempFolder();
-        string matrix = folder.Write("m.csv", Matrix);
-        string sheet = folder.Write("features.csv", "feature,display_name\nF1,A\nF2,B\nF9,Z\n");
+        string matrix = folder.File("m.csv", Matrix);
+        string sheet = folder.File("features.csv", "feature,display_name\nF1,A\nF2,B\nF9,Z\n");
 
         var error = Assert.Throws<PanelInputException>(() => PanelLoader.Load(Options(matrix, sheet)));
         var dropped = PanelLoader.Load(Options(matrix, sheet) with { DropUnmatchedSamples = true });
@@ -86,10 +86,10 @@ public class FeatureSheetTests
     public void A_repeated_feature_id_or_a_limit_that_is_not_a_number_is_an_error_naming_the_line()
     {
         using var folder = new TempFolder();
-        string matrix = folder.Write("m.csv", Matrix);
+        string matrix = folder.File("m.csv", Matrix);
 
-        var repeated = Assert.Throws<PanelInputException>(() => PanelLoader.Load(Options(matrix, folder.Write("a.csv", "feature\nF1\nF2\nF1\nF3\n"))));
-        var notANumber = Assert.Throws<PanelInputException>(() => PanelLoader.Load(Options(matrix, folder.Write("b.csv", "feature,detection_limit\nF1,0.1\nF2,low\nF3,\n"))));
+        var repeated = Assert.Throws<PanelInputException>(() => PanelLoader.Load(Options(matrix, folder.File("a.csv", "feature\nF1\nF2\nF1\nF3\n"))));
+        var notANumber = Assert.Throws<PanelInputException>(() => PanelLoader.Load(Options(matrix, folder.File("b.csv", "feature,detection_limit\nF1,0.1\nF2,low\nF3,\n"))));
 
         Assert.StartsWith("a.csv, line 4, column 'feature': the feature id 'F1' occurs more than once", repeated.Message);
         Assert.StartsWith("b.csv, line 3, column 'detection_limit': the detection limit 'low' of feature 'F2' is not a number.", notANumber.Message);

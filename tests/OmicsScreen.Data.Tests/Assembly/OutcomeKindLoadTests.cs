@@ -22,7 +22,7 @@ public sealed class OutcomeKindLoadTests : IDisposable
     {
         var text = new StringBuilder("sample_id,f1,f2\n");
         for (int s = 0; s < SampleCount; s++) text.Append(CultureInfo.InvariantCulture, $"s{s},{s % 7},{s % 5}\n");
-        return _folder.Write("m.csv", text.ToString());
+        return _folder.File("m.csv", text.ToString());
     }
 
     /// <summary>A sample sheet with the given columns; sample s is on line s + 2.</summary>
@@ -30,7 +30,7 @@ public sealed class OutcomeKindLoadTests : IDisposable
     {
         var text = new StringBuilder("sample_id," + header + "\n");
         for (int s = 0; s < SampleCount; s++) text.Append(CultureInfo.InvariantCulture, $"s{s},{row(s)}\n");
-        return _folder.Write("sheet.csv", text.ToString());
+        return _folder.File("sheet.csv", text.ToString());
     }
 
     private LoadedPanel Load(string sheet, Func<PanelLoadOptions, PanelLoadOptions> adjust) =>
@@ -177,7 +177,7 @@ public sealed class OutcomeKindLoadTests : IDisposable
     {
         var text = new StringBuilder("sample_id,months,relapse,f1,f2\n");
         for (int s = 0; s < SampleCount; s++) text.Append(CultureInfo.InvariantCulture, $"s{s},{s + 1},{(s % 3 == 0 ? "yes" : "no")},{s % 7},{s % 5}\n");
-        var loaded = PanelLoader.Load(FollowUp(new PanelLoadOptions { MatrixPath = _folder.Write("annotated.csv", text.ToString()) }));
+        var loaded = PanelLoader.Load(FollowUp(new PanelLoadOptions { MatrixPath = _folder.File("annotated.csv", text.ToString()) }));
 
         Assert.Equal(["f1", "f2"], loaded.Panel.Matrix.FeatureNames);
         Assert.Equal(10, loaded.Panel.FollowUp!.EventCount);

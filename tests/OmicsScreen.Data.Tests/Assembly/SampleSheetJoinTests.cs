@@ -10,7 +10,7 @@ public sealed class SampleSheetJoinTests : IDisposable
     public void Dispose() => _folder.Dispose();
 
     private PanelLoadOptions Options(string matrix, string sheet) =>
-        new() { MatrixPath = _folder.Write("m.csv", matrix), SampleSheetPath = _folder.Write("sheet.tsv", sheet), OutcomeColumn = "group" };
+        new() { MatrixPath = _folder.File("m.csv", matrix), SampleSheetPath = _folder.File("sheet.tsv", sheet), OutcomeColumn = "group" };
 
     [Fact]
     public void Sheet_rows_in_another_order_are_matched_by_id_and_matrix_order_is_kept()

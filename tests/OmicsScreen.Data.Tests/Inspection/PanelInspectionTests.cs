@@ -77,7 +77,7 @@ public sealed class PanelInspectionTests : IDisposable
     {
         var loaded = PanelLoader.Load(new PanelLoadOptions
         {
-            MatrixPath = _folder.Write("flags.csv",
+            MatrixPath = _folder.File("flags.csv",
                 "id,group,flat,empty,holey,good,censored\n" +
                 "s1,x,5,NA,1,1,<LOD\n" +
                 "s2,x,5,,NA,2,<LOD\n" +
@@ -107,7 +107,7 @@ public sealed class PanelInspectionTests : IDisposable
     {
         var text = new System.Text.StringBuilder("id,group,a,b\n");
         for (int s = 0; s < 1200; s++) text.Append($"s{s},{(s % 2 == 0 ? "x" : "y")},{s},{s % 7}\n");
-        var inspection = PanelLoader.Load(new PanelLoadOptions { MatrixPath = _folder.Write("tall.csv", text.ToString()), OutcomeColumn = "group" }).Inspection;
+        var inspection = PanelLoader.Load(new PanelLoadOptions { MatrixPath = _folder.File("tall.csv", text.ToString()), OutcomeColumn = "group" }).Inspection;
 
         var finding = Assert.Single(inspection.Findings, f => f.Code == "orientation-suspect");
         Assert.Equal(FindingSeverity.Warning, finding.Severity);
@@ -121,7 +121,7 @@ public sealed class PanelInspectionTests : IDisposable
     {
         var loaded = PanelLoader.Load(new PanelLoadOptions
         {
-            MatrixPath = _folder.Write("one.csv", "id,group,a\ns1,x,1\ns2,x,2\n"),
+            MatrixPath = _folder.File("one.csv", "id,group,a\ns1,x,1\ns2,x,2\n"),
             OutcomeColumn = "group",
         });
         Assert.False(loaded.Inspection.CanScreen);

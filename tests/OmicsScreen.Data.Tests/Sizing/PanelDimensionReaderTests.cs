@@ -71,8 +71,8 @@ public class PanelDimensionReaderTests
     {
         using var folder = new TempFolder();
         string text = string.Join(newline, "id,status,a,b,c", "s1,x,1,2,3", "s2,y,4,5,6", "s3,x,7,8,9");
-        var withBreak = folder.Write("with.csv", text + newline);
-        var withoutBreak = folder.Write("without.csv", text);
+        var withBreak = folder.File("with.csv", text + newline);
+        var withoutBreak = folder.File("without.csv", text);
 
         foreach (var path in new[] { withBreak, withoutBreak })
         {
@@ -133,7 +133,7 @@ public class PanelDimensionReaderTests
     public void A_long_file_is_sized_with_its_layout_for_the_estimate()
     {
         using var folder = new TempFolder();
-        string path = folder.Write("long.csv", "sample,feature,value,status\ns1,A,1,x\ns1,B,2,x\ns2,A,3,y\ns3,B,4,y\n");
+        string path = folder.File("long.csv", "sample,feature,value,status\ns1,A,1,x\ns1,B,2,x\ns2,A,3,y\ns3,B,4,y\n");
 
         var sized = PanelDimensionReader.TryRead(new PanelLoadOptions { MatrixPath = path, OutcomeColumn = "status", Layout = PanelLayout.Long });
 

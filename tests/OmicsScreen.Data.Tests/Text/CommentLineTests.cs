@@ -16,9 +16,9 @@ public class CommentLineTests
     public void Comment_lines_above_the_header_are_skipped_and_counted(PanelLayout layout, string panel)
     {
         using var folder = new TempFolder();
-        var options = new PanelLoadOptions { MatrixPath = folder.Write("plain.csv", panel), OutcomeColumn = "status", Layout = layout };
+        var options = new PanelLoadOptions { MatrixPath = folder.File("plain.csv", panel), OutcomeColumn = "status", Layout = layout };
         var plain = PanelLoader.Load(options);
-        var commented = PanelLoader.Load(options with { MatrixPath = folder.Write("commented.csv", Comments + panel) });
+        var commented = PanelLoader.Load(options with { MatrixPath = folder.File("commented.csv", Comments + panel) });
 
         PanelAssert.Identical(plain.Panel, commented.Panel);
         // Three comment lines were written above the header (the blank line is not one).
@@ -33,7 +33,7 @@ public class CommentLineTests
     public void A_comment_line_inside_the_data_is_an_error_naming_the_file_and_line(PanelLayout layout, string panel, int line)
     {
         using var folder = new TempFolder();
-        var options = new PanelLoadOptions { MatrixPath = folder.Write("m.csv", panel), OutcomeColumn = "status", Layout = layout };
+        var options = new PanelLoadOptions { MatrixPath = folder.File("m.csv", panel), OutcomeColumn = "status", Layout = layout };
 
         var error = Assert.Throws<PanelInputException>(() => PanelLoader.Load(options));
 
@@ -45,7 +45,7 @@ public class CommentLineTests
     public void Comment_lines_above_the_header_of_a_gzip_file_are_skipped_too()
     {
         using var folder = new TempFolder();
-        string plain = folder.Write("plain.csv", "id,status,a\ns1,x,1\ns2,y,2\n");
+        string plain = folder.File("plain.csv", "id,status,a\ns1,x,1\ns2,y,2\n");
         string zipped = folder.File("zipped.csv.gz");
         File.WriteAllBytes(zipped, GzipFile.Compress(System.Text.Encoding.UTF8.GetBytes("!meta\n#meta\nid,status,a\ns1,x,1\ns2,y,2\n")));
 

@@ -11,7 +11,7 @@ public sealed class DelimitedTextTests : IDisposable
     public void Dispose() => _folder.Dispose();
 
     private LoadedPanel Load(string name, string content, PanelLayout layout = PanelLayout.SamplesInRows) =>
-        PanelLoader.Load(new PanelLoadOptions { MatrixPath = _folder.Write(name, content), OutcomeColumn = "group", Layout = layout });
+        PanelLoader.Load(new PanelLoadOptions { MatrixPath = _folder.File(name, content), OutcomeColumn = "group", Layout = layout });
 
     [Theory]
     [InlineData(",", "comma")]
@@ -58,7 +58,7 @@ public sealed class DelimitedTextTests : IDisposable
     {
         var loaded = PanelLoader.Load(new PanelLoadOptions
         {
-            MatrixPath = _folder.Write("quoted.csv",
+            MatrixPath = _folder.File("quoted.csv",
                 "id,group,note,\"IL-6, serum\",\"TNF \"\"alpha\"\"\"\n\"s,1\",x,\"a, \"\"b\"\"\",1,\"2.5\"\ns2,y,plain,3,4\n"),
             OutcomeColumn = "group",
             AnnotationColumns = ["note"],
@@ -119,7 +119,7 @@ public sealed class DelimitedTextTests : IDisposable
     {
         var loaded = PanelLoader.Load(new PanelLoadOptions
         {
-            MatrixPath = _folder.Write("named.csv", "a,group,sample,b\n1,x,s1,2\n3,y,s2,4\n"),
+            MatrixPath = _folder.File("named.csv", "a,group,sample,b\n1,x,s1,2\n3,y,s2,4\n"),
             OutcomeColumn = "group",
             SampleIdColumn = "sample",
         });

@@ -23,9 +23,9 @@ public class FeatureDescribingColumnTests
     public void Leading_text_columns_are_taken_as_describing_columns_and_the_panel_is_the_same()
     {
         using var folder = new TempFolder();
-        var expected = PanelLoader.Load(Options(folder.Write("s.csv", SamplesInRows), PanelLayout.SamplesInRows));
+        var expected = PanelLoader.Load(Options(folder.File("s.csv", SamplesInRows), PanelLayout.SamplesInRows));
 
-        var loaded = PanelLoader.Load(Options(folder.Write("f.tsv", WithDescriptors), PanelLayout.FeaturesInRows));
+        var loaded = PanelLoader.Load(Options(folder.File("f.tsv", WithDescriptors), PanelLayout.FeaturesInRows));
 
         PanelAssert.Identical(expected.Panel, loaded.Panel);
         // The values below are the describing cells written above, in feature order.
@@ -42,7 +42,7 @@ public class FeatureDescribingColumnTests
     public void A_describing_column_named_by_the_display_name_option_gives_the_lab_facing_names()
     {
         using var folder = new TempFolder();
-        var loaded = PanelLoader.Load(Options(folder.Write("f.tsv", WithDescriptors), PanelLayout.FeaturesInRows) with { DisplayNameColumn = "symbol" });
+        var loaded = PanelLoader.Load(Options(folder.File("f.tsv", WithDescriptors), PanelLayout.FeaturesInRows) with { DisplayNameColumn = "symbol" });
 
         Assert.Equal(["GENE0", "GENE1", "GENE2"], loaded.Features.DisplayNames);
         Assert.Equal(["description"], loaded.Features.Annotations.Select(a => a.Name));
@@ -54,7 +54,7 @@ public class FeatureDescribingColumnTests
         using var folder = new TempFolder();
         // An Entrez-like numeric id between the probe and the symbol: only naming the columns tells it from a sample.
         string text = "probe,entrez,symbol,s1,s2,s3\nstatus,,,x,y,y\nP1,7157,GENE0,1,2,3\nP2,7158,GENE1,4,5,6\n";
-        string path = folder.Write("f.csv", text);
+        string path = folder.File("f.csv", text);
 
         var error = Assert.Throws<PanelInputException>(() => PanelLoader.Load(Options(path, PanelLayout.FeaturesInRows)));
         var loaded = PanelLoader.Load(Options(path, PanelLayout.FeaturesInRows) with { FeatureColumns = ["probe", "entrez", "symbol"] });
@@ -71,7 +71,7 @@ public class FeatureDescribingColumnTests
     {
         using var folder = new TempFolder();
         // Most cells of s1 are numbers, so it is not a describing column: the typo is reported where it is.
-        string path = folder.Write("f.csv", "feature,s1,s2,s3\nstatus,x,y,y\nF1,1,2,3\nF2,4,5,6\nF3,7x,8,9\n");
+        string path = folder.File("f.csv", "feature,s1,s2,s3\nstatus,x,y,y\nF1,1,2,3\nF2,4,5,6\nF3,7x,8,9\n");
 
         var error = Assert.Throws<PanelInputException>(() => PanelLoader.Load(Options(path, PanelLayout.FeaturesInRows)));
 
@@ -82,7 +82,7 @@ public class FeatureDescribingColumnTests
     public void A_named_describing_column_that_is_not_in_the_file_is_an_error_naming_it()
     {
         using var folder = new TempFolder();
-        string path = folder.Write("f.tsv", WithDescriptors);
+        string path = folder.File("f.tsv", WithDescriptors);
 
         var error = Assert.Throws<PanelInputException>(() =>
             PanelLoader.Load(Options(path, PanelLayout.FeaturesInRows) with { FeatureColumns = ["gene_id", "Symbol"] }));

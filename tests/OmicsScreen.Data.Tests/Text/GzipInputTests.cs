@@ -17,7 +17,7 @@ public class GzipInputTests
     public void A_gzip_file_loads_like_its_plain_text_whatever_its_name()
     {
         using var folder = new TempFolder();
-        string plain = folder.Write("panel.csv", Panel);
+        string plain = folder.File("panel.csv", Panel);
         // A name with no .gz: the format is told by the magic bytes 1F 8B (RFC 1952, section 2.3.1), not the name.
         string zipped = folder.File("panel.data");
         File.WriteAllBytes(zipped, GzipFile.Compress(Encoding.UTF8.GetBytes(Panel)));
@@ -72,7 +72,7 @@ public class GzipInputTests
     public void A_bgzip_file_of_several_members_loads_and_one_without_its_end_block_is_refused()
     {
         using var folder = new TempFolder();
-        string plain = folder.Write("panel.csv", Panel);
+        string plain = folder.File("panel.csv", Panel);
         var text = Encoding.UTF8.GetBytes(Panel);
         var members = new List<byte>();
         // BGZF: each block a gzip member with the BC extra field, then a fixed empty end block (SAM/BAM specification, section 4.1).

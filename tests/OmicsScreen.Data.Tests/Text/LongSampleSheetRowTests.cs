@@ -12,7 +12,7 @@ public sealed class LongSampleSheetRowTests : IDisposable
     [Fact]
     public void A_quote_that_is_never_closed_in_a_sample_sheet_is_named_with_the_fix()
     {
-        string matrix = _folder.Write("m.csv", "sample_id,F1,F2\ns1,1,2\ns2,3,4\n");
+        string matrix = _folder.File("m.csv", "sample_id,F1,F2\ns1,1,2\ns2,3,4\n");
         // An opening quote with no close turns the rest of the file (over 16 Mi characters) into one row.
         string sheet = Path.Combine(_folder.Path, "sheet.csv");
         using (var writer = new StreamWriter(sheet))

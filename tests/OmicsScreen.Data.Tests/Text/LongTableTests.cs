@@ -16,7 +16,7 @@ public class LongTableTests
     public void Per_row_detection_limits_mark_exactly_the_cells_under_their_limit()
     {
         using var folder = new TempFolder();
-        string path = folder.Write("long.csv",
+        string path = folder.File("long.csv",
             "sample,feature,value,lod,status\n" +
             "s1,A,0.5,1,x\n" +   // under its limit: below detection at 1
             "s1,B,2,1,x\n" +     // above
@@ -53,7 +53,7 @@ public class LongTableTests
                 text.Append(FormattableString.Invariant($"S{s},F{f},{ValueOf(s, f):R},{(float.IsNaN(limit) ? "" : limit.ToString("R", System.Globalization.CultureInfo.InvariantCulture))},{(s % 2 == 0 ? "a" : "b")}\n"));
             }
         using var folder = new TempFolder();
-        string path = folder.Write("long.csv", text.ToString());
+        string path = folder.File("long.csv", text.ToString());
 
         var loaded = PanelLoader.Load(Options(path) with { DetectionLimitColumn = "lod" });
         var m = loaded.Panel.Matrix;
@@ -79,7 +79,7 @@ public class LongTableTests
     public void Flags_mark_below_detection_and_failed_quality_cells_and_pairs_without_a_row_are_missing()
     {
         using var folder = new TempFolder();
-        string path = folder.Write("long.tsv",
+        string path = folder.File("long.tsv",
             "SampleID\tAssay\tNPX\tBelow\tQC\tgroup\n" +
             "s1\tA\t1.5\tno\tPass\tx\n" +
             "s1\tB\t0.2\tyes\tPass\tx\n" +
@@ -106,7 +106,7 @@ public class LongTableTests
     public void A_repeated_sample_and_feature_pair_is_refused_with_both_lines()
     {
         using var folder = new TempFolder();
-        string path = folder.Write("long.csv", "sample,feature,value,status\ns1,A,1,x\ns1,B,2,x\ns2,A,3,y\ns1,B,2.5,x\n");
+        string path = folder.File("long.csv", "sample,feature,value,status\ns1,A,1,x\ns1,B,2,x\ns2,A,3,y\ns1,B,2.5,x\n");
 
         var error = Assert.Throws<PanelInputException>(() => PanelLoader.Load(Options(path)));
 
@@ -117,7 +117,7 @@ public class LongTableTests
     public void A_sample_attribute_that_disagrees_between_rows_is_refused_with_both_lines()
     {
         using var folder = new TempFolder();
-        string path = folder.Write("long.csv", "sample,feature,value,status\ns1,A,1,x\ns2,A,3,y\ns1,B,2,y\n");
+        string path = folder.File("long.csv", "sample,feature,value,status\ns1,A,1,x\ns2,A,3,y\ns1,B,2,y\n");
 
         var error = Assert.Throws<PanelInputException>(() => PanelLoader.Load(Options(path)));
 
@@ -128,7 +128,7 @@ public class LongTableTests
     public void A_missing_role_column_names_the_option_and_the_default()
     {
         using var folder = new TempFolder();
-        string path = folder.Write("long.csv", "sample,analyte,value,status\ns1,A,1,x\n");
+        string path = folder.File("long.csv", "sample,analyte,value,status\ns1,A,1,x\n");
 
         var error = Assert.Throws<PanelInputException>(() => PanelLoader.Load(Options(path)));
 
@@ -140,7 +140,7 @@ public class LongTableTests
     public void Feature_describing_columns_of_a_long_table_travel_with_the_feature()
     {
         using var folder = new TempFolder();
-        string path = folder.Write("long.csv", "sample,feature,value,status,protein\ns1,A,1,x,Alpha one\ns1,B,2,x,Beta\ns2,A,3,y,Alpha one\ns2,B,4,y,Beta\n");
+        string path = folder.File("long.csv", "sample,feature,value,status,protein\ns1,A,1,x,Alpha one\ns1,B,2,x,Beta\ns2,A,3,y,Alpha one\ns2,B,4,y,Beta\n");
 
         var loaded = PanelLoader.Load(Options(path) with { FeatureColumns = ["feature", "protein"], DisplayNameColumn = "protein" });
 

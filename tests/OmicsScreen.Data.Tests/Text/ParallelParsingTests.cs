@@ -25,7 +25,7 @@ public sealed class ParallelParsingTests : IDisposable
             string b = secondCell?.Invoke(i) ?? (-i).ToString(CultureInfo.InvariantCulture);
             text.Append(CultureInfo.InvariantCulture, $"s{i},{(i % 2 == 0 ? "x" : "y")},{note},{i},{b}\n");
         }
-        return _folder.Write(name, text.ToString());
+        return _folder.File(name, text.ToString());
     }
 
     private static PanelLoadOptions Options(string path) =>

@@ -32,7 +32,7 @@ public sealed class RowByRowReadingTests : IDisposable
     [MemberData(nameof(Files))]
     public void Row_by_row_reading_equals_the_fast_reader(string name, string contents)
     {
-        string path = _folder.Write(name, contents);
+        string path = _folder.File(name, contents);
         var options = new PanelLoadOptions { MatrixPath = path, OutcomeColumn = "group", AnnotationColumns = contents.Contains("note") ? ["note"] : [] };
         var fast = DelimitedMatrixReader.Read(path, options, default);
         var rowByRow = DelimitedMatrixReader.ReadLongSamplesInRows(path, options, default);
@@ -45,7 +45,7 @@ public sealed class RowByRowReadingTests : IDisposable
     [InlineData("id,group,a,b\ns1,x,1,2\ns1,y,3,4\n")]
     public void Row_by_row_reading_refuses_a_bad_file_with_the_fast_reader_s_message(string contents)
     {
-        string path = _folder.Write("bad.csv", contents);
+        string path = _folder.File("bad.csv", contents);
         var options = new PanelLoadOptions { MatrixPath = path, OutcomeColumn = "group" };
         var fast = Assert.Throws<PanelInputException>(() => DelimitedMatrixReader.Read(path, options, default));
         var rowByRow = Assert.Throws<PanelInputException>(() => DelimitedMatrixReader.ReadLongSamplesInRows(path, options, default));
@@ -67,7 +67,7 @@ public sealed class RowByRowReadingTests : IDisposable
     [MemberData(nameof(FeatureRowFiles))]
     public void Row_by_row_reading_of_features_in_rows_equals_the_fast_reader(string name, string contents)
     {
-        string path = _folder.Write(name, contents);
+        string path = _folder.File(name, contents);
         var options = new PanelLoadOptions { MatrixPath = path, OutcomeColumn = "group", Layout = PanelLayout.FeaturesInRows };
         var fast = DelimitedMatrixReader.Read(path, options, default);
         var rowByRow = DelimitedMatrixReader.ReadLongFeaturesInRows(path, options, default);
@@ -84,7 +84,7 @@ public sealed class RowByRowReadingTests : IDisposable
     [InlineData("feature\ngroup\n")]
     public void Row_by_row_reading_of_features_in_rows_refuses_a_bad_file_with_the_fast_reader_s_message(string contents)
     {
-        string path = _folder.Write("bad.csv", contents);
+        string path = _folder.File("bad.csv", contents);
         var options = new PanelLoadOptions { MatrixPath = path, OutcomeColumn = "group", Layout = PanelLayout.FeaturesInRows };
         var fast = Assert.Throws<PanelInputException>(() => DelimitedMatrixReader.Read(path, options, default));
         var rowByRow = Assert.Throws<PanelInputException>(() => DelimitedMatrixReader.ReadLongFeaturesInRows(path, options, default));

@@ -27,8 +27,8 @@ public class SheetTextTests
     public void Gzip_sheets_with_comment_lines_load_the_panel_names_and_censoring_of_plain_sheets()
     {
         using var folder = new TempFolder();
-        string matrix = folder.Write("m.csv", Matrix);
-        var plain = PanelLoader.Load(Options(matrix, folder.Write("samples.csv", Samples), folder.Write("features.csv", Features)));
+        string matrix = folder.File("m.csv", Matrix);
+        var plain = PanelLoader.Load(Options(matrix, folder.File("samples.csv", Samples), folder.File("features.csv", Features)));
         // No .gz in the names: a sheet, like the matrix, is told gzip by its magic bytes 1F 8B (RFC 1952, section 2.3.1).
         string samples = folder.File("samples.txt");
         File.WriteAllBytes(samples, GzipFile.Compress(Encoding.UTF8.GetBytes(Comments + Samples)));
@@ -54,15 +54,15 @@ public class SheetTextTests
     public void A_comment_line_inside_a_sheets_data_is_refused_naming_the_sheet_and_line(string which)
     {
         using var folder = new TempFolder();
-        string matrix = folder.Write("m.csv", Matrix);
+        string matrix = folder.File("m.csv", Matrix);
         // The comment is the third line of the sheet: header, one row, then the comment.
         static string WithComment(string sheet)
         {
             var lines = sheet.Split('\n');
             return string.Join('\n', [lines[0], lines[1], "# a note left in the data", .. lines[2..]]);
         }
-        string samples = folder.Write("samples.csv", which == "samples" ? WithComment(Samples) : Samples);
-        string features = folder.Write("features.csv", which == "features" ? WithComment(Features) : Features);
+        string samples = folder.File("samples.csv", which == "samples" ? WithComment(Samples) : Samples);
+        string features = folder.File("features.csv", which == "features" ? WithComment(Features) : Features);
 
         var error = Assert.Throws<PanelInputException>(() => PanelLoader.Load(Options(matrix, samples, features)));
 
@@ -82,7 +82,7 @@ public class SheetTextTests
         File.WriteAllBytes(samples, whole[..(whole.Length / 2)]);
 
         var error = Assert.Throws<PanelInputException>(() =>
-            PanelLoader.Load(new PanelLoadOptions { MatrixPath = folder.Write("m.csv", Matrix), OutcomeColumn = "status", SampleSheetPath = samples }));
+            PanelLoader.Load(new PanelLoadOptions { MatrixPath = folder.File("m.csv", Matrix), OutcomeColumn = "status", SampleSheetPath = samples }));
 
         Assert.StartsWith("samples.csv.gz: ", error.Message);
         Assert.Contains("truncated", error.Message);
@@ -97,7 +97,7 @@ public class SheetTextTests
         File.WriteAllBytes(samples, GzipFile.Compress([0x50, 0x4B, 0x03, 0x04, 0x00, 0x00, 0x00, 0x00]));
 
         var error = Assert.Throws<PanelInputException>(() =>
-            PanelLoader.Load(new PanelLoadOptions { MatrixPath = folder.Write("m.csv", Matrix), OutcomeColumn = "status", SampleSheetPath = samples }));
+            PanelLoader.Load(new PanelLoadOptions { MatrixPath = folder.File("m.csv", Matrix), OutcomeColumn = "status", SampleSheetPath = samples }));
 
         Assert.StartsWith("samples.csv.gz: is gzip-compressed but does not hold text", error.Message);
         Assert.Contains("saved as CSV", error.Message);

@@ -62,17 +62,6 @@ public class PanelLockerTests
     }
 
     [Fact]
-    public void One_thread_and_two_threads_lock_the_same_panel()
-    {
-        var train = WdbcLockedPanels.Train;
-        var markers = WdbcLockedPanels.MarkerIndices(train.Matrix);
-        var options = new PanelLockOptions { Seed = 9 };
-        var oneThread = PanelLocker.Lock(train, markers, WdbcLockedPanels.ForestOptions with { TreeCount = 40, ThreadCount = 1 }, options);
-        var twoThreads = PanelLocker.Lock(train, markers, WdbcLockedPanels.ForestOptions with { TreeCount = 40, ThreadCount = 2 }, options);
-        Assert.Equal(LockedPanelJson.ToJson(oneThread).ToJsonString(), LockedPanelJson.ToJson(twoThreads).ToJsonString());
-    }
-
-    [Fact]
     public void Multi_class_panels_use_the_majority_vote_and_keep_no_threshold()
     {
         var (matrix, _) = OmicsScreen.TestSupport.WdbcData.Load();

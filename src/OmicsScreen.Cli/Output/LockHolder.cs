@@ -1,9 +1,0 @@
-using System.Text.Json.Serialization;
-
-namespace OmicsScreen.Cli.Output;
-
-/// <summary>Who holds a results folder's lock, as recorded beside the lock file.</summary>
-internal sealed record LockHolder(
-    [property: JsonPropertyName("process_id")] int ProcessId,
-    [property: JsonPropertyName("started_utc")] string StartedUtc,
-    [property: JsonPropertyName("machine")] string Machine);

@@ -1,0 +1,130 @@
+using System.Globalization;
+using OmicsScreen.Reporting.Html;
+using OmicsScreen.Runs.Locking;
+using OmicsScreen.Runs.Results;
+using OmicsScreen.Screening.Locking;
+
+namespace OmicsScreen.Runs.Apply;
+
+/// <summary>
+/// The short HTML page of `omicsscreen apply`: the rule, the performance when the outcome is
+/// known, the scale checks and the cautions. Sample ids appear only when asked for.
+/// </summary>
+public static class ApplyReport
+{
+    public static string Build(LockedPanel model, LockedPanelScores scores, LockedPanelPerformance? performance, string matrixPath, bool showSampleIds,
+        IReadOnlyList<string> discoveryOverlap, IReadOnlyDictionary<string, string>? displayNames = null)
+    {
+        displayNames ??= new Dictionary<string, string>();
+        var html = new HtmlBuilder().BeginDocument($"Locked panel applied to {Path.GetFileName(matrixPath)}");
+        html.Caution("Read before using these scores", [.. discoveryOverlap, .. Cautions(model, scores, performance)]);
+
+        html.BeginSection("The locked panel");
+        var rule = model.Threshold is { } threshold
+            ? $"{model.ClassNames[model.PositiveClass]} when the fraction of trees voting for it is at least {Number(threshold)} (Youden threshold on the discovery out-of-bag probabilities)"
+            : "the class most trees vote for";
+        html.DefinitionList(
+        [
+            new("Markers", string.Join(", ", model.MarkerNames.Select(m => MarkerLabels.Label(m, displayNames)))),
+            new("Trees", model.Trees.Count.ToString(CultureInfo.InvariantCulture)),
+            new("Call", rule),
+            new("Discovery out-of-bag AUC", model.OutOfBagAuc is { } auc ? Number(auc) : "not applicable"),
+            new("Discovery samples", model.Provenance.DiscoverySampleCount.ToString(CultureInfo.InvariantCulture)),
+            new("Locked by", $"OmicsScreen {model.Provenance.ToolVersion}, seed {model.Provenance.Seed.ToString(CultureInfo.InvariantCulture)}"),
+        ]);
+        html.EndSection();
+
+        html.BeginSection("Scores");
+        var called = new int[scores.ClassCount];
+        foreach (int c in scores.PredictedClasses) called[c]++;
+        var calls = new HtmlTable("Samples called per class", [new("class"), new("samples", ColumnAlignment.Numeric)]);
+        for (int c = 0; c < scores.ClassCount; c++) calls.AddRow(scores.ClassNames[c], called[c].ToString(CultureInfo.InvariantCulture));
+        html.Table(calls);
+        if (showSampleIds)
+        {
+            var columns = new List<HtmlTableColumn> { new("sample") };
+            foreach (var name in scores.ClassNames) columns.Add(new HtmlTableColumn($"P({name})", ColumnAlignment.Numeric));
+            columns.Add(new HtmlTableColumn("called"));
+            var table = new HtmlTable("Every sample's class probabilities (fraction of trees) and call", columns);
+            for (int s = 0; s < scores.SampleCount; s++)
+            {
+                var row = new List<string?> { scores.SampleIds[s] };
+                for (int c = 0; c < scores.ClassCount; c++) row.Add(Number(scores.Probability(s, c)));
+                row.Add(scores.ClassNames[scores.PredictedClasses[s]]);
+                table.AddRow(row.ToArray());
+            }
+            html.Table(table);
+        }
+        else
+        {
+            html.Paragraph($"Per-sample scores are in {ApplyResultFiles.Scores}; this page shows no sample ids (pass --show-sample-ids to list them).");
+        }
+        html.EndSection();
+
+        if (performance is not null) AddPerformance(html, model, performance);
+
+        html.BeginSection("Scale check");
+        if (scores.Warnings.Count == 0)
+            html.Paragraph("Every marker's median and spread are within the discovery range (median inside discovery Q1 - 3 IQR to Q3 + 3 IQR, IQR within a factor of 4).");
+        else
+            html.BulletList(scores.Warnings.Select(w => w.Message));
+        html.EndSection();
+        return html.EndDocument();
+    }
+
+    private static void AddPerformance(HtmlBuilder html, LockedPanel model, LockedPanelPerformance performance)
+    {
+        html.BeginSection("Performance on this cohort");
+        var entries = new List<KeyValuePair<string, string>>
+        {
+            new("Samples", performance.SampleCount.ToString(CultureInfo.InvariantCulture)),
+        };
+        if (performance.Auc is { } auc && performance.AucInterval is { } interval)
+            entries.Add(new($"AUC ({model.ClassNames[model.PositiveClass]} positive)",
+                $"{Number(auc)} (95% CI {Number(interval.Lower)} to {Number(interval.Upper)}, DeLong)"));
+        entries.Add(new("Error at the locked call", Number(performance.Error)));
+        html.DefinitionList(entries);
+
+        var columns = new List<HtmlTableColumn> { new("known class") };
+        foreach (var name in performance.ClassNames) columns.Add(new HtmlTableColumn($"called {name}", ColumnAlignment.Numeric));
+        var confusion = new HtmlTable("Known class (rows) against called class (columns)", columns);
+        for (int c = 0; c < performance.ClassNames.Count; c++)
+        {
+            var row = new List<string?> { performance.ClassNames[c] };
+            foreach (int count in performance.Confusion[c]) row.Add(count.ToString(CultureInfo.InvariantCulture));
+            confusion.AddRow(row.ToArray());
+        }
+        html.Table(confusion);
+
+        var calibration = new HtmlTable($"Calibration: groups of samples by predicted probability of {model.ClassNames[model.PositiveClass]}",
+            [new("predicted range"), new("mean predicted", ColumnAlignment.Numeric), new("observed rate", ColumnAlignment.Numeric), new("samples", ColumnAlignment.Numeric)]);
+        foreach (var bin in performance.Calibration)
+            calibration.AddRow($"{Number(bin.LowestPredicted)} to {Number(bin.HighestPredicted)}", Number(bin.MeanPredicted),
+                Number(bin.ObservedPositiveRate), bin.SampleCount.ToString(CultureInfo.InvariantCulture));
+        html.Table(calibration);
+        html.EndSection();
+    }
+
+    private static List<string> Cautions(LockedPanel model, LockedPanelScores scores, LockedPanelPerformance? performance)
+    {
+        var cautions = new List<string>
+        {
+            "Research use only: a locked panel is a candidate for validation, not a diagnostic test.",
+            "Scores are fractions of trees, not calibrated risks; read the calibration table before treating them as probabilities.",
+        };
+        if (model.Threshold is not null)
+            cautions.Add("The threshold was chosen on the discovery cohort; in a cohort with another case mix or assay it may not balance sensitivity and specificity.");
+        int unmeasured = scores.Warnings.Count(w => w.Unmeasured);
+        if (unmeasured > 0)
+            cautions.Add(FormattableString.Invariant($"{unmeasured} marker(s) were measured in no sample of this cohort (see the scale check); the scores rest on the other markers only."));
+        if (scores.Warnings.Count > unmeasured)
+            cautions.Add(FormattableString.Invariant($"{scores.Warnings.Count - unmeasured} marker(s) look measured on another scale than in discovery (see the scale check); their scores may be meaningless until the units match."));
+        if (performance is null)
+            cautions.Add("No outcome was given, so nothing here says how well the panel works on this cohort.");
+        else if (performance.SampleCount < 50)
+            cautions.Add("Fewer than 50 samples: the AUC interval is wide and the calibration groups are coarse.");
+        return cautions;
+    }
+
+    private static string Number(double value) => value.ToString("0.###", CultureInfo.InvariantCulture);
+}
