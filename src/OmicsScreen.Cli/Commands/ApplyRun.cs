@@ -66,7 +66,7 @@ internal static class ApplyRun
             tool = "omicsscreen",
             version = ToolVersion.Current,
             command = "apply",
-            command_line = string.Join(' ', options.CommandLine.Select(ScreenManifest.ShellQuote)),
+            command_line = ShellWords.Join(options.CommandLine),
             started_utc = started.ToString("O"),
             finished_utc = DateTimeOffset.UtcNow.ToString("O"),
             model = new { path = options.ModelPath, sha256 = LockedPanelFile.FileSha256(options.ModelPath), markers = model.MarkerNames, marker_display_names = displayNames, discovery_inputs_sha256 = model.Provenance.InputSha256 },

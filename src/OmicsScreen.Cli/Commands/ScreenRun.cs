@@ -156,7 +156,7 @@ internal static class ScreenRun
         var finished = DateTimeOffset.UtcNow;
         var report = ReportInput(options, loaded, result, folder, started, finished, loadSeconds) with { MergedParts = mergedParts };
         folder.WriteText(ReportFileName, w => w.Write(ScreenReport.Render(report)));
-        var manifest = ScreenManifest.Build(options, loaded, result, started, finished, loadSeconds, folder.WrittenFiles, Warnings(options, loaded), mergedParts);
+        var manifest = ScreenManifestBuilder.Build(options.CommandLine, options.Panel, loaded, result, started, finished, loadSeconds, folder.WrittenFiles, Warnings(options, loaded), mergedParts);
         folder.WriteText(ResultsFolder.ManifestFileName, w => ManifestJson.Write(w, manifest));
 
         if (options.Json) ManifestJson.Write(console.Out, ScreenHeadline.Of(loaded, result, folder.Path));
@@ -179,7 +179,7 @@ internal static class ScreenRun
         }
         int threads = result.Settings.ThreadCount;
         return new ScreenReportInput(loaded.Panel, result, inputs, LayoutText(options.Panel), tables,
-            string.Join(' ', options.CommandLine.Select(ScreenManifest.ShellQuote)), ToolVersion.Current, started, finished, loadSeconds,
+            ShellWords.Join(options.CommandLine), ToolVersion.Current, started, finished, loadSeconds,
             Environment.ProcessorCount, threads, options.ShowSampleIds, Warnings: Warnings(options, loaded, withSampleIds: options.ShowSampleIds),
             Labels: MarkerLabels.Of(loaded));
     }

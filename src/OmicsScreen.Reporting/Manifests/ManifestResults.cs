@@ -1,0 +1,42 @@
+using OmicsScreen.Screening.Screen;
+
+namespace OmicsScreen.Reporting.Manifests;
+
+/// <summary>The headline results of a screen; a value that does not exist (NaN) is null.</summary>
+public sealed record ManifestResults
+{
+    public required int Shortlisted { get; init; }
+    public required string ShortlistRule { get; init; }
+    public int? RecommendedPanelSize { get; init; }
+    public required int LockedPanelSize { get; init; }
+    public double? LockedPanelSelectionAwareEstimate { get; init; }
+    public required int DecoysPassing { get; init; }
+    public double? ExpectedFalseMarkers { get; init; }
+    public double? DecoyFalseDiscoveryRate { get; init; }
+    public double? DecoyFalseDiscoveryBound { get; init; }
+    public required double ExpectedFalseSelectionsBound { get; init; }
+    public required double SelectionStability { get; init; }
+    public double? ShortlistLengthStability { get; init; }
+    public required double ReferenceOutOfBagError { get; init; }
+    public double? ReferenceOutOfBagAuc { get; init; }
+
+    public static ManifestResults Of(ScreenResult result) => new()
+    {
+        Shortlisted = result.Shortlist.Count,
+        ShortlistRule = result.Settings.Options.Rule == Screening.Screen.ShortlistRule.QValue ? "q-value" : "decoy-bound",
+        RecommendedPanelSize = result.PanelSize?.RecommendedSize,
+        LockedPanelSize = result.LockedPanelSize,
+        LockedPanelSelectionAwareEstimate = NullWhenNaN(result.LockedPanelEstimate),
+        DecoysPassing = result.Decoys.DecoysPassing,
+        ExpectedFalseMarkers = NullWhenNaN(result.Decoys.ExpectedFalseMarkers),
+        DecoyFalseDiscoveryRate = NullWhenNaN(result.Decoys.EstimatedFalseDiscoveryRate),
+        DecoyFalseDiscoveryBound = NullWhenNaN(result.Decoys.FalseDiscoveryBound),
+        ExpectedFalseSelectionsBound = result.Stability.ExpectedFalseSelectionsBound,
+        SelectionStability = result.Stability.Stability.Stability,
+        ShortlistLengthStability = NullWhenNaN(result.Stability.ListStability.Stability),
+        ReferenceOutOfBagError = result.ReferenceForest.OutOfBagError,
+        ReferenceOutOfBagAuc = result.ReferenceForest.OutOfBagAuc,
+    };
+
+    private static double? NullWhenNaN(double value) => double.IsNaN(value) ? null : value;
+}
