@@ -8,7 +8,7 @@ namespace OmicsScreen.Data;
 
 /// <summary>
 /// A SHA-256 of what a screen sees of a panel: names, values (as their float bits), cell states,
-/// outcome, cohorts and subjects. Two loads give the same digest exactly when the screen would
+/// outcome (classes, measured values, or follow-up times and events), cohorts and subjects. Two loads give the same digest exactly when the screen would
 /// compute the same thing from them, whatever file format or layout they came from.
 /// </summary>
 public static class PanelDigest
@@ -26,10 +26,27 @@ public static class PanelDigest
             if (matrix.HasUnmeasuredCells(f)) hash.AppendData(MemoryMarshal.AsBytes(matrix.States(f)));
             else AppendInt(hash, -1);
         }
-        var outcome = panel.Outcome;
-        AppendNames(hash, "outcome " + outcome.ColumnName, outcome.ClassNames);
-        hash.AppendData(MemoryMarshal.AsBytes(outcome.SampleClasses));
-        AppendInt(hash, outcome.PositiveClass);
+        switch (panel.Kind)
+        {
+            case OutcomeKind.Measured:
+                // A distinct role text, so a measured outcome never hashes like a class one.
+                AppendText(hash, "measured outcome " + panel.Measured!.ColumnName);
+                hash.AppendData(MemoryMarshal.AsBytes(panel.Measured.Values));
+                break;
+            case OutcomeKind.TimeToEvent:
+                var followUp = panel.FollowUp!;
+                AppendText(hash, "follow-up " + followUp.TimeColumn + " event " + followUp.EventColumn);
+                hash.AppendData(MemoryMarshal.AsBytes(followUp.Times));
+                hash.AppendData(MemoryMarshal.AsBytes(followUp.Events));
+                break;
+            default:
+                // Unchanged for classes, so digests of class panels (and their checkpoints) stay valid.
+                var outcome = panel.Outcome;
+                AppendNames(hash, "outcome " + outcome.ColumnName, outcome.ClassNames);
+                hash.AppendData(MemoryMarshal.AsBytes(outcome.SampleClasses));
+                AppendInt(hash, outcome.PositiveClass);
+                break;
+        }
         AppendGrouping(hash, "cohort", panel.Cohort);
         AppendGrouping(hash, "subject", panel.Subject);
         return hash.GetHashAndReset();

@@ -16,16 +16,10 @@ internal static class CheckRun
         if (json) InspectionPrinter.WriteJson(loaded, console.Out);
         else InspectionPrinter.WriteTable(loaded, console.Out);
         if (CanScreen(loaded)) return ExitCode.Success;
-        console.Error.WriteLine(loaded.Inspection.CanScreen
-            ? "The outcome is described above, but this version screens classes only: screen, grow and apply refuse this panel."
-            : "The panel cannot be screened as it is: see the errors above.");
+        console.Error.WriteLine("The panel cannot be screened as it is: see the errors above.");
         return ExitCode.NotScreenable;
     }
 
-    /// <summary>
-    /// No Error finding and an outcome of classes: `check` gives the exit code that screen, grow
-    /// and apply give for the same files.
-    /// </summary>
-    public static bool CanScreen(LoadedPanel loaded) =>
-        loaded.Inspection.CanScreen && loaded.Panel.Kind == Engine.Panels.OutcomeKind.Classes;
+    /// <summary>No Error finding: `check` gives the exit code that `screen` gives for the same files (any outcome kind).</summary>
+    public static bool CanScreen(LoadedPanel loaded) => loaded.Inspection.CanScreen;
 }

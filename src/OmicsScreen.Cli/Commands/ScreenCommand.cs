@@ -54,7 +54,7 @@ public sealed class ScreenCommand : Command, IHelpLayout
     public Option<int> MinLeaf { get; } = new("--min-leaf")
     {
         HelpName = "N",
-        Description = "Fewest samples a leaf may hold.",
+        Description = "Fewest samples a leaf may hold. Default: 1 for classes (full trees), 5 for measured and time-to-event outcomes.",
         DefaultValueFactory = _ => Defaults.MinLeafSize,
     };
 

@@ -30,6 +30,9 @@ internal static class ScreenFeasibility
         int sampleCount = panel.SampleCount;
         int units = SamplingUnitCount(panel);
         string unitName = panel.Subject is null ? "samples" : $"subjects (--subject {panel.Subject.ColumnName})";
+        if (options.OutcomePermutations > 0 && panel.Kind != OutcomeKind.Classes)
+            throw new CommandInputException(
+                "--outcome-permutations takes class outcomes only in this version; a measured or time-to-event screen's p-values come from the decoys. Leave the option out.");
         if (options.FeaturesPerSplit > panel.FeatureCount)
             throw new CommandInputException(string.Create(CultureInfo.InvariantCulture,
                 $"--features-per-split {options.FeaturesPerSplit} is more than the panel's {panel.FeatureCount} features. Use --features-per-split {panel.FeatureCount} or fewer "
@@ -56,9 +59,13 @@ internal static class ScreenFeasibility
                 $"--curve-folds {options.CurveFolds} leaves too few {unitName} to train on: the panel has {units}, and in "
                 + $"{(options.CurveFolds > units ? "every" : "some")} fold the screen inside it would have fewer than 2 to draw half-samples from. {fix}"));
         }
+        if (options.CurveFolds > 0 && panel.Kind == OutcomeKind.TimeToEvent && options.CurveFolds > panel.FollowUp!.EventCount)
+            throw new CommandInputException(string.Create(CultureInfo.InvariantCulture,
+                $"--curve-folds {options.CurveFolds} is more than the {panel.FollowUp.EventCount} events of the follow-up: some fold would hold no event, so its concordance is undefined. "
+                + $"Use --curve-folds {Math.Max(2, Math.Min(panel.FollowUp.EventCount, 5))} or fewer, or 0 to skip the panel-size curve."));
         if (options.CurveFolds > 0)
         {
-            var (className, classUnits) = SmallestClassUnits(panel);
+            var (className, classUnits) = panel.Kind == OutcomeKind.Classes ? SmallestClassUnits(panel) : ("", int.MaxValue);
             if (options.CurveFolds > classUnits)
                 throw new CommandInputException(string.Create(CultureInfo.InvariantCulture,
                     $"--curve-folds {options.CurveFolds} is more than the {classUnits} {unitName} of the smallest class '{Display(className)}': some fold would test no "
@@ -91,6 +98,10 @@ internal static class ScreenFeasibility
             warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--max-q {options.QValueThreshold} lets up to {options.QValueThreshold:0%} of the shortlist be false markers; treat the list as candidates, or use 0.05 to 0.2."));
         if (options.RedundancyCorrelation < LowRedundancyRho)
             warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--redundancy-rho {options.RedundancyCorrelation} groups markers whose Spearman |rho| is this low, and single linkage chains them: groups may join markers that share little; use 0.5 or more (the default is 0.7)."));
+        if (panel.Kind != OutcomeKind.Classes && options.Balance == BalanceMode.On)
+            warnings.Add("--balance on draws class-balanced trees, and this outcome has no classes: every tree draws a plain bootstrap.");
+        if (panel.Kind != OutcomeKind.Classes && panel.Cohort is not null)
+            warnings.Add("The cohort check covers class outcomes in this version: with a measured or time-to-event outcome the --cohort column is read but its cohort artefacts are not checked.");
         if (options.FeaturesPerSplit > 1 && options.FeaturesPerSplit == panel.FeatureCount)
             warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--features-per-split {options.FeaturesPerSplit} tries every feature at every split: the trees are then alike and the strongest markers mask the others' importance; leave it out for the square root of the feature count (Breiman 2001)."));
         return warnings;

@@ -1,3 +1,5 @@
+using System.Text.Json.Serialization;
+using OmicsScreen.Engine.Panels;
 using OmicsScreen.Data;
 using OmicsScreen.Reporting.Screen;
 using OmicsScreen.Runs.Locking;
@@ -13,13 +15,26 @@ public sealed record ScreenHeadline
 {
     public required string ResultsFolder { get; init; }
     public required string Report { get; init; }
-    public required string LockedPanelFile { get; init; }
+    /// <summary>Where the locked panel is; absent for measured and time-to-event outcomes, whose panels are not written in this version.</summary>
+    [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)]
+    public required string? LockedPanelFile { get; init; }
     public required int Samples { get; init; }
     public required int Features { get; init; }
     public required int Repeats { get; init; }
     public required int TreesPerForest { get; init; }
     public required ulong Seed { get; init; }
+    /// <summary>classes, measured or time_to_event.</summary>
+    public required OutcomeKind OutcomeKind { get; init; }
+
     public required double OutOfBagError { get; init; }
+
+    /// <summary>Out-of-bag R² of a measured outcome; absent for other kinds.</summary>
+    [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)]
+    public double? OutOfBagRSquared { get; init; }
+
+    /// <summary>Out-of-bag Harrell's C of follow-up; absent for other kinds.</summary>
+    [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)]
+    public double? OutOfBagConcordance { get; init; }
     public required double? OutOfBagAuc { get; init; }
     public required double MinFrequency { get; init; }
     public required double MaxQ { get; init; }
@@ -35,7 +50,16 @@ public sealed record ScreenHeadline
 
     /// <summary>One shortlisted marker, with the columns of shortlist.tsv a reader needs first; DisplayName is null when the inputs name none.</summary>
     public sealed record ShortlistedMarker(int Rank, string Feature, string? DisplayName, double SelectionFrequency, double MedianRank,
-        double QValue, string Direction, double Auc, int RedundancyGroup);
+        double QValue, string Direction, double? Auc, int RedundancyGroup)
+    {
+        /// <summary>Spearman's rho with a measured outcome; absent for other kinds.</summary>
+        [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)]
+        public double? SpearmanRho { get; init; }
+
+        /// <summary>Harrell's C of the marker against follow-up; absent for other kinds.</summary>
+        [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)]
+        public double? Concordance { get; init; }
+    }
 
     public static ScreenHeadline Of(LoadedPanel loaded, ScreenResult result, string folder)
     {
@@ -46,19 +70,26 @@ public sealed record ScreenHeadline
         {
             ResultsFolder = folder,
             Report = Path.Combine(folder, ScreenRun.ReportFileName),
-            LockedPanelFile = Path.Combine(folder, Runs.Locking.LockedPanelFile.DefaultFileName),
+            LockedPanelFile = result.Kind == OutcomeKind.Classes ? Path.Combine(folder, Runs.Locking.LockedPanelFile.DefaultFileName) : null,
             Samples = loaded.Panel.SampleCount,
             Features = loaded.Panel.FeatureCount,
             Repeats = result.Settings.RepeatCount,
             TreesPerForest = options.TreesPerForest,
             Seed = options.Seed,
+            OutcomeKind = result.Kind,
             OutOfBagError = result.ReferenceForest.OutOfBagError,
+            OutOfBagRSquared = result.ReferenceForest.OutOfBagRSquared,
+            OutOfBagConcordance = result.ReferenceForest.OutOfBagConcordance,
             OutOfBagAuc = result.ReferenceForest.OutOfBagAuc,
             MinFrequency = options.FrequencyThreshold,
             MaxQ = options.QValueThreshold,
             Shortlist = result.Shortlist.Select(e => new ShortlistedMarker(e.Rank, e.Forest.Feature, NameOrNull(labels, e.Forest.FeatureIndex),
-                e.Forest.SelectionFrequency, e.Forest.MedianRank, e.Forest.QValue, ScreenTables.DirectionText(e.Univariate!), e.Univariate!.Auc,
-                e.RedundancyGroup)).ToList(),
+                e.Forest.SelectionFrequency, e.Forest.MedianRank, e.Forest.QValue, ScreenTables.DirectionOf(e, result), e.Univariate?.Auc,
+                e.RedundancyGroup)
+            {
+                SpearmanRho = e.Measured?.Rho,
+                Concordance = e.FollowUp?.Concordance.Concordance,
+            }).ToList(),
             RecommendedPanelSize = result.PanelSize?.RecommendedSize,
             LockedPanelSize = result.LockedPanelSize,
             LockedPanel = lockedPanel,

@@ -16,7 +16,7 @@ internal static class ScreenOptionChecks
         Require(o.HalfSamplePairs >= 1, "--pairs", o.HalfSamplePairs, "must be at least 1 (each pair gives two half-sample repeats)");
         Require(o.TreesPerForest >= 10, "--trees", o.TreesPerForest, "must be at least 10: fewer trees give no stable out-of-bag estimate");
         Require(o.FeaturesPerSplit >= 0, "--features-per-split", o.FeaturesPerSplit, "must be at least 1 (leave it out for the square root of the feature count)");
-        Require(o.MinLeafSize >= 1, "--min-leaf", o.MinLeafSize, "must be at least 1");
+        Require(o.MinLeafSize >= 0, "--min-leaf", o.MinLeafSize, "must be at least 1 (leave it out for the outcome kind's default)");
         Require(o.RepeatSelectionLevel > 0 && o.RepeatSelectionLevel < 0.5, "--repeat-level", o.RepeatSelectionLevel, "must lie between 0 and 0.5 (for example 0.10)");
         Require(o.SelectedPerRepeat >= 0, "--per-repeat-cap", o.SelectedPerRepeat, "must be at least 1 (leave it out for no cap)");
         Require(o.FrequencyThreshold == 0 || (o.FrequencyThreshold > 0.5 && o.FrequencyThreshold <= 1), "--min-frequency", o.FrequencyThreshold,

@@ -52,7 +52,7 @@ internal static class ScreenRun
         using var folder = ResultsFolder.Open(options.ResolveOutputFolder(), options.Force, ResultsKind.Screen, InputPaths(options.Panel), console.Error);
         var started = DateTimeOffset.UtcNow;
         var watch = Stopwatch.StartNew();
-        var loaded = PanelLoader.Load(options.Panel).EnsureScreenable();
+        var loaded = PanelLoader.Load(options.Panel).EnsureScreenable(classesOnly: false);
         double loadSeconds = watch.Elapsed.TotalSeconds;
         PrintKeepFeaturesNote(console, options);
         ScreenFeasibility.Check(options.Screen, loaded.Panel);
@@ -92,7 +92,7 @@ internal static class ScreenRun
 
     private static int ExecutePart(CliConsole console, ScreenRunOptions options)
     {
-        var loaded = PanelLoader.Load(options.Panel).EnsureScreenable();
+        var loaded = PanelLoader.Load(options.Panel).EnsureScreenable(classesOnly: false);
         PrintKeepFeaturesNote(console, options);
         ScreenFeasibility.Check(options.Screen, loaded.Panel);
         return PartRun.Execute(console, options, loaded, options.Part!.Value);
@@ -146,13 +146,26 @@ internal static class ScreenRun
         folder.WriteText("shortlist.tsv", w => ScreenTables.WriteShortlist(w, result, labels));
         folder.WriteText("features.tsv", w => ScreenTables.WriteFeatures(w, result, labels));
         if (result.PanelSize is { } curve) folder.WriteText("panel_size_curve.tsv", w => ScreenTables.WritePanelSizeCurve(w, curve));
-        folder.WriteText("marker_statistics.tsv", w => UnivariateTableWriter.WriteAllSamples(w, result.Univariate));
+        switch (result.Kind)
+        {
+            case Engine.Panels.OutcomeKind.Measured:
+                folder.WriteText("marker_statistics.tsv", w => OutcomeMarkerTableWriter.WriteMeasured(w, result.MeasuredMarkers));
+                break;
+            case Engine.Panels.OutcomeKind.TimeToEvent:
+                folder.WriteText("marker_statistics.tsv", w => OutcomeMarkerTableWriter.WriteFollowUp(w, result.FollowUpMarkers));
+                break;
+            default:
+                folder.WriteText("marker_statistics.tsv", w => UnivariateTableWriter.WriteAllSamples(w, result.Univariate));
+                break;
+        }
         if (result.Univariate.PerCohort.Count > 0)
             folder.WriteText("marker_statistics_by_cohort.tsv", w => UnivariateTableWriter.WritePerCohort(w, result.Univariate));
         if (result.Cohorts is { } cohorts) CohortTableFiles.Write(folder, cohorts);
         // The shortlist (or its prefix the curve recommends), locked for scoring new cohorts with
         // `apply`; an empty shortlist locks nothing.
-        if (result.LockedPanelSize > 0) folder.WrittenFiles.Add(PanelLocking.LockInto(folder.Path, loaded, result));
+        // Locked panels (and `apply`) are for class outcomes in this version.
+        if (result.LockedPanelSize > 0 && result.Kind == Engine.Panels.OutcomeKind.Classes)
+            folder.WrittenFiles.Add(PanelLocking.LockInto(folder.Path, loaded, result));
         var finished = DateTimeOffset.UtcNow;
         var report = ReportInput(options, loaded, result, folder, started, finished, loadSeconds) with { MergedParts = mergedParts };
         folder.WriteText(ReportFileName, w => w.Write(ScreenReport.Render(report)));
@@ -207,8 +220,16 @@ internal static class ScreenRun
         var o = settings.Options;
         output.WriteLine($"Screened {panel.SampleCount} samples x {panel.FeatureCount} features: {settings.RepeatCount} half-sample repeats, "
             + $"{o.TreesPerForest} trees per forest, seed {o.Seed}.");
-        string auc = result.ReferenceForest.OutOfBagAuc is { } value ? FormattableString.Invariant($", AUC {value:0.000}") : "";
-        output.WriteLine(FormattableString.Invariant($"Forest on all samples: out-of-bag error {result.ReferenceForest.OutOfBagError:0.000}{auc}."));
+        var reference = result.ReferenceForest;
+        if (reference.OutOfBagRSquared is { } rSquared)
+            output.WriteLine(FormattableString.Invariant($"Outcome: {panel.OutcomeColumn}, a measured quantity. Forest on all samples: out-of-bag R² {rSquared:0.000} (mean squared error {reference.OutOfBagError:0.###})."));
+        else if (reference.OutOfBagConcordance is { } concordance)
+            output.WriteLine(FormattableString.Invariant($"Outcome: follow-up '{panel.FollowUp!.TimeColumn}' with event '{panel.FollowUp.EventColumn}' ({panel.FollowUp.EventCount} events). Forest on all samples: out-of-bag concordance {concordance:0.000}."));
+        else
+        {
+            string auc = reference.OutOfBagAuc is { } value ? FormattableString.Invariant($", AUC {value:0.000}") : "";
+            output.WriteLine(FormattableString.Invariant($"Forest on all samples: out-of-bag error {reference.OutOfBagError:0.000}{auc}."));
+        }
         output.WriteLine();
         if (result.Shortlist.Count == 0)
         {
@@ -219,14 +240,21 @@ internal static class ScreenRun
             output.WriteLine($"Shortlist: {result.Shortlist.Count} markers (q <= {o.QValueThreshold}{FrequencyClause(o)})"
                 + (result.Shortlist.Count > PrintedMarkers ? $", top {PrintedMarkers} shown" : ""));
             var labels = MarkerLabels.Of(loaded);
-            var table = new TextTable("rank", "marker", "frequency", "median rank", "q", "direction", "AUC", "group").AlignRight(0, 2, 3, 4, 6, 7);
+            // The single-marker effect in the outcome kind's measure: AUC, Spearman's rho or Harrell's C.
+            string effect = result.Kind switch
+            {
+                Engine.Panels.OutcomeKind.Measured => "rho",
+                Engine.Panels.OutcomeKind.TimeToEvent => "C",
+                _ => "AUC",
+            };
+            var table = new TextTable("rank", "marker", "frequency", "median rank", "q", "direction", effect, "group").AlignRight(0, 2, 3, 4, 6, 7);
             foreach (var e in result.Shortlist.Take(PrintedMarkers))
                 table.Add(e.Rank.ToString(CultureInfo.InvariantCulture), labels.Label(e.Forest.FeatureIndex, e.Forest.Feature),
                     e.Forest.SelectionFrequency.ToString("0.00", CultureInfo.InvariantCulture),
                     e.Forest.MedianRank.ToString("0.0", CultureInfo.InvariantCulture),
                     e.Forest.QValue.ToString("0.###", CultureInfo.InvariantCulture),
-                    ScreenTables.DirectionText(e.Univariate!),
-                    e.Univariate!.Auc.ToString("0.000", CultureInfo.InvariantCulture),
+                    ScreenTables.DirectionOf(e, result),
+                    ScreenTables.EffectOf(e).ToString("0.000", CultureInfo.InvariantCulture),
                     e.RedundancyGroup.ToString(CultureInfo.InvariantCulture));
             table.WriteTo(output);
         }
@@ -237,17 +265,25 @@ internal static class ScreenRun
         {
             var point = curve.Points.First(p => p.PanelSize == curve.RecommendedSize);
             output.WriteLine(FormattableString.Invariant(
-                $"Panel-size curve: {curve.RecommendedSize} markers recommended over the whole grid, selection-aware {curve.Metric} {point.SelectionAwareAuc:0.000} +- {point.SelectionAwareAucStandardError:0.000} ({curve.FoldCount}-fold, selection inside each fold); optimistic {point.OptimisticAuc:0.000} if selection re-uses the samples."));
+                $"Panel-size curve: {curve.RecommendedSize} markers recommended over the whole grid, selection-aware {MetricText(curve.Metric)} {point.SelectionAwareAuc:0.000} +- {point.SelectionAwareAucStandardError:0.000} ({curve.FoldCount}-fold, selection inside each fold); optimistic {point.OptimisticAuc:0.000} if selection re-uses the samples."));
         }
         output.WriteLine(ErrorControlText.LockedPanelSentence(result));
         if (result.Cohorts is { } cohorts) CohortSummary.Print(output, result, cohorts);
         output.WriteLine();
         output.WriteLine($"Results: {folder}");
         output.WriteLine($"Report: {Path.Combine(folder, ReportFileName)}");
-        if (result.LockedPanelSize > 0)
+        if (result.LockedPanelSize > 0 && result.Kind == Engine.Panels.OutcomeKind.Classes)
             output.WriteLine($"Locked panel for `omicsscreen apply`: {Path.Combine(folder, LockedPanelFile.DefaultFileName)}");
         output.WriteLine("A screen is not a diagnostic test: confirm every marker in independent cohorts before any use.");
     }
+
+    /// <summary>The curve's score as the console names it (the classes' names, auc and accuracy, as before).</summary>
+    private static string MetricText(string metric) => metric switch
+    {
+        "r_squared" => "R²",
+        "concordance" => "concordance (Harrell's C)",
+        _ => metric,
+    };
 
     private static string FrequencyClause(ScreenOptions options) =>
         options.FrequencyThreshold > 0 ? FormattableString.Invariant($" and selected in >= {options.FrequencyThreshold * 100:0}% of repeats") : "";

@@ -29,7 +29,7 @@ internal static class MergeRun
             ScreenRun.InputPaths(first.LoadOptions), console.Error);
 
         var watch = Stopwatch.StartNew();
-        var loaded = PanelLoader.Load(first.LoadOptions).EnsureScreenable();
+        var loaded = PanelLoader.Load(first.LoadOptions).EnsureScreenable(classesOnly: false);
         double loadSeconds = watch.Elapsed.TotalSeconds;
         MergeChecks.CheckInputsUnchanged(first, loaded);
         var screen = first.ScreenOptions with { ThreadCount = options.ThreadCount };

@@ -20,6 +20,14 @@ public sealed record ManifestResults
     public required double ReferenceOutOfBagError { get; init; }
     public double? ReferenceOutOfBagAuc { get; init; }
 
+    /// <summary>Out-of-bag R² of a measured outcome's reference forest; absent for other kinds.</summary>
+    [System.Text.Json.Serialization.JsonIgnore(Condition = System.Text.Json.Serialization.JsonIgnoreCondition.WhenWritingNull)]
+    public double? ReferenceOutOfBagRSquared { get; init; }
+
+    /// <summary>Out-of-bag Harrell's C of a time-to-event outcome's reference forest; absent for other kinds.</summary>
+    [System.Text.Json.Serialization.JsonIgnore(Condition = System.Text.Json.Serialization.JsonIgnoreCondition.WhenWritingNull)]
+    public double? ReferenceOutOfBagConcordance { get; init; }
+
     public static ManifestResults Of(ScreenResult result) => new()
     {
         Shortlisted = result.Shortlist.Count,
@@ -36,6 +44,8 @@ public sealed record ManifestResults
         ShortlistLengthStability = NullWhenNaN(result.Stability.ListStability.Stability),
         ReferenceOutOfBagError = result.ReferenceForest.OutOfBagError,
         ReferenceOutOfBagAuc = result.ReferenceForest.OutOfBagAuc,
+        ReferenceOutOfBagRSquared = result.ReferenceForest.OutOfBagRSquared,
+        ReferenceOutOfBagConcordance = result.ReferenceForest.OutOfBagConcordance,
     };
 
     private static double? NullWhenNaN(double value) => double.IsNaN(value) ? null : value;

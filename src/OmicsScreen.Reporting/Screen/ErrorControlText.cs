@@ -71,10 +71,12 @@ public static class ErrorControlText
             return "No panel locked: no marker passed error control, so there is nothing to carry into an assay (any curve shown is for information only).";
         var curve = result.PanelSize;
         string what = locked == listed ? Invariant($"all {listed} shortlisted markers") : Invariant($"the top {locked} of the {listed} shortlisted markers");
+        // Only class panels are written for `apply` in this version; for other kinds the same rule chooses the panel.
+        string label = result.Kind == Engine.Panels.OutcomeKind.Classes ? "Locked panel" : "Panel chosen (no panel file is written for this outcome kind)";
         if (curve is null)
-            return Invariant($"Locked panel: {what} (no panel-size curve was computed, so there is no selection-aware estimate).");
-        string metric = curve.Metric == "auc" ? "AUC" : "accuracy";
-        string text = Invariant($"Locked panel: {what}. Selection-aware {metric} of this procedure: {curve.LockedEstimate:0.000} ± {curve.LockedEstimateStandardError:0.000} (the same screen, rule and size choice repeated inside each of {curve.FoldCount * curve.FoldRepeats} outer folds, the size chosen on the other folds only");
+            return Invariant($"{label}: {what} (no panel-size curve was computed, so there is no selection-aware estimate).");
+        string metric = OutcomeKindReport.MetricName(curve.Metric);
+        string text = Invariant($"{label}: {what}. Selection-aware {metric} of this procedure: {curve.LockedEstimate:0.000} ± {curve.LockedEstimateStandardError:0.000} (the same screen, rule and size choice repeated inside each of {curve.FoldCount * curve.FoldRepeats} outer folds, the size chosen on the other folds only");
         text += curve.FoldsWithoutPanel > 0
             ? Invariant($"; {curve.FoldsWithoutPanel} folds shortlisted nothing and count as chance).")
             : ").";

@@ -26,7 +26,7 @@ public static class ScreenReport
         ArgumentNullException.ThrowIfNull(input);
         var html = new HtmlBuilder().BeginDocument(Title);
         WriteAnswer(html, input);
-        html.Caution("Cautions", ScreenReportText.Cautions(input.Result.Cohorts is not null));
+        html.Caution("Cautions", ScreenReportText.Cautions(input.Result.Cohorts is not null, input.Panel.Kind));
         html.TableOfContents();
         WriteInputs(html, input);
         WriteShortlist(html, input.Result, input);
@@ -35,7 +35,7 @@ public static class ScreenReport
         if (input.Result.Cohorts is { } cohorts) CohortReportSection.Write(html, input.Result, cohorts);
         WriteReproducibility(html, input);
         html.BeginSection("Methods in plain words");
-        html.BulletList(ScreenReportText.MethodNotes);
+        html.BulletList(ScreenReportText.MethodNotesFor(input.Panel.Kind));
         html.EndSection();
         return html.EndDocument();
     }
@@ -62,9 +62,7 @@ public static class ScreenReport
         facts.Add(new("Layout", input.PanelLayout));
         facts.Add(new("Samples", ReportNumber.Integer(panel.SampleCount)));
         facts.Add(new("Features", ReportNumber.Integer(panel.FeatureCount)));
-        facts.Add(new("Outcome column", panel.Outcome.ColumnName));
-        facts.Add(new("Classes (samples)", ClassCounts(panel.Outcome)));
-        facts.Add(new("Positive class", panel.Outcome.ClassNames[panel.Outcome.PositiveClass]));
+        facts.AddRange(OutcomeKindReport.OutcomeFacts(panel));
         facts.Add(new("Cohorts (samples)", panel.Cohort is { } cohort ? cohort.ColumnName + ": " + LevelCounts(cohort) : "none given"));
         if (panel.Subject is { } subject)
             facts.Add(new("Subjects", subject.ColumnName + ": " + ReportNumber.Integer(subject.LevelCount) + " (replicates of a subject are never split)"));
@@ -98,10 +96,7 @@ public static class ScreenReport
             html.Legend("Group: markers sharing a redundancy group are strongly correlated and can stand in for one another. "
                 + "Selection frequency: share of repeats that selected the marker. Median rank [IQR]: its rank over repeats, with quartiles.");
             html.Table(ScreenReportTables.ShortlistStatistics(result, input.FeatureLabels));
-            html.Legend("Direction, log2 ratio (of class medians) and AUC compare the positive class with the rest; the AUC interval is DeLong's. "
-                + "Univariate rank: the marker's position by rank-test p-value among all features. "
-                + "Acts with: for a marker whose evidence comes from the pairwise interaction scan rather than a shift of its own, its partner: "
-                + "the class differs between samples on the same side of both markers' medians and samples on opposite sides, so its direction and AUC alone say little.");
+            html.Legend(OutcomeKindReport.ShortlistLegend(result.Kind));
         }
         html.EndSection();
     }
@@ -109,7 +104,13 @@ public static class ScreenReport
     private static void WriteLockedPanel(HtmlBuilder html, ScreenResult result, ScreenReportInput input)
     {
         html.BeginSection("The locked panel");
-        if (Math.Min(result.LockedPanelSize, result.Shortlist.Count) > 0)
+        if (Math.Min(result.LockedPanelSize, result.Shortlist.Count) > 0 && result.Kind != OutcomeKind.Classes)
+        {
+            html.Paragraph("The size rule chooses these " + ReportNumber.Integer(result.LockedPanelSize) + " markers, the first of the shortlist. For a measured or time-to-event outcome this version "
+                + "writes no panel file: `omicsscreen apply` scores class panels only. The selection-aware estimate above is that of this choice.");
+            html.Table(ScreenReportTables.LockedPanel(result, input.FeatureLabels));
+        }
+        else if (Math.Min(result.LockedPanelSize, result.Shortlist.Count) > 0)
         {
             html.Paragraph(string.Create(CultureInfo.InvariantCulture,
                 $"The panel locked for `omicsscreen apply` ({LockedPanelFileName}) holds these {result.LockedPanelSize} markers, the first of the shortlist."));
@@ -139,7 +140,7 @@ public static class ScreenReport
             "Corrected impurity importance (Nembrini et al. 2018) of the first features in screen order: dot at the mean over repeats, bar ± 1 SD. "
             + "Values near or below 0 are what a feature unrelated to the outcome gets.");
         html.Figure(ScreenReportCharts.PermutationImportance(result),
-            "Out-of-bag permutation importance (Breiman 2001) of the same features: the drop in accuracy when the feature's values are shuffled.");
+            "Out-of-bag permutation importance (Breiman 2001) of the same features: " + OutcomeKindReport.PermutationMeaning(result.Kind) + " when the feature's values are shuffled.");
         html.EndSection();
 
         html.BeginSection("Selection frequency");
@@ -150,15 +151,14 @@ public static class ScreenReport
         if (result.ReferenceForest.ErrorCurve.Count > 0)
         {
             html.BeginSection("Enough trees?");
-            html.Figure(ScreenReportCharts.OutOfBagError(result.ReferenceForest),
-                "Out-of-bag error of the forest grown on all samples as trees are added. A flat end says the forests have enough trees.");
+            html.Figure(ScreenReportCharts.OutOfBagError(result.ReferenceForest, result.Kind), OutcomeKindReport.ErrorCurveCaption(result.Kind));
             html.EndSection();
         }
 
         if (result.PanelSize is { } curve)
         {
             html.BeginSection("How many markers to measure");
-            html.Figure(ScreenReportCharts.PanelSize(curve, input.Panel.Outcome, result.LockedPanelSize),
+            html.Figure(ScreenReportCharts.PanelSize(curve, input.Panel, result.LockedPanelSize),
                 "Solid line: selection-aware estimate, markers chosen afresh inside each outer training part (Ambroise & McLachlan 2002). "
                 + "Dashed line: optimistic estimate, markers chosen once on all samples. Shading: ± 1 SD over outer folds. "
                 + "The diamond marks the recommended size: the smallest within one standard error of the best (Breiman et al. 1984). "
@@ -169,7 +169,26 @@ public static class ScreenReport
         var markers = result.Shortlist.Count > 0
             ? ShortlistFeatures(result, ScreenReportCharts.StripMarkerLimit)
             : [];
-        if (markers.Count > 0)
+        if (markers.Count > 0 && result.Kind == OutcomeKind.Measured)
+        {
+            html.BeginSection("The top markers against the outcome");
+            html.Paragraph("Each dot is one sample. Samples with the marker below its detection limit are drawn apart, at the limit (or at the smallest measured value when the file gave no limit). Missing values are left out.");
+            foreach (var feature in markers)
+                html.Figure(OutcomeKindReport.MarkerAgainstMeasured(input.Panel, feature, input.FeatureLabels.Label(feature.FeatureIndex, feature.Feature)),
+                    "Values of " + input.FeatureLabels.Label(feature.FeatureIndex, feature.Feature) + " against " + input.Panel.OutcomeColumn + ".");
+            html.EndSection();
+        }
+        else if (markers.Count > 0 && result.Kind == OutcomeKind.TimeToEvent)
+        {
+            html.BeginSection("Survival by the top markers");
+            html.Paragraph("Kaplan-Meier curves of the samples at or above each marker's median and of those below it (below-detection samples count as below; missing values are left out), "
+                + "with the log-rank test of the two halves. A split at the median is for reading only: the screen used the marker's whole range.");
+            foreach (var feature in markers)
+                html.Figure(OutcomeKindReport.MarkerSurvival(input.Panel, feature, input.FeatureLabels.Label(feature.FeatureIndex, feature.Feature)),
+                    "Survival by the high and low halves of " + input.FeatureLabels.Label(feature.FeatureIndex, feature.Feature) + ".");
+            html.EndSection();
+        }
+        else if (markers.Count > 0)
         {
             html.BeginSection("Values of the top markers by class");
             html.Paragraph("Each dot is one sample; boxes show quartiles and the median. Hollow markers are samples below the detection limit: "
@@ -212,20 +231,34 @@ public static class ScreenReport
             string features = components.FeaturesUsed < panel.FeatureCount
                 ? string.Create(CultureInfo.InvariantCulture, $"the {components.FeaturesUsed} features of largest variance")
                 : "all features";
-            html.Figure(ScreenReportCharts.SampleMap(components, "Samples by class", panel.Outcome.ClassNames, panel.Outcome.SampleClasses),
+            var (title, names, levels, colouring) = OutcomeKindReport.SampleColouring(panel);
+            html.Figure(ScreenReportCharts.SampleMap(components, title, names, levels),
                 "Each dot is one sample, placed by the first two principal components of " + features + " (each standardised; a missing cell at the feature's mean, "
-                + "a below-detection cell at its smallest measured value), coloured by class. Classes apart here differ in many features at once.");
+                + "a below-detection cell at its smallest measured value), " + colouring);
             if (panel.Cohort is { } cohort)
                 html.Figure(ScreenReportCharts.SampleMap(components, "Samples by cohort", cohort.LevelNames, cohort.SampleLevels),
                     "The same map coloured by cohort: cohorts apart here differ in many features at once (a batch or centre effect), whatever the class.");
             html.EndSection();
         }
 
-        html.BeginSection("Forest order against single-marker AUC");
-        html.Figure(ScreenReportCharts.RankAgainstAuc(result),
-            "Every feature (up to " + ReportNumber.Integer(ScreenReportCharts.RankAucFeatureLimit) + ") by its position in the screen order (log axis) and its single-marker AUC. "
-            + "Features far from 0.5 near the top agree with a one-marker test; features near 0.5 high in the order carry signal only together with others.");
-        html.EndSection();
+        if (result.Kind == OutcomeKind.Classes)
+        {
+            html.BeginSection("Forest order against single-marker AUC");
+            html.Figure(ScreenReportCharts.RankAgainstAuc(result),
+                "Every feature (up to " + ReportNumber.Integer(ScreenReportCharts.RankAucFeatureLimit) + ") by its position in the screen order (log axis) and its single-marker AUC. "
+                + "Features far from 0.5 near the top agree with a one-marker test; features near 0.5 high in the order carry signal only together with others.");
+            html.EndSection();
+        }
+        else
+        {
+            bool measured = result.Kind == OutcomeKind.Measured;
+            html.BeginSection(measured ? "Forest order against single-marker rho" : "Forest order against single-marker concordance");
+            html.Figure(OutcomeKindReport.RankAgainstEffect(result),
+                "Every feature (up to " + ReportNumber.Integer(ScreenReportCharts.RankAucFeatureLimit) + ") by its position in the screen order (log axis) and its single-marker "
+                + (measured ? "Spearman rho with the outcome. Features far from 0" : "Harrell's C. Features far from 0.5")
+                + " near the top agree with a one-marker test; features near no effect high in the order carry signal only in shapes or together with others.");
+            html.EndSection();
+        }
 
         if (ScreenReportCharts.ImportanceAgainstDecoys(result) is { } decoys)
         {
@@ -296,12 +329,6 @@ public static class ScreenReport
         return cells > 0 ? (missing / cells, belowDetection / cells) : (0, 0);
     }
 
-    private static string ClassCounts(ClassOutcome outcome)
-    {
-        var parts = new string[outcome.ClassCount];
-        for (int c = 0; c < parts.Length; c++) parts[c] = outcome.ClassNames[c] + " (" + ReportNumber.Integer(outcome.ClassCounts[c]) + ")";
-        return string.Join(", ", parts);
-    }
 
     private static string LevelCounts(SampleGrouping grouping)
     {

@@ -76,7 +76,7 @@ internal static class ScreenReportCharts
             threshold > 0 ? [new ReferenceLine(ChartAxis.Y, threshold, Invariant($"Shortlist threshold {threshold:0.##}"))] : []);
     }
 
-    public static SvgImage OutOfBagError(ReferenceForestSummary forest)
+    public static SvgImage OutOfBagError(ReferenceForestSummary forest, OutcomeKind kind = OutcomeKind.Classes)
     {
         var curve = forest.ErrorCurve;
         var trees = new double[curve.Count];
@@ -87,20 +87,20 @@ internal static class ScreenReportCharts
             errors[t] = curve[t];
         }
         return XYChart.Render(
-            new XYChartOptions("Out-of-bag error of the forest on all samples", TreesAxisLabel, ErrorAxisLabel, YMinimum: 0),
+            new XYChartOptions("Out-of-bag error of the forest on all samples", TreesAxisLabel, OutcomeKindReport.ErrorAxisLabel(kind), YMinimum: 0),
             [new XYSeries("Out-of-bag error", trees, errors)]);
     }
 
     /// <summary>The y-axis label of the panel-size curve: AUC for two classes, accuracy for more.</summary>
     public static string PanelSizeScoreLabel(PanelSizeCurve curve) =>
-        curve.Metric == "auc" ? "Held-out AUC (mean over outer folds)" : "Held-out accuracy (mean over outer folds)";
+        "Held-out " + OutcomeKindReport.AxisMetricName(curve.Metric) + " (mean over outer folds)";
 
     /// <summary>
     /// The panel-size curve on a log-spaced size axis (the sizes grow roughly geometrically), with
     /// the level a panel without information reaches (AUC 0.5, or the largest class's share for
     /// accuracy) and the size of the locked panel.
     /// </summary>
-    public static SvgImage PanelSize(PanelSizeCurve curve, ClassOutcome outcome, int lockedPanelSize)
+    public static SvgImage PanelSize(PanelSizeCurve curve, Panel panel, int lockedPanelSize)
     {
         int count = curve.Points.Count;
         var sizes = new double[count];
@@ -126,9 +126,10 @@ internal static class ScreenReportCharts
         var markers = double.IsFinite(recommendedScore)
             ? new[] { new PointMarker(curve.RecommendedSize, recommendedScore, Invariant($"Recommended size: {curve.RecommendedSize}")) }
             : [];
-        var lines = new List<ReferenceLine> { new(ChartAxis.Y, ChanceLevel(curve, outcome), ChanceLabel(curve)) };
+        var lines = new List<ReferenceLine> { new(ChartAxis.Y, OutcomeKindReport.ChanceLevel(curve, panel), OutcomeKindReport.ChanceLabel(curve)) };
         if (lockedPanelSize > 0)
-            lines.Add(new ReferenceLine(ChartAxis.X, lockedPanelSize, Invariant($"Locked panel: {lockedPanelSize} markers")));
+            lines.Add(new ReferenceLine(ChartAxis.X, lockedPanelSize, panel.Kind == OutcomeKind.Classes
+                ? Invariant($"Locked panel: {lockedPanelSize} markers") : Invariant($"Chosen panel: {lockedPanelSize} markers")));
         return XYChart.Render(
             new XYChartOptions("Panel-size curve: selection-aware and optimistic estimates", PanelSizeAxisLabel, PanelSizeScoreLabel(curve), Width: 820,
                 XScale: AxisScaleKind.Log10, YMaximum: 1),
@@ -139,18 +140,6 @@ internal static class ScreenReportCharts
             lines,
             markers);
     }
-
-    /// <summary>What guessing scores: AUC 0.5, or for accuracy the share of the largest class (always calling it).</summary>
-    public static double ChanceLevel(PanelSizeCurve curve, ClassOutcome outcome)
-    {
-        if (curve.Metric == "auc") return 0.5;
-        int largest = 0;
-        foreach (int count in outcome.ClassCounts) largest = Math.Max(largest, count);
-        return (double)largest / outcome.SampleCount;
-    }
-
-    public static string ChanceLabel(PanelSizeCurve curve) =>
-        curve.Metric == "auc" ? "Chance (AUC 0.5)" : "Chance (always the largest class)";
 
     public const string FirstComponentAxisLabel = "First principal component";
     public const string SecondComponentAxisLabel = "Second principal component";

@@ -8,7 +8,21 @@ namespace OmicsScreen.Reporting.Screen;
 internal static class ScreenReportText
 {
     /// <summary>The cautions box; the last one says whether the cohort check ran.</summary>
-    public static IReadOnlyList<string> Cautions(bool cohortsChecked) =>
+    public static IReadOnlyList<string> Cautions(bool cohortsChecked, OutcomeKind kind = OutcomeKind.Classes)
+    {
+        var cautions = new List<string>(ClassCautions(cohortsChecked));
+        if (kind == OutcomeKind.TimeToEvent)
+            cautions.Add("Concordance says how well markers rank patients by risk; it does not show that any predicted risk is right at a given time (calibration over time is not measured here). "
+                + "Prognostic claims need follow-up in an independent cohort, with the same event definition and comparable treatment.");
+        if (kind == OutcomeKind.Measured)
+            cautions.Add("R² here is how much of the outcome's spread the markers explain in these samples' held-out parts; it depends on how much the outcome varies in the cohort, "
+                + "so it does not carry over to a cohort with a narrower or wider range.");
+        if (kind != OutcomeKind.Classes && cohortsChecked is false)
+            cautions.Add("The cohort check covers class outcomes in this version; with a measured or time-to-event outcome a --cohort column is not yet checked for cohort artefacts.");
+        return cautions;
+    }
+
+    private static IReadOnlyList<string> ClassCautions(bool cohortsChecked) =>
     [
         "Research use only. A screen ranks candidates for a validation study; it is not a diagnostic test and says nothing about any individual patient.",
         "Every shortlisted marker needs confirmation in independent cohorts, measured with the assay that will be used later, before any further use.",
@@ -21,6 +35,32 @@ internal static class ScreenReportText
     public const string NoCohortCaution =
         "A marker that tracks a batch, centre or cohort rather than the outcome is not a marker. No cohort column was given, so batch and cohort artefacts were not checked; "
         + "if the samples come from several centres, batches or cohorts, rerun with --cohort naming that column.";
+
+    /// <summary>The method notes in the words of the outcome kind.</summary>
+    public static IReadOnlyList<string> MethodNotesFor(OutcomeKind kind) => kind switch
+    {
+        OutcomeKind.Measured =>
+        [
+            MethodNotes[0],
+            "Forests. Regression forests (Breiman 2001): each split lowers the squared error of the outcome most, each leaf predicts the mean of its samples (CART, Breiman, Friedman, Olshen & Stone 1984); leaves keep at least 5 samples unless set otherwise.",
+            "Corrected impurity importance. Each forest measures how much a feature's splits reduce the squared error (variance) of the outcome, corrected so that features with many distinct values or none of the signal are not favoured (Nembrini, König & Wright 2018).",
+            "Permutation importance. The rise in mean squared error on the samples a tree did not see (out-of-bag) when one feature's values are shuffled (Breiman 2001).",
+            MethodNotes[3], MethodNotes[4], MethodNotes[5],
+            MethodNotes[6].Replace("judged on the held-out part", "judged on the held-out part by R² (one minus the squared error over the held-out samples' own spread)", StringComparison.Ordinal),
+            "Single-marker statistics. Spearman's rho with the outcome, its t-approximation p-value and a 95% interval on Fisher's z with Bonett & Wright's (2000) variance; q-values by Benjamini & Hochberg (1995). Below-detection cells rank lowest. The rank test combined with the forest's evidence is the same Spearman test.",
+        ],
+        OutcomeKind.TimeToEvent =>
+        [
+            MethodNotes[0],
+            "Forests. Random survival forests (Ishwaran, Kogalur, Blackstone & Lauer 2008): each split separates the follow-up of its two sides most by the log-rank statistic, each leaf holds the Nelson-Aalen cumulative hazard of its samples, and a sample's risk is the forest's ensemble mortality; leaves keep at least 5 samples unless set otherwise.",
+            "Corrected impurity importance. Each forest sums the log-rank statistics of a feature's splits, corrected with permuted copies so that features with many distinct values or none of the signal are not favoured (Nembrini, König & Wright 2018).",
+            "Permutation importance. The drop in concordance (Harrell's C) on the samples a tree did not see (out-of-bag) when one feature's values are shuffled (Breiman 2001; Ishwaran et al. 2008).",
+            MethodNotes[3], MethodNotes[4], MethodNotes[5],
+            MethodNotes[6].Replace("judged on the held-out part", "judged on the held-out part by Harrell's C of the forest's risk", StringComparison.Ordinal),
+            "Single-marker statistics. Harrell's C of the marker as a risk score with its infinitesimal-jackknife interval (Harrell et al. 1982), and a single-marker Cox model (Cox 1972; Efron 1977 ties) giving the hazard ratio per SD with its Wald interval and the score-test p-value; q-values by Benjamini & Hochberg (1995). The rank test combined with the forest's evidence is the Cox score test on the marker's ranks.",
+        ],
+        _ => MethodNotes,
+    };
 
     public static IReadOnlyList<string> MethodNotes { get; } =
     [
@@ -40,9 +80,7 @@ internal static class ScreenReportText
         string rule = options.FrequencyThreshold > 0
             ? Invariant($"selected in at least {options.FrequencyThreshold * 100:0.#}% of {result.Settings.RepeatCount} half-sample repeats with q ≤ {options.QValueThreshold:0.###}")
             : Invariant($"q ≤ {options.QValueThreshold:0.###}");
-        string forest = result.ReferenceForest.OutOfBagAuc is { } auc
-            ? Invariant($" A forest on all samples and features has out-of-bag error {result.ReferenceForest.OutOfBagError:0.000} and AUC {auc:0.000}.")
-            : Invariant($" A forest on all samples and features has out-of-bag error {result.ReferenceForest.OutOfBagError:0.000}.");
+        string forest = OutcomeKindReport.ReferenceForestSentence(result.ReferenceForest);
         if (result.Shortlist.Count == 0)
             return Invariant($"No marker was shortlisted among {panel.FeatureCount} features measured on {panel.SampleCount} samples: none was {rule}.") + forest;
         string markers = result.Shortlist.Count == 1 ? "1 marker" : Invariant($"{result.Shortlist.Count} markers");
@@ -51,7 +89,7 @@ internal static class ScreenReportText
 
     public static string PanelSizeAnswer(PanelSizeCurve curve, ScreenOptions options)
     {
-        string metric = curve.Metric == "auc" ? "AUC" : "accuracy";
+        string metric = OutcomeKindReport.MetricName(curve.Metric);
         PanelSizePoint? recommended = null;
         foreach (var point in curve.Points)
             if (point.PanelSize == curve.RecommendedSize) recommended = point;

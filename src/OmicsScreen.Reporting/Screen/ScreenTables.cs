@@ -162,6 +162,20 @@ public static class ScreenTables
         }
     }
 
+    /// <summary>A shortlisted marker's direction in words (the positive class's contrast for classes).</summary>
+    public static string DirectionOf(ShortlistEntry entry, ScreenResult result)
+    {
+        ArgumentNullException.ThrowIfNull(entry);
+        return entry.Univariate is { } row ? DirectionText(row) : DirectionOf(result, entry.Forest.FeatureIndex);
+    }
+
+    /// <summary>A shortlisted marker's single-marker effect: its AUC, Spearman's rho or Harrell's C.</summary>
+    public static double EffectOf(ShortlistEntry entry)
+    {
+        ArgumentNullException.ThrowIfNull(entry);
+        return entry.Measured?.Rho ?? entry.FollowUp?.Concordance.Concordance ?? entry.Univariate!.Auc;
+    }
+
     /// <summary>A feature's direction in words for any outcome kind (for classes, against the first contrast).</summary>
     public static string DirectionOf(ScreenResult result, int featureIndex)
     {

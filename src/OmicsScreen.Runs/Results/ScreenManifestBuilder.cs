@@ -1,3 +1,4 @@
+using OmicsScreen.Engine.Panels;
 using OmicsScreen.Data;
 using OmicsScreen.Reporting.Manifests;
 using OmicsScreen.Reporting.Screen;
@@ -13,7 +14,7 @@ public static class ScreenManifestBuilder
         int mergedParts = 0)
     {
         var panel = loaded.Panel;
-        var outcome = panel.Outcome;
+        bool classes = panel.Kind == OutcomeKind.Classes;
         var seconds = result.StageSeconds.ToDictionary(kv => StageKey(kv.Key), kv => Math.Round(kv.Value, 3));
         seconds["loading"] = Math.Round(loadSeconds, 3);
         return new ScreenManifest
@@ -31,9 +32,18 @@ public static class ScreenManifestBuilder
             {
                 Samples = panel.SampleCount,
                 Features = panel.FeatureCount,
-                OutcomeColumn = outcome.ColumnName,
-                Classes = outcome.ClassNames.Select((name, c) => new ManifestClass(name, outcome.ClassCounts[c])).ToArray(),
-                PositiveClass = outcome.ClassNames[outcome.PositiveClass],
+                OutcomeKind = panel.Kind switch
+                {
+                    OutcomeKind.Measured => "measured",
+                    OutcomeKind.TimeToEvent => "time_to_event",
+                    _ => "classes",
+                },
+                OutcomeColumn = panel.OutcomeColumn,
+                EventColumn = panel.FollowUp?.EventColumn,
+                Events = panel.FollowUp?.EventCount,
+                Censored = panel.FollowUp is { } followUp ? followUp.SampleCount - followUp.EventCount : null,
+                Classes = classes ? panel.Outcome.ClassNames.Select((name, c) => new ManifestClass(name, panel.Outcome.ClassCounts[c])).ToArray() : null,
+                PositiveClass = classes ? panel.Outcome.ClassNames[panel.Outcome.PositiveClass] : null,
                 CohortColumn = panel.Cohort?.ColumnName,
                 SubjectColumn = panel.Subject?.ColumnName,
                 FeaturesInRows = panelOptions.Layout == PanelLayout.FeaturesInRows,

@@ -20,7 +20,11 @@ public sealed record ScreenOptions
     /// <summary>Features tried at each split; 0 means floor(sqrt(features)), common practice since Breiman 2001.</summary>
     public int FeaturesPerSplit { get; init; }
 
-    public int MinLeafSize { get; init; } = 1;
+    /// <summary>
+    /// Fewest samples a leaf may hold; 0 means the outcome kind's default (<see cref="ScreenSettings.DefaultMinLeafSize"/>):
+    /// 1 for classes (full trees, Breiman 2001), 5 for measured and time-to-event outcomes.
+    /// </summary>
+    public int MinLeafSize { get; init; }
 
     /// <summary>Class-balanced drawing for each tree (Chen, Liaw &amp; Breiman 2004).</summary>
     public BalanceMode Balance { get; init; } = BalanceMode.Auto;
@@ -101,7 +105,7 @@ public sealed record ScreenOptions
         Require(HalfSamplePairs >= 1, "The number of half-sample pairs must be at least 1.");
         Require(TreesPerForest >= 10, "A forest needs at least 10 trees.");
         Require(FeaturesPerSplit >= 0, "Features per split must be positive (or 0 for the default).");
-        Require(MinLeafSize >= 1, "The minimum leaf size must be at least 1.");
+        Require(MinLeafSize >= 0, "The minimum leaf size must be at least 1 (or 0 for the outcome kind's default).");
         Require(RepeatSelectionLevel > 0 && RepeatSelectionLevel < 0.5, "The per-repeat selection level must lie in (0, 0.5).");
         Require(SelectedPerRepeat >= 0, "The cap on features selected per repeat must be positive (or 0 for none).");
         Require(FrequencyThreshold == 0 || (FrequencyThreshold > 0.5 && FrequencyThreshold <= 1), "The frequency threshold must be 0 (no filter) or lie in (0.5, 1].");

@@ -30,6 +30,9 @@ public sealed record ScreenSettings
     public required int OutcomePermutationForestFeaturesPerSplit { get; init; }
 
     public required bool ClassBalanced { get; init; }
+
+    /// <summary>The smallest leaf of every forest of the screen: the option's value, or the outcome kind's default.</summary>
+    public required int MinLeafSize { get; init; }
     public required int DecoyCount { get; init; }
 
     /// <summary>Worker threads of every step: the option, or every core for 0, resolved once here.</summary>
@@ -72,6 +75,7 @@ public sealed record ScreenSettings
             CorrectedForestFeaturesPerSplit = tree.ResolveFeaturesPerSplit(2 * featureCount + decoys),
             OutcomePermutationForestFeaturesPerSplit = options.OutcomePermutations > 0 ? tree.ResolveFeaturesPerSplit(2 * featureCount) : 0,
             ClassBalanced = balanced,
+            MinLeafSize = MinLeafFor(options, panel.Kind),
             DecoyCount = decoys,
             ThreadCount = WorkerThreads.Resolve(options.ThreadCount),
             // The scan counts 2 x 2 tables against classes; it has no counterpart for other kinds yet.
@@ -92,6 +96,24 @@ public sealed record ScreenSettings
         };
     }
 
+    /// <summary>
+    /// The smallest leaf when the option leaves it to the outcome kind. Classes grow full trees
+    /// (leaf 1, Breiman 2001). Measured and time-to-event forests use leaves of at least 5, the
+    /// regression default of Breiman's own forests (nodesize 5, as in Liaw &amp; Wiener's port; from
+    /// memory) and between the survival defaults of ranger (3) and randomForestSRC (15; from memory).
+    /// Measured on a planted panel (200 training and 1,000 test samples, 30 features, 150 trees): a
+    /// one-marker regression panel scored held-out R² 0.02 with leaf 1 and 0.25 with leaf 5, a
+    /// one-marker survival panel C 0.60 and 0.64; the whole-panel forests lost at most 0.05 R² and
+    /// gained 0.01 C. Single-sample leaves make a mean or a hazard of one sample, which is noise.
+    /// </summary>
+    public static int DefaultMinLeafSize(OutcomeKind kind) => kind == OutcomeKind.Classes ? 1 : 5;
+
+    public static int MinLeafFor(ScreenOptions options, OutcomeKind kind)
+    {
+        ArgumentNullException.ThrowIfNull(options);
+        return options.MinLeafSize > 0 ? options.MinLeafSize : DefaultMinLeafSize(kind);
+    }
+
     /// <summary>Decoys of the run: the number asked for, or automatically one per feature within the floor and the ceiling.</summary>
     public static int DecoyCountFor(ScreenOptions options, int featureCount)
     {
@@ -110,7 +132,7 @@ public sealed record ScreenSettings
         Tree = new TreeOptions
         {
             FeaturesPerSplit = featuresPerSplit ?? (Options.FeaturesPerSplit > 0 ? Options.FeaturesPerSplit : null),
-            MinLeafSize = Options.MinLeafSize,
+            MinLeafSize = MinLeafSize,
         },
         Sampling = new SamplingOptions
         {

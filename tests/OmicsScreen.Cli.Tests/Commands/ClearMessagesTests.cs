@@ -92,12 +92,12 @@ public sealed class ClearMessagesTests : IDisposable
     }
 
     [Fact]
-    public void A_numeric_outcome_is_read_as_measured_and_screen_refuses_it_in_one_sentence()
+    public void A_numeric_outcome_is_read_as_measured_and_grow_refuses_it_in_one_sentence()
     {
         var rows = new System.Text.StringBuilder("sample_id,age,f1,f2\n");
         for (int s = 0; s < 60; s++) rows.Append(System.FormattableString.Invariant($"s{s},{40 + s * 0.5},{s % 7},{s % 5}\n"));
         string matrix = _folder.File("m.csv", rows.ToString());
-        var run = CliHarness.Run("screen", matrix, "--outcome", "age", "--out", Path.Combine(_folder.Path, "out"), "--quiet");
+        var run = CliHarness.Run("grow", matrix, "--outcome", "age", "--importance-out", Path.Combine(_folder.Path, "out", "importance.tsv"));
         // The file was read; the panel cannot be screened as it is: exit code 3, as `check` gives for the same files.
         Assert.Equal(ExitCode.NotScreenable, run.ExitCode);
         var lines = Lines(run.Error);

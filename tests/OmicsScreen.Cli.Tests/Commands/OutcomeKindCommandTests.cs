@@ -6,8 +6,8 @@ using OmicsScreen.TestSupport;
 namespace OmicsScreen.Cli.Tests.Commands;
 
 /// <summary>
-/// `check` on a measured and a time-to-event outcome (console and JSON), and the refusal of the
-/// verbs that only handle classes. Expected summaries come from R: the Kaplan-Meier and reverse
+/// `check` and `screen` on a measured and a time-to-event outcome (console and JSON), and the
+/// refusal of the verbs that only handle classes (grow, apply). Expected summaries come from R: the Kaplan-Meier and reverse
 /// Kaplan-Meier medians of reference/survival/survival_reference.json (survival 3.5.3) and the
 /// type-7 quartiles of reference/survival/outcome_quartiles.json (make_outcome_quartiles.R).
 /// </summary>
@@ -48,8 +48,8 @@ public sealed class OutcomeKindCommandTests : IDisposable
         var expected = DataSet("outcome_quartiles.json", "invented_continuous");
 
         var json = CliHarness.Run("check", matrix, "--samples", sheet, "--outcome", "x", "--json");
-        // Described, but refused with the code that screen gives for the same files.
-        Assert.Equal(ExitCode.NotScreenable, json.ExitCode);
+        // Described, and screenable: the exit code that screen gives for the same files.
+        Assert.Equal(ExitCode.Success, json.ExitCode);
         using var document = JsonDocument.Parse(json.Out);
         var outcome = document.RootElement.GetProperty("outcome");
         Assert.Equal("measured", outcome.GetProperty("kind").GetString());
@@ -60,11 +60,11 @@ public sealed class OutcomeKindCommandTests : IDisposable
         foreach (var key in new[] { "min", "lower_quartile", "median", "upper_quartile", "max" })
             Assert.Equal(expected.GetProperty(key).GetDouble(), measured.GetProperty(key).GetDouble(), 12);
         Assert.Equal("measured", document.RootElement.GetProperty("inspection").GetProperty("outcome_kind").GetString());
-        Assert.False(document.RootElement.GetProperty("can_screen").GetBoolean());
+        Assert.True(document.RootElement.GetProperty("can_screen").GetBoolean());
 
         var console = CliHarness.Run("check", matrix, "--samples", sheet, "--outcome", "x");
-        Assert.Equal(ExitCode.NotScreenable, console.ExitCode);
-        Assert.Contains("this version screens classes only", console.Error);
+        Assert.Equal(ExitCode.Success, console.ExitCode);
+        Assert.Contains("Verdict: the panel can be screened (in this version `grow` and `apply` take panels of classes only).", console.Out);
         Assert.Contains("x: a measured quantity (--outcome-kind classes reads its values as classes instead)", console.Out);
         Assert.Contains("120 samples, 0 missing; min -1.879, quartiles -0.60225 / -0.0325 / 0.69175, max 2.639", console.Out);
     }
@@ -83,7 +83,7 @@ public sealed class OutcomeKindCommandTests : IDisposable
         int tied = set.GetProperty("km_n_event").EnumerateArray().Count(e => e.GetInt32() > 1);
 
         var json = CliHarness.Run("check", matrix, "--samples", sheet, "--follow-up", "time", "--event", "status", "--json");
-        Assert.Equal(ExitCode.NotScreenable, json.ExitCode);
+        Assert.Equal(ExitCode.Success, json.ExitCode);
         using var document = JsonDocument.Parse(json.Out);
         var outcome = document.RootElement.GetProperty("outcome");
         Assert.Equal("time_to_event", outcome.GetProperty("kind").GetString());
@@ -97,8 +97,8 @@ public sealed class OutcomeKindCommandTests : IDisposable
         Assert.Equal(set.GetProperty("reverse_km_median").GetDouble(), followUp.GetProperty("median_follow_up").GetDouble(), 12);
 
         var console = CliHarness.Run("check", matrix, "--samples", sheet, "--follow-up", "time", "--event", "status");
-        Assert.Equal(ExitCode.NotScreenable, console.ExitCode);
-        Assert.Contains("Verdict: the panel reads cleanly, but this version screens, grows and applies panels of classes only.", console.Out);
+        Assert.Equal(ExitCode.Success, console.ExitCode);
+        Assert.Contains("Verdict: the panel can be screened (in this version `grow` and `apply` take panels of classes only).", console.Out);
         Assert.Contains("time to event: follow-up 'time', event 'status'", console.Out);
         Assert.Contains(FormattableString.Invariant($"{events} events, {samples - events} censored, of {samples} samples; {tied} event times shared by several events"), console.Out);
         Assert.Contains(FormattableString.Invariant($"{set.GetProperty("km_median").GetDouble():G6} (Kaplan-Meier)"), console.Out);
@@ -118,7 +118,8 @@ public sealed class OutcomeKindCommandTests : IDisposable
         var run = CliHarness.Run("check", _folder.File("m.csv", matrix.ToString()), "--samples", _folder.File("s.csv", sheet.ToString()),
             "--follow-up", "months", "--event", "died");
 
-        Assert.Equal(ExitCode.NotScreenable, run.ExitCode);
+        // 12 events: screenable, with the few-events warning (fewer than 50).
+        Assert.Equal(ExitCode.Success, run.ExitCode);
         Assert.Contains("not reached (Kaplan-Meier)", run.Out);
         Assert.Contains("few-events", run.Out);
     }
@@ -143,21 +144,18 @@ public sealed class OutcomeKindCommandTests : IDisposable
     }
 
     [Theory]
-    [InlineData("screen", "measured")]
-    [InlineData("grow", "measured")]
-    [InlineData("screen", "time")]
-    [InlineData("grow", "time")]
-    public void Screen_and_grow_refuse_an_outcome_that_is_not_classes_and_write_nothing(string verb, string kind)
+    [InlineData("measured")]
+    [InlineData("time")]
+    public void Grow_refuses_an_outcome_that_is_not_classes_and_writes_nothing(string kind)
     {
         var (matrix, sheet) = Files(DataSet("survival_reference.json", "invented_continuous"));
         string output = Path.Combine(_folder.Path, "out");
         string[] outcome = kind == "measured" ? ["--outcome", "x"] : ["--follow-up", "time", "--event", "status"];
-        string[] outputOption = verb == "screen" ? ["--out", output, "--quiet"] : ["--importance-out", Path.Combine(output, "importance.tsv")];
 
-        var run = CliHarness.Run([verb, matrix, "--samples", sheet, .. outcome, .. outputOption]);
+        var run = CliHarness.Run(["grow", matrix, "--samples", sheet, .. outcome, "--importance-out", Path.Combine(output, "importance.tsv")]);
 
         Assert.Equal(ExitCode.NotScreenable, run.ExitCode);
-        Assert.Contains("this version screens, grows and applies panels of classes only", run.Error);
+        Assert.Contains("in this version `grow` and `apply` take panels of classes only; `omicsscreen screen` screens this outcome", run.Error);
         Assert.Contains("omicsscreen check", run.Error);
         Assert.DoesNotContain("   at ", run.Error);
         Assert.False(Directory.Exists(output) && Directory.EnumerateFiles(output, "*", SearchOption.AllDirectories).Any());

@@ -9,7 +9,8 @@ namespace OmicsScreen.Cli.Tests.Commands;
 /// bytes as the anonymous object it replaced wrote: Approved/screen.manifest.json was written by
 /// the build before the change (commit 607b541) with this test's command, then masked as
 /// <see cref="Masked"/> masks (timestamps, version, paths, core count and stage seconds differ by
-/// run and machine; every key and its order, and every other value, must not).
+/// run and machine; every key and its order, and every other value, must not). One key was added
+/// deliberately since: panel.outcome_kind ("classes"), when screens of other outcome kinds came.
 /// </summary>
 public sealed class ScreenManifestTests : IDisposable
 {

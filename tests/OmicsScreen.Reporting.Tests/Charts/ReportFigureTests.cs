@@ -18,10 +18,10 @@ public sealed class ReportFigureTests
     {
         var result = ScreenReportSample.Result;
         var curve = result.PanelSize!;
-        var chart = ScreenReportCharts.PanelSize(curve, ScreenReportSample.Panel.Outcome, lockedPanelSize: 3);
+        var chart = ScreenReportCharts.PanelSize(curve, ScreenReportSample.Panel, lockedPanelSize: 3);
         var texts = Markup.Texts(Markup.Parse(chart.Markup), "text");
 
-        Assert.Contains(ScreenReportCharts.ChanceLabel(curve), texts);
+        Assert.Contains(OutcomeKindReport.ChanceLabel(curve), texts);
         Assert.Contains("Locked panel: 3 markers", texts);
         // Log-spaced ticks: 1, 2, 5, 10 (sizes 1 to 6 span one decade, so the 2x and 5x ticks are added).
         foreach (var tick in new[] { "1", "2", "5", "10" }) Assert.Contains(tick, texts);
@@ -48,13 +48,18 @@ public sealed class ReportFigureTests
     }
 
     [Fact]
-    public void Chance_is_half_for_AUC_and_the_largest_class_share_for_accuracy()
+    public void Chance_is_half_for_AUC_and_C_zero_for_R_squared_and_the_largest_class_share_for_accuracy()
     {
-        var outcome = ScreenReportSample.Panel.Outcome;
+        // AUC and Harrell's C of a constant score are 0.5; R² of predicting the test mean is 0 (its
+        // definition, as in scikit-learn's r2_score); always calling the largest class is right for its share.
+        var panel = ScreenReportSample.Panel;
+        var outcome = panel.Outcome;
         var curve = ScreenReportSample.Result.PanelSize!;
-        Assert.Equal(0.5, ScreenReportCharts.ChanceLevel(curve with { Metric = "auc" }, outcome));
+        Assert.Equal(0.5, OutcomeKindReport.ChanceLevel(curve with { Metric = "auc" }, panel));
+        Assert.Equal(0.5, OutcomeKindReport.ChanceLevel(curve with { Metric = "concordance" }, panel));
+        Assert.Equal(0.0, OutcomeKindReport.ChanceLevel(curve with { Metric = "r_squared" }, panel));
         double largest = (double)outcome.ClassCounts.ToArray().Max() / outcome.SampleCount;
-        Assert.Equal(largest, ScreenReportCharts.ChanceLevel(curve with { Metric = "accuracy" }, outcome));
+        Assert.Equal(largest, OutcomeKindReport.ChanceLevel(curve with { Metric = "accuracy" }, panel));
     }
 
     [Theory]

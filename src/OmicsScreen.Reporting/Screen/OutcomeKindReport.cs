@@ -1,0 +1,291 @@
+using System.Globalization;
+using OmicsScreen.Engine.Panels;
+using OmicsScreen.Reporting.Charts;
+using OmicsScreen.Screening.Resampling;
+using OmicsScreen.Screening.Screen;
+using OmicsScreen.Screening.Statistics.Survival;
+
+namespace OmicsScreen.Reporting.Screen;
+
+/// <summary>
+/// What the report says and draws differently for each outcome kind: the words of its measures,
+/// its input facts and the figures of a marker against a measured outcome (a scatter) or against
+/// follow-up (Kaplan-Meier curves of the marker's high and low halves).
+/// </summary>
+internal static class OutcomeKindReport
+{
+    /// <summary>The held-out score of a panel-size curve in words.</summary>
+    public static string MetricName(string metric) => metric switch
+    {
+        "auc" => "AUC",
+        "r_squared" => "R²",
+        "concordance" => "concordance (Harrell's C)",
+        _ => "accuracy",
+    };
+
+    /// <summary>The score's short name for a chart axis.</summary>
+    public static string AxisMetricName(string metric) => metric switch
+    {
+        "auc" => "AUC",
+        "r_squared" => "R²",
+        "concordance" => "Harrell's C",
+        _ => "accuracy",
+    };
+
+    /// <summary>What a panel without information scores.</summary>
+    public static double ChanceLevel(PanelSizeCurve curve, Panel panel)
+    {
+        switch (curve.Metric)
+        {
+            case "auc":
+            case "concordance":
+                return 0.5;
+            case "r_squared":
+                return 0;
+            default:
+                int largest = 0;
+                foreach (int count in panel.Outcome.ClassCounts) largest = Math.Max(largest, count);
+                return (double)largest / panel.SampleCount;
+        }
+    }
+
+    public static string ChanceLabel(PanelSizeCurve curve) => curve.Metric switch
+    {
+        "auc" => "Chance (AUC 0.5)",
+        "concordance" => "Chance (C 0.5)",
+        "r_squared" => "No information (R² 0: the test samples' mean)",
+        _ => "Chance (always the largest class)",
+    };
+
+    public static string PermutationMeaning(OutcomeKind kind) => kind switch
+    {
+        OutcomeKind.Measured => "the rise in out-of-bag mean squared error",
+        OutcomeKind.TimeToEvent => "the drop in out-of-bag concordance (Harrell's C)",
+        _ => "the drop in out-of-bag accuracy",
+    };
+
+    public static string ImpurityMeaning(OutcomeKind kind) => kind switch
+    {
+        OutcomeKind.Measured => "the decrease in squared error (variance) its splits bring",
+        OutcomeKind.TimeToEvent => "the log-rank statistics of its splits",
+        _ => "the decrease in Gini impurity its splits bring",
+    };
+
+    public static string ErrorCurveCaption(OutcomeKind kind) => kind switch
+    {
+        OutcomeKind.Measured => "Out-of-bag mean squared error of the forest grown on all samples as trees are added. A flat end says the forests have enough trees.",
+        OutcomeKind.TimeToEvent => "One minus the out-of-bag concordance of the forest grown on all samples as trees are added. A flat end says the forests have enough trees.",
+        _ => "Out-of-bag error of the forest grown on all samples as trees are added. A flat end says the forests have enough trees.",
+    };
+
+    public static string ErrorAxisLabel(OutcomeKind kind) => kind switch
+    {
+        OutcomeKind.Measured => "Out-of-bag mean squared error",
+        OutcomeKind.TimeToEvent => "1 − out-of-bag concordance",
+        _ => ScreenReportCharts.ErrorAxisLabel,
+    };
+
+    /// <summary>The reference forest in one sentence.</summary>
+    public static string ReferenceForestSentence(ReferenceForestSummary forest)
+    {
+        if (forest.OutOfBagRSquared is { } r2)
+            return Invariant($" A forest on all samples and features has out-of-bag R² {r2:0.000} (mean squared error {forest.OutOfBagError:0.###}).");
+        if (forest.OutOfBagConcordance is { } c)
+            return Invariant($" A forest on all samples and features has out-of-bag concordance (Harrell's C) {c:0.000}.");
+        return forest.OutOfBagAuc is { } auc
+            ? Invariant($" A forest on all samples and features has out-of-bag error {forest.OutOfBagError:0.000} and AUC {auc:0.000}.")
+            : Invariant($" A forest on all samples and features has out-of-bag error {forest.OutOfBagError:0.000}.");
+    }
+
+    /// <summary>The outcome's facts under Input and settings.</summary>
+    public static IEnumerable<KeyValuePair<string, string>> OutcomeFacts(Panel panel)
+    {
+        switch (panel.Kind)
+        {
+            case OutcomeKind.Measured:
+                var values = panel.Measured!.Values.ToArray();
+                Array.Sort(values);
+                yield return new("Outcome column", panel.OutcomeColumn + " (a measured quantity)");
+                yield return new("Outcome range [quartiles]", ReportNumber.Significant(values[0], 4) + " to " + ReportNumber.Significant(values[^1], 4)
+                    + " [" + ReportNumber.Significant(Quartile(values, 0.25), 4) + ", " + ReportNumber.Significant(Quartile(values, 0.5), 4) + ", "
+                    + ReportNumber.Significant(Quartile(values, 0.75), 4) + "]");
+                break;
+            case OutcomeKind.TimeToEvent:
+                var followUp = panel.FollowUp!;
+                var curve = KaplanMeier.Estimate(followUp.Times, followUp.Events);
+                double median = curve.Median;
+                yield return new("Follow-up columns", followUp.TimeColumn + " (time), " + followUp.EventColumn + " (event)");
+                yield return new("Events (censored)", ReportNumber.Integer(followUp.EventCount) + " (" + ReportNumber.Integer(followUp.SampleCount - followUp.EventCount) + ")");
+                yield return new("Median survival (Kaplan-Meier)", double.IsNaN(median) ? "not reached" : ReportNumber.Significant(median, 4));
+                yield return new("Median follow-up (reverse Kaplan-Meier)", ReportNumber.Significant(KaplanMeier.MedianFollowUp(followUp.Times, followUp.Events), 4));
+                break;
+            default:
+                yield return new("Outcome column", panel.Outcome.ColumnName);
+                yield return new("Classes (samples)", string.Join(", ", panel.Outcome.ClassNames.Select((name, c) => name + " (" + ReportNumber.Integer(panel.Outcome.ClassCounts[c]) + ")")));
+                yield return new("Positive class", panel.Outcome.ClassNames[panel.Outcome.PositiveClass]);
+                break;
+        }
+    }
+
+    /// <summary>Type 7 quantile of sorted values (R's default).</summary>
+    private static double Quartile(double[] sorted, double p)
+    {
+        double h = (sorted.Length - 1) * p;
+        int lower = (int)Math.Floor(h);
+        return lower + 1 < sorted.Length ? sorted[lower] + (h - lower) * (sorted[lower + 1] - sorted[lower]) : sorted[lower];
+    }
+
+    public static string ShortlistLegend(OutcomeKind kind) => kind switch
+    {
+        OutcomeKind.Measured => "Direction and Spearman's rho relate the marker to the measured outcome; rho's 95% interval uses Fisher's z with Bonett & Wright's (2000) variance, "
+            + "and a direction is named only when the interval excludes 0. Univariate rank: the marker's position by Spearman p-value among all features.",
+        OutcomeKind.TimeToEvent => "Harrell's C treats the marker as a risk score (above 0.5: higher values, earlier events), with its infinitesimal-jackknife interval; "
+            + "the hazard ratio per SD and its Wald interval come from a single-marker Cox model (Efron ties). A direction is named only when the hazard-ratio interval excludes 1. "
+            + "Univariate rank: the marker's position by Cox score-test p-value among all features.",
+        _ => "Direction, log2 ratio (of class medians) and AUC compare the positive class with the rest; the AUC interval is DeLong's. "
+            + "Univariate rank: the marker's position by rank-test p-value among all features. "
+            + "Acts with: for a marker whose evidence comes from the pairwise interaction scan rather than a shift of its own, its partner: "
+            + "the class differs between samples on the same side of both markers' medians and samples on opposite sides, so its direction and AUC alone say little.",
+    };
+
+    /// <summary>How the sample map is coloured: by class, by quarter of a measured outcome, or by event status.</summary>
+    public static (string Title, string[] Names, int[] Levels, string Caption) SampleColouring(Panel panel) => panel.Kind switch
+    {
+        OutcomeKind.Measured => ("Samples by quarter of the outcome", ["Lowest quarter", "Second quarter", "Third quarter", "Highest quarter"],
+            ResamplingStrata.Of(panel).SampleStrata.ToArray(), "coloured by quarter of the measured outcome. Quarters apart here mean the outcome moves with many features at once."),
+        OutcomeKind.TimeToEvent => ("Samples by event status", ["Censored", "Event"], ResamplingStrata.Of(panel).SampleStrata.ToArray(),
+            "coloured by whether the event was seen. Event and censored samples apart here differ in many features at once (or in follow-up time)."),
+        _ => ("Samples by class", [.. panel.Outcome.ClassNames], panel.Outcome.SampleClasses.ToArray(),
+            "coloured by class. Classes apart here differ in many features at once."),
+    };
+
+    /// <summary>
+    /// The marker against a measured outcome: measured cells as points, below-detection cells drawn
+    /// apart at the detection limit (or below the smallest measured value when no limit was given).
+    /// </summary>
+    public static SvgImage MarkerAgainstMeasured(Panel panel, FeatureSummary feature, string label)
+    {
+        var matrix = panel.Matrix;
+        var y = panel.Measured!.Values;
+        var measuredX = new List<double>();
+        var measuredY = new List<double>();
+        var belowY = new List<double>();
+        var belowLimits = new List<double>();
+        double smallest = double.PositiveInfinity;
+        for (int s = 0; s < matrix.SampleCount; s++)
+        {
+            var state = matrix.State(feature.FeatureIndex, s);
+            float value = matrix.Value(feature.FeatureIndex, s);
+            if (state == CellState.Measured && !float.IsNaN(value))
+            {
+                measuredX.Add(value);
+                measuredY.Add(y[s]);
+                smallest = Math.Min(smallest, value);
+            }
+            else if (state == CellState.BelowDetection)
+            {
+                belowY.Add(y[s]);
+                belowLimits.Add(value);
+            }
+        }
+        var series = new List<XYSeries> { new("Measured", measuredX, measuredY, XYSeriesStyle.Points) };
+        if (belowY.Count > 0)
+        {
+            double place = double.IsFinite(smallest) ? smallest : 0;
+            var belowX = belowLimits.Select(limit => float.IsNaN((float)limit) ? place : limit).ToList();
+            series.Add(new XYSeries(Invariant($"Below detection ({belowY.Count}), at the limit"), belowX, belowY, XYSeriesStyle.Points));
+        }
+        return XYChart.Render(new XYChartOptions(label, "Marker value", "Outcome: " + panel.OutcomeColumn, Width: 520, Height: 420), series);
+    }
+
+    /// <summary>
+    /// Kaplan-Meier curves of the samples at or above the marker's median and those below it
+    /// (below-detection cells count as below), with the log-rank p-value in the legend.
+    /// </summary>
+    public static SvgImage MarkerSurvival(Panel panel, FeatureSummary feature, string label)
+    {
+        var matrix = panel.Matrix;
+        var followUp = panel.FollowUp!;
+        var kept = new List<int>();
+        var values = new List<double>();
+        for (int s = 0; s < matrix.SampleCount; s++)
+        {
+            var state = matrix.State(feature.FeatureIndex, s);
+            float value = matrix.Value(feature.FeatureIndex, s);
+            if (state == CellState.BelowDetection) { kept.Add(s); values.Add(double.NegativeInfinity); }
+            else if (state == CellState.Measured && !float.IsNaN(value)) { kept.Add(s); values.Add(value); }
+        }
+        var sorted = values.Order().ToArray();
+        double median = sorted.Length == 0 ? 0 : sorted.Length % 2 == 1 ? sorted[sorted.Length / 2] : 0.5 * (sorted[sorted.Length / 2 - 1] + sorted[sorted.Length / 2]);
+        var time = kept.Select(s => followUp.Times[s]).ToArray();
+        var events = kept.Select(s => followUp.Events[s]).ToArray();
+        var high = values.Select(v => v >= median).ToArray();
+        var series = new List<XYSeries>();
+        string p = "";
+        if (high.Any(h => h) && high.Any(h => !h))
+        {
+            var test = LogRankTest.TwoGroups(time, events, high);
+            p = ", log-rank p " + ReportNumber.Significant(test.PValue, 2);
+        }
+        foreach (bool group in new[] { false, true })
+        {
+            var t = time.Where((_, i) => high[i] == group).ToArray();
+            var e = events.Where((_, i) => high[i] == group).ToArray();
+            if (t.Length == 0) continue;
+            var (x, y) = Steps(KaplanMeier.Estimate(t, e));
+            series.Add(new XYSeries((group ? "At or above the median" : "Below the median") + Invariant($" ({t.Length})"), x, y,
+                group ? XYSeriesStyle.Line : XYSeriesStyle.DashedLine));
+        }
+        return XYChart.Render(new XYChartOptions(label + p, "Time (" + followUp.TimeColumn + ")", "Share without the event (Kaplan-Meier)",
+            YMinimum: 0, YMaximum: 1, Width: 520, Height: 420), series);
+    }
+
+    /// <summary>A survival curve as a step line from (0, 1).</summary>
+    private static (List<double> X, List<double> Y) Steps(SurvivalCurve curve)
+    {
+        var x = new List<double> { 0 };
+        var y = new List<double> { 1 };
+        double level = 1;
+        for (int i = 0; i < curve.Time.Length; i++)
+        {
+            x.Add(curve.Time[i]);
+            y.Add(level);
+            level = curve.Survival[i];
+            x.Add(curve.Time[i]);
+            y.Add(level);
+        }
+        return (x, y);
+    }
+
+    /// <summary>
+    /// Every feature's position in the screen order against its single-marker effect: Spearman's
+    /// rho for a measured outcome, Harrell's C for follow-up.
+    /// </summary>
+    public static SvgImage RankAgainstEffect(ScreenResult result)
+    {
+        bool measured = result.Kind == OutcomeKind.Measured;
+        int count = Math.Min(ScreenReportCharts.RankAucFeatureLimit, result.Order.Count);
+        var shortlisted = new HashSet<int>(result.Shortlist.Select(e => e.Forest.FeatureIndex));
+        var inX = new List<double>();
+        var inY = new List<double>();
+        var outX = new List<double>();
+        var outY = new List<double>();
+        for (int i = 0; i < count; i++)
+        {
+            int feature = result.Order[i];
+            double effect = measured ? result.MeasuredMarkers[feature].Rho : result.FollowUpMarkers[feature].Concordance.Concordance;
+            if (!double.IsFinite(effect)) continue;
+            (shortlisted.Contains(feature) ? inX : outX).Add(i + 1);
+            (shortlisted.Contains(feature) ? inY : outY).Add(effect);
+        }
+        string name = measured ? "Spearman's rho with the outcome" : "single-marker concordance (Harrell's C)";
+        return XYChart.Render(
+            new XYChartOptions(Invariant($"Screen order against {name} ({count} features)"), ScreenReportCharts.OrderAxisLabel,
+                measured ? "Spearman's rho with the outcome" : "Harrell's C (marker as a risk score)",
+                XScale: AxisScaleKind.Log10, YMinimum: measured ? -1 : 0, YMaximum: 1, Width: 820),
+            [new XYSeries("Not shortlisted", outX, outY, XYSeriesStyle.Points), new XYSeries("Shortlisted", inX, inY, XYSeriesStyle.Points)],
+            [new ReferenceLine(ChartAxis.Y, measured ? 0 : 0.5, measured ? "rho 0 (no monotone relation)" : "C 0.5 (no separation)")]);
+    }
+
+    private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
+}
