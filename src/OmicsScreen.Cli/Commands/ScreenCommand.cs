@@ -51,11 +51,10 @@ public sealed class ScreenCommand : Command, IHelpLayout
         HelpName = "K",
     };
 
-    public Option<int> MinLeaf { get; } = new("--min-leaf")
+    public Option<int?> MinLeaf { get; } = new("--min-leaf")
     {
         HelpName = "N",
         Description = "Fewest samples a leaf may hold. Default: 1 for classes (full trees), 5 for measured and time-to-event outcomes.",
-        DefaultValueFactory = _ => Defaults.MinLeafSize,
     };
 
     public Option<BalanceMode> Balance { get; } = new("--balance")
@@ -225,7 +224,7 @@ public sealed class ScreenCommand : Command, IHelpLayout
                 HalfSamplePairs = parse.GetValue(Pairs),
                 TreesPerForest = parse.GetValue(Trees),
                 FeaturesPerSplit = ScreenOptionChecks.Given(parse.GetValue(FeaturesPerSplit), "--features-per-split", 1, "leave it out for the square root of the feature count"),
-                MinLeafSize = parse.GetValue(MinLeaf),
+                MinLeafSize = ScreenOptionChecks.Given(parse.GetValue(MinLeaf), "--min-leaf", 1, "leave it out for the outcome kind's default"),
                 Balance = parse.GetValue(Balance),
                 RepeatSelectionLevel = parse.GetValue(RepeatLevel),
                 SelectedPerRepeat = ScreenOptionChecks.Given(parse.GetValue(PerRepeat), "--per-repeat-cap", 1, "leave it out for no cap"),

@@ -5,6 +5,8 @@ namespace OmicsScreen.Data.Demo;
 /// <param name="CohortShiftSd">Shift in the batch-affected cohort, in SD units.</param>
 /// <param name="Module">Correlated module number, or -1 when the feature is on its own.</param>
 /// <param name="DetectionLimit">The feature's detection limit on the linear scale as written, or NaN when it has none.</param>
+/// <param name="ActivityEffect">How the feature moves the invented activity score (a measured outcome): empty when it does not.</param>
+/// <param name="LogHazardPerSd">Log hazard ratio of a flare per SD of the feature's log2 value (the time-to-event outcome); 0 when none.</param>
 public sealed record DemoFeatureTruth(
     string Feature,
     DemoFeatureRole Role,
@@ -15,4 +17,6 @@ public sealed record DemoFeatureTruth(
     double Log2Sd,
     double MissingRate,
     bool HasDetectionLimit,
-    float DetectionLimit = float.NaN);
+    float DetectionLimit = float.NaN,
+    string ActivityEffect = "",
+    double LogHazardPerSd = 0);

@@ -9,8 +9,9 @@ namespace OmicsScreen.Data.Demo;
 public sealed class DemoStudy
 {
     internal DemoStudy(FeatureMatrix matrix, string[] status, string[] centre, string[] ageYears,
-        string[] sex, IReadOnlyList<DemoFeatureTruth> truth, DemoStudyOptions options)
+        string[] sex, IReadOnlyList<DemoFeatureTruth> truth, DemoStudyOptions options, DemoOutcomes outcomes)
     {
+        Outcomes = outcomes;
         Matrix = matrix;
         Status = status;
         Centre = centre;
@@ -24,6 +25,16 @@ public sealed class DemoStudy
     public const string ControlLabel = "control";
     public const string OutcomeColumn = "status";
     public const string CentreColumn = "centre";
+
+    /// <summary>The measured outcome's column: an invented disease-activity score.</summary>
+    public const string ActivityColumn = "activity_score";
+
+    /// <summary>The follow-up columns: months followed, and whether a flare ended them.</summary>
+    public const string FollowUpColumn = "months_followed";
+    public const string EventColumn = "flare";
+
+    /// <summary>The activity score and the follow-up of every sample, as written in the sample sheet.</summary>
+    public DemoOutcomes Outcomes { get; }
 
     public FeatureMatrix Matrix { get; }
     public IReadOnlyList<string> Status { get; }

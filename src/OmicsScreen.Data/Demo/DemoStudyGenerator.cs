@@ -107,8 +107,63 @@ public static class DemoStudyGenerator
                 p.CohortShiftSd, p.Module, p.Log2Mean, p.Log2Sd, p.MissingRate, p.HasDetectionLimit,
                 p.HasDetectionLimit ? RoundAsWritten(Math.Pow(2, p.Log2DetectionLimit)) : float.NaN);
         }
-        return new DemoStudy(builder.Build(), status, centreLabel, age, sex, truth, options);
+        var matrix = builder.Build();
+        var outcomes = PlantOutcomes(options, matrix, truth);
+        return new DemoStudy(matrix, status, centreLabel, age, sex, truth, options, outcomes);
     }
+
+    /// <summary>
+    /// The study's other two outcomes, drawn after (and apart from) everything the class outcome
+    /// uses, from a stream of their own, so the abundances and the class results of the demo are
+    /// the same with or without them. Five analytes that are noise for the class outcome (alone,
+    /// no detection limit, ordinary missingness) carry them: the activity score rises by 6 and 5
+    /// points per SD of two of them and by 7 points above +0.8 SD of a third (a threshold); the
+    /// hazard of a flare rises by exp(0.7) and exp(0.6) per SD of the other two (a Cox model),
+    /// with a baseline median of 30 months, follow-up ending at 60 months and a small drop-out rate.
+    /// </summary>
+    private static DemoOutcomes PlantOutcomes(DemoStudyOptions options, FeatureMatrix matrix, DemoFeatureTruth[] truth)
+    {
+        var random = new DemoRandom(options.Seed ^ OutcomeStreamKey);
+        var eligible = Enumerable.Range(0, truth.Length).Where(f => truth[f].Role == DemoFeatureRole.Noise && truth[f].Module < 0
+            && !truth[f].HasDetectionLimit && truth[f].MissingRate <= options.CellMissingRate).ToArray();
+        random.Shuffle(eligible.AsSpan());
+        if (eligible.Length < 5) throw new ArgumentException("The demo study needs at least five plain noise analytes to carry its other outcomes.");
+        int[] carriers = eligible[..5];
+        int sampleCount = matrix.SampleCount;
+        var z = new double[5][];
+        for (int k = 0; k < 5; k++)
+        {
+            var t = truth[carriers[k]];
+            z[k] = new double[sampleCount];
+            for (int s = 0; s < sampleCount; s++)
+                // A missing cell sits at the feature's mean: it moves neither outcome.
+                z[k][s] = matrix.State(carriers[k], s) == CellState.Measured ? (Math.Log2(matrix.Value(carriers[k], s)) - t.Log2Mean) / t.Log2Sd : 0;
+        }
+        truth[carriers[0]] = truth[carriers[0]] with { ActivityEffect = "+6 points per SD" };
+        truth[carriers[1]] = truth[carriers[1]] with { ActivityEffect = "+5 points per SD" };
+        truth[carriers[2]] = truth[carriers[2]] with { ActivityEffect = "+7 points above +0.8 SD" };
+        truth[carriers[3]] = truth[carriers[3]] with { LogHazardPerSd = 0.7 };
+        truth[carriers[4]] = truth[carriers[4]] with { LogHazardPerSd = 0.6 };
+
+        var score = new double[sampleCount];
+        var months = new double[sampleCount];
+        var flare = new bool[sampleCount];
+        double baseline = Math.Log(2) / 30;
+        for (int s = 0; s < sampleCount; s++)
+        {
+            score[s] = Math.Round(40 + 6 * z[0][s] + 5 * z[1][s] + (z[2][s] > 0.8 ? 7 : 0) + 6 * random.Normal(), 1);
+            double eventTime = -Math.Log(1 - random.NextDouble()) / (baseline * Math.Exp(0.7 * z[3][s] + 0.6 * z[4][s]));
+            double dropOut = -Math.Log(1 - random.NextDouble()) / 0.004;
+            double end = Math.Min(60, dropOut);
+            // One decimal, as a clinic records months; at least 0.1 so no follow-up is zero.
+            months[s] = Math.Max(0.1, Math.Round(Math.Min(eventTime, end), 1));
+            flare[s] = eventTime <= end;
+        }
+        return new DemoOutcomes(score, months, flare);
+    }
+
+    /// <summary>Mixed into the seed for the other outcomes' stream (an arbitrary odd constant).</summary>
+    private const ulong OutcomeStreamKey = 0x6A09E667F3BCC909UL;
 
     /// <summary>
     /// Rounds to the six significant digits the writer prints, so the study in memory equals

@@ -80,9 +80,11 @@ public static class DemoStudyWriter
 
     private static void WriteSampleSheet(DemoStudy study, TextWriter writer)
     {
-        writer.Write($"sample_id\t{DemoStudy.OutcomeColumn}\t{DemoStudy.CentreColumn}\tage_years\tsex\n");
+        writer.Write($"sample_id\t{DemoStudy.OutcomeColumn}\t{DemoStudy.CentreColumn}\tage_years\tsex\t{DemoStudy.ActivityColumn}\t{DemoStudy.FollowUpColumn}\t{DemoStudy.EventColumn}\n");
+        var o = study.Outcomes;
         for (int s = 0; s < study.Matrix.SampleCount; s++)
-            writer.Write($"{study.Matrix.SampleIds[s]}\t{study.Status[s]}\t{study.Centre[s]}\t{study.AgeYears[s]}\t{study.Sex[s]}\n");
+            writer.Write(string.Create(CultureInfo.InvariantCulture,
+                $"{study.Matrix.SampleIds[s]}\t{study.Status[s]}\t{study.Centre[s]}\t{study.AgeYears[s]}\t{study.Sex[s]}\t{o.ActivityScore[s]:0.0}\t{o.MonthsFollowed[s]:0.0}\t{(o.Flare[s] ? "yes" : "no")}\n"));
     }
 
     /// <summary>Invented syllables for the analytes' lab-facing names; no real protein or metabolite is named so.</summary>
@@ -106,13 +108,19 @@ public static class DemoStudyWriter
 
     private static void WriteTruth(DemoStudy study, TextWriter writer)
     {
-        writer.Write("feature\trole\tcase_shift_sd\tcentre_shift_sd\tmodule\tlog2_mean\tlog2_sd\tmissing_rate\thas_detection_limit\n");
+        writer.Write("feature\trole\tcase_shift_sd\tcentre_shift_sd\tmodule\tlog2_mean\tlog2_sd\tmissing_rate\thas_detection_limit\tactivity_effect\tlog_hazard_per_sd\n");
         foreach (var t in study.Truth)
         {
             writer.Write(string.Create(CultureInfo.InvariantCulture,
-                $"{t.Feature}\t{RoleName(t.Role)}\t{t.CaseShiftSd:0.###}\t{t.CohortShiftSd:0.###}\t{(t.Module >= 0 ? t.Module.ToString(CultureInfo.InvariantCulture) : "")}\t{t.Log2Mean:0.###}\t{t.Log2Sd:0.###}\t{t.MissingRate:0.###}\t{(t.HasDetectionLimit ? "yes" : "no")}\n"));
+                $"{t.Feature}\t{RoleName(t.Role)}\t{t.CaseShiftSd:0.###}\t{t.CohortShiftSd:0.###}\t{(t.Module >= 0 ? t.Module.ToString(CultureInfo.InvariantCulture) : "")}\t{t.Log2Mean:0.###}\t{t.Log2Sd:0.###}\t{t.MissingRate:0.###}\t{(t.HasDetectionLimit ? "yes" : "no")}\t{t.ActivityEffect}\t{t.LogHazardPerSd:0.###}\n"));
         }
     }
+
+    private static string ActivityCarriers(DemoStudy study) =>
+        string.Join(", ", study.Truth.Where(t => t.ActivityEffect.Length > 0).Select(t => $"{t.Feature} ({t.ActivityEffect})"));
+
+    private static string HazardCarriers(DemoStudy study) =>
+        string.Join(", ", study.Truth.Where(t => t.LogHazardPerSd != 0).Select(t => string.Create(CultureInfo.InvariantCulture, $"{t.Feature} (log hazard ratio {t.LogHazardPerSd:0.#} per SD)")));
 
     public static string RoleName(DemoFeatureRole role) => role switch
     {
@@ -143,7 +151,9 @@ public static class DemoStudyWriter
             - `{PanelFileName}`: {study.Matrix.SampleCount} samples in rows x {study.Matrix.FeatureCount} analytes, linear abundances.
               `NA` is a missing cell; `<LOD` and `<value` are below the detection limit (the limit kept when given).
             - `{SampleSheetFileName}`: sample sheet with `{DemoStudy.OutcomeColumn}` ({cases} {DemoStudy.CaseLabel}, {study.Matrix.SampleCount - cases} {DemoStudy.ControlLabel}),
-              `{DemoStudy.CentreColumn}`: {centres}; plus `age_years` and `sex`, which carry no signal.
+              `{DemoStudy.CentreColumn}`: {centres}; plus `age_years` and `sex`, which carry no signal, and two more
+              outcomes of the same samples: `{DemoStudy.ActivityColumn}` (an invented disease-activity score, a measured
+              quantity) and `{DemoStudy.FollowUpColumn}` with `{DemoStudy.EventColumn}` (months to a flare, censored at 60 months or drop-out).
             - `{TruthFileName}`: what was planted in every analyte, so a screen can be scored.
             - `{FeatureSheetFileName}`: feature sheet with an invented lab-facing `display_name` per analyte (`Fennorin-1` ...),
               the `assay_panel` it was measured on, and the `detection_limit` of the analytes that have one.
@@ -158,6 +168,9 @@ public static class DemoStudyWriter
             - About 10% of the other analytes shifted by 0.4 SD in `{study.BatchAffectedCentre}` (a processing-batch effect),
               {o.ModuleCount - 2} correlated modules of noise analytes, {o.CellMissingRate:P1} of cells missing at random, and
               a few analytes with 20-40% missing.
+
+            - For the activity score: {ActivityCarriers(study)}. For the flares: {HazardCarriers(study)}.
+              These five analytes are noise for `{DemoStudy.OutcomeColumn}`; the other outcomes were drawn apart from the abundances.
 
             Abundance model: log2 value = mean + SD x (sqrt(loading) x module factor + sqrt(1 - loading) x noise)
             + planted shifts; linear value = 2^(log2 value), written with six significant digits.

@@ -1,3 +1,4 @@
+using OmicsScreen.Engine.Panels;
 using System.Security.Cryptography;
 using System.Text;
 using System.Text.Json;
@@ -27,6 +28,14 @@ public static class RunIdentity
     /// <summary>The options as they enter the identity: threads zeroed, since results do not depend on them.</summary>
     public static ScreenOptions Canonical(ScreenOptions options) => options with { ThreadCount = 0 };
 
+    /// <summary>
+    /// The canonical options with the smallest leaf resolved for the outcome kind, so a run that
+    /// left --min-leaf at its default and one that named the same value are the same run (and a
+    /// checkpoint written before the default became per kind still resumes).
+    /// </summary>
+    private static ScreenOptions Resolved(ScreenOptions options, OutcomeKind kind) =>
+        Canonical(options) with { MinLeafSize = ScreenSettings.MinLeafFor(options, kind) };
+
     /// <summary>The identity of a run of this program on a loaded panel, and the record that describes it.</summary>
     /// <param name="panel">How the panel was loaded; recorded so another node can load it again.</param>
     /// <param name="commandLine">The command as typed, recorded so a merge can name the single run it equals.</param>
@@ -34,8 +43,9 @@ public static class RunIdentity
         bool showSampleIds, IReadOnlyList<string> commandLine)
     {
         var digest = PanelDigest.Compute(loaded.Panel);
-        var identity = Compute(digest, screen, ToolVersion.Current);
-        return (identity, Describe(kind, loaded, digest, panel, screen, showSampleIds, commandLine, identity));
+        var resolved = Resolved(screen, loaded.Panel.Kind);
+        var identity = Compute(digest, resolved, ToolVersion.Current);
+        return (identity, Describe(kind, loaded, digest, panel, resolved, showSampleIds, commandLine, identity));
     }
 
     private static byte[] Compute(byte[] panelDigest, ScreenOptions options, string softwareVersion)

@@ -49,6 +49,61 @@ public sealed class DemoStudyTests : IDisposable
     }
 
     [Fact]
+    public void The_sample_sheet_carries_a_measured_and_a_time_to_event_outcome_planted_in_five_noise_analytes()
+    {
+        var study = DemoStudyGenerator.Generate(new DemoStudyOptions());
+        var files = DemoStudyWriter.Write(study, Path.Combine(_root, "a"));
+
+        // Read as the README's commands read them: the score by automatic detection, the follow-up by its two columns.
+        var measured = PanelLoader.Load(new PanelLoadOptions { MatrixPath = files.Panel, SampleSheetPath = files.SampleSheet, OutcomeColumn = DemoStudy.ActivityColumn });
+        Assert.Equal(OutcomeKind.Measured, measured.Panel.Kind);
+        var timed = PanelLoader.Load(new PanelLoadOptions
+        {
+            MatrixPath = files.Panel, SampleSheetPath = files.SampleSheet, FollowUpColumn = DemoStudy.FollowUpColumn, EventColumn = DemoStudy.EventColumn,
+        });
+        Assert.Equal(OutcomeKind.TimeToEvent, timed.Panel.Kind);
+        int events = timed.Panel.FollowUp!.EventCount;
+        // Baseline median 30 months, follow-up to 60: most samples flare, many are censored (by construction).
+        Assert.InRange((double)events / study.Matrix.SampleCount, 0.4, 0.9);
+
+        // Known by construction: the score rises with its two linear carriers, and flares come sooner
+        // (more of them) in the upper half of each hazard carrier; the carriers are noise for the class.
+        var activity = study.Truth.Select((t, f) => (t, f)).Where(x => x.t.ActivityEffect.Length > 0).ToArray();
+        var hazard = study.Truth.Select((t, f) => (t, f)).Where(x => x.t.LogHazardPerSd != 0).ToArray();
+        Assert.Equal(3, activity.Length);
+        Assert.Equal(2, hazard.Length);
+        Assert.All(activity.Concat(hazard), x => Assert.Equal(DemoFeatureRole.Noise, x.t.Role));
+        foreach (var (t, f) in activity.Where(x => x.t.ActivityEffect.EndsWith("per SD", StringComparison.Ordinal)))
+            Assert.True(Correlation(Log2Values(study, f), study.Outcomes.ActivityScore) > 0.25, $"{t.Feature} should rise with the score");
+        foreach (var (t, f) in hazard)
+        {
+            var values = Log2Values(study, f);
+            double median = values.Where(double.IsFinite).Order().ElementAt(values.Count(double.IsFinite) / 2);
+            double upper = FlareShare(study, values, v => v >= median), lower = FlareShare(study, values, v => v < median);
+            Assert.True(upper > lower + 0.05, $"{t.Feature}: flare share {upper:0.00} above its median, {lower:0.00} below");
+        }
+    }
+
+    private static double[] Log2Values(DemoStudy study, int feature) =>
+        Enumerable.Range(0, study.Matrix.SampleCount)
+            .Select(s => study.Matrix.State(feature, s) == CellState.Measured ? Math.Log2(study.Matrix.Value(feature, s)) : double.NaN).ToArray();
+
+    private static double FlareShare(DemoStudy study, double[] values, Func<double, bool> side)
+    {
+        var rows = Enumerable.Range(0, values.Length).Where(s => double.IsFinite(values[s]) && side(values[s])).ToArray();
+        return (double)rows.Count(s => study.Outcomes.Flare[s]) / rows.Length;
+    }
+
+    /// <summary>Pearson correlation over the samples where the marker was measured (textbook formula).</summary>
+    private static double Correlation(double[] x, double[] y)
+    {
+        var rows = Enumerable.Range(0, x.Length).Where(s => double.IsFinite(x[s])).ToArray();
+        double mx = rows.Average(s => x[s]), my = rows.Average(s => y[s]);
+        double sxy = rows.Sum(s => (x[s] - mx) * (y[s] - my)), sxx = rows.Sum(s => (x[s] - mx) * (x[s] - mx)), syy = rows.Sum(s => (y[s] - my) * (y[s] - my));
+        return sxy / Math.Sqrt(sxx * syy);
+    }
+
+    [Fact]
     public void A_different_seed_gives_a_different_panel()
     {
         var first = DemoStudyWriter.Write(DemoStudyGenerator.Generate(new DemoStudyOptions { Seed = 7 }), Path.Combine(_root, "a"));
