@@ -3,6 +3,7 @@ using OmicsScreen.Cli.Console;
 using OmicsScreen.Data;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Reporting.Json;
+using OmicsScreen.Reporting.Manifests;
 using OmicsScreen.Runs;
 using OmicsScreen.Runs.Apply;
 using OmicsScreen.Runs.Locking;
@@ -56,22 +57,27 @@ internal static class ApplyRun
         folder.WriteText(ApplyResultFiles.Scores, w => ApplyTables.WriteScores(w, scores, knownClasses));
         if (performance is not null)
         {
-            folder.WriteText(ApplyResultFiles.Evaluation, w => ManifestJson.Write(w, EvaluationDocument(model, scores, performance, overlap)));
+            folder.WriteText(ApplyResultFiles.Evaluation, w => ManifestJson.Write(w, ApplyEvaluation.Of(model, scores, performance, overlap)));
             folder.WriteText(ApplyResultFiles.Calibration, w => ApplyTables.WriteCalibration(w, performance));
             folder.WriteText(ApplyResultFiles.Confusion, w => ApplyTables.WriteConfusion(w, performance));
         }
         folder.WriteText(ApplyResultFiles.Report, w => w.Write(ApplyReport.Build(model, scores, performance, options.MatrixPath, options.ShowSampleIds, overlap, displayNames)));
-        var manifest = new
+        var manifest = new ApplyManifest
         {
-            tool = "omicsscreen",
-            version = ToolVersion.Current,
-            command = "apply",
-            command_line = ShellWords.Join(options.CommandLine),
-            started_utc = started.ToString("O"),
-            finished_utc = DateTimeOffset.UtcNow.ToString("O"),
-            model = new { path = options.ModelPath, sha256 = LockedPanelFile.FileSha256(options.ModelPath), markers = model.MarkerNames, marker_display_names = displayNames, discovery_inputs_sha256 = model.Provenance.InputSha256 },
-            inputs = inputs.Select(i => new { path = i.Path, bytes = i.ByteCount, sha256 = i.Sha256 }).ToArray(),
-            outputs = folder.WrittenFiles.ToArray(),
+            Version = ToolVersion.Current,
+            CommandLine = ShellWords.Join(options.CommandLine),
+            StartedUtc = started.ToString("O"),
+            FinishedUtc = DateTimeOffset.UtcNow.ToString("O"),
+            Model = new ManifestLockedPanel
+            {
+                Path = options.ModelPath,
+                Sha256 = LockedPanelFile.FileSha256(options.ModelPath),
+                Markers = model.MarkerNames,
+                MarkerDisplayNames = displayNames,
+                DiscoveryInputsSha256 = model.Provenance.InputSha256,
+            },
+            Inputs = inputs.Select(i => new ManifestInput(i.Path, i.ByteCount, i.Sha256)).ToArray(),
+            Outputs = folder.WrittenFiles.ToArray(),
         };
         folder.WriteText(ResultsFolder.ManifestFileName, w => ManifestJson.Write(w, manifest));
 
@@ -106,30 +112,6 @@ internal static class ApplyRun
         for (int s = 0; s < names.Length; s++) names[s] = outcome.ClassNames[classes[s]];
         return names;
     }
-
-    private static object EvaluationDocument(LockedPanel model, LockedPanelScores scores, LockedPanelPerformance performance,
-        IReadOnlyList<string> overlap) => new
-    {
-        tool = "omicsscreen",
-        samples = performance.SampleCount,
-        classes = performance.ClassNames,
-        positive_class = performance.ClassNames[performance.PositiveClass],
-        threshold = performance.Threshold,
-        auc = performance.Auc,
-        auc_interval = performance.AucInterval is { } interval
-            ? new { method = "DeLong 1988, normal approximation", level = interval.Level, lower = interval.Lower, upper = interval.Upper }
-            : null,
-        error = performance.Error,
-        confusion = performance.ClassNames.Select((name, c) => new
-        {
-            known_class = name,
-            called = performance.ClassNames.Select((calledName, k) => new { @class = calledName, samples = performance.Confusion[c][k] }).ToArray(),
-        }).ToArray(),
-        calibration = performance.Calibration,
-        discovery_out_of_bag_auc = model.OutOfBagAuc,
-        scale_warnings = scores.Warnings.Select(w => new { marker = w.Marker, unmeasured = w.Unmeasured, message = w.Message }).ToArray(),
-        discovery_overlap_warnings = overlap,
-    };
 
     private static void PrintSummary(CliConsole console, LockedPanel model, LockedPanelScores scores, LockedPanelPerformance? performance, string folder,
         IReadOnlyDictionary<string, string> displayNames)

@@ -1,8 +1,13 @@
+using OmicsScreen.Engine.Randomness;
+
 namespace OmicsScreen.Data.Demo;
 
 /// <summary>
-/// SplitMix64 (Steele, Lea & Flood 2014) with Box-Muller normals: tiny, fully specified, so
-/// the demo files are byte-identical on every platform and runtime version, unlike System.Random.
+/// The engine's SplitMix64 sequence (Steele, Lea &amp; Flood 2014) with rejection-sampled integers
+/// and Box-Muller normals: fully specified, so the demo files are byte-identical on every platform
+/// and runtime version, unlike System.Random. Not the engine's Xoshiro256** generator on purpose:
+/// the demo study's published files and truth table were drawn from this sequence, and a new
+/// generator would redraw them.
 /// </summary>
 internal struct DemoRandom
 {
@@ -17,13 +22,7 @@ internal struct DemoRandom
         _hasSpare = false;
     }
 
-    public ulong NextUInt64()
-    {
-        ulong z = _state += 0x9E3779B97F4A7C15UL;
-        z = (z ^ (z >> 30)) * 0xBF58476D1CE4E5B9UL;
-        z = (z ^ (z >> 27)) * 0x94D049BB133111EBUL;
-        return z ^ (z >> 31);
-    }
+    public ulong NextUInt64() => SplitMix64.Next(ref _state);
 
     /// <summary>Uniform in [0, 1) with 53 random bits.</summary>
     public double NextDouble() => (NextUInt64() >> 11) * (1.0 / (1UL << 53));

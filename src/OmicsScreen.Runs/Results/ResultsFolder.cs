@@ -1,5 +1,6 @@
-using OmicsScreen.Runs.Output;
 using OmicsScreen.Data.Output;
+using OmicsScreen.Reporting.Manifests;
+using OmicsScreen.Runs.Output;
 
 namespace OmicsScreen.Runs.Results;
 
@@ -16,10 +17,10 @@ public sealed class ResultsFolder : IDisposable
     public const string ManifestFileName = "manifest.json";
 
     /// <summary>Text every manifest of ours starts with; how a folder is recognised as ours.</summary>
-    public const string ManifestMarker = "\"tool\": \"omicsscreen\"";
+    public const string ManifestMarker = "\"tool\": \"" + ManifestTool.Name + "\"";
 
     /// <summary>How an apply manifest tells itself from a screen's.</summary>
-    private const string ApplyMarker = "\"command\": \"apply\"";
+    private const string ApplyMarker = "\"command\": \"" + ApplyManifest.CommandName + "\"";
 
     private readonly ResultsFolderLock _lock;
     private readonly bool _created;

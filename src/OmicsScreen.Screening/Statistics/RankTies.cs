@@ -9,4 +9,6 @@ public enum RankTies
     Minimum = 1,
     /// <summary>Every member gets the highest rank of the run.</summary>
     Maximum = 2,
+    /// <summary>Every member gets the position of its distinct value (1, 2, 2, 3): what counting structures indexed by value need.</summary>
+    Dense = 3,
 }

@@ -25,8 +25,8 @@ public static class Ranking
         sorted.AsSpan().Sort(order.AsSpan());
 
         double tieTerm = 0;
-        int start = 0;
-        // Invariant: positions [0, start) of the sorted order have their ranks written.
+        int start = 0, distinct = 0;
+        // Invariant: positions [0, start) of the sorted order have their ranks written, in distinct runs.
         while (start < sorted.Length)
         {
             int end = start + 1;
@@ -36,12 +36,14 @@ public static class Ranking
                 RankTies.Average => (start + 1 + end) * 0.5,
                 RankTies.Minimum => start + 1,
                 RankTies.Maximum => end,
+                RankTies.Dense => distinct + 1,
                 _ => throw new ArgumentOutOfRangeException(nameof(ties)),
             };
             for (int k = start; k < end; k++) ranks[order[k]] = rank;
             double runLength = end - start;
             tieTerm += runLength * runLength * runLength - runLength;
             start = end;
+            distinct++;
         }
         return tieTerm;
     }

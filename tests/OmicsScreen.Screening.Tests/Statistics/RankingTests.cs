@@ -26,6 +26,15 @@ public class RankingTests
     }
 
     [Fact]
+    public void Dense_ranks_number_the_distinct_values_without_gaps()
+    {
+        // Worked by hand: distinct values 1, 2, 3, 7 -> 1, 2, 3, 4; -0.0 and 0.0 are one value.
+        double[] values = [3, 2, 7, 3, 1, 2, 3];
+        Assert.Equal([3, 2, 4, 3, 1, 2, 3], Ranking.Rank(values, RankTies.Dense));
+        Assert.Equal([1, 1, 2], Ranking.Rank([-0.0, 0.0, 5], RankTies.Dense));
+    }
+
+    [Fact]
     public void Average_ranks_always_sum_to_n_times_n_plus_one_over_two()
     {
         var random = new Random(7);

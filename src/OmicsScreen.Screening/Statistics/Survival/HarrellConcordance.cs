@@ -101,18 +101,19 @@ public static class HarrellConcordance
         }
     }
 
+    /// <summary>0-based dense ranks (the Fenwick trees' index) and the number of distinct values.</summary>
     private static int[] DenseRanks(ReadOnlySpan<double> values, out int distinct)
     {
-        var sorted = values.ToArray();
-        foreach (double v in sorted)
+        foreach (double v in values)
             if (double.IsNaN(v)) throw new ArgumentException("The score has a missing value; drop those samples first.");
-        Array.Sort(sorted);
-        int unique = 0;
-        for (int i = 0; i < sorted.Length; i++)
-            if (i == 0 || sorted[i] != sorted[unique - 1]) sorted[unique++] = sorted[i];
+        var dense = Ranking.Rank(values, RankTies.Dense);
         var ranks = new int[values.Length];
-        for (int i = 0; i < values.Length; i++) ranks[i] = Array.BinarySearch(sorted, 0, unique, values[i]);
-        distinct = unique;
+        distinct = 0;
+        for (int i = 0; i < values.Length; i++)
+        {
+            ranks[i] = (int)dense[i] - 1;
+            distinct = Math.Max(distinct, ranks[i] + 1);
+        }
         return ranks;
     }
 
