@@ -8,8 +8,9 @@ using OmicsScreen.Engine.Randomness;
 namespace OmicsScreen.Engine.Binning;
 
 /// <summary>
-/// A panel quantised once: one byte code per cell, feature-major (one contiguous array per
-/// feature), plus each feature's bins in original units. Every seed, repeat and tree reuses it.
+/// A panel quantised once: one byte code per cell, feature-major (each feature's codes contiguous,
+/// features one after another in a few large blocks, see <see cref="CodeBlocks"/>), plus each
+/// feature's bins in original units. Every seed, repeat and tree reuses it.
 /// </summary>
 /// <remarks>
 /// Columns are shared, never copied, between a matrix and the matrices derived from it
@@ -19,13 +20,13 @@ namespace OmicsScreen.Engine.Binning;
 /// </remarks>
 public sealed class BinnedMatrix
 {
-    private readonly byte[][] _codes;
+    private readonly CodeColumn[] _codes;
     private readonly FeatureBins[] _bins;
     private readonly int[] _sourceFeatures;
     private readonly bool[] _isPermutedCopy;
     private readonly int[] _valueBinCounts;
 
-    internal BinnedMatrix(IReadOnlyList<string> featureNames, int sampleCount, byte[][] codes,
+    internal BinnedMatrix(IReadOnlyList<string> featureNames, int sampleCount, CodeColumn[] codes,
         FeatureBins[] bins, int[] sourceFeatures, bool[] isPermutedCopy)
     {
         FeatureNames = featureNames;
@@ -44,7 +45,11 @@ public sealed class BinnedMatrix
     public IReadOnlyList<string> FeatureNames { get; }
 
     /// <summary>The codes of one feature, one per sample, in sample order.</summary>
-    public ReadOnlySpan<byte> Codes(int feature) => _codes[feature];
+    public ReadOnlySpan<byte> Codes(int feature)
+    {
+        var column = _codes[feature];
+        return new ReadOnlySpan<byte>(column.Store, column.Start, SampleCount);
+    }
 
     public FeatureBins Bins(int feature) => _bins[feature];
 
@@ -56,10 +61,10 @@ public sealed class BinnedMatrix
     internal unsafe void PrefetchCodes(int feature)
     {
         if (!Sse.IsSupported) return;
-        var codes = _codes[feature];
+        var column = _codes[feature];
         // The address may go stale if the collector moves the array; a prefetch of any address is harmless.
-        byte* start = (byte*)Unsafe.AsPointer(ref MemoryMarshal.GetArrayDataReference(codes));
-        int lines = Math.Min(codes.Length, 512) >> 6;
+        byte* start = (byte*)Unsafe.AsPointer(ref Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(column.Store), column.Start));
+        int lines = Math.Min(SampleCount, 512) >> 6;
         for (int line = 0; line <= lines; line++) Sse.Prefetch0(start + (line << 6));
     }
 
@@ -87,7 +92,7 @@ public sealed class BinnedMatrix
     public BinnedMatrix SelectFeatures(ReadOnlySpan<int> features)
     {
         var names = new string[features.Length];
-        var codes = new byte[features.Length][];
+        var codes = new CodeColumn[features.Length];
         var bins = new FeatureBins[features.Length];
         var sources = new int[features.Length];
         var copyFlags = new bool[features.Length];
@@ -119,7 +124,7 @@ public sealed class BinnedMatrix
         int original = FeatureCount;
         int total = original + sourceFeatures.Length;
         var names = new string[total];
-        var codes = new byte[total][];
+        var codes = new CodeColumn[total];
         var bins = new FeatureBins[total];
         var sources = new int[total];
         var copyFlags = new bool[total];
@@ -132,6 +137,7 @@ public sealed class BinnedMatrix
             copyFlags[f] = _isPermutedCopy[f];
         }
         var listed = sourceFeatures.ToArray();
+        CodeBlocks.Allocate(listed.Length, SampleCount).CopyTo(codes.AsSpan(original));
         // Each permuted copy has its own generator and its own slot, so columns are built in parallel
         // (on a very wide panel this is most of a repeat's one-thread time) with the same result
         // on any number of threads. Chunks of columns keep the per-task overhead small.
@@ -145,11 +151,11 @@ public sealed class BinnedMatrix
             {
                 int f = listed[i];
                 int target = original + i;
-                var permuted = (byte[])_codes[f].Clone();
+                var permuted = codes[target].Store.AsSpan(codes[target].Start, SampleCount);
+                Codes(f).CopyTo(permuted);
                 var generator = SeedSchedule.Generator(runSeed, repeat, i, SeedPurpose.PermutedCopy);
-                generator.Shuffle(permuted.AsSpan());
+                generator.Shuffle(permuted);
                 names[target] = "copy:" + FeatureNames[f];
-                codes[target] = permuted;
                 bins[target] = _bins[f];
                 sources[target] = _sourceFeatures[f];
                 copyFlags[target] = true;
@@ -164,16 +170,15 @@ public sealed class BinnedMatrix
         ArgumentNullException.ThrowIfNull(matrix);
         if (matrix.FeatureCount != FeatureCount)
             throw new ArgumentException("The matrix must have the same features, in the same order.");
-        var codes = new byte[FeatureCount][];
+        var codes = CodeBlocks.Allocate(FeatureCount, matrix.SampleCount);
         for (int f = 0; f < FeatureCount; f++)
         {
             var column = matrix.Column(f);
             var states = matrix.States(f);
             var bins = _bins[f];
-            var target = new byte[matrix.SampleCount];
+            var target = codes[f].Store.AsSpan(codes[f].Start, matrix.SampleCount);
             for (int s = 0; s < target.Length; s++)
                 target[s] = bins.CodeOf(column[s], states.IsEmpty ? CellState.Measured : states[s]);
-            codes[f] = target;
         }
         return new BinnedMatrix(FeatureNames, matrix.SampleCount, codes, _bins, _sourceFeatures, _isPermutedCopy);
     }
