@@ -46,6 +46,8 @@ public sealed class EngineCostCase(string name, int sampleCount, int featureCoun
         ForestTrainer.Train(binned, panel.Outcome, warmUp);
         double trainBest = double.PositiveInfinity;
         double error = 0;
+        double visits = 0;
+        int tried = ForestOptions.Default.Tree.ResolveFeaturesPerSplit(featureCount);
         for (int pass = 0; pass < TrainPasses; pass++)
         {
             var options = new ForestOptions { TreeCount = treeCount, Seed = (ulong)(pass + 1), ThreadCount = 1 };
@@ -53,6 +55,7 @@ public sealed class EngineCostCase(string name, int sampleCount, int featureCoun
             var forest = ForestTrainer.Train(binned, panel.Outcome, options);
             trainBest = Math.Min(trainBest, ProcessorSeconds() - before);
             error += new OutOfBagVotes(forest, panel.Outcome).Error / TrainPasses;
+            visits = ForestTrainingCase.SearchVisits(forest, tried);
         }
         double cells = (double)sampleCount * featureCount;
         return
@@ -63,6 +66,7 @@ public sealed class EngineCostCase(string name, int sampleCount, int featureCoun
             F("bin_speedup", originalBest / binBest, "F1"),
             F("train_cpu_s", trainBest, "F4"),
             F("trees", treeCount, "F0"),
+            F("train_cpu_ns_per_visit", trainBest * 1e9 / visits, "F2"),
             F("oob_mean", error, "F4"),
             "load=" + LoadAverage(),
         ];

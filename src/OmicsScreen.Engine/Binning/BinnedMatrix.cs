@@ -54,18 +54,25 @@ public sealed class BinnedMatrix
     public FeatureBins Bins(int feature) => _bins[feature];
 
     /// <summary>
-    /// Asks the processor to start loading the first cache lines of a feature's codes. Split search
-    /// on wide panels visits thousands of short columns in random order, so each visit would
-    /// otherwise begin with a cache miss. A hint only: it changes no result.
+    /// Asks the processor to start loading the cache lines of a feature's codes that the given
+    /// rows will read: each row's line when the rows are fewer than the column's lines, else the
+    /// whole column. Split search visits many columns in random order and, deep in a tree, reads
+    /// a few scattered codes from each, so almost every read would otherwise wait for memory. A
+    /// hint only: it changes no result.
     /// </summary>
-    internal unsafe void PrefetchCodes(int feature)
+    internal unsafe void PrefetchCodes(int feature, ReadOnlySpan<int> rows)
     {
         if (!Sse.IsSupported) return;
         var column = _codes[feature];
         // The address may go stale if the collector moves the array; a prefetch of any address is harmless.
         byte* start = (byte*)Unsafe.AsPointer(ref Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(column.Store), column.Start));
-        int lines = Math.Min(SampleCount, 512) >> 6;
-        for (int line = 0; line <= lines; line++) Sse.Prefetch0(start + (line << 6));
+        int sampleCount = SampleCount;
+        if (rows.Length > (sampleCount >> 6))
+        {
+            for (int offset = 0; offset < sampleCount; offset += 64) Sse.Prefetch0(start + offset);
+            Sse.Prefetch0(start + sampleCount - 1);
+        }
+        else foreach (int row in rows) Sse.Prefetch0(start + row);
     }
 
     /// <summary>The number of value bins of a feature; its missing code.</summary>
