@@ -24,20 +24,18 @@ public sealed class BinnedMatrix
     private readonly FeatureBins[] _bins;
     private readonly int[] _sourceFeatures;
     private readonly bool[] _isPermutedCopy;
-    private readonly int[] _valueBinCounts;
 
     internal BinnedMatrix(IReadOnlyList<string> featureNames, int sampleCount, CodeColumn[] codes,
         FeatureBins[] bins, int[] sourceFeatures, bool[] isPermutedCopy)
     {
         FeatureNames = featureNames;
         SampleCount = sampleCount;
-        _codes = codes;
+        // A copy holding each feature's value bin count beside its codes' place (see CodeColumn).
+        _codes = new CodeColumn[codes.Length];
+        for (int f = 0; f < codes.Length; f++) _codes[f] = codes[f] with { ValueBinCount = bins[f].ValueBinCount };
         _bins = bins;
         _sourceFeatures = sourceFeatures;
         _isPermutedCopy = isPermutedCopy;
-        // Kept apart from the bins objects so split search reads one contiguous array, not one object per feature.
-        _valueBinCounts = new int[bins.Length];
-        for (int f = 0; f < bins.Length; f++) _valueBinCounts[f] = bins[f].ValueBinCount;
     }
 
     public int SampleCount { get; }
@@ -76,7 +74,17 @@ public sealed class BinnedMatrix
     }
 
     /// <summary>The number of value bins of a feature; its missing code.</summary>
-    public int ValueBinCount(int feature) => _valueBinCounts[feature];
+    public int ValueBinCount(int feature) => _codes[feature].ValueBinCount;
+
+    /// <summary>
+    /// Asks the processor to start loading the entry that says where a feature's codes are
+    /// (split search draws features at random, so on a wide panel the entry is rarely cached).
+    /// A hint only.
+    /// </summary>
+    internal unsafe void PrefetchColumnEntry(int feature)
+    {
+        if (Sse.IsSupported) Sse.Prefetch0(Unsafe.AsPointer(ref _codes[feature]));
+    }
 
     /// <summary>The feature of the originally binned matrix this column holds (or permutes).</summary>
     public int SourceFeature(int feature) => _sourceFeatures[feature];
