@@ -17,6 +17,10 @@ public static class BenchmarkRegistry
         cases.Add(("forest", new ForestTrainingCase("forest-200x20000", 200, 20_000, 0.1)));
         cases.Add(("forest", new ForestTrainingCase("forest-1000x2000", 1_000, 2_000, 0.2)));
         cases.Add(("forest", new ForestTrainingCase("forest-4000x500", 4_000, 500, 0.5)));
+        // One thread, processor seconds: the before/after figure for engine changes.
+        cases.Add(("engine-cost", new EngineCostCase("engine-cost-200x20000", 200, 20_000, 100)));
+        cases.Add(("engine-cost", new EngineCostCase("engine-cost-1000x2000", 1_000, 2_000, 100)));
+        cases.Add(("engine-cost", new EngineCostCase("engine-cost-4000x500", 4_000, 500, 30)));
         // Measured and time-to-event forests beside ranger (issues 17 and 18).
         // ranger's log-rank forests with leaves of one sample are slow, so the survival cases grow 100 trees.
         cases.Add(("outcome-forests", new OutcomeForestCase("regression-500x2000", false, 500, 2_000, 500)));

@@ -112,7 +112,7 @@ public sealed class ForestTrainingCase(string name, int sampleCount, int feature
     /// split search, one visit per (sample, feature tried, tree level). Approximate: features
     /// found constant and searches that found no split are not counted.
     /// </summary>
-    private static double SearchVisits(Forest forest, int tried)
+    internal static double SearchVisits(Forest forest, int tried)
     {
         double visits = 0;
         foreach (var tree in forest.Enumerate())

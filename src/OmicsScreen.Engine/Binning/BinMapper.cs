@@ -36,119 +36,183 @@ public sealed class BinMapper
     {
         ArgumentNullException.ThrowIfNull(matrix);
         int featureCount = matrix.FeatureCount;
-        var codes = new byte[featureCount][];
+        int sampleCount = matrix.SampleCount;
+        var codes = CodeBlocks.Allocate(featureCount, sampleCount);
         var bins = new FeatureBins[featureCount];
         var parallel = WorkerThreads.Options(threadCount);
-        // Chunks of features per task: on a wide panel a feature is a few microseconds of work.
-        const int chunk = 64;
-        int chunkCount = (featureCount + chunk - 1) / chunk;
+        int chunkCount = (featureCount + FeaturesPerChunk - 1) / FeaturesPerChunk;
         Parallel.For(0, chunkCount, parallel,
-            () => new BinScratch(matrix.SampleCount),
+            () => new BinScratch(sampleCount, MaxBins),
             (c, _, scratch) =>
             {
-                int end = Math.Min(featureCount, (c + 1) * chunk);
-                for (int feature = c * chunk; feature < end; feature++)
+                int first = c * FeaturesPerChunk;
+                int end = Math.Min(featureCount, first + FeaturesPerChunk);
+                // The chunk's bounds are gathered in scratch, then kept in one array for all its features.
+                int used = 0;
+                for (int feature = first; feature < end; feature++)
                 {
-                    codes[feature] = new byte[matrix.SampleCount];
-                    bins[feature] = BinFeature(matrix.Column(feature), matrix.States(feature), codes[feature], scratch.Values, scratch.Samples, scratch.Sorter);
+                    var column = codes[feature];
+                    var (boundCount, isExact) = BinFeature(matrix.Column(feature), matrix.States(feature),
+                        column.Store.AsSpan(column.Start, sampleCount), scratch.Bounds.AsSpan(used, MaxBins), scratch.Cuts, scratch.Sorter);
+                    scratch.BoundCounts[feature - first] = boundCount;
+                    scratch.IsExact[feature - first] = isExact;
+                    used += boundCount;
+                }
+                var store = scratch.Bounds.AsSpan(0, used).ToArray();
+                int start = 0;
+                for (int feature = first; feature < end; feature++)
+                {
+                    int boundCount = scratch.BoundCounts[feature - first];
+                    bins[feature] = new FeatureBins(store, start, boundCount, scratch.IsExact[feature - first]);
+                    start += boundCount;
                 }
                 return scratch;
             },
             _ => { });
         var sources = new int[featureCount];
         for (int f = 0; f < featureCount; f++) sources[f] = f;
-        return new BinnedMatrix(matrix.FeatureNames, matrix.SampleCount, codes, bins, sources, new bool[featureCount]);
+        return new BinnedMatrix(matrix.FeatureNames, sampleCount, codes, bins, sources, new bool[featureCount]);
     }
 
-    /// <summary>One thread's sort buffers: measured values and, parallel to them, their samples, and the sort's own.</summary>
-    private sealed class BinScratch(int sampleCount)
+    /// <summary>Features per task: on a wide panel a feature is a few microseconds of work.</summary>
+    private const int FeaturesPerChunk = 64;
+
+    /// <summary>One thread's buffers: the sort's, the quantile cuts, and a chunk's bounds before they are kept.</summary>
+    private sealed class BinScratch(int sampleCount, int maxBins)
     {
-        public readonly float[] Values = new float[sampleCount];
-        public readonly int[] Samples = new int[sampleCount];
         public readonly FloatRadixSort Sorter = new(sampleCount);
+        public readonly int[] Cuts = new int[maxBins];
+        public readonly float[] Bounds = new float[FeaturesPerChunk * maxBins];
+        public readonly int[] BoundCounts = new int[FeaturesPerChunk];
+        public readonly bool[] IsExact = new bool[FeaturesPerChunk];
     }
 
     /// <summary>
-    /// Finds one feature's bins and writes its codes; the scratch spans hold at least one entry per sample.
+    /// Finds one feature's bins and writes its codes. Returns the number of upper bounds written
+    /// to <paramref name="bounds"/> (room for <see cref="MaxBins"/>; the last is +infinity) and
+    /// whether the bins are exact.
     /// </summary>
     /// <remarks>
-    /// The measured values are sorted together with their sample numbers (a radix sort, see
-    /// <see cref="FloatRadixSort"/>), so once the bounds are
-    /// known each sample's code is read off by one walk up the sorted values (the bin advances
-    /// while the value exceeds its upper bound), instead of a binary search per cell, whose
-    /// unpredictable branches cost most of the binning time. The walk gives exactly the code
-    /// <see cref="FeatureBins.CodeOf"/> gives: the first bin whose upper bound is at least the value.
+    /// The measured values' order-preserving keys are sorted together with their sample numbers
+    /// (<see cref="FloatRadixSort"/>), and each sample's code is read off the sorted run: with
+    /// exact bins the code is the number of distinct values below the sample's, counted in the
+    /// same walk that writes the bounds; with quantile bins the cuts are positions in the sorted
+    /// run and every sample between two cuts gets the same code. Both equal
+    /// <see cref="FeatureBins.CodeOf"/> (the first bin whose upper bound is at least the value)
+    /// because each bound lies in [value before the cut, value after it) (<see cref="Midpoint"/>).
+    /// There is no binary search per cell, whose unpredictable branches once cost most of the time.
     /// </remarks>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    internal FeatureBins BinFeature(ReadOnlySpan<float> values, ReadOnlySpan<CellState> states, Span<byte> codes,
-        Span<float> sortScratch, Span<int> sampleScratch, FloatRadixSort sorter)
+    internal (int BoundCount, bool IsExact) BinFeature(ReadOnlySpan<float> values, ReadOnlySpan<CellState> states,
+        Span<byte> codes, Span<float> bounds, Span<int> cuts, FloatRadixSort sorter)
     {
+        var keys = sorter.Keys;
+        var samples = sorter.Samples;
         int measuredCount = 0;
-        for (int s = 0; s < values.Length; s++)
+        if (states.IsEmpty)
         {
-            if (IsMeasured(values[s], states, s))
+            for (int s = 0; s < values.Length; s++)
             {
-                sortScratch[measuredCount] = values[s];
-                sampleScratch[measuredCount++] = s;
+                float value = values[s];
+                if (float.IsNaN(value)) continue;
+                keys[measuredCount] = FloatRadixSort.KeyOf(value);
+                samples[measuredCount++] = s;
             }
-            else codes[s] = 0; // set below, once the bins (and so the reserved codes) are known
         }
-        var sorted = sortScratch[..measuredCount];
-        var sortedSamples = sampleScratch[..measuredCount];
-        sorter.Sort(sorted, sortedSamples);
-
-        int distinctCount = 0;
-        for (int i = 0; i < sorted.Length; i++)
-            if (i == 0 || sorted[i] != sorted[i - 1]) distinctCount++;
-
-        var bins = distinctCount <= MaxBins ? ExactBins(sorted, distinctCount) : QuantileBins(sorted, MaxBins);
-        var bounds = bins.UpperBounds;
-        int bin = 0;
-        // Invariant: bounds[bin - 1] < sorted[i] (the values rise), so the first bound at least
-        // sorted[i] is found by moving forward; the last bound is +infinity, so bin stays in range.
-        for (int i = 0; i < sorted.Length; i++)
+        else
         {
-            float value = sorted[i];
-            while (value > bounds[bin]) bin++;
-            codes[sortedSamples[i]] = (byte)bin;
+            for (int s = 0; s < values.Length; s++)
+            {
+                float value = values[s];
+                if (states[s] != CellState.Measured || float.IsNaN(value)) continue;
+                keys[measuredCount] = FloatRadixSort.KeyOf(value);
+                samples[measuredCount++] = s;
+            }
+        }
+        sorter.Sort(measuredCount);
+        var sortedKeys = sorter.SortedKeys;
+        var sortedSamples = sorter.SortedSamples;
+
+        int boundCount = ExactBins(sortedKeys, sortedSamples, codes, bounds);
+        bool isExact = boundCount > 0;
+        if (!isExact)
+        {
+            int cutCount = QuantileCuts(sortedKeys, MaxBins, cuts);
+            int from = 0;
+            for (int bin = 0; bin <= cutCount; bin++)
+            {
+                int to = bin < cutCount ? cuts[bin] : sortedKeys.Length;
+                if (bin < cutCount)
+                    bounds[bin] = Midpoint(FloatRadixSort.ValueOf(sortedKeys[to - 1]), FloatRadixSort.ValueOf(sortedKeys[to]));
+                for (int i = from; i < to; i++) codes[sortedSamples[i]] = (byte)bin;
+                from = to;
+            }
+            bounds[cutCount] = float.PositiveInfinity;
+            boundCount = cutCount + 1;
         }
         if (measuredCount < values.Length)
+        {
+            // Reserved codes, as FeatureBins.CodeOf gives them: missing (or NaN) after the value bins, then below detection.
+            byte missing = (byte)boundCount, belowDetection = (byte)(boundCount + 1);
             for (int s = 0; s < values.Length; s++)
-                if (!IsMeasured(values[s], states, s))
-                    codes[s] = bins.CodeOf(values[s], states.IsEmpty ? CellState.Measured : states[s]);
-        return bins;
+            {
+                var state = states.IsEmpty ? CellState.Measured : states[s];
+                if (state == CellState.BelowDetection) codes[s] = belowDetection;
+                else if (state == CellState.Missing || float.IsNaN(values[s])) codes[s] = missing;
+            }
+        }
+        return (boundCount, isExact);
     }
 
-    private static bool IsMeasured(float value, ReadOnlySpan<CellState> states, int sample) =>
-        (states.IsEmpty || states[sample] == CellState.Measured) && !float.IsNaN(value);
-
-    private static FeatureBins ExactBins(ReadOnlySpan<float> sorted, int distinctCount)
+    /// <summary>
+    /// One bin per distinct value, bounds at the midpoints between neighbours, codes written in
+    /// the same walk; 0 when there are more distinct values than <see cref="MaxBins"/> (the codes
+    /// written so far are then overwritten by the quantile bins).
+    /// </summary>
+    private int ExactBins(ReadOnlySpan<uint> sortedKeys, ReadOnlySpan<int> sortedSamples, Span<byte> codes, Span<float> bounds)
     {
-        var bounds = new float[Math.Max(1, distinctCount)];
         int bin = 0;
-        for (int i = 1; i < sorted.Length; i++)
-            if (sorted[i] != sorted[i - 1]) bounds[bin++] = Midpoint(sorted[i - 1], sorted[i]);
-        bounds[^1] = float.PositiveInfinity;
-        return new FeatureBins(bounds, isExact: true);
+        if (sortedKeys.Length > 0)
+        {
+            float previous = FloatRadixSort.ValueOf(sortedKeys[0]);
+            codes[sortedSamples[0]] = 0;
+            for (int i = 1; i < sortedKeys.Length; i++)
+            {
+                float value = FloatRadixSort.ValueOf(sortedKeys[i]);
+                // Float comparison, not key comparison: -0 and +0 are one value.
+                if (value != previous)
+                {
+                    if (bin == MaxBins - 1) return 0;
+                    bounds[bin++] = Midpoint(previous, value);
+                    previous = value;
+                }
+                codes[sortedSamples[i]] = (byte)bin;
+            }
+        }
+        bounds[bin] = float.PositiveInfinity;
+        return bin + 1;
     }
 
-    private static FeatureBins QuantileBins(ReadOnlySpan<float> sorted, int binCount)
+    /// <summary>
+    /// Positions in the sorted values where a new bin starts: the sample quantiles at ranks
+    /// b·m/B for b = 1..B-1, each moved forward past ties so equal values never straddle two
+    /// bins, dropped when it meets the previous cut or the end. Returns the number of cuts.
+    /// </summary>
+    private static int QuantileCuts(ReadOnlySpan<uint> sortedKeys, int binCount, Span<int> cuts)
     {
-        var bounds = new List<float>(binCount);
+        int cutCount = 0;
         int lastCut = 0;
-        int count = sorted.Length;
+        int count = sortedKeys.Length;
         for (int b = 1; b < binCount; b++)
         {
             int cut = (int)((long)b * count / binCount);
             if (cut <= lastCut) continue;
-            // Move the cut past ties so equal values never straddle two bins.
-            while (cut < count && sorted[cut] == sorted[cut - 1]) cut++;
+            while (cut < count && FloatRadixSort.ValueOf(sortedKeys[cut]) == FloatRadixSort.ValueOf(sortedKeys[cut - 1])) cut++;
             if (cut >= count) break;
-            bounds.Add(Midpoint(sorted[cut - 1], sorted[cut]));
+            cuts[cutCount++] = cut;
             lastCut = cut;
         }
-        bounds.Add(float.PositiveInfinity);
-        return new FeatureBins(bounds.ToArray(), isExact: false);
+        return cutCount;
     }
 
     /// <summary>

@@ -8,8 +8,9 @@ using OmicsScreen.Engine.Randomness;
 namespace OmicsScreen.Engine.Binning;
 
 /// <summary>
-/// A panel quantised once: one byte code per cell, feature-major (one contiguous array per
-/// feature), plus each feature's bins in original units. Every seed, repeat and tree reuses it.
+/// A panel quantised once: one byte code per cell, feature-major (each feature's codes contiguous,
+/// features one after another in a few large blocks, see <see cref="CodeBlocks"/>), plus each
+/// feature's bins in original units. Every seed, repeat and tree reuses it.
 /// </summary>
 /// <remarks>
 /// Columns are shared, never copied, between a matrix and the matrices derived from it
@@ -19,24 +20,22 @@ namespace OmicsScreen.Engine.Binning;
 /// </remarks>
 public sealed class BinnedMatrix
 {
-    private readonly byte[][] _codes;
+    private readonly CodeColumn[] _codes;
     private readonly FeatureBins[] _bins;
     private readonly int[] _sourceFeatures;
     private readonly bool[] _isPermutedCopy;
-    private readonly int[] _valueBinCounts;
 
-    internal BinnedMatrix(IReadOnlyList<string> featureNames, int sampleCount, byte[][] codes,
+    internal BinnedMatrix(IReadOnlyList<string> featureNames, int sampleCount, CodeColumn[] codes,
         FeatureBins[] bins, int[] sourceFeatures, bool[] isPermutedCopy)
     {
         FeatureNames = featureNames;
         SampleCount = sampleCount;
-        _codes = codes;
+        // A copy holding each feature's value bin count beside its codes' place (see CodeColumn).
+        _codes = new CodeColumn[codes.Length];
+        for (int f = 0; f < codes.Length; f++) _codes[f] = codes[f] with { ValueBinCount = bins[f].ValueBinCount };
         _bins = bins;
         _sourceFeatures = sourceFeatures;
         _isPermutedCopy = isPermutedCopy;
-        // Kept apart from the bins objects so split search reads one contiguous array, not one object per feature.
-        _valueBinCounts = new int[bins.Length];
-        for (int f = 0; f < bins.Length; f++) _valueBinCounts[f] = bins[f].ValueBinCount;
     }
 
     public int SampleCount { get; }
@@ -44,27 +43,48 @@ public sealed class BinnedMatrix
     public IReadOnlyList<string> FeatureNames { get; }
 
     /// <summary>The codes of one feature, one per sample, in sample order.</summary>
-    public ReadOnlySpan<byte> Codes(int feature) => _codes[feature];
+    public ReadOnlySpan<byte> Codes(int feature)
+    {
+        var column = _codes[feature];
+        return new ReadOnlySpan<byte>(column.Store, column.Start, SampleCount);
+    }
 
     public FeatureBins Bins(int feature) => _bins[feature];
 
     /// <summary>
-    /// Asks the processor to start loading the first cache lines of a feature's codes. Split search
-    /// on wide panels visits thousands of short columns in random order, so each visit would
-    /// otherwise begin with a cache miss. A hint only: it changes no result.
+    /// Asks the processor to start loading the cache lines of a feature's codes that the given
+    /// rows will read: each row's line when the rows are fewer than the column's lines, else the
+    /// whole column. Split search visits many columns in random order and, deep in a tree, reads
+    /// a few scattered codes from each, so almost every read would otherwise wait for memory. A
+    /// hint only: it changes no result.
     /// </summary>
-    internal unsafe void PrefetchCodes(int feature)
+    internal unsafe void PrefetchCodes(int feature, ReadOnlySpan<int> rows)
     {
         if (!Sse.IsSupported) return;
-        var codes = _codes[feature];
+        var column = _codes[feature];
         // The address may go stale if the collector moves the array; a prefetch of any address is harmless.
-        byte* start = (byte*)Unsafe.AsPointer(ref MemoryMarshal.GetArrayDataReference(codes));
-        int lines = Math.Min(codes.Length, 512) >> 6;
-        for (int line = 0; line <= lines; line++) Sse.Prefetch0(start + (line << 6));
+        byte* start = (byte*)Unsafe.AsPointer(ref Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(column.Store), column.Start));
+        int sampleCount = SampleCount;
+        if (rows.Length > (sampleCount >> 6))
+        {
+            for (int offset = 0; offset < sampleCount; offset += 64) Sse.Prefetch0(start + offset);
+            Sse.Prefetch0(start + sampleCount - 1);
+        }
+        else foreach (int row in rows) Sse.Prefetch0(start + row);
     }
 
     /// <summary>The number of value bins of a feature; its missing code.</summary>
-    public int ValueBinCount(int feature) => _valueBinCounts[feature];
+    public int ValueBinCount(int feature) => _codes[feature].ValueBinCount;
+
+    /// <summary>
+    /// Asks the processor to start loading the entry that says where a feature's codes are
+    /// (split search draws features at random, so on a wide panel the entry is rarely cached).
+    /// A hint only.
+    /// </summary>
+    internal unsafe void PrefetchColumnEntry(int feature)
+    {
+        if (Sse.IsSupported) Sse.Prefetch0(Unsafe.AsPointer(ref _codes[feature]));
+    }
 
     /// <summary>The feature of the originally binned matrix this column holds (or permutes).</summary>
     public int SourceFeature(int feature) => _sourceFeatures[feature];
@@ -87,7 +107,7 @@ public sealed class BinnedMatrix
     public BinnedMatrix SelectFeatures(ReadOnlySpan<int> features)
     {
         var names = new string[features.Length];
-        var codes = new byte[features.Length][];
+        var codes = new CodeColumn[features.Length];
         var bins = new FeatureBins[features.Length];
         var sources = new int[features.Length];
         var copyFlags = new bool[features.Length];
@@ -119,7 +139,7 @@ public sealed class BinnedMatrix
         int original = FeatureCount;
         int total = original + sourceFeatures.Length;
         var names = new string[total];
-        var codes = new byte[total][];
+        var codes = new CodeColumn[total];
         var bins = new FeatureBins[total];
         var sources = new int[total];
         var copyFlags = new bool[total];
@@ -132,6 +152,7 @@ public sealed class BinnedMatrix
             copyFlags[f] = _isPermutedCopy[f];
         }
         var listed = sourceFeatures.ToArray();
+        CodeBlocks.Allocate(listed.Length, SampleCount).CopyTo(codes.AsSpan(original));
         // Each permuted copy has its own generator and its own slot, so columns are built in parallel
         // (on a very wide panel this is most of a repeat's one-thread time) with the same result
         // on any number of threads. Chunks of columns keep the per-task overhead small.
@@ -145,11 +166,11 @@ public sealed class BinnedMatrix
             {
                 int f = listed[i];
                 int target = original + i;
-                var permuted = (byte[])_codes[f].Clone();
+                var permuted = codes[target].Store.AsSpan(codes[target].Start, SampleCount);
+                Codes(f).CopyTo(permuted);
                 var generator = SeedSchedule.Generator(runSeed, repeat, i, SeedPurpose.PermutedCopy);
-                generator.Shuffle(permuted.AsSpan());
+                generator.Shuffle(permuted);
                 names[target] = "copy:" + FeatureNames[f];
-                codes[target] = permuted;
                 bins[target] = _bins[f];
                 sources[target] = _sourceFeatures[f];
                 copyFlags[target] = true;
@@ -164,16 +185,15 @@ public sealed class BinnedMatrix
         ArgumentNullException.ThrowIfNull(matrix);
         if (matrix.FeatureCount != FeatureCount)
             throw new ArgumentException("The matrix must have the same features, in the same order.");
-        var codes = new byte[FeatureCount][];
+        var codes = CodeBlocks.Allocate(FeatureCount, matrix.SampleCount);
         for (int f = 0; f < FeatureCount; f++)
         {
             var column = matrix.Column(f);
             var states = matrix.States(f);
             var bins = _bins[f];
-            var target = new byte[matrix.SampleCount];
+            var target = codes[f].Store.AsSpan(codes[f].Start, matrix.SampleCount);
             for (int s = 0; s < target.Length; s++)
                 target[s] = bins.CodeOf(column[s], states.IsEmpty ? CellState.Measured : states[s]);
-            codes[f] = target;
         }
         return new BinnedMatrix(FeatureNames, matrix.SampleCount, codes, _bins, _sourceFeatures, _isPermutedCopy);
     }

@@ -15,7 +15,11 @@ namespace OmicsScreen.Engine.Binning;
 /// </remarks>
 public sealed class FeatureBins
 {
-    private readonly float[] _upperBounds;
+    // The bounds are _store[_start.._start + _count); binning puts many features' bounds in one
+    // store so that a wide panel does not cost one small array per feature.
+    private readonly float[] _store;
+    private readonly int _start;
+    private readonly int _count;
 
     public FeatureBins(float[] upperBounds, bool isExact)
     {
@@ -24,25 +28,35 @@ public sealed class FeatureBins
             throw new ArgumentException($"A feature needs 1 to {BinMapper.MaxValueBins} value bins.");
         if (!float.IsPositiveInfinity(upperBounds[^1]))
             throw new ArgumentException("The last upper bound must be +infinity.");
-        _upperBounds = upperBounds;
+        _store = upperBounds;
+        _count = upperBounds.Length;
         IsExact = isExact;
     }
 
-    public int ValueBinCount => _upperBounds.Length;
+    /// <summary>Bounds already checked by the binning that wrote them, read in place from a shared store.</summary>
+    internal FeatureBins(float[] store, int start, int count, bool isExact)
+    {
+        _store = store;
+        _start = start;
+        _count = count;
+        IsExact = isExact;
+    }
+
+    public int ValueBinCount => _count;
 
     /// <summary>Every code the feature can take: the value bins plus missing and below detection.</summary>
-    public int CodeCount => _upperBounds.Length + BinMapper.ReservedCodes;
+    public int CodeCount => _count + BinMapper.ReservedCodes;
 
-    public byte MissingCode => (byte)_upperBounds.Length;
+    public byte MissingCode => (byte)_count;
 
-    public byte BelowDetectionCode => (byte)(_upperBounds.Length + 1);
+    public byte BelowDetectionCode => (byte)(_count + 1);
 
     /// <summary>True when every distinct measured value has its own bin, so split search is exact.</summary>
     public bool IsExact { get; }
 
-    public ReadOnlySpan<float> UpperBounds => _upperBounds;
+    public ReadOnlySpan<float> UpperBounds => new(_store, _start, _count);
 
-    public float UpperBound(int bin) => _upperBounds[bin];
+    public float UpperBound(int bin) => UpperBounds[bin];
 
     /// <summary>The code of a raw cell; NaN measured values count as missing.</summary>
     public byte CodeOf(float value, CellState state)
@@ -56,7 +70,7 @@ public sealed class FeatureBins
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public int ValueBinOf(float value)
     {
-        var bounds = _upperBounds;
+        var bounds = UpperBounds;
         int low = 0, high = bounds.Length - 1;
         // Invariant: the answer lies in [low, high]; bounds[high] is +infinity so one always exists.
         while (low < high)

@@ -14,37 +14,57 @@ namespace OmicsScreen.Engine.Binning;
 /// it is a missing cell). The four byte counts are taken in one pass, and a pass whose byte is
 /// the same for every value (the sign and exponent bytes of values within a few octaves) is
 /// skipped, so a column usually costs two or three linear passes instead of n log n unpredictable
-/// comparisons. The sort is stable, unlike the comparison sort it replaces; the order of equal
-/// values does not matter for binning, since equal values get the same code.
+/// comparisons. The sort is stable; the order of equal values does not matter for binning, since
+/// equal values get the same code.
+/// <para>
+/// The caller writes keys (<see cref="KeyOf"/>) and samples straight into <see cref="Keys"/> and
+/// <see cref="Samples"/> and reads the result from <see cref="SortedKeys"/> and
+/// <see cref="SortedSamples"/>, which are whichever of the two buffer pairs the last pass wrote:
+/// no pass to convert values in, none to convert them back, none to copy the result home.
+/// </para>
 /// </remarks>
 internal sealed class FloatRadixSort(int capacity)
 {
     private const int Radix = 256;
     private readonly uint[] _keys = new uint[capacity];
+    private readonly int[] _samples = new int[capacity];
     private readonly uint[] _otherKeys = new uint[capacity];
     private readonly int[] _otherSamples = new int[capacity];
     private readonly int[] _counts = new int[4 * Radix];
+    private bool _sortedInOther;
+    private int _count;
 
-    /// <summary>Sorts values (no NaN) ascending; samples[i] moves with values[i].</summary>
+    /// <summary>Where the caller writes the keys to sort.</summary>
+    public Span<uint> Keys => _keys;
+
+    /// <summary>Where the caller writes the sample of each key.</summary>
+    public Span<int> Samples => _samples;
+
+    /// <summary>The keys of the last <see cref="Sort(int)"/>, ascending.</summary>
+    public ReadOnlySpan<uint> SortedKeys => (_sortedInOther ? _otherKeys : _keys).AsSpan(0, _count);
+
+    /// <summary>The sample of each of <see cref="SortedKeys"/>.</summary>
+    public ReadOnlySpan<int> SortedSamples => (_sortedInOther ? _otherSamples : _samples).AsSpan(0, _count);
+
+    /// <summary>Sorts the first <paramref name="count"/> entries of <see cref="Keys"/>, moving <see cref="Samples"/> with them.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    public void Sort(Span<float> values, Span<int> samples)
+    public void Sort(int count)
     {
-        int count = values.Length;
+        _count = count;
+        _sortedInOther = false;
         if (count < 2) return;
         var counts = _counts.AsSpan();
         counts.Clear();
         var keys = _keys.AsSpan(0, count);
-        for (int i = 0; i < count; i++)
+        foreach (uint key in keys)
         {
-            uint key = KeyOf(values[i]);
-            keys[i] = key;
             counts[(int)(key & 0xFF)]++;
             counts[Radix + (int)((key >> 8) & 0xFF)]++;
             counts[2 * Radix + (int)((key >> 16) & 0xFF)]++;
             counts[3 * Radix + (int)(key >> 24)]++;
         }
         Span<uint> sourceKeys = keys, targetKeys = _otherKeys.AsSpan(0, count);
-        Span<int> sourceSamples = samples, targetSamples = _otherSamples.AsSpan(0, count);
+        Span<int> sourceSamples = _samples.AsSpan(0, count), targetSamples = _otherSamples.AsSpan(0, count);
         for (int pass = 0; pass < 4; pass++)
         {
             int shift = 8 * pass;
@@ -68,9 +88,22 @@ internal sealed class FloatRadixSort(int capacity)
             }
             var keySwap = sourceKeys; sourceKeys = targetKeys; targetKeys = keySwap;
             var sampleSwap = sourceSamples; sourceSamples = targetSamples; targetSamples = sampleSwap;
+            _sortedInOther = !_sortedInOther;
         }
-        for (int i = 0; i < count; i++) values[i] = ValueOf(sourceKeys[i]);
-        if (sourceSamples != samples) sourceSamples.CopyTo(samples);
+    }
+
+    /// <summary>Sorts values (no NaN) ascending; samples[i] moves with values[i]. For tests and callers holding floats.</summary>
+    public void Sort(Span<float> values, Span<int> samples)
+    {
+        for (int i = 0; i < values.Length; i++)
+        {
+            _keys[i] = KeyOf(values[i]);
+            _samples[i] = samples[i];
+        }
+        Sort(values.Length);
+        var sortedKeys = SortedKeys;
+        for (int i = 0; i < values.Length; i++) values[i] = ValueOf(sortedKeys[i]);
+        SortedSamples.CopyTo(samples);
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]

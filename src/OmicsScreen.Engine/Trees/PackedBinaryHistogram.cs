@@ -27,12 +27,13 @@ internal sealed class PackedBinaryHistogram
     /// <summary>The largest weight sum or row count a field holds without carrying.</summary>
     public const long MaxFieldValue = (long)FieldMask;
 
+    // Zero between fills: each fill empties the words it filled while it lists them.
     private readonly ulong[] _entries = new ulong[256];
     private readonly byte[] _valueCodes = new byte[256];
-    private readonly ulong[] _presence = new ulong[256 / 64];
+    private readonly ulong[] _cumulative = new ulong[256];
 
     /// <summary>The bytes of the histogram's buffers.</summary>
-    public const long Bytes = 256 * sizeof(ulong) + 256 + 256 / 8;
+    public const long Bytes = 2 * 256 * sizeof(ulong) + 256;
 
     /// <summary>A row's increment: its integer weight in its class's field, one in the row field.</summary>
     public static ulong Increment(int classCode, ulong weight) => (weight << (classCode * FieldBits)) | (1UL << RowShift);
@@ -42,68 +43,88 @@ internal sealed class PackedBinaryHistogram
     public static double Rows(ulong entry) => entry >> RowShift;
 
     public int ValueEntryCount { get; private set; }
-    public int MissingCode { get; private set; }
 
-    /// <summary>Every code's word; zero for codes holding no sample.</summary>
-    public ReadOnlySpan<ulong> Entries => _entries;
+    /// <summary>The value codes holding at least one row, ascending.</summary>
     public ReadOnlySpan<byte> ValueCodes => _valueCodes.AsSpan(0, ValueEntryCount);
-    public ulong Missing => _entries[MissingCode];
-    public ulong BelowDetection => _entries[MissingCode + 1];
+
+    /// <summary>
+    /// Entry k is the sum of the words of <see cref="ValueCodes"/>[0..k]: the left child's sums
+    /// at the cut after that code, before any unmeasured group is placed. Integer sums, so
+    /// adding a group afterwards gives the same word as adding it first.
+    /// </summary>
+    public ReadOnlySpan<ulong> CumulativeEntries => _cumulative.AsSpan(0, ValueEntryCount);
+
+    /// <summary>The word of <see cref="ValueCodes"/>[k].</summary>
+    public ulong ValueEntry(int k) => k == 0 ? _cumulative[0] : _cumulative[k] - _cumulative[k - 1];
+
+    public ulong Missing { get; private set; }
+    public ulong BelowDetection { get; private set; }
 
     public bool IsConstant => ValueEntryCount + (Missing != 0 ? 1 : 0) + (BelowDetection != 0 ? 1 : 0) <= 1;
 
     /// <summary>Fills from the codes of the node's rows; increments run parallel to rows.</summary>
+    /// <remarks>
+    /// One pass adds the rows' increments to their codes' words; a second lists the codes hit in
+    /// ascending order, with the running sums the split scan needs, and zeroes each word as it
+    /// goes, so no separate pass clears the histogram or sums the cuts. Small nodes find the codes
+    /// hit from a 256-bit mask set in the first pass, large ones by looking at every value code.
+    /// </remarks>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public void Fill(ReadOnlySpan<byte> codes, ReadOnlySpan<int> rows, ReadOnlySpan<ulong> increments, int valueBinCount)
     {
         if (increments.Length < rows.Length) throw new ArgumentException("Row arrays differ in length.");
-        ClearPrevious(valueBinCount);
         // Rows index the codes and codes index the 256 entries: in range by construction.
         ref ulong entry0 = ref MemoryMarshal.GetArrayDataReference(_entries);
         ref byte code0 = ref MemoryMarshal.GetReference(codes);
         ref int row0 = ref MemoryMarshal.GetReference(rows);
         ref ulong increment0 = ref MemoryMarshal.GetReference(increments);
-        var valueCodes = _valueCodes.AsSpan();
+        ref byte valueCode0 = ref MemoryMarshal.GetArrayDataReference(_valueCodes);
+        ref ulong cumulative0 = ref MemoryMarshal.GetArrayDataReference(_cumulative);
         int listed = 0;
+        ulong running = 0;
         if (rows.Length >= valueBinCount)
         {
             for (int i = 0; i < rows.Length; i++)
                 Unsafe.Add(ref entry0, Unsafe.Add(ref code0, Unsafe.Add(ref row0, i))) += Unsafe.Add(ref increment0, i);
             for (int code = 0; code < valueBinCount; code++)
-                if (Unsafe.Add(ref entry0, code) != 0) valueCodes[listed++] = (byte)code;
+            {
+                ulong word = Unsafe.Add(ref entry0, code);
+                if (word == 0) continue;
+                Unsafe.Add(ref entry0, code) = 0;
+                running += word;
+                Unsafe.Add(ref cumulative0, listed) = running;
+                Unsafe.Add(ref valueCode0, listed++) = (byte)code;
+            }
         }
         else
         {
-            ref ulong mask0 = ref MemoryMarshal.GetArrayDataReference(_presence);
+            Span<ulong> presence = stackalloc ulong[4];
             for (int i = 0; i < rows.Length; i++)
             {
                 int code = Unsafe.Add(ref code0, Unsafe.Add(ref row0, i));
                 Unsafe.Add(ref entry0, code) += Unsafe.Add(ref increment0, i);
-                Unsafe.Add(ref mask0, code >> 6) |= 1UL << code;
+                presence[code >> 6] |= 1UL << code;
             }
-            for (int word = 0; word < _presence.Length; word++)
+            for (int word = 0; word < 4; word++)
             {
-                ulong bits = _presence[word];
-                _presence[word] = 0;
+                ulong bits = presence[word];
                 while (bits != 0)
                 {
                     int code = (word << 6) + BitOperations.TrailingZeroCount(bits);
                     bits &= bits - 1;
-                    if (code < valueBinCount) valueCodes[listed++] = (byte)code;
+                    if (code >= valueBinCount) break; // the unmeasured codes come last and are read below
+                    ulong entry = Unsafe.Add(ref entry0, code);
+                    Unsafe.Add(ref entry0, code) = 0;
+                    running += entry;
+                    Unsafe.Add(ref cumulative0, listed) = running;
+                    Unsafe.Add(ref valueCode0, listed++) = (byte)code;
                 }
             }
         }
         ValueEntryCount = listed;
-    }
-
-    /// <summary>Zeroes the entries the previous fill touched, then records the new feature's missing code.</summary>
-    private void ClearPrevious(int valueBinCount)
-    {
-        var entries = _entries.AsSpan();
-        foreach (byte code in _valueCodes.AsSpan(0, ValueEntryCount)) entries[code] = 0;
-        entries[MissingCode] = 0;
-        entries[MissingCode + 1] = 0;
-        ValueEntryCount = 0;
-        MissingCode = valueBinCount;
+        Missing = Unsafe.Add(ref entry0, valueBinCount);
+        BelowDetection = Unsafe.Add(ref entry0, valueBinCount + 1);
+        Unsafe.Add(ref entry0, valueBinCount) = 0;
+        Unsafe.Add(ref entry0, valueBinCount + 1) = 0;
     }
 }

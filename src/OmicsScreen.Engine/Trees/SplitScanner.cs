@@ -17,8 +17,7 @@ internal sealed class SplitScanner
 {
     private readonly double[] _left;
 
-    /// <summary>The packed left sums at each cut of one scan, and one block's four scores.</summary>
-    private readonly ulong[] _cutWords = new ulong[256];
+    /// <summary>One block's four scores.</summary>
     private readonly double[] _cutScores = new double[4];
 
     public SplitScanner(int classCount) => _left = new double[classCount + 1];
@@ -90,8 +89,8 @@ internal sealed class SplitScanner
     }
 
     /// <remarks>
-    /// Same candidates and score as <see cref="ScanBinary"/>; the running left sums are one
-    /// packed word per cut. Cuts are scored four at a time: the words are read out as exact
+    /// Same candidates and score as <see cref="ScanBinary"/>; the left sums at each cut are one
+    /// packed word, the histogram's running sum plus the placed groups. Cuts are scored four at a time: the words are read out as exact
     /// doubles (a 21-bit integer or'ed into the mantissa of 2^52, minus 2^52) and scored with
     /// the scalar formula's operations in the same order (no fused multiply-add), so every lane
     /// equals the scalar score bit for bit. Only a block holding a score above the best so far
@@ -101,16 +100,13 @@ internal sealed class SplitScanner
     private void ScanPackedCuts(PackedBinaryHistogram histogram, ulong placed, int feature, ReadOnlySpan<double> nodeTotals,
         int minLeafSize, bool hasMissing, bool hasBelow, bool missingLeft, bool belowLeft, ref SplitCandidate best)
     {
-        var entries = histogram.Entries;
+        var cumulative = histogram.CumulativeEntries;
         var codes = histogram.ValueCodes;
         double total0 = nodeTotals[0], total1 = nodeTotals[1], totalRows = nodeTotals[2];
         double bestScore = best.Score;
-        ulong left = placed;
         int j = 0;
         if (Vector256.IsHardwareAccelerated && codes.Length >= 8)
         {
-            var cuts = _cutWords.AsSpan(0, codes.Length);
-            for (int k = 0; k < codes.Length; k++) cuts[k] = left += entries[codes[k]];
             var scores = _cutScores.AsSpan();
             var mask = Vector256.Create(PackedBinaryHistogram.FieldMask);
             var magicBits = Vector256.Create(0x4330000000000000UL);
@@ -120,9 +116,10 @@ internal sealed class SplitScanner
             var vTotal1 = Vector256.Create(total1);
             var vTotalRows = Vector256.Create(totalRows);
             var minusInfinity = Vector256.Create(double.NegativeInfinity);
+            var placedGroups = Vector256.Create(placed);
             for (; j + 4 <= codes.Length; j += 4)
             {
-                var words = Vector256.Create<ulong>(cuts.Slice(j, 4));
+                var words = Vector256.Create<ulong>(cumulative.Slice(j, 4)) + placedGroups;
                 var left0 = Vector256.AsDouble((words & mask) | magicBits) - magic;
                 var left1 = Vector256.AsDouble(((words >>> PackedBinaryHistogram.FieldBits) & mask) | magicBits) - magic;
                 var leftRows = Vector256.AsDouble((words >>> PackedBinaryHistogram.RowShift) | magicBits) - magic;
@@ -141,17 +138,15 @@ internal sealed class SplitScanner
                 {
                     if (!(scores[lane] > bestScore)) continue;
                     bestScore = scores[lane];
-                    ulong word = cuts[j + lane];
+                    ulong word = cumulative[j + lane] + placed;
                     double rows = PackedBinaryHistogram.Rows(word);
                     best = Record(feature, codes[j + lane], bestScore, rows, totalRows - rows, hasMissing, hasBelow, missingLeft, belowLeft);
                 }
             }
-            left = cuts[j - 1];
         }
-        // Invariant: after step j, left holds the placed groups plus value codes[0..j].
         for (; j < codes.Length; j++)
         {
-            left += entries[codes[j]];
+            ulong left = cumulative[j] + placed; // the placed groups plus value codes[0..j]
             double leftRows = PackedBinaryHistogram.Rows(left);
             double rightRows = totalRows - leftRows;
             if (leftRows < minLeafSize || rightRows < minLeafSize) continue;

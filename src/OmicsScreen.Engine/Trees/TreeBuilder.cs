@@ -20,7 +20,7 @@ namespace OmicsScreen.Engine.Trees;
 internal sealed class TreeBuilder
 {
     /// <summary>How many features ahead of the one being searched their codes are prefetched.</summary>
-    private const int PrefetchDistance = 4;
+    private const int PrefetchDistance = 8;
 
     private readonly int _classCount;
     private readonly int _stride;
@@ -118,12 +118,18 @@ internal sealed class TreeBuilder
         // generator's state) are exactly those of drawing one feature at a time.
         int drawn = 0;
         for (int planned = Math.Min(featuresPerSplit, order.Length); drawn < planned; drawn++) Draw(order, drawn, ref generator);
-        for (int ahead = 0; ahead < PrefetchDistance && ahead < drawn; ahead++) matrix.PrefetchCodes(order[ahead]);
+        for (int ahead = 0; ahead < 2 * PrefetchDistance && ahead < drawn; ahead++) matrix.PrefetchColumnEntry(order[ahead]);
+        for (int ahead = 0; ahead < PrefetchDistance && ahead < drawn; ahead++) matrix.PrefetchCodes(order[ahead], rows);
         int tried = 0;
         for (int next = 0; next < order.Length && tried < featuresPerSplit; next++)
         {
             if (next == drawn) Draw(order, drawn++, ref generator);
-            else if (next + PrefetchDistance < drawn) matrix.PrefetchCodes(order[next + PrefetchDistance]);
+            else
+            {
+                // Two steps: the entry saying where a feature's codes are, then the codes themselves.
+                if (next + 2 * PrefetchDistance < drawn) matrix.PrefetchColumnEntry(order[next + 2 * PrefetchDistance]);
+                if (next + PrefetchDistance < drawn) matrix.PrefetchCodes(order[next + PrefetchDistance], rows);
+            }
             int feature = order[next];
             int valueBins = matrix.ValueBinCount(feature);
             if (_packed)

@@ -156,4 +156,57 @@ public class BinMapperTests
                 Assert.Equal(bins.CodeOf(matrix.Value(f, s), matrix.State(f, s)), binned.Codes(f)[s]);
         }
     }
+    [Theory]
+    [InlineData(1, 0.0)]
+    [InlineData(7, 0.0)]
+    [InlineData(200, 0.0)]   // a wide panel's column: exact bins
+    [InlineData(254, 0.2)]   // exactly the most exact bins, with unmeasured cells
+    [InlineData(1000, 0.0)]  // quantile bins
+    [InlineData(4000, 0.15)]
+    public void Bounds_and_codes_equal_the_plain_binning_of_sort_and_search(int sampleCount, double unmeasured)
+    {
+        // ReferenceBinning is the engine's first binning, written for clarity: a comparison sort of
+        // each column and a binary search per cell. Columns mix log-normal values, negatives, zeros of
+        // both signs, heavy ties, infinities and few-level columns, so both exact and quantile bins,
+        // and the switch between them at 254 distinct values, are exercised.
+        var generator = new Engine.Randomness.Xoshiro256StarStar((ulong)sampleCount);
+        const int featureCount = 150; // more than two binning chunks of 64 features
+        var builder = new FeatureMatrixBuilder(
+            Enumerable.Range(0, featureCount).Select(f => $"f{f}").ToArray(),
+            Enumerable.Range(0, sampleCount).Select(s => $"s{s}").ToArray());
+        for (int f = 0; f < featureCount; f++)
+        {
+            // Few-level columns, among them 254 and 255 levels: either side of the last exact binning.
+            int levels = (f % 10) switch { 0 => 1, 2 => 3, 4 => 254, 6 => 255, 8 => 40, _ => int.MaxValue };
+            for (int s = 0; s < sampleCount; s++)
+            {
+                double u = generator.NextDouble();
+                if (u < unmeasured / 3) builder.SetMissing(f, s);
+                else if (u < 2 * unmeasured / 3) builder.SetBelowDetection(f, s, 0.5f);
+                else if (u < unmeasured) builder.SetMeasured(f, s, float.NaN);
+                else if (levels != int.MaxValue) builder.SetMeasured(f, s, generator.NextInt(levels) - 3);
+                else builder.SetMeasured(f, s, (generator.NextDouble() * 1.2) switch
+                {
+                    < 0.05 => 0f,
+                    < 0.08 => -0f,
+                    < 0.15 => 2.5f,
+                    < 0.16 => float.PositiveInfinity,
+                    < 0.17 => float.NegativeInfinity,
+                    < 0.30 => -(float)Math.Exp(3 * generator.NextGaussian()),
+                    _ => (float)Math.Exp(generator.NextGaussian()),
+                });
+            }
+        }
+        var matrix = builder.Build();
+        var (referenceCodes, referenceBins) = ReferenceBinning.Bin(matrix);
+        var binned = new BinMapper().Bin(matrix, threadCount: 2);
+        for (int f = 0; f < featureCount; f++)
+        {
+            var bins = binned.Bins(f);
+            Assert.Equal(referenceBins[f].IsExact, bins.IsExact);
+            // Float equality: -0 and +0 are one bound (the reference's comparison sort orders them arbitrarily).
+            Assert.Equal(referenceBins[f].UpperBounds.ToArray(), bins.UpperBounds.ToArray());
+            Assert.True(referenceCodes[f].AsSpan().SequenceEqual(binned.Codes(f)), $"codes of feature {f} differ");
+        }
+    }
 }

@@ -92,7 +92,10 @@ public class NodeHistogramTests
         Assert.Equal(plain.IsConstant, packed.IsConstant);
         for (int code = 0; code < valueBinCount + 2; code++)
         {
-            ulong word = packed.Entries[code];
+            int listed = packed.ValueCodes.IndexOf((byte)code);
+            ulong word = code == valueBinCount ? packed.Missing
+                : code == valueBinCount + 1 ? packed.BelowDetection
+                : listed >= 0 ? packed.ValueEntry(listed) : 0;
             Assert.Equal(plain.Entry(code).ToArray(),
                 new[] { PackedBinaryHistogram.Class0(word), PackedBinaryHistogram.Class1(word), PackedBinaryHistogram.Rows(word) });
         }
