@@ -1,3 +1,5 @@
+using OmicsScreen.Engine.Panels;
+
 namespace OmicsScreen.Benchmarks.Calibration;
 
 /// <summary>What the calibration suite measured on one panel.</summary>
@@ -39,6 +41,12 @@ public sealed record PanelCalibration(
     string SpecialMarkers,
     double Seconds)
 {
+    /// <summary>The model's outcome kind; the estimates are AUC or accuracy (classes), R^2 (measured) or Harrell's C (follow-up).</summary>
+    public OutcomeKind Kind { get; init; } = OutcomeKind.Classes;
+
+    /// <summary>Share of discovery samples whose event was observed (follow-up only; NaN otherwise).</summary>
+    public double EventShare { get; init; } = double.NaN;
+
     /// <summary>|selection-aware estimate - fresh estimate|; NaN when either is missing.</summary>
     public double EstimateError => Math.Abs(SelectionAwareEstimate - FreshEstimate);
 
