@@ -77,6 +77,7 @@ public static class CalibrationSuite
         string estimate = p.LockedPanelSize == 0
             ? "no panel locked"
             : Invariant($"locked {p.LockedPanelSize}, {measure} selection-aware {Number(p.SelectionAwareEstimate)} fresh {Number(p.FreshEstimate)}");
+        if (p.CurveFolds > 0) estimate += Invariant($"; folds without a panel {p.FoldsWithoutPanel}/{p.CurveFolds}, mean fold panel {p.MeanFoldPanelSize:F1}");
         if (double.IsFinite(p.EventShare)) estimate += Invariant($"; events {p.EventShare:P0}");
         string found = p.IsNull ? "" : Invariant($", true {p.TrueDiscoveries}/{p.RelatedCount} (baseline {p.BaselineTrueDiscoveries})");
         if (p.PairFound is { } pair) found += pair ? ", pair found" : ", pair missed";

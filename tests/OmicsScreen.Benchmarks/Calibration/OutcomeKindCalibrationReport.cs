@@ -41,8 +41,8 @@ public static class OutcomeKindCalibrationReport
     {
         string events = kind == OutcomeKind.TimeToEvent ? " mean event share |" : "";
         string eventsRule = kind == OutcomeKind.TimeToEvent ? " ---: |" : "";
-        output.WriteLine($"| shape or design | panels |{events} non-empty shortlist | mean shortlist | mean FDP | mean decoy estimate | true found: ours / baseline (ratio) | threshold found: ours / baseline | no locked panel | mean selection-aware {measure} | mean fresh {measure} | mean signed difference | mean abs. difference | max abs. difference |");
-        output.WriteLine($"| --- | ---: |{eventsRule} ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |");
+        output.WriteLine($"| shape or design | panels |{events} non-empty shortlist | mean shortlist | mean FDP | mean decoy estimate | true found: ours / baseline (ratio) | threshold found: ours / baseline | no locked panel | curve folds without a panel | mean selection-aware {measure} | mean fresh {measure} | mean signed difference | mean abs. difference | max abs. difference |");
+        output.WriteLine($"| --- | ---: |{eventsRule} ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |");
         foreach (var group in panels.GroupBy(p => p.Design))
         {
             var list = group.ToList();
@@ -51,11 +51,13 @@ public static class OutcomeKindCalibrationReport
             string recall = s.IsNull ? "-" : Invariant($"{s.MeanTrueDiscoveries:F1} / {s.MeanBaselineTrueDiscoveries:F1} ({Number(s.RecallRatio, "F2")})");
             string threshold = s.ThresholdPanels == 0 ? "-" : Invariant($"{s.ThresholdFound}/{s.ThresholdPanels} / {s.BaselineThresholdFound}/{s.ThresholdPanels}");
             double signed = Mean(list.Where(p => p.HasEstimatePair).Select(p => p.EstimateDifference));
+            var curves = list.Where(p => p.CurveFolds > 0).ToList();
+            string foldsWithout = curves.Count == 0 ? "-" : Invariant($"{curves.Sum(p => p.FoldsWithoutPanel)} of {curves.Sum(p => p.CurveFolds)}");
             output.WriteLine(Invariant(
-                $"| {s.Design} | {s.Panels} |{eventShare} {(s.IsNull ? Number(s.NonEmptyShare, "P0") : "-")} | {s.MeanShortlisted:F1} | {s.MeanFalseDiscoveryProportion:F3} | {Number(s.MeanDecoyEstimate, "F3")} | {recall} | {threshold} | {s.NoLockedPanel} | {Number(s.MeanSelectionAware, "F3")} | {Number(s.MeanFresh, "F3")} | {Signed(signed)} | {Number(s.MeanEstimateError, "F3")} | {Number(s.MaxEstimateError, "F3")} |"));
+                $"| {s.Design} | {s.Panels} |{eventShare} {(s.IsNull ? Number(s.NonEmptyShare, "P0") : "-")} | {s.MeanShortlisted:F1} | {s.MeanFalseDiscoveryProportion:F3} | {Number(s.MeanDecoyEstimate, "F3")} | {recall} | {threshold} | {s.NoLockedPanel} | {foldsWithout} | {Number(s.MeanSelectionAware, "F3")} | {Number(s.MeanFresh, "F3")} | {Signed(signed)} | {Number(s.MeanEstimateError, "F3")} | {Number(s.MaxEstimateError, "F3")} |"));
         }
         output.WriteLine();
-        output.WriteLine(Invariant($"FDP = false / max(1, shortlisted); on null panels every shortlisted feature is false. Baseline: {(kind == OutcomeKind.Measured ? "Spearman's test" : "the Cox score test on the feature's ranks")} per feature with Benjamini-Hochberg at 0.10. Ratio = our true discoveries / the baseline's, summed over panels. Selection-aware = `LockedPanelEstimate` of the locked panel; fresh = {(kind == OutcomeKind.Measured ? "R² (SST about the fresh mean)" : "Harrell's C")} on {CalibrationSettings.FreshCohortSize:N0} new samples of the same model of a forest on the locked markers grown on the discovery panel with the screen's forest options. Signed difference = selection-aware - fresh, over panels with both."));
+        output.WriteLine(Invariant($"FDP = false / max(1, shortlisted); on null panels every shortlisted feature is false. Baseline: {(kind == OutcomeKind.Measured ? "Spearman's test" : "the Cox score test on the feature's ranks")} per feature with Benjamini-Hochberg at 0.10. Ratio = our true discoveries / the baseline's, summed over panels. Selection-aware = `LockedPanelEstimate` of the locked panel; fresh = {(kind == OutcomeKind.Measured ? "R² (SST about the fresh mean)" : "Harrell's C")} on {CalibrationSettings.FreshCohortSize:N0} new samples of the same model of a forest on the locked markers grown on the discovery panel with the screen's forest options. Signed difference = selection-aware - fresh, over panels with both. A curve fold whose inner screen locks nothing scores as chance (R² of the training mean, C = 0.5) in the selection-aware estimate."));
     }
 
     private static void WriteGoals(IReadOnlyList<PanelCalibration> panels, string measure, TextWriter output)

@@ -85,6 +85,9 @@ public static class PanelMeasurer
         {
             Kind = model.Kind,
             EventShare = panel.FollowUp is { } followUp ? followUp.EventCount / (double)followUp.SampleCount : double.NaN,
+            FoldsWithoutPanel = result.PanelSize?.FoldsWithoutPanel ?? -1,
+            CurveFolds = result.PanelSize is { } curve ? curve.FoldCount * curve.FoldRepeats : 0,
+            MeanFoldPanelSize = result.PanelSize?.MeanFoldPanelSize ?? double.NaN,
         };
     }
 
