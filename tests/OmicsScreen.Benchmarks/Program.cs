@@ -7,7 +7,7 @@ namespace OmicsScreen.Benchmarks;
 /// Runs each benchmark case several times, each time in a fresh child process so that the peak
 /// resident memory reported belongs to that case alone, and prints the median time.
 /// Usage: omicsscreen-bench [SUITE|CASE ...] [--runs N] [--work DIR]
-/// or: omicsscreen-bench calibration [--seeds N] [--quick] [--threads T] [--only NAME]
+/// or: omicsscreen-bench calibration [--seeds N] [--quick] [--threads T] [--kind classes|measured|follow-up] [--only NAME]
 /// (the calibration suite measures error control, not time, so it runs in this process)
 /// or: omicsscreen-bench write-panels DIR (the panels of reference/forest, for its scripts).
 /// </summary>

@@ -1,4 +1,5 @@
 using System.Globalization;
+using OmicsScreen.Engine.Panels;
 
 namespace OmicsScreen.Benchmarks.Calibration;
 
@@ -20,10 +21,27 @@ public static class CalibrationReport
     public const double DesignEstimateErrorGoal = 0.05;
     public const double NullEstimateGoal = 0.53;
 
+    /// <summary>
+    /// The class panels' table, goals and uniformity (issue 12), then one section per other outcome
+    /// kind run (<see cref="OutcomeKindCalibrationReport"/>), so a class-only run prints what it always did.
+    /// </summary>
     public static void Write(IReadOnlyList<PanelCalibration> panels, TextWriter output)
     {
         ArgumentNullException.ThrowIfNull(panels);
         ArgumentNullException.ThrowIfNull(output);
+        var classPanels = panels.Where(p => p.Kind == OutcomeKind.Classes).ToList();
+        if (classPanels.Count > 0) WriteClasses(classPanels, output);
+        foreach (var kind in new[] { OutcomeKind.Measured, OutcomeKind.TimeToEvent })
+        {
+            var kindPanels = panels.Where(p => p.Kind == kind).ToList();
+            if (kindPanels.Count == 0) continue;
+            if (classPanels.Count > 0 || kind == OutcomeKind.TimeToEvent && panels.Any(p => p.Kind == OutcomeKind.Measured)) output.WriteLine();
+            OutcomeKindCalibrationReport.Write(kind, kindPanels, output);
+        }
+    }
+
+    private static void WriteClasses(IReadOnlyList<PanelCalibration> panels, TextWriter output)
+    {
         var summaries = panels.GroupBy(p => p.Design).Select(g => DesignSummary.From(g.Key, g.ToList())).ToList();
         WriteTable(summaries, output);
         output.WriteLine();
@@ -146,7 +164,7 @@ public static class CalibrationReport
         return finite.Count == 0 ? double.NaN : finite.Average();
     }
 
-    private static void WriteUniformity(IReadOnlyList<PanelCalibration> panels, TextWriter output)
+    internal static void WriteUniformity(IReadOnlyList<PanelCalibration> panels, TextWriter output)
     {
         output.WriteLine("Uniformity of the screen's p-values (`Features[i].PValue`) on features unrelated to the outcome, pooled over seeds:");
         output.WriteLine();

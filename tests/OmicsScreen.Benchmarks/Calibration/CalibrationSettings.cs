@@ -1,11 +1,12 @@
 using System.Globalization;
+using OmicsScreen.Engine.Panels;
 using OmicsScreen.Screening.Screen;
 
 namespace OmicsScreen.Benchmarks.Calibration;
 
 /// <summary>
 /// The command line of the calibration mode:
-/// calibration [--seeds N] [--quick] [--threads T] [--only NAME[,NAME...]] (--only may repeat).
+/// calibration [--seeds N] [--quick] [--threads T] [--kind classes|measured|follow-up] [--only NAME[,NAME...]] (--only may repeat).
 /// </summary>
 public sealed record CalibrationSettings
 {
@@ -23,6 +24,9 @@ public sealed record CalibrationSettings
     public bool Quick { get; init; }
 
     public int ThreadCount { get; init; }
+
+    /// <summary>Only the shapes and designs of this outcome kind; null for every kind.</summary>
+    public OutcomeKind? Kind { get; init; }
 
     /// <summary>Shapes and designs to run; empty runs all of them.</summary>
     public IReadOnlyList<string> Only { get; init; } = [];
@@ -53,6 +57,9 @@ public sealed record CalibrationSettings
                 case "--quick":
                     settings = settings with { Quick = true };
                     break;
+                case "--kind":
+                    settings = settings with { Kind = ParseKind(Value()) };
+                    break;
                 case "--only":
                     only.AddRange(Value().Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries));
                     break;
@@ -62,6 +69,14 @@ public sealed record CalibrationSettings
         }
         return settings with { Only = only };
     }
+
+    private static OutcomeKind ParseKind(string text) => text switch
+    {
+        "classes" => OutcomeKind.Classes,
+        "measured" => OutcomeKind.Measured,
+        "follow-up" => OutcomeKind.TimeToEvent,
+        _ => throw new ArgumentException($"--kind takes classes, measured or follow-up, not '{text}'."),
+    };
 
     private static int PositiveInteger(string option, string text, int minimum)
     {

@@ -1,5 +1,6 @@
 using System.Diagnostics;
 using System.Globalization;
+using OmicsScreen.Engine.Panels;
 using OmicsScreen.TestSupport.Calibration;
 
 namespace OmicsScreen.Benchmarks.Calibration;
@@ -9,7 +10,7 @@ namespace OmicsScreen.Benchmarks.Calibration;
 /// <see cref="CalibrationCatalogue"/> for each seed with the default screen, in this process
 /// (it measures error control, not time), prints each panel as it finishes and then the table,
 /// the goals and the p-value uniformity.
-/// Usage: calibration [--seeds N] [--quick] [--threads T] [--only NAME[,NAME...]]
+/// Usage: calibration [--seeds N] [--quick] [--threads T] [--kind classes|measured|follow-up] [--only NAME[,NAME...]]
 /// </summary>
 public static class CalibrationSuite
 {
@@ -28,11 +29,14 @@ public static class CalibrationSuite
         catch (ArgumentException error)
         {
             Console.Error.WriteLine(error.Message);
-            Console.Error.WriteLine("Usage: calibration [--seeds N] [--quick] [--threads T] [--only NAME[,NAME...]]");
+            Console.Error.WriteLine("Usage: calibration [--seeds N] [--quick] [--threads T] [--kind classes|measured|follow-up] [--only NAME[,NAME...]]");
             return 2;
         }
 
-        var designs = CalibrationCatalogue.All.Where(d => settings.Only.Count == 0 || settings.Only.Contains(d)).ToList();
+        var designs = CalibrationCatalogue.All
+            .Where(d => settings.Only.Count == 0 || settings.Only.Contains(d))
+            .Where(d => settings.Kind is null || CalibrationCatalogue.Create(d, 1).Kind == settings.Kind)
+            .ToList();
         var defaults = new Screening.Screen.ScreenOptions();
         output.WriteLine(Invariant($"# calibration: {designs.Count} shapes/designs x {settings.SeedCount} seed{(settings.SeedCount == 1 ? "" : "s")} = {designs.Count * settings.SeedCount} panels; threads {(settings.ThreadCount == 0 ? "all" : settings.ThreadCount.ToString(CultureInfo.InvariantCulture))}"));
         output.WriteLine(Invariant($"# machine: {Environment.ProcessorCount} cores, load average {LoadAverage()}"));
@@ -64,9 +68,17 @@ public static class CalibrationSuite
 
     private static string ProgressLine(PanelCalibration p, int done, int total, double elapsed)
     {
+        string measure = p.Kind switch
+        {
+            OutcomeKind.Measured => "R²",
+            OutcomeKind.TimeToEvent => "C",
+            _ => p.ClassCount == 2 ? "AUC" : "accuracy",
+        };
         string estimate = p.LockedPanelSize == 0
             ? "no panel locked"
-            : Invariant($"locked {p.LockedPanelSize}, {(p.ClassCount == 2 ? "AUC" : "accuracy")} selection-aware {Number(p.SelectionAwareEstimate)} fresh {Number(p.FreshEstimate)}");
+            : Invariant($"locked {p.LockedPanelSize}, {measure} selection-aware {Number(p.SelectionAwareEstimate)} fresh {Number(p.FreshEstimate)}");
+        if (p.CurveFolds > 0) estimate += Invariant($"; folds without a panel {p.FoldsWithoutPanel}/{p.CurveFolds}, mean fold panel {p.MeanFoldPanelSize:F1}");
+        if (double.IsFinite(p.EventShare)) estimate += Invariant($"; events {p.EventShare:P0}");
         string found = p.IsNull ? "" : Invariant($", true {p.TrueDiscoveries}/{p.RelatedCount} (baseline {p.BaselineTrueDiscoveries})");
         if (p.PairFound is { } pair) found += pair ? ", pair found" : ", pair missed";
         if (p.ThresholdFound is { } threshold) found += threshold ? ", threshold found" : ", threshold missed";

@@ -1,3 +1,5 @@
+using OmicsScreen.Engine.Panels;
+
 namespace OmicsScreen.Benchmarks.Calibration;
 
 /// <summary>What the calibration suite measured on one panel.</summary>
@@ -39,6 +41,21 @@ public sealed record PanelCalibration(
     string SpecialMarkers,
     double Seconds)
 {
+    /// <summary>The model's outcome kind; the estimates are AUC or accuracy (classes), R^2 (measured) or Harrell's C (follow-up).</summary>
+    public OutcomeKind Kind { get; init; } = OutcomeKind.Classes;
+
+    /// <summary>Share of discovery samples whose event was observed (follow-up only; NaN otherwise).</summary>
+    public double EventShare { get; init; } = double.NaN;
+
+    /// <summary>Outer folds of the panel-size curve whose inner screen locked nothing (scored as chance); -1 without a curve.</summary>
+    public int FoldsWithoutPanel { get; init; } = -1;
+
+    /// <summary>Outer folds of the panel-size curve (folds x repeats); 0 without a curve.</summary>
+    public int CurveFolds { get; init; }
+
+    /// <summary>Mean size of the panel the folds locked (0 for a fold without one); NaN without a curve.</summary>
+    public double MeanFoldPanelSize { get; init; } = double.NaN;
+
     /// <summary>|selection-aware estimate - fresh estimate|; NaN when either is missing.</summary>
     public double EstimateError => Math.Abs(SelectionAwareEstimate - FreshEstimate);
 

@@ -10,7 +10,8 @@ namespace OmicsScreen.Benchmarks.Calibration;
 /// <summary>
 /// Screens one calibration panel with the default options and measures the result against the
 /// model's truth: discoveries, the decoy estimate, the univariate baseline, and the locked
-/// panel's selection-aware estimate against its performance on a fresh cohort.
+/// panel's selection-aware estimate against its performance on a fresh cohort (AUC or accuracy
+/// for classes, R^2 for a measured outcome, Harrell's C for follow-up).
 /// </summary>
 /// <remarks>
 /// Reads only <see cref="ScreenResult.Shortlist"/>, <see cref="ScreenResult.Decoys"/>,
@@ -63,11 +64,16 @@ public static class PanelMeasurer
 
         int lockedSize = result.LockedPanelSize;
         double fresh = double.NaN;
-        if (lockedSize > 0)
+        if (lockedSize > 0 && panel.Kind == OutcomeKind.Classes)
         {
             var locked = PanelLocker.Lock(panel, result, new PanelLockOptions { Seed = model.Seed, ThreadCount = settings.ThreadCount });
             var cohort = model.DrawFreshCohort(CalibrationSettings.FreshCohortSize, FreshCohortNumber);
             fresh = FreshEstimate(locked, cohort);
+        }
+        else if (lockedSize > 0)
+        {
+            var cohort = model.DrawFreshCohort(CalibrationSettings.FreshCohortSize, FreshCohortNumber);
+            fresh = FreshCohortScore.Of(panel, result, Math.Min(lockedSize, result.Shortlist.Count), cohort, model.Seed, settings.ThreadCount);
         }
         double estimate = lockedSize > 0 ? result.LockedPanelEstimate : double.NaN;
 
@@ -75,14 +81,21 @@ public static class PanelMeasurer
             shortlisted.Count, trueDiscoveries, falseDiscoveries, (double)falseDiscoveries / Math.Max(1, shortlisted.Count),
             result.Decoys.EstimatedFalseDiscoveryRate, baselineDiscoveries, baselineTrue,
             pairFound, baselinePairFound, thresholdFound, baselineThresholdFound,
-            lockedSize, estimate, fresh, nullPValues.ToArray(), EstimateStandardError(result), SpecialMarkers(model, result), watch.Elapsed.TotalSeconds);
+            lockedSize, estimate, fresh, nullPValues.ToArray(), EstimateStandardError(result), SpecialMarkers(model, result), watch.Elapsed.TotalSeconds)
+        {
+            Kind = model.Kind,
+            EventShare = panel.FollowUp is { } followUp ? followUp.EventCount / (double)followUp.SampleCount : double.NaN,
+            FoldsWithoutPanel = result.PanelSize?.FoldsWithoutPanel ?? -1,
+            CurveFolds = result.PanelSize is { } curve ? curve.FoldCount * curve.FoldRepeats : 0,
+            MeanFoldPanelSize = result.PanelSize?.MeanFoldPanelSize ?? double.NaN,
+        };
     }
 
-    /// <summary>The DeLong standard error of the locked procedure's pooled held-out AUC; NaN when there is none.</summary>
+    /// <summary>The DeLong standard error of the locked procedure's pooled held-out AUC; NaN when there is none (and for other outcome kinds).</summary>
     private static double EstimateStandardError(ScreenResult result)
     {
         var curve = result.PanelSize;
-        if (result.LockedPanelSize == 0 || curve is null || curve.LockedOutOfFoldScores.Count == 0) return double.NaN;
+        if (result.Kind != OutcomeKind.Classes || result.LockedPanelSize == 0 || curve is null || curve.LockedOutOfFoldScores.Count == 0) return double.NaN;
         var positive = new List<double>();
         var negative = new List<double>();
         for (int i = 0; i < curve.LockedOutOfFoldScores.Count; i++)

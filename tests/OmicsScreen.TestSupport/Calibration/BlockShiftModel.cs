@@ -41,7 +41,7 @@ public sealed class BlockShiftModel : CalibrationModel
 
     public IReadOnlyList<double> Effects => _effects;
 
-    protected override int[] DrawOutcome(double[][] standardised, ref Xoshiro256StarStar generator)
+    protected override DrawnOutcome DrawOutcome(double[][] standardised, ref Xoshiro256StarStar generator)
     {
         int sampleCount = standardised[0].Length, blockSize = Background.BlockSize;
         var classes = ClassesInShares(sampleCount, [0.5, 0.5], ref generator);
@@ -52,6 +52,6 @@ public sealed class BlockShiftModel : CalibrationModel
                 // sqrt(rho) x (delta / sqrt(rho)) = delta: the latent shift as each member sees it.
                 for (int s = 0; s < sampleCount; s++) if (classes[s] == 1) column[s] += _effects[b];
             }
-        return classes;
+        return DrawnOutcome.OfClasses(classes);
     }
 }

@@ -29,14 +29,28 @@ public abstract class CalibrationModel
     private readonly bool[] _related;
     private readonly string[] _featureNames;
 
+    /// <summary>A model whose outcome is classes.</summary>
     protected CalibrationModel(string name, ulong seed, int sampleCount, BackgroundDesign background,
+        IReadOnlyList<string> classNames, int positiveClass)
+        : this(name, seed, sampleCount, background, OutcomeKind.Classes, classNames ?? throw new ArgumentNullException(nameof(classNames)), positiveClass)
+    {
+    }
+
+    /// <summary>A model whose outcome is a measured quantity or censored follow-up (no classes).</summary>
+    protected CalibrationModel(string name, ulong seed, int sampleCount, BackgroundDesign background, OutcomeKind kind)
+        : this(name, seed, sampleCount, background, kind, [], -1)
+    {
+        if (kind == OutcomeKind.Classes) throw new ArgumentException("A class model names its classes.");
+    }
+
+    private CalibrationModel(string name, ulong seed, int sampleCount, BackgroundDesign background, OutcomeKind kind,
         IReadOnlyList<string> classNames, int positiveClass)
     {
         ArgumentNullException.ThrowIfNull(background);
-        ArgumentNullException.ThrowIfNull(classNames);
         background.Validate();
         if (sampleCount < 4) throw new ArgumentException("A calibration panel needs at least 4 samples.");
         Name = name;
+        Kind = kind;
         Seed = seed;
         SampleCount = sampleCount;
         Background = background;
@@ -60,6 +74,9 @@ public abstract class CalibrationModel
     /// <summary>The shape or design this model stands for, e.g. "null-blocks".</summary>
     public string Name { get; }
 
+    /// <summary>What the outcome is: classes, a measured quantity or a censored time to an event.</summary>
+    public OutcomeKind Kind { get; }
+
     public ulong Seed { get; }
 
     /// <summary>Samples of the discovery panel.</summary>
@@ -69,8 +86,10 @@ public abstract class CalibrationModel
 
     public BackgroundDesign Background { get; }
 
+    /// <summary>The classes of a class model; empty for other kinds.</summary>
     public IReadOnlyList<string> ClassNames { get; }
 
+    /// <summary>Classes of a class model; 0 for other kinds.</summary>
     public int ClassCount => ClassNames.Count;
 
     /// <summary>The class scored by AUCs; -1 leaves the choice to <see cref="ClassOutcome"/> (the smallest class).</summary>
@@ -107,10 +126,11 @@ public abstract class CalibrationModel
     }
 
     /// <summary>
-    /// Draws the class of every sample, reading and changing the standardised values of the planted
-    /// features as the design says; the background is already in <paramref name="standardised"/>.
+    /// Draws the outcome of every sample (its class, measured value or follow-up), reading and
+    /// changing the standardised values of the planted features as the design says; the background
+    /// is already in <paramref name="standardised"/>.
     /// </summary>
-    protected abstract int[] DrawOutcome(double[][] standardised, ref Xoshiro256StarStar generator);
+    protected abstract DrawnOutcome DrawOutcome(double[][] standardised, ref Xoshiro256StarStar generator);
 
     /// <summary>True for a feature the design needs free of any block (its z is its own noise alone).</summary>
     protected virtual bool IsIndependent(int feature) => false;
@@ -159,7 +179,8 @@ public abstract class CalibrationModel
     {
         var generator = SeedSchedule.Generator(Seed, cohortNumber, CohortStream, SeedPurpose.Sampling);
         var standardised = DrawBackground(sampleCount, ref generator);
-        var classes = DrawOutcome(standardised, ref generator);
+        var outcome = DrawOutcome(standardised, ref generator);
+        if (outcome.Kind != Kind) throw new InvalidOperationException($"Model {Name} drew an outcome of another kind than its own.");
         var columns = new float[FeatureCount][];
         var states = new CellState[]?[FeatureCount];
         for (int f = 0; f < FeatureCount; f++)
@@ -183,7 +204,7 @@ public abstract class CalibrationModel
         var sampleIds = new string[sampleCount];
         for (int s = 0; s < sampleCount; s++) sampleIds[s] = samplePrefix + (s + 1).ToString("D4", CultureInfo.InvariantCulture);
         var matrix = new FeatureMatrix(_featureNames, sampleIds, columns, states);
-        return new Panel(matrix, new ClassOutcome("outcome", ClassNames, classes, PositiveClass));
+        return outcome.ToPanel(matrix, ClassNames, PositiveClass);
     }
 
     /// <summary>The reported value of a standardised value z of feature f.</summary>

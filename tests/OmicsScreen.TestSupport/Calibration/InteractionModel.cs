@@ -48,7 +48,7 @@ public sealed class InteractionModel : CalibrationModel
 
     protected override bool IsIndependent(int feature) => _independent.Contains(feature);
 
-    protected override int[] DrawOutcome(double[][] standardised, ref Xoshiro256StarStar generator)
+    protected override DrawnOutcome DrawOutcome(double[][] standardised, ref Xoshiro256StarStar generator)
     {
         var first = standardised[_pair[0]];
         var second = standardised[_pair[1]];
@@ -60,6 +60,6 @@ public sealed class InteractionModel : CalibrationModel
             classes[s] = label;
         }
         MarginalMarkers.Shift(standardised, _markers, _effects, classes);
-        return classes;
+        return DrawnOutcome.OfClasses(classes);
     }
 }

@@ -23,6 +23,6 @@ public sealed class NullModel : CalibrationModel
 
     public IReadOnlyList<double> ClassShares => _classShares;
 
-    protected override int[] DrawOutcome(double[][] standardised, ref Xoshiro256StarStar generator) =>
-        ClassesInShares(standardised[0].Length, _classShares, ref generator);
+    protected override DrawnOutcome DrawOutcome(double[][] standardised, ref Xoshiro256StarStar generator) =>
+        DrawnOutcome.OfClasses(ClassesInShares(standardised[0].Length, _classShares, ref generator));
 }

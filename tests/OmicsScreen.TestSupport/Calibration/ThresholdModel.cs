@@ -52,7 +52,7 @@ public sealed class ThresholdModel : CalibrationModel
 
     protected override bool IsIndependent(int feature) => _independent.Contains(feature);
 
-    protected override int[] DrawOutcome(double[][] standardised, ref Xoshiro256StarStar generator)
+    protected override DrawnOutcome DrawOutcome(double[][] standardised, ref Xoshiro256StarStar generator)
     {
         var marker = standardised[_marker];
         var classes = new int[marker.Length];
@@ -62,6 +62,6 @@ public sealed class ThresholdModel : CalibrationModel
             classes[s] = generator.NextDouble() < rate ? 1 : 0;
         }
         MarginalMarkers.Shift(standardised, _markers, _effects, classes);
-        return classes;
+        return DrawnOutcome.OfClasses(classes);
     }
 }
