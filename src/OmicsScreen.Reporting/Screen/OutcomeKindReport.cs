@@ -264,27 +264,11 @@ internal static class OutcomeKindReport
     public static SvgImage RankAgainstEffect(ScreenResult result)
     {
         bool measured = result.Kind == OutcomeKind.Measured;
-        int count = Math.Min(ScreenReportCharts.RankAucFeatureLimit, result.Order.Count);
-        var shortlisted = new HashSet<int>(result.Shortlist.Select(e => e.Forest.FeatureIndex));
-        var inX = new List<double>();
-        var inY = new List<double>();
-        var outX = new List<double>();
-        var outY = new List<double>();
-        for (int i = 0; i < count; i++)
-        {
-            int feature = result.Order[i];
-            double effect = measured ? result.MeasuredMarkers[feature].Rho : result.FollowUpMarkers[feature].Concordance.Concordance;
-            if (!double.IsFinite(effect)) continue;
-            (shortlisted.Contains(feature) ? inX : outX).Add(i + 1);
-            (shortlisted.Contains(feature) ? inY : outY).Add(effect);
-        }
-        string name = measured ? "Spearman's rho with the outcome" : "single-marker concordance (Harrell's C)";
-        return XYChart.Render(
-            new XYChartOptions(Invariant($"Screen order against {name} ({count} features)"), ScreenReportCharts.OrderAxisLabel,
-                measured ? "Spearman's rho with the outcome" : "Harrell's C (marker as a risk score)",
-                XScale: AxisScaleKind.Log10, YMinimum: measured ? -1 : 0, YMaximum: 1, Width: 820),
-            [new XYSeries("Not shortlisted", outX, outY, XYSeriesStyle.Points), new XYSeries("Shortlisted", inX, inY, XYSeriesStyle.Points)],
-            [new ReferenceLine(ChartAxis.Y, measured ? 0 : 0.5, measured ? "rho 0 (no monotone relation)" : "C 0.5 (no separation)")]);
+        return measured
+            ? ScreenReportCharts.RankAgainst(result, "Spearman's rho with the outcome", "Spearman's rho with the outcome",
+                feature => result.MeasuredMarkers[feature].Rho, -1, new ReferenceLine(ChartAxis.Y, 0, "rho 0 (no monotone relation)"))
+            : ScreenReportCharts.RankAgainst(result, "single-marker concordance (Harrell's C)", "Harrell's C (marker as a risk score)",
+                feature => result.FollowUpMarkers[feature].Concordance.Concordance, 0, new ReferenceLine(ChartAxis.Y, 0.5, "C 0.5 (no separation)"));
     }
 
     private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);

@@ -204,7 +204,13 @@ internal static class ScreenReportCharts
     /// Every feature's position in the screen order (log axis) against its single-marker AUC: where the
     /// forest and a one-marker test agree, and the markers the forest ranks high for reasons a single test misses.
     /// </summary>
-    public static SvgImage RankAgainstAuc(ScreenResult result)
+    public static SvgImage RankAgainstAuc(ScreenResult result) =>
+        RankAgainst(result, "single-marker AUC", AucAxisLabel, feature => result.Univariate.Row(feature, 0).Auc, 0,
+            new ReferenceLine(ChartAxis.Y, 0.5, "AUC 0.5 (no separation)"));
+
+    /// <summary>The first features of the screen order (log axis) against a single-marker effect, shortlisted ones apart.</summary>
+    internal static SvgImage RankAgainst(ScreenResult result, string effectName, string axisLabel, Func<int, double> effectOf,
+        double yMinimum, ReferenceLine noEffect)
     {
         int count = Math.Min(RankAucFeatureLimit, result.Order.Count);
         var shortlisted = new HashSet<int>(result.Shortlist.Select(e => e.Forest.FeatureIndex));
@@ -215,16 +221,16 @@ internal static class ScreenReportCharts
         for (int i = 0; i < count; i++)
         {
             int feature = result.Order[i];
-            double auc = result.Univariate.Row(feature, 0).Auc;
-            if (!double.IsFinite(auc)) continue;
+            double effect = effectOf(feature);
+            if (!double.IsFinite(effect)) continue;
             (shortlisted.Contains(feature) ? inX : outX).Add(i + 1);
-            (shortlisted.Contains(feature) ? inY : outY).Add(auc);
+            (shortlisted.Contains(feature) ? inY : outY).Add(effect);
         }
         return XYChart.Render(
-            new XYChartOptions(Invariant($"Screen order against single-marker AUC ({count} features)"), OrderAxisLabel, AucAxisLabel,
-                XScale: AxisScaleKind.Log10, YMinimum: 0, YMaximum: 1, Width: 820),
+            new XYChartOptions(Invariant($"Screen order against {effectName} ({count} features)"), OrderAxisLabel, axisLabel,
+                XScale: AxisScaleKind.Log10, YMinimum: yMinimum, YMaximum: 1, Width: 820),
             [new XYSeries("Not shortlisted", outX, outY, XYSeriesStyle.Points), new XYSeries("Shortlisted", inX, inY, XYSeriesStyle.Points)],
-            [new ReferenceLine(ChartAxis.Y, 0.5, "AUC 0.5 (no separation)")]);
+            [noEffect]);
     }
 
     /// <summary>
