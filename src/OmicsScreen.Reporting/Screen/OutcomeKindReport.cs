@@ -3,6 +3,7 @@ using OmicsScreen.Engine.Panels;
 using OmicsScreen.Reporting.Charts;
 using OmicsScreen.Screening.Resampling;
 using OmicsScreen.Screening.Screen;
+using OmicsScreen.Screening.Statistics;
 using OmicsScreen.Screening.Statistics.Survival;
 
 namespace OmicsScreen.Reporting.Screen;
@@ -128,12 +129,7 @@ internal static class OutcomeKindReport
     }
 
     /// <summary>Type 7 quantile of sorted values (R's default).</summary>
-    private static double Quartile(double[] sorted, double p)
-    {
-        double h = (sorted.Length - 1) * p;
-        int lower = (int)Math.Floor(h);
-        return lower + 1 < sorted.Length ? sorted[lower] + (h - lower) * (sorted[lower + 1] - sorted[lower]) : sorted[lower];
-    }
+    private static double Quartile(double[] sorted, double p) => Quantile.OfSorted(sorted, p, QuantileDefinition.Linear);
 
     public static string ShortlistLegend(OutcomeKind kind) => kind switch
     {

@@ -41,6 +41,21 @@ internal sealed class ClassScreenOutcome(ClassOutcome outcome) : ScreenOutcome
             (binned, groups, threads) => OutOfBagPermutationImportance.MeasureGroups(forest, binned, outcome, groups, threads));
     }
 
+    /// <summary>The rank tests of every class contrast; a feature's rank is by its smallest p over contrasts.</summary>
+    public override SingleMarkerStatistics SingleMarkers(Panel panel, int threadCount)
+    {
+        var table = UnivariateScreen.Compute(panel);
+        var best = new double[panel.FeatureCount];
+        Array.Fill(best, double.PositiveInfinity);
+        foreach (var row in table.AllSamples)
+            if (!double.IsNaN(row.PValue)) best[row.FeatureIndex] = Math.Min(best[row.FeatureIndex], row.PValue);
+        string positive = outcome.ClassNames[outcome.PositiveClass];
+        int contrast = 0;
+        for (int c = 0; c < table.Contrasts.Count; c++)
+            if (table.Contrasts[c] == positive) { contrast = c; break; }
+        return new SingleMarkerStatistics(table, [], [], SingleMarkerStatistics.RanksByPValue(best), contrast);
+    }
+
     public override double[] RankTestPValues(FeatureMatrix values, int[] rows, int threadCount) =>
         UnivariateScreen.RankTestPValues(values, outcome, rows, threadCount);
 

@@ -72,6 +72,13 @@ internal sealed class FollowUpScreenOutcome(FollowUpOutcome outcome) : ScreenOut
         return curve;
     }
 
+    public override SingleMarkerStatistics SingleMarkers(Panel panel, int threadCount)
+    {
+        var markers = FollowUpScreen.Compute(panel.Matrix, _followUp.Times, _followUp.Events, threadCount: threadCount);
+        return new SingleMarkerStatistics(new UnivariateTable([], [], []), [], markers,
+            SingleMarkerStatistics.RanksByPValue(markers.Select(m => m.PValue).ToArray()), -1);
+    }
+
     /// <summary>
     /// The Cox score test (the log-rank type test of a continuous marker) on the marker's mid-ranks
     /// among the rows: ranks make it as robust to skewed omics values as the class rank test.
@@ -102,7 +109,7 @@ internal sealed class FollowUpScreenOutcome(FollowUpOutcome outcome) : ScreenOut
                     e[i] = observed[kept[i]];
                     if (e[i]) eventCount++;
                 }
-                double p = kept.Count < 3 || eventCount == 0 ? 1 : CoxSingleMarker.Fit(t, e, ranks).ScorePValue;
+                double p = kept.Count < 3 || eventCount == 0 ? 1 : CoxSingleMarker.ScoreTest(t, e, ranks).PValue;
                 pValues[feature] = double.IsNaN(p) ? 1 : p;
                 return all;
             }, _ => { });
@@ -114,9 +121,7 @@ internal sealed class FollowUpScreenOutcome(FollowUpOutcome outcome) : ScreenOut
     {
         var selected = matrix.SelectFeatures(features);
         var forest = SurvivalForestTrainer.Train(selected, _followUp, options, trainingRows);
-        var all = forest.Risk(selected);
-        var risk = new double[testRows.Length];
-        for (int i = 0; i < testRows.Length; i++) risk[i] = all[testRows[i]];
+        var risk = AtRows(forest.Risk(selected), testRows);
         double c = ConcordanceOf(testRows.ToArray(), i => risk[i], byPosition: true);
         return new PanelScore(c, 1 - c, risk, []);
     }

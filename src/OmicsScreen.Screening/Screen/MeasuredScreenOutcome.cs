@@ -47,11 +47,17 @@ internal sealed class MeasuredScreenOutcome(MeasuredOutcome outcome) : ScreenOut
         return new ReferenceForest(summary, null);
     }
 
+    public override SingleMarkerStatistics SingleMarkers(Panel panel, int threadCount)
+    {
+        var markers = MeasuredOutcomeScreen.Compute(panel.Matrix, _values, threadCount: threadCount);
+        return new SingleMarkerStatistics(new UnivariateTable([], [], []), markers, [],
+            SingleMarkerStatistics.RanksByPValue(markers.Select(m => m.PValue).ToArray()), -1);
+    }
+
     /// <summary>Spearman's rho with its t-approximation p-value (<see cref="SpearmanTest"/>), per column.</summary>
     public override double[] RankTestPValues(FeatureMatrix values, int[] rows, int threadCount)
     {
-        var y = new double[rows.Length];
-        for (int i = 0; i < rows.Length; i++) y[i] = _values[rows[i]];
+        var y = AtRows(_values, rows);
         var pValues = new double[values.FeatureCount];
         Parallel.For(0, values.FeatureCount, WorkerThreads.Options(threadCount),
             () => (All: new double[values.SampleCount], Rows: new double[rows.Length]),
@@ -71,10 +77,7 @@ internal sealed class MeasuredScreenOutcome(MeasuredOutcome outcome) : ScreenOut
     {
         var selected = matrix.SelectFeatures(features);
         var forest = RegressionForestTrainer.Train(selected, _values, options, trainingRows);
-        var all = forest.Predict(selected);
-        var predictions = new double[testRows.Length];
-        for (int i = 0; i < testRows.Length; i++) predictions[i] = all[testRows[i]];
-        return Scored(predictions, testRows);
+        return Scored(AtRows(forest.Predict(selected), testRows), testRows);
     }
 
     /// <summary>Every test sample predicted at the training part's mean: what a panel must beat.</summary>

@@ -58,4 +58,15 @@ internal abstract class ScreenOutcome
 
     /// <summary>What a fold scores when its procedure locks no panel: chance, or the training part's mean or largest class.</summary>
     public abstract PanelScore ChanceScore(int[] trainingRows, int[] testRows);
+
+    /// <summary>The single-marker statistics of every feature on all samples, with each feature's rank by their p-value.</summary>
+    public abstract SingleMarkerStatistics SingleMarkers(Panel panel, int threadCount);
+
+    /// <summary>The values of the given rows, in their order.</summary>
+    protected static double[] AtRows(double[] values, ReadOnlySpan<int> rows)
+    {
+        var picked = new double[rows.Length];
+        for (int i = 0; i < rows.Length; i++) picked[i] = values[rows[i]];
+        return picked;
+    }
 }

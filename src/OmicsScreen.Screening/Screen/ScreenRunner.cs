@@ -43,17 +43,8 @@ public static class ScreenRunner
 
         progress?.Report(new ScreenProgress(ScreenStage.UnivariateStatistics, 0, 1));
         var model = context.ScreenOutcome;
-        var univariate = panel.Kind == OutcomeKind.Classes ? UnivariateScreen.Compute(panel) : new UnivariateTable([], [], []);
-        var measuredMarkers = panel.Kind == OutcomeKind.Measured
-            ? MeasuredOutcomeScreen.Compute(panel.Matrix, panel.Measured!.Values, threadCount: settings.ThreadCount) : [];
-        var followUpMarkers = panel.Kind == OutcomeKind.TimeToEvent
-            ? FollowUpScreen.Compute(panel.Matrix, panel.FollowUp!.Times, panel.FollowUp.Events, threadCount: settings.ThreadCount) : [];
-        var univariateRanks = panel.Kind switch
-        {
-            OutcomeKind.Measured => RanksByPValue(measuredMarkers.Select(m => m.PValue).ToArray()),
-            OutcomeKind.TimeToEvent => RanksByPValue(followUpMarkers.Select(m => m.PValue).ToArray()),
-            _ => UnivariateRanks(univariate, panel.FeatureCount),
-        };
+        var singleMarkers = model.SingleMarkers(panel, settings.ThreadCount);
+        var univariate = singleMarkers.Classes;
         Finish(ScreenStage.UnivariateStatistics);
 
         progress?.Report(new ScreenProgress(ScreenStage.ReferenceForest, 0, 1));
@@ -104,13 +95,7 @@ public static class ScreenRunner
         var groupImportance = groupMembers.Count == 0 ? []
             : referenceForest.GroupImportance?.Invoke(matrix, groupMembers, settings.ThreadCount)
               ?? Enumerable.Repeat(double.NaN, groupMembers.Count).ToArray();
-        int positiveContrast = panel.Kind == OutcomeKind.Classes ? ContrastOfPositiveClass(univariate, panel) : -1;
-        var shortlist = shortlisted.Select((f, i) => new ShortlistEntry(i + 1, features[f], groups[i], groupImportance[groups[i] - 1],
-            positiveContrast >= 0 ? univariate.Row(f, positiveContrast) : null, univariateRanks[f])
-        {
-            Measured = measuredMarkers.Length > 0 ? measuredMarkers[f] : null,
-            FollowUp = followUpMarkers.Length > 0 ? followUpMarkers[f] : null,
-        }).ToList();
+        var shortlist = shortlisted.Select((f, i) => singleMarkers.Entry(i + 1, features[f], groups[i], groupImportance[groups[i] - 1])).ToList();
 
         PanelSizeCurve? curve = null;
         if (options.CurveFolds > 0)
@@ -135,12 +120,12 @@ public static class ScreenRunner
         int lockedSize = curve?.LockedSize ?? Math.Min(shortlist.Count, options.CurveMaxPanelSize);
         double lockedEstimate = curve?.LockedEstimate ?? double.NaN;
         return new ScreenResult(settings, repeats, features, order, shortlist, correlations, stability, decoys, reference,
-            univariate, univariateRanks, curve, seconds, cohorts)
+            univariate, singleMarkers.Ranks, curve, seconds, cohorts)
         {
             LockedPanelSize = lockedSize,
             LockedPanelEstimate = lockedEstimate,
-            MeasuredMarkers = measuredMarkers,
-            FollowUpMarkers = followUpMarkers,
+            MeasuredMarkers = singleMarkers.Measured,
+            FollowUpMarkers = singleMarkers.FollowUp,
             Kind = panel.Kind,
         };
     }
@@ -187,34 +172,5 @@ public static class ScreenRunner
             for (int i = 0; i < listLength; i++) selections[r * featureCount + order[i]] = true;
         }
         return SelectionStability.Nogueira(selections, featureCount);
-    }
-
-    private static int ContrastOfPositiveClass(UnivariateTable univariate, Panel panel)
-    {
-        string positive = panel.Outcome.ClassNames[panel.Outcome.PositiveClass];
-        for (int c = 0; c < univariate.Contrasts.Count; c++) if (univariate.Contrasts[c] == positive) return c;
-        return 0;
-    }
-
-    /// <summary>Rank of every feature by its smallest rank-test p-value over contrasts (1 = smallest; ties by feature order).</summary>
-    private static int[] UnivariateRanks(UnivariateTable univariate, int featureCount)
-    {
-        var best = new double[featureCount];
-        Array.Fill(best, double.PositiveInfinity);
-        foreach (var row in univariate.AllSamples)
-            if (!double.IsNaN(row.PValue)) best[row.FeatureIndex] = Math.Min(best[row.FeatureIndex], row.PValue);
-        return RanksByPValue(best);
-    }
-
-    /// <summary>Rank of every feature by its p-value (1 = smallest; NaN last; ties by feature order).</summary>
-    private static int[] RanksByPValue(double[] pValues)
-    {
-        int featureCount = pValues.Length;
-        var best = pValues.Select(p => double.IsNaN(p) ? double.PositiveInfinity : p).ToArray();
-        var order = Enumerable.Range(0, featureCount).ToArray();
-        Array.Sort(order, (a, b) => best[a] != best[b] ? best[a].CompareTo(best[b]) : a.CompareTo(b));
-        var ranks = new int[featureCount];
-        for (int i = 0; i < order.Length; i++) ranks[order[i]] = i + 1;
-        return ranks;
     }
 }

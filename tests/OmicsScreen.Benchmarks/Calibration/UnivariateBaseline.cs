@@ -104,7 +104,7 @@ public static class UnivariateBaseline
                     time[i] = followUp.Times[kept[i]];
                     observed[i] = followUp.Events[kept[i]];
                 }
-                pValues[f] = CoxSingleMarker.Fit(time, observed, Ranking.Rank(values.ToArray())).ScorePValue;
+                pValues[f] = CoxSingleMarker.ScoreTest(time, observed, Ranking.Rank(values.ToArray())).PValue;
             }
         }
         return pValues;

@@ -24,38 +24,9 @@ public static class CoxSingleMarker
 
     public static CoxFit Fit(ReadOnlySpan<double> time, ReadOnlySpan<bool> eventObserved, ReadOnlySpan<double> marker, double level = 0.95)
     {
-        FollowUp.Check(time, eventObserved);
-        if (marker.Length != time.Length) throw new ArgumentException("The marker needs one value per sample.");
-        int n = marker.Length;
-        double mean = 0;
-        for (int i = 0; i < n; i++)
-        {
-            if (!double.IsFinite(marker[i])) throw new ArgumentException("The marker has a missing value; drop those samples first.");
-            mean += marker[i];
-        }
-        mean /= n;
-        // Centring changes neither the coefficient nor the tests, and keeps exp(beta x) in range.
-        var x = new double[n];
-        double sumSquares = 0;
-        for (int i = 0; i < n; i++)
-        {
-            x[i] = marker[i] - mean;
-            sumSquares += x[i] * x[i];
-        }
-        double sd = n > 1 ? Math.Sqrt(sumSquares / (n - 1)) : double.NaN;
-        var order = FollowUp.OrderByTime(time);
-        var t = new double[n];
-        var d = new bool[n];
-        var xs = new double[n];
-        for (int p = 0; p < n; p++)
-        {
-            t[p] = time[order[p]];
-            d[p] = eventObserved[order[p]];
-            xs[p] = x[order[p]];
-        }
-
+        var (t, d, xs, sd) = Prepare(time, eventObserved, marker);
         var atZero = Evaluate(t, d, xs, 0.0);
-        double scoreChi = atZero.Information > 0 ? atZero.Score * atZero.Score / atZero.Information : double.NaN;
+        double scoreChi = ScoreChiSquare(atZero);
         double beta = 0;
         var current = atZero;
         int iteration = 0;
@@ -90,6 +61,57 @@ public static class CoxSingleMarker
             scoreChi, double.IsNaN(scoreChi) ? double.NaN : NormalTail.TwoSided(Math.Sqrt(scoreChi)),
             double.IsNaN(se) ? double.NaN : NormalTail.TwoSided(beta / se),
             Math.Exp(beta * sd), hrInterval, iteration, converged);
+    }
+
+    /// <summary>
+    /// The score test of no effect alone (U(0)^2 / I(0), the log-rank type test of a continuous
+    /// marker): the first step of <see cref="Fit"/>, without its Newton iterations, for callers that
+    /// need only the p-value (the screen's rank test on thousands of features and decoys).
+    /// </summary>
+    public static (double ChiSquare, double PValue) ScoreTest(ReadOnlySpan<double> time, ReadOnlySpan<bool> eventObserved, ReadOnlySpan<double> marker)
+    {
+        var (t, d, xs, _) = Prepare(time, eventObserved, marker);
+        double chi = ScoreChiSquare(Evaluate(t, d, xs, 0.0));
+        return (chi, double.IsNaN(chi) ? double.NaN : NormalTail.TwoSided(Math.Sqrt(chi)));
+    }
+
+    private static double ScoreChiSquare(PartialLikelihood atZero) =>
+        atZero.Information > 0 ? atZero.Score * atZero.Score / atZero.Information : double.NaN;
+
+    /// <summary>The samples in ascending time with the marker centred, and the marker's sample SD.</summary>
+    private static (double[] Time, bool[] Events, double[] Centred, double Sd) Prepare(ReadOnlySpan<double> time, ReadOnlySpan<bool> eventObserved,
+        ReadOnlySpan<double> marker)
+    {
+        FollowUp.Check(time, eventObserved);
+        if (marker.Length != time.Length) throw new ArgumentException("The marker needs one value per sample.");
+        int n = marker.Length;
+        double mean = 0;
+        for (int i = 0; i < n; i++)
+        {
+            if (!double.IsFinite(marker[i])) throw new ArgumentException("The marker has a missing value; drop those samples first.");
+            mean += marker[i];
+        }
+        mean /= n;
+        // Centring changes neither the coefficient nor the tests, and keeps exp(beta x) in range.
+        var x = new double[n];
+        double sumSquares = 0;
+        for (int i = 0; i < n; i++)
+        {
+            x[i] = marker[i] - mean;
+            sumSquares += x[i] * x[i];
+        }
+        double sd = n > 1 ? Math.Sqrt(sumSquares / (n - 1)) : double.NaN;
+        var order = FollowUp.OrderByTime(time);
+        var t = new double[n];
+        var d = new bool[n];
+        var xs = new double[n];
+        for (int p = 0; p < n; p++)
+        {
+            t[p] = time[order[p]];
+            d[p] = eventObserved[order[p]];
+            xs[p] = x[order[p]];
+        }
+        return (t, d, xs, sd);
     }
 
     private readonly record struct PartialLikelihood(double LogLikelihood, double Score, double Information);

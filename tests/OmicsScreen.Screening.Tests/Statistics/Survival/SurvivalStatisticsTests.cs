@@ -62,6 +62,17 @@ public sealed class SurvivalStatisticsTests
 
     [Theory]
     [MemberData(nameof(DataSets))]
+    public void The_score_test_alone_matches_coxph_score_test(string name)
+    {
+        // R survival's coxph score (log-rank) test, as in the full fit above; the screen calls this without the Newton steps.
+        var set = SurvivalReference.Get(name);
+        var (chiSquare, p) = CoxSingleMarker.ScoreTest(set.Time, set.Event, set.Marker);
+        Assert.Equal(set.Number("cox_efron_score_chisq"), chiSquare, 1e-9);
+        Assert.Equal(1, set.Number("cox_efron_score_p") / p, 1e-8);
+    }
+
+    [Theory]
+    [MemberData(nameof(DataSets))]
     public void Harrells_c_and_its_jackknife_variance_match_concordance(string name)
     {
         var set = SurvivalReference.Get(name);
