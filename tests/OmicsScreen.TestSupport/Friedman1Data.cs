@@ -1,4 +1,3 @@
-using System.Globalization;
 using OmicsScreen.Engine.Panels;
 
 namespace OmicsScreen.TestSupport;
@@ -13,19 +12,5 @@ public static class Friedman1Data
     /// <summary>How many of the leading features enter the outcome; the rest are noise by construction.</summary>
     public const int InformativeCount = 5;
 
-    public static (FeatureMatrix Matrix, double[] Outcome) Load()
-    {
-        var lines = File.ReadAllLines(Path.Combine(ReferenceData.Directory, "regression", "friedman1.csv"));
-        var features = lines[0].Split(',')[2..];
-        var rows = lines[1..].Select(l => l.Split(',')).ToArray();
-        var builder = new FeatureMatrixBuilder(features, rows.Select(r => r[0]).ToArray());
-        var outcome = new double[rows.Length];
-        for (int s = 0; s < rows.Length; s++)
-        {
-            outcome[s] = double.Parse(rows[s][1], CultureInfo.InvariantCulture);
-            for (int f = 0; f < features.Length; f++)
-                builder.SetMeasured(f, s, float.Parse(rows[s][f + 2], CultureInfo.InvariantCulture));
-        }
-        return (builder.Build(), outcome);
-    }
+    public static (FeatureMatrix Matrix, double[] Outcome) Load() => ReferenceTables.Measured("regression", "friedman1.csv");
 }

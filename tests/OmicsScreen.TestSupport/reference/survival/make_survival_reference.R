@@ -44,6 +44,13 @@ data(gehan)
 gehan_set <- describe("gehan", gehan$time, gehan$cens, as.numeric(gehan$treat == "control"),
   "Freireich et al. (1963) remission times of 42 leukaemia patients as MASS::gehan; x = 1 for the control (placebo) arm")
 
+# The North Central Cancer Treatment Group lung cancer data (Loprinzi et al. 1994, J Clin Oncol
+# 12:601-607; 228 patients with advanced lung cancer) as distributed with the survival package:
+# status 2 = died, 1 = censored; the marker is age in years (no missing values).
+data(cancer, package = "survival")
+lung_set <- describe("lung", lung$time, as.integer(lung$status == 2), as.numeric(lung$age),
+  "Loprinzi et al. (1994) NCCTG advanced lung cancer, 228 patients, survival::lung; time in days, x = age in years")
+
 set.seed(20261204)
 n <- 120
 x <- round(rnorm(n), 3)
@@ -64,5 +71,5 @@ synthetic_ties <- describe("invented_heavy_ties",
 out <- list(
   versions = list(R = R.version.string, survival = as.character(packageVersion("survival")),
                   MASS = as.character(packageVersion("MASS"))),
-  data_sets = list(gehan_set, synthetic_continuous, synthetic_ties))
+  data_sets = list(gehan_set, synthetic_continuous, synthetic_ties, lung_set))
 writeLines(toJSON(out, auto_unbox = TRUE, digits = NA, pretty = TRUE), "survival_reference.json")
