@@ -32,6 +32,11 @@ public static class BenchmarkRegistry
         cases.Add(("interaction-scan", new InteractionScanCase(1_000, 5_000, 5_000)));
         cases.Add(("screen", new ScreenCase("screen-200x20000", 200, 20_000)));
         cases.Add(("screen", new ScreenCase("screen-1000x2000", 1_000, 2_000)));
+        // Issues 17 and 18: the same shapes with a measured and with a time-to-event outcome.
+        cases.Add(("screen-kinds", new OutcomeKindScreenCase("screen-measured-200x20000", Engine.Panels.OutcomeKind.Measured, 200, 20_000)));
+        cases.Add(("screen-kinds", new OutcomeKindScreenCase("screen-measured-1000x2000", Engine.Panels.OutcomeKind.Measured, 1_000, 2_000)));
+        cases.Add(("screen-kinds", new OutcomeKindScreenCase("screen-follow-up-200x20000", Engine.Panels.OutcomeKind.TimeToEvent, 200, 20_000)));
+        cases.Add(("screen-kinds", new OutcomeKindScreenCase("screen-follow-up-1000x2000", Engine.Panels.OutcomeKind.TimeToEvent, 1_000, 2_000)));
         // The widest panel the automatic interaction scan takes on, with and without it.
         cases.Add(("screen-scan", new ScreenCase("screen-200x10000", 200, 10_000)));
         cases.Add(("screen-scan", new ScreenCase("screen-200x10000-no-scan", 200, 10_000, Screening.Screen.InteractionScanMode.Off)));
