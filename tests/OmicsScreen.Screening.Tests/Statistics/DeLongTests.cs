@@ -1,3 +1,5 @@
+using System.Globalization;
+using System.Text.Json;
 using OmicsScreen.Screening.Statistics;
 using OmicsScreen.Screening.Tests.Support;
 
@@ -66,5 +68,47 @@ public class DeLongTests
     public void A_class_with_one_value_has_no_variance_estimate()
     {
         Assert.True(double.IsNaN(DeLong.Estimate([5.0], [1.0, 2]).Variance));
+    }
+
+    [Theory]
+    [InlineData(0)]
+    [InlineData(1)]
+    [InlineData(2)]
+    [InlineData(3)]
+    public void Paired_comparison_matches_pROC_roc_test_on_the_aSAH_data(int index)
+    {
+        // Source: R pROC 1.18.0 roc.test(..., method = "delong", paired = TRUE) on pROC's public aSAH data
+        // (Turck et al. 2010; reference/roc/make_paired_delong_reference.R). From memory, pROC's own
+        // documentation prints Z = -2.209, p = 0.02718 for s100b against wfns, the first comparison.
+        using var json = JsonDocument.Parse(File.ReadAllText(Path.Combine(OmicsScreen.TestSupport.ReferenceData.Directory, "roc", "paired_delong_reference.json")));
+        var expected = json.RootElement.GetProperty("comparisons")[index];
+        var lines = File.ReadAllLines(Path.Combine(OmicsScreen.TestSupport.ReferenceData.Directory, "roc", "asah.csv"));
+        var header = lines[0].Split(',');
+        var rows = lines[1..].Select(l => l.Split(',')).ToArray();
+        double[] Column(string name) => rows.Select(r => double.Parse(r[Array.IndexOf(header, name)], CultureInfo.InvariantCulture)).ToArray();
+        var poor = Column("poor").Select(v => v == 1).ToArray();
+        var result = DeLong.ComparePaired(Column(expected.GetProperty("a").GetString()!), Column(expected.GetProperty("b").GetString()!), poor);
+        Assert.Equal(expected.GetProperty("auc_a").GetDouble(), result.AucA, 1e-12);
+        Assert.Equal(expected.GetProperty("auc_b").GetDouble(), result.AucB, 1e-12);
+        Assert.Equal(expected.GetProperty("z").GetDouble(), result.Z, 1e-9);
+        Assert.Equal(expected.GetProperty("p").GetDouble(), result.PValue, 1e-9);
+        Assert.Equal(expected.GetProperty("lower").GetDouble(), result.Interval.Lower, 1e-9);
+        Assert.Equal(expected.GetProperty("upper").GetDouble(), result.Interval.Upper, 1e-9);
+        Assert.Equal(41, result.PositiveCount);
+        Assert.Equal(72, result.NegativeCount);
+    }
+
+    [Fact]
+    public void Paired_comparison_of_a_score_with_itself_has_no_spread_and_with_its_reverse_the_whole_gap()
+    {
+        // Common practice: identical scores differ by nothing (SE 0, so no test); a score and its
+        // negation have AUCs a and 1 - a.
+        var positive = new[] { true, false, true, true, false, false, true, false };
+        var score = new[] { 0.9, 0.1, 0.4, 0.8, 0.35, 0.2, 0.7, 0.6 };
+        var same = DeLong.ComparePaired(score, score, positive);
+        Assert.Equal(0, same.Difference);
+        Assert.True(double.IsNaN(same.PValue));
+        var reversed = DeLong.ComparePaired(score, score.Select(v => -v).ToArray(), positive);
+        Assert.Equal(2 * reversed.AucA - 1, reversed.Difference, 12);
     }
 }
