@@ -97,11 +97,11 @@ internal static class PanelSizeEstimator
         var errors = new double[sizes.Length];
         for (int s = 0; s < sizes.Length; s++)
         {
-            var (hMean, hSd) = MeanAndSd(selectionAware, s);
-            var (oMean, oSd) = MeanAndSd(optimistic, s);
+            var (hMean, hSd) = SampleMoments.OfColumn(selectionAware, s);
+            var (oMean, oSd) = SampleMoments.OfColumn(optimistic, s);
             double se = hSd / Math.Sqrt(folds.Count);
-            points[s] = new PanelSizePoint(sizes[s], hMean, hSd, se, MeanAndSd(selectionAwareError, s).Mean, oMean, oSd,
-                MeanAndSd(optimisticError, s).Mean, folds.Count);
+            points[s] = new PanelSizePoint(sizes[s], hMean, hSd, se, SampleMoments.OfColumn(selectionAwareError, s).Mean, oMean, oSd,
+                SampleMoments.OfColumn(optimisticError, s).Mean, folds.Count);
             means[s] = hMean;
             errors[s] = se;
         }
@@ -136,7 +136,7 @@ internal static class PanelSizeEstimator
             var otherErrors = new double[sizes.Length];
             for (int s = 0; s < sizes.Length; s++)
             {
-                var (mean, sd) = MeanAndSd(selectionAware, s, skippedRow: i);
+                var (mean, sd) = SampleMoments.OfColumn(selectionAware, s, skippedRow: i);
                 otherMeans[s] = mean;
                 otherErrors[s] = sd / Math.Sqrt(Math.Max(1, folds.Count - 1));
             }
@@ -152,9 +152,7 @@ internal static class PanelSizeEstimator
             lockedScores[i] = locked.Score;
             AddOutOfFold(locked, outOfFoldScores, outOfFoldPositive);
         }
-        double lockedMean = lockedScores.Average();
-        double lockedSd = lockedScores.Length < 2 ? double.NaN
-            : Math.Sqrt(lockedScores.Sum(v => (v - lockedMean) * (v - lockedMean)) / (lockedScores.Length - 1));
+        var (lockedMean, lockedSd) = SampleMoments.Of(lockedScores);
         return new PanelSizeCurve(model.ScoreName, points, chosen >= 0 ? sizes[chosen] : sizes[^1],
             options.CurveFolds, options.CurveFoldRepeats)
         {
@@ -179,25 +177,4 @@ internal static class PanelSizeEstimator
     /// <summary>A panel scored on the fold's test rows (<see cref="PanelScorer"/>) in the outcome kind's score.</summary>
     private static PanelScore Score(ScreenContext context, ReadOnlySpan<int> features, OuterFold fold, ForestStreams streams) =>
         PanelScorer.Score(context, features, fold.TrainingRows, fold.TestRows, streams);
-
-    /// <summary>Mean and sample SD of one column over the folds, leaving out <paramref name="skippedRow"/> (-1 for none); SD is NaN with fewer than two folds.</summary>
-    private static (double Mean, double Sd) MeanAndSd(double[,] values, int column, int skippedRow = -1)
-    {
-        int count = values.GetLength(0);
-        double sum = 0;
-        int used = 0;
-        for (int i = 0; i < count; i++)
-            if (i != skippedRow)
-            {
-                sum += values[i, column];
-                used++;
-            }
-        if (used == 0) return (double.NaN, double.NaN);
-        double mean = sum / used;
-        if (used < 2) return (mean, double.NaN);
-        double squares = 0;
-        for (int i = 0; i < count; i++)
-            if (i != skippedRow) squares += (values[i, column] - mean) * (values[i, column] - mean);
-        return (mean, Math.Sqrt(squares / (used - 1)));
-    }
 }

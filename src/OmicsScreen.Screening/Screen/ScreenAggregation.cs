@@ -25,9 +25,9 @@ internal static class ScreenAggregation
             double median = Quantile.OfSorted(column, 0.5, QuantileDefinition.Linear);
             double q1 = Quantile.OfSorted(column, 0.25, QuantileDefinition.Linear);
             double q3 = Quantile.OfSorted(column, 0.75, QuantileDefinition.Linear);
-            var (cMean, cSd) = MeanAndSd(repeats.Corrected, f, featureCount, repeatCount);
-            var (pMean, pSd) = MeanAndSd(repeats.Permutation, f, featureCount, repeatCount);
-            var (iMean, iSd) = MeanAndSd(repeats.Impurity, f, featureCount, repeatCount);
+            var (cMean, cSd) = SampleMoments.OfColumn(repeats.Corrected, featureCount, f);
+            var (pMean, pSd) = SampleMoments.OfColumn(repeats.Permutation, featureCount, f);
+            var (iMean, iSd) = SampleMoments.OfColumn(repeats.Impurity, featureCount, f);
             correctedMean[f] = cMean;
             summaries[f] = (median, q1, q3, cMean, cSd, pMean, pSd, iMean, iSd);
         }
@@ -131,21 +131,5 @@ internal static class ScreenAggregation
             return c != 0 ? c : a.CompareTo(b);
         });
         return order;
-    }
-
-    /// <summary>Mean and sample SD (n - 1) of one feature's column; SD is NaN for a single repeat.</summary>
-    private static (double Mean, double Sd) MeanAndSd(double[] matrix, int feature, int featureCount, int repeatCount)
-    {
-        double sum = 0;
-        for (int r = 0; r < repeatCount; r++) sum += matrix[r * featureCount + feature];
-        double mean = sum / repeatCount;
-        if (repeatCount < 2) return (mean, double.NaN);
-        double squares = 0;
-        for (int r = 0; r < repeatCount; r++)
-        {
-            double d = matrix[r * featureCount + feature] - mean;
-            squares += d * d;
-        }
-        return (mean, Math.Sqrt(squares / (repeatCount - 1)));
     }
 }
