@@ -2,7 +2,7 @@ namespace OmicsScreen.Screening.Cohorts;
 
 /// <summary>Everything the cohort check found.</summary>
 /// <param name="Markers">Every feature across cohorts, in the screen's order.</param>
-/// <param name="ScreenedCohorts">Cohorts large enough for a screen of their own (at least <see cref="CohortAnalysis.MinimumSamplesPerClass"/> per class).</param>
+/// <param name="ScreenedCohorts">Cohorts large enough for a screen of their own (at least <see cref="CohortMembership.MinimumSamplesPerClass"/> per class).</param>
 /// <param name="CohortPredictionAccuracy">Out-of-bag accuracy of a forest predicting the cohort from all features; far above the largest cohort's share means strong batch structure.</param>
 /// <param name="LargestCohortShare">Accuracy of always guessing the largest cohort.</param>
 /// <param name="OutcomeCohortCramersV">Association of outcome and cohort (Cramer 1946); near 1 means they cannot be separated.</param>

@@ -13,7 +13,7 @@ namespace OmicsScreen.Screening.Cohorts;
 /// </summary>
 internal static class LeaveOneCohortOut
 {
-    /// <param name="heldOutCohorts">Cohorts that can be held out (<see cref="CohortAnalysis.HeldOutCohorts"/>).</param>
+    /// <param name="heldOutCohorts">Cohorts that can be held out (<see cref="CohortMembership.HeldOutCohorts"/>).</param>
     /// <param name="rowsOf">The samples of each cohort.</param>
     /// <param name="cohortDone">Told after each held-out cohort.</param>
     public static List<HeldOutCohort> Validate(ScreenContext context, ScreenWork work, int[] heldOutCohorts, int[][] rowsOf, Action cohortDone)
@@ -23,14 +23,14 @@ internal static class LeaveOneCohortOut
         foreach (int c in heldOutCohorts)
         {
             context.Cancellation.ThrowIfCancellationRequested();
-            var training = CohortAnalysis.TrainingRowsWithout(context.Panel, c);
+            var training = CohortMembership.TrainingRowsWithout(context.Panel, c);
             // The panel is what the procedure locks when the held-out cohort is not there: the other
             // cohorts' own shortlist, up to the curve's size limit; their size choice never sees it.
             var shortlist = work.HeldOutScreen(c).Shortlist;
             var panelFeatures = shortlist.AsSpan(0, Math.Min(shortlist.Length, context.Options.CurveMaxPanelSize)).ToArray();
             heldOut.Add(panelFeatures.Length == 0
                 ? new HeldOutCohort(cohort.LevelNames[c], rowsOf[c].Length, 0, double.NaN, ConfidenceInterval.Undefined(0.95), double.NaN)
-                : Score(context, panelFeatures, training, rowsOf[c], cohort.LevelNames[c], CohortAnalysis.HeldOutSeed(context.Options, c)));
+                : Score(context, panelFeatures, training, rowsOf[c], cohort.LevelNames[c], RandomStreams.HeldOutScreenSeed(context.Options.Seed, c)));
             cohortDone();
         }
         return heldOut;

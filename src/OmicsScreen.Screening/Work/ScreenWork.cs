@@ -107,9 +107,9 @@ internal sealed class ScreenWork
                     return InnerScreen(fold.TrainingRows, PanelSizeEstimator.InnerSeed(options, fold));
                 }
             case WorkUnitKind.CohortScreen:
-                return InnerScreen(CohortAnalysis.RowsOfCohorts(_panel)[unit.Index], CohortAnalysis.CohortScreenSeed(options, unit.Index));
+                return InnerScreen(CohortMembership.RowsOf(_panel)[unit.Index], RandomStreams.CohortScreenSeed(options.Seed, unit.Index));
             case WorkUnitKind.HeldOutScreen:
-                return InnerScreen(CohortAnalysis.TrainingRowsWithout(_panel, unit.Index), CohortAnalysis.HeldOutSeed(options, unit.Index));
+                return InnerScreen(CohortMembership.TrainingRowsWithout(_panel, unit.Index), RandomStreams.HeldOutScreenSeed(options.Seed, unit.Index));
             default:
                 throw new ArgumentOutOfRangeException(nameof(unit));
         }
@@ -129,6 +129,15 @@ internal sealed class ScreenWork
         var features = ScreenAggregation.Summarise(repeats, _matrix.FeatureNames, decoys, [], direct);
         var order = ScreenAggregation.OrderOf(features);
         var (shortlist, _) = ShortlistSelection.Apply(features, order, decoys, _settings.Options);
-        return new InnerScreenResult(order, CohortAnalysis.MeanCorrected(repeats), shortlist);
+        return new InnerScreenResult(order, MeanCorrected(repeats), shortlist);
+    }
+
+    /// <summary>Each feature's corrected importance averaged over the repeats.</summary>
+    private static double[] MeanCorrected(RepeatImportances repeats)
+    {
+        var mean = new double[repeats.FeatureCount];
+        for (int r = 0; r < repeats.RepeatCount; r++)
+            for (int f = 0; f < repeats.FeatureCount; f++) mean[f] += repeats.Corrected[r * repeats.FeatureCount + f] / repeats.RepeatCount;
+        return mean;
     }
 }

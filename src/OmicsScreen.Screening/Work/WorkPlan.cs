@@ -30,11 +30,11 @@ public sealed class WorkPlan
         // The cohort check (and so its inner screens) runs for class outcomes only, as in ScreenRunner.
         if (panel.Cohort is { LevelCount: >= 2 } && panel.Kind == OutcomeKind.Classes)
         {
-            var rows = CohortAnalysis.RowsOfCohorts(panel);
-            var screenable = CohortAnalysis.ScreenableCohorts(panel, rows);
+            var rows = CohortMembership.RowsOf(panel);
+            var screenable = CohortMembership.ScreenableCohorts(panel, rows);
             foreach (int c in screenable)
                 units.Add(new(new WorkUnit(WorkUnitKind.CohortScreen, c), innerForests * rows[c].Length / 2.0));
-            foreach (int c in CohortAnalysis.HeldOutCohorts(panel, screenable))
+            foreach (int c in CohortMembership.HeldOutCohorts(panel, screenable))
                 units.Add(new(new WorkUnit(WorkUnitKind.HeldOutScreen, c), innerForests * (sampleCount - rows[c].Length) / 2.0));
         }
         return new WorkPlan(units);

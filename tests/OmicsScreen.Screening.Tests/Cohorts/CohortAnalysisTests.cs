@@ -82,7 +82,7 @@ public class CohortAnalysisTests
         // V = sqrt(20 / 80) = 0.5 (Cramer 1946, V = sqrt(chi^2 / (n (min(r, c) - 1)))).
         var classes = Enumerable.Repeat(0, 40).Concat(Enumerable.Repeat(1, 40)).ToArray();
         var levels = Enumerable.Repeat(0, 30).Concat(Enumerable.Repeat(1, 10)).Concat(Enumerable.Repeat(0, 10)).Concat(Enumerable.Repeat(1, 30)).ToArray();
-        var (v, p) = CohortAnalysis.OutcomeCohortAssociation(new ClassOutcome("y", ["a", "b"], classes), new SampleGrouping("c", ["x", "y"], levels));
+        var (v, p) = OutcomeCohortAssociation.OfClasses(new ClassOutcome("y", ["a", "b"], classes), new SampleGrouping("c", ["x", "y"], levels));
         Assert.Equal(0.5, v, 12);
         // P(chi^2_1 >= 20) = 7.74e-6 (standard chi-square table value, from memory).
         Assert.InRange(p, 7.6e-6, 7.9e-6);
@@ -122,14 +122,14 @@ public class CohortAnalysisTests
     {
         var order = Enumerable.Range(0, 60).ToArray();
         var importance = order.Select(f => 60.0 - f).ToArray();
-        var same = CohortAnalysis.Concord("a", "b", importance, importance, order, order);
+        var same = CohortScreenConcordance.Concord("a", "b", importance, importance, order, order);
         Assert.Equal(1.0, same.Top10Overlap);
         Assert.Equal(1.0, same.Top50Overlap);
         Assert.Equal(1.0, same.Spearman, 12);
         Assert.Equal(1.0, same.RankBiasedOverlap, 9);
 
         var reversed = order.Reverse().ToArray();
-        var opposite = CohortAnalysis.Concord("a", "b", importance, importance.Reverse().ToArray(), order, reversed);
+        var opposite = CohortScreenConcordance.Concord("a", "b", importance, importance.Reverse().ToArray(), order, reversed);
         // Top 10 of 0..59 and of 59..0 share nothing; their top 50 share 40 of 50 (items 10..49).
         Assert.Equal(0.0, opposite.Top10Overlap);
         Assert.Equal(0.8, opposite.Top50Overlap, 12);

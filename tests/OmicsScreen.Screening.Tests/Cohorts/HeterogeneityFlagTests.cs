@@ -26,7 +26,7 @@ public sealed class HeterogeneityFlagTests
             index++;
         }
         var flagged = markers.ToArray();
-        CohortAnalysis.FlagHeterogeneity(flagged, 0.1);
+        HeterogeneityFlags.Flag(flagged, 0.1);
         for (int i = 0; i < flagged.Length; i++)
         {
             Assert.Equal(expected[i], flagged[i].HeterogeneityQValue, 1e-9);
@@ -44,7 +44,7 @@ public sealed class HeterogeneityFlagTests
         var effects = new List<CohortEffect> { new("a", 50, 0, 0.3, 0.02, ConfidenceInterval.Undefined(0.95)), new("b", 50, 0, 0.9, 0.02, ConfidenceInterval.Undefined(0.95)) };
         var meta = RandomEffectsMetaAnalysis.DerSimonianLaird([0.3, 0.9], [0.0004, 0.0004]);
         var markers = new[] { new MarkerHeterogeneity(0, "M0", effects, meta, 0.7, ConfidenceInterval.Undefined(0.95), 0.9, "a", 1, CohortFlag.CohortArtefact) };
-        CohortAnalysis.FlagHeterogeneity(markers, 0.1);
+        HeterogeneityFlags.Flag(markers, 0.1);
         Assert.Equal(CohortFlag.CohortArtefact, markers[0].Flag);
     }
 }
