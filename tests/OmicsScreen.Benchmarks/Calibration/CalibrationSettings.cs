@@ -6,7 +6,7 @@ namespace OmicsScreen.Benchmarks.Calibration;
 
 /// <summary>
 /// The command line of the calibration mode:
-/// calibration [--seeds N] [--quick] [--threads T] [--kind classes|measured|follow-up] [--only NAME[,NAME...]] (--only may repeat).
+/// calibration [--seeds N] [--first-seed S] [--quick] [--threads T] [--kind classes|measured|follow-up] [--only NAME[,NAME...]] (--only may repeat).
 /// </summary>
 public sealed record CalibrationSettings
 {
@@ -20,6 +20,9 @@ public sealed record CalibrationSettings
     public const int FreshCohortSize = 2000;
 
     public int SeedCount { get; init; } = 5;
+
+    /// <summary>The first seed number run (seeds FirstSeed .. FirstSeed + SeedCount - 1), so a run can extend an earlier one with new panels.</summary>
+    public int FirstSeed { get; init; } = 1;
 
     public bool Quick { get; init; }
 
@@ -50,6 +53,9 @@ public sealed record CalibrationSettings
             {
                 case "--seeds":
                     settings = settings with { SeedCount = PositiveInteger("--seeds", Value(), 1) };
+                    break;
+                case "--first-seed":
+                    settings = settings with { FirstSeed = PositiveInteger("--first-seed", Value(), 1) };
                     break;
                 case "--threads":
                     settings = settings with { ThreadCount = PositiveInteger("--threads", Value(), 0) };

@@ -10,7 +10,7 @@ namespace OmicsScreen.Benchmarks.Calibration;
 /// <see cref="CalibrationCatalogue"/> for each seed with the default screen, in this process
 /// (it measures error control, not time), prints each panel as it finishes and then the table,
 /// the goals and the p-value uniformity.
-/// Usage: calibration [--seeds N] [--quick] [--threads T] [--kind classes|measured|follow-up] [--only NAME[,NAME...]]
+/// Usage: calibration [--seeds N] [--first-seed S] [--quick] [--threads T] [--kind classes|measured|follow-up] [--only NAME[,NAME...]]
 /// </summary>
 public static class CalibrationSuite
 {
@@ -29,7 +29,7 @@ public static class CalibrationSuite
         catch (ArgumentException error)
         {
             Console.Error.WriteLine(error.Message);
-            Console.Error.WriteLine("Usage: calibration [--seeds N] [--quick] [--threads T] [--kind classes|measured|follow-up] [--only NAME[,NAME...]]");
+            Console.Error.WriteLine("Usage: calibration [--seeds N] [--first-seed S] [--quick] [--threads T] [--kind classes|measured|follow-up] [--only NAME[,NAME...]]");
             return 2;
         }
 
@@ -47,7 +47,7 @@ public static class CalibrationSuite
 
         var watch = Stopwatch.StartNew();
         var panels = new List<PanelCalibration>();
-        for (int seedNumber = 1; seedNumber <= settings.SeedCount; seedNumber++)
+        for (int seedNumber = settings.FirstSeed; seedNumber < settings.FirstSeed + settings.SeedCount; seedNumber++)
             foreach (var design in designs)
             {
                 var model = CalibrationCatalogue.Create(design, seedNumber);
@@ -83,7 +83,7 @@ public static class CalibrationSuite
         if (p.PairFound is { } pair) found += pair ? ", pair found" : ", pair missed";
         if (p.ThresholdFound is { } threshold) found += threshold ? ", threshold found" : ", threshold missed";
         return Invariant(
-            $"[{done}/{total}] {p.Design} seed {p.Seed}: shortlist {p.Shortlisted} (false {p.FalseDiscoveries}, FDP {p.FalseDiscoveryProportion:F3}, decoy estimate {Number(p.DecoyEstimate)}){found}; {estimate}; {p.Seconds:F1} s (total {elapsed:F0} s){(p.SpecialMarkers.Length > 0 ? " [" + p.SpecialMarkers + "]" : "")}");
+            $"[{done}/{total}] {p.Design} seed {p.Seed}: shortlist {p.Shortlisted} (false {p.FalseDiscoveries}, FDP {p.FalseDiscoveryProportion:F3}, decoy estimate {Number(p.DecoyEstimate)}){found}; {estimate}; {p.Seconds:F1} s (total {elapsed:F0} s){(p.SpecialMarkers.Length > 0 ? " [" + p.SpecialMarkers + "]" : "")}{(p.FalseEntries.Length > 0 ? " {false: " + p.FalseEntries + "}" : "")}{(p.MissedEntries.Length > 0 ? " {missed: " + p.MissedEntries + "}" : "")}");
     }
 
     /// <summary>The 1-minute load average from /proc/loadavg, for reading wall times on a shared machine; "n/a" elsewhere.</summary>

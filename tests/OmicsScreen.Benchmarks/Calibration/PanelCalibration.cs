@@ -56,6 +56,12 @@ public sealed record PanelCalibration(
     /// <summary>Mean size of the panel the folds locked (0 for a fold without one); NaN without a curve.</summary>
     public double MeanFoldPanelSize { get; init; } = double.NaN;
 
+    /// <summary>Each false shortlisted marker's evidence (frequency, forest, rank-test, final p, q, largest |Pearson r| with a related feature), for reading a failure; empty when none.</summary>
+    public string FalseEntries { get; init; } = "";
+
+    /// <summary>Each related marker the baseline found and the screen missed, with its evidence; empty when none.</summary>
+    public string MissedEntries { get; init; } = "";
+
     /// <summary>|selection-aware estimate - fresh estimate|; NaN when either is missing.</summary>
     public double EstimateError => Math.Abs(SelectionAwareEstimate - FreshEstimate);
 

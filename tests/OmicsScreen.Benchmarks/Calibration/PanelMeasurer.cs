@@ -88,6 +88,8 @@ public static class PanelMeasurer
             FoldsWithoutPanel = result.PanelSize?.FoldsWithoutPanel ?? -1,
             CurveFolds = result.PanelSize is { } curve ? curve.FoldCount * curve.FoldRepeats : 0,
             MeanFoldPanelSize = result.PanelSize?.MeanFoldPanelSize ?? double.NaN,
+            FalseEntries = FalseEntries(panel, truth, result),
+            MissedEntries = MissedEntries(truth, baseline, shortlisted, result),
         };
     }
 
@@ -101,6 +103,70 @@ public static class PanelMeasurer
         for (int i = 0; i < curve.LockedOutOfFoldScores.Count; i++)
             (curve.LockedOutOfFoldPositive[i] ? positive : negative).Add(curve.LockedOutOfFoldScores[i]);
         return Math.Sqrt(Screening.Statistics.DeLong.Estimate(positive.ToArray(), negative.ToArray()).Variance);
+    }
+
+    /// <summary>
+    /// One item per false shortlisted marker: its list position, selection frequency, the forest's,
+    /// rank test's and final p, q, and its largest |Pearson r| with any related feature on the
+    /// discovery samples (is it a carrier's correlate?).
+    /// </summary>
+    private static string FalseEntries(Panel panel, IReadOnlyList<bool> truth, ScreenResult result)
+    {
+        var related = new List<int>();
+        for (int f = 0; f < truth.Count; f++) if (truth[f]) related.Add(f);
+        var items = new List<string>();
+        foreach (var entry in result.Shortlist)
+        {
+            int feature = entry.Forest.FeatureIndex;
+            if (truth[feature]) continue;
+            double largest = double.NaN;
+            foreach (int r in related)
+            {
+                double c = Math.Abs(Pearson(panel.Matrix.Column(feature), panel.Matrix.Column(r)));
+                if (double.IsNaN(largest) || c > largest) largest = c;
+            }
+            var s = entry.Forest;
+            items.Add(FormattableString.Invariant(
+                $"f{feature} order {s.Order} freq {s.SelectionFrequency:F2} forest p {s.ForestP:G2} rank p {s.RankTestP:G2} p {s.PValue:G2} q {s.QValue:G2} max|r| {largest:F2}"));
+        }
+        return string.Join("; ", items);
+    }
+
+    /// <summary>
+    /// One item per related feature the baseline found and the screen did not list: its screen
+    /// order, selection frequency, forest, rank-test and final p and q, for reading a loss of power.
+    /// </summary>
+    private static string MissedEntries(IReadOnlyList<bool> truth, bool[] baseline, HashSet<int> shortlisted, ScreenResult result)
+    {
+        var items = new List<string>();
+        foreach (var s in result.Features)
+        {
+            int f = s.FeatureIndex;
+            if (!truth[f] || !baseline[f] || shortlisted.Contains(f)) continue;
+            items.Add(FormattableString.Invariant(
+                $"f{f} order {s.Order} freq {s.SelectionFrequency:F2} forest p {s.ForestP:G2} rank p {s.RankTestP:G2} p {s.PValue:G2} q {s.QValue:G2}"));
+        }
+        return string.Join("; ", items);
+    }
+
+    private static double Pearson(ReadOnlySpan<float> x, ReadOnlySpan<float> y)
+    {
+        double mx = 0, my = 0;
+        int n = 0;
+        for (int i = 0; i < x.Length; i++)
+            if (float.IsFinite(x[i]) && float.IsFinite(y[i])) { mx += x[i]; my += y[i]; n++; }
+        if (n < 3) return double.NaN;
+        mx /= n;
+        my /= n;
+        double sxy = 0, sxx = 0, syy = 0;
+        for (int i = 0; i < x.Length; i++)
+        {
+            if (!float.IsFinite(x[i]) || !float.IsFinite(y[i])) continue;
+            sxy += (x[i] - mx) * (y[i] - my);
+            sxx += (x[i] - mx) * (x[i] - mx);
+            syy += (y[i] - my) * (y[i] - my);
+        }
+        return sxy / Math.Sqrt(sxx * syy);
     }
 
     /// <summary>One "role: order N, forest p, rank p, p, q" item per interacting or threshold marker.</summary>
