@@ -11,7 +11,8 @@ internal static class HeadlessChromium
 {
     public const string Executable = "/usr/bin/chromium";
 
-    private static readonly TimeSpan Timeout = TimeSpan.FromSeconds(40);
+    // Generous: on a shared 2-core machine at load 50 one page took over 40 s; a quiet machine needs 1-3 s.
+    private static readonly TimeSpan Timeout = TimeSpan.FromSeconds(180);
 
     /// <summary>Runs Chromium with the isolation flags plus <paramref name="arguments"/>; returns standard output.</summary>
     public static string Run(string profileDirectory, params string[] arguments)
