@@ -8,28 +8,8 @@ internal static class Display
 {
     private const int MaxShown = 60;
 
-    /// <summary>The text with control characters made visible (\n, \t, \u0001) and long text cut.</summary>
-    public static string Name(ReadOnlySpan<char> text)
-    {
-        var builder = new StringBuilder(Math.Min(text.Length, MaxShown) + 8);
-        foreach (char c in text)
-        {
-            if (builder.Length >= MaxShown) { builder.Append('…'); break; }
-            switch (c)
-            {
-                case '\n': builder.Append("\\n"); break;
-                case '\r': builder.Append("\\r"); break;
-                case '\t': builder.Append("\\t"); break;
-                default:
-                    if (char.IsControl(c)) builder.Append("\\u").Append(((int)c).ToString("x4", CultureInfo.InvariantCulture));
-                    // Bidirectional overrides and zero-width characters would reorder or hide what is shown.
-                    else if (char.GetUnicodeCategory(c) == UnicodeCategory.Format) builder.Append("<U+").Append(((int)c).ToString("X4", CultureInfo.InvariantCulture)).Append('>');
-                    else builder.Append(c);
-                    break;
-            }
-        }
-        return builder.ToString();
-    }
+    /// <summary>A name or cell as an error message shows it: <see cref="UntrustedText.Printable"/>, cut at 60 characters.</summary>
+    public static string Name(ReadOnlySpan<char> text) => UntrustedText.Printable(text, MaxShown);
 
     /// <summary>The text with each line break (and the spaces around it) replaced by one space.</summary>
     public static string OneLine(string text)

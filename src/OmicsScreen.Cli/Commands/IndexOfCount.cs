@@ -1,4 +1,5 @@
 using System.Globalization;
+using OmicsScreen.Runs.Work;
 
 namespace OmicsScreen.Cli.Commands;
 
@@ -14,5 +15,12 @@ internal static class IndexOfCount
             && count >= 1 && index >= 1 && index <= count)
             return (index, count);
         throw new CommandInputException($"{optionName} takes I/N with 1 <= I <= N (for example {example}), not '{text}'.");
+    }
+
+    /// <summary>Reads "I/N" as typed after --part.</summary>
+    public static RunPart ParsePart(string text)
+    {
+        var (index, count) = Parse(text, "--part", "3/16");
+        return new RunPart(index, count);
     }
 }

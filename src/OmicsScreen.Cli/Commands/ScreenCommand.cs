@@ -1,7 +1,6 @@
 using System.CommandLine;
 using OmicsScreen.Cli.Console;
 using OmicsScreen.Cli.Help;
-using OmicsScreen.Cli.Work;
 using OmicsScreen.Screening.Screen;
 
 namespace OmicsScreen.Cli.Commands;
@@ -212,7 +211,7 @@ public sealed class ScreenCommand : Command, IHelpLayout
             OutputFolder = parse.GetValue(Out),
             Force = parse.GetValue(Force),
             Resume = parse.GetValue(Resume),
-            Part = parse.GetValue(Part) is { } part ? RunPart.Parse(part) : null,
+            Part = parse.GetValue(Part) is { } part ? IndexOfCount.ParsePart(part) : null,
             Quiet = parse.GetValue(Quiet),
             Json = parse.GetValue(Json),
             MemoryLimit = parse.GetValue(MemoryLimit),

@@ -1,5 +1,5 @@
-using OmicsScreen.Cli.Work;
 using OmicsScreen.Data;
+using OmicsScreen.Runs.Work;
 using OmicsScreen.Screening.Screen;
 
 namespace OmicsScreen.Cli.Commands;

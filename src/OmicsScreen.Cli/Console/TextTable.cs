@@ -1,5 +1,5 @@
 using System.Text;
-using OmicsScreen.Reporting.Html;
+using OmicsScreen.Data;
 
 namespace OmicsScreen.Cli.Console;
 
@@ -56,23 +56,6 @@ public sealed class TextTable
         foreach (var row in _rows) Emit(row);
     }
 
-    /// <summary>Names come from user files: control characters would move the cursor or ring the bell.</summary>
-    /// <summary>
-    /// Console-safe text: control characters become '?', and hidden format characters (bidirectional
-    /// overrides, zero-width spaces) a visible &lt;U+XXXX&gt;, so a name cannot reorder or hide what is printed.
-    /// </summary>
-    internal static string Printable(string text)
-    {
-        bool clean = true;
-        foreach (char ch in text) if (char.IsControl(ch) || HiddenCharacters.IsHidden(ch)) { clean = false; break; }
-        if (clean) return text;
-        var sb = new StringBuilder(text.Length + 16);
-        foreach (char ch in text)
-        {
-            if (char.IsControl(ch)) sb.Append('?');
-            else if (HiddenCharacters.IsHidden(ch)) sb.Append(HiddenCharacters.Mark(ch));
-            else sb.Append(ch);
-        }
-        return sb.ToString();
-    }
+    /// <summary>Names come from user files: printed by the one console rule, <see cref="UntrustedText.Printable"/>.</summary>
+    internal static string Printable(string text) => UntrustedText.Printable(text);
 }

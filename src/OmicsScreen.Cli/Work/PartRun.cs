@@ -1,47 +1,43 @@
 using OmicsScreen.Cli.Commands;
 using OmicsScreen.Cli.Console;
 using OmicsScreen.Data;
-using OmicsScreen.Runs.Results;
 using OmicsScreen.Runs.Work;
-using OmicsScreen.Screening.Screen;
-using OmicsScreen.Screening.Work;
 
 namespace OmicsScreen.Cli.Work;
 
-/// <summary>`screen --part I/N`: computes one part's work units into a part folder for a later merge.</summary>
+/// <summary>`screen --part I/N` on the console: the job (<see cref="PartJob"/>) with warnings, progress and what to do next.</summary>
 internal static class PartRun
 {
     public static int Execute(CliConsole console, ScreenRunOptions options, LoadedPanel loaded, RunPart part)
     {
-        string shown = options.OutputFolder
+        string folder = options.OutputFolder
             ?? throw new CommandInputException("--part needs --out: the folder this part's results go to (one folder per part).");
-        var panel = loaded.Panel;
-        var settings = ScreenSettings.Resolve(options.Screen, panel);
-        var plan = WorkPlan.For(panel, settings);
-        if (part.Count > plan.Units.Count)
-            throw new CommandInputException(
-                $"This screen has {plan.Units.Count} work units, so it can be split into at most {plan.Units.Count} parts, not {part.Count}.");
-        var units = plan.UnitsOfPart(part.Index, part.Count);
-        var (identity, described) = RunIdentity.Of("part", loaded, options.Panel, options.Screen, options.ShowSampleIds, options.CommandLine);
-        var record = described with { Part = part.Index, Parts = part.Count };
-        var folder = WorkFolder.Open(shown, ScreenResultFiles.PartRecord, record, identity, panel.FeatureCount, settings.DecoyCount,
-            options.Resume, options.Force, "part", shown);
+        var job = PartJob.Open(loaded, new PartRequest
+        {
+            Panel = options.Panel,
+            Screen = options.Screen,
+            Part = part,
+            Folder = folder,
+            Resume = options.Resume,
+            Force = options.Force,
+            ShowSampleIds = options.ShowSampleIds,
+            CommandLine = options.CommandLine,
+        });
         ScreenRun.PrintWarnings(console, ScreenRun.Warnings(options, loaded));
 
         var progress = new ProgressDisplay(console, options.Quiet);
         try
         {
-            ScreenRunner.RunUnits(panel, options.Screen, units, folder, progress);
+            job.Run(progress);
             progress.Finish();
         }
         finally
         {
             progress.Complete();
         }
-        foreach (var discarded in folder.Discarded) console.Error.WriteLine($"warning: unit {discarded}; it was computed again.");
-        folder.MarkComplete(units);
-        console.Out.WriteLine($"Part {part}: {units.Count} of {plan.Units.Count} work units written to {folder.Path}"
-            + (folder.ReusedCount > 0 ? $" ({folder.ReusedCount} kept from an earlier attempt)." : "."));
+        foreach (var discarded in job.Folder.Discarded) console.Error.WriteLine($"warning: unit {discarded}; it was computed again.");
+        console.Out.WriteLine($"Part {part}: {job.Units.Count} of {job.UnitCount} work units written to {job.Folder.Path}"
+            + (job.Folder.ReusedCount > 0 ? $" ({job.Folder.ReusedCount} kept from an earlier attempt)." : "."));
         console.Out.WriteLine($"When all {part.Count} parts are done: omicsscreen merge PART_FOLDER... --out RESULTS_FOLDER");
         return ExitCode.Success;
     }

@@ -1,3 +1,4 @@
+using OmicsScreen.Data;
 using OmicsScreen.Data.Output;
 using OmicsScreen.Reporting.Manifests;
 using OmicsScreen.Runs.Output;
@@ -38,6 +39,9 @@ public sealed class ResultsFolder : IDisposable
     public ResultsKind Kind { get; }
 
     public List<string> WrittenFiles { get; } = [];
+
+    /// <summary>The files a screen reads (matrix, sample sheet, feature sheet), which its outputs must never replace.</summary>
+    public static IEnumerable<string?> InputPaths(PanelLoadOptions panel) => [panel.MatrixPath, panel.SampleSheetPath, panel.FeatureSheetPath];
 
     /// <summary>
     /// Checks the folder and takes its lock; nothing in it is changed yet (see

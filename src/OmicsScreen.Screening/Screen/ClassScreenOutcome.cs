@@ -4,6 +4,7 @@ using OmicsScreen.Engine.Metrics;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Screening.Importance;
 using OmicsScreen.Screening.Resampling;
+using OmicsScreen.Screening.Statistics;
 using OmicsScreen.Screening.Univariate;
 
 namespace OmicsScreen.Screening.Screen;
@@ -53,7 +54,7 @@ internal sealed class ClassScreenOutcome(ClassOutcome outcome) : ScreenOutcome
         int contrast = 0;
         for (int c = 0; c < table.Contrasts.Count; c++)
             if (table.Contrasts[c] == positive) { contrast = c; break; }
-        return new SingleMarkerStatistics(table, [], [], SingleMarkerStatistics.RanksByPValue(best), contrast);
+        return new SingleMarkerStatistics(table, [], [], Ranking.OrdinalRanks(best, ScoreDirection.LowerIsBetter), contrast);
     }
 
     public override double[] RankTestPValues(FeatureMatrix values, int[] rows, int threadCount) =>

@@ -76,7 +76,7 @@ internal sealed class FollowUpScreenOutcome(FollowUpOutcome outcome) : ScreenOut
     {
         var markers = FollowUpScreen.Compute(panel.Matrix, _followUp.Times, _followUp.Events, threadCount: threadCount);
         return new SingleMarkerStatistics(new UnivariateTable([], [], []), [], markers,
-            SingleMarkerStatistics.RanksByPValue(markers.Select(m => m.PValue).ToArray()), -1);
+            Ranking.OrdinalRanks(markers.Select(m => m.PValue).ToArray(), ScoreDirection.LowerIsBetter), -1);
     }
 
     /// <summary>

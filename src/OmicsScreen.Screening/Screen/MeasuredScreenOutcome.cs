@@ -51,7 +51,7 @@ internal sealed class MeasuredScreenOutcome(MeasuredOutcome outcome) : ScreenOut
     {
         var markers = MeasuredOutcomeScreen.Compute(panel.Matrix, _values, threadCount: threadCount);
         return new SingleMarkerStatistics(new UnivariateTable([], [], []), markers, [],
-            SingleMarkerStatistics.RanksByPValue(markers.Select(m => m.PValue).ToArray()), -1);
+            Ranking.OrdinalRanks(markers.Select(m => m.PValue).ToArray(), ScoreDirection.LowerIsBetter), -1);
     }
 
     /// <summary>Spearman's rho with its t-approximation p-value (<see cref="SpearmanTest"/>), per column.</summary>

@@ -162,13 +162,9 @@ public static class ScreenRunner
         if (listLength < 1 || listLength >= featureCount || repeatCount < 2)
             return new StabilityEstimate(double.NaN, double.NaN, ConfidenceInterval.Undefined(0.95), listLength, repeatCount, featureCount);
         var selections = new bool[repeatCount * featureCount];
-        var order = new int[featureCount];
         for (int r = 0; r < repeatCount; r++)
         {
-            var ranks = repeats.Row(repeats.CombinedRank, r).ToArray();
-            for (int f = 0; f < featureCount; f++) order[f] = f;
-            // Best combined rank first; ties by feature index so the list never depends on sort stability.
-            Array.Sort(order, (a, b) => ranks[a] != ranks[b] ? ranks[a].CompareTo(ranks[b]) : a.CompareTo(b));
+            var order = Ranking.BestFirst(repeats.Row(repeats.CombinedRank, r), ScoreDirection.LowerIsBetter);
             for (int i = 0; i < listLength; i++) selections[r * featureCount + order[i]] = true;
         }
         return SelectionStability.Nogueira(selections, featureCount);

@@ -27,15 +27,4 @@ internal sealed record SingleMarkerStatistics(
         };
     }
 
-    /// <summary>Rank of every feature by its p-value (1 = smallest; NaN last; ties by feature order).</summary>
-    public static int[] RanksByPValue(IReadOnlyList<double> pValues)
-    {
-        int featureCount = pValues.Count;
-        var best = pValues.Select(p => double.IsNaN(p) ? double.PositiveInfinity : p).ToArray();
-        var order = Enumerable.Range(0, featureCount).ToArray();
-        Array.Sort(order, (a, b) => best[a] != best[b] ? best[a].CompareTo(best[b]) : a.CompareTo(b));
-        var ranks = new int[featureCount];
-        for (int i = 0; i < order.Length; i++) ranks[order[i]] = i + 1;
-        return ranks;
-    }
 }

@@ -56,6 +56,42 @@ public static class Ranking
         return ranks;
     }
 
+    /// <summary>
+    /// Indices of <paramref name="scores"/> best first: highest first or lowest first as
+    /// <paramref name="direction"/> says, ties by index so the order never depends on the sort's
+    /// stability, NaN (no score) last.
+    /// </summary>
+    public static int[] BestFirst(ReadOnlySpan<double> scores, ScoreDirection direction)
+    {
+        var keys = scores.ToArray();
+        var order = new int[keys.Length];
+        for (int i = 0; i < order.Length; i++) order[i] = i;
+        bool higherIsBetter = direction == ScoreDirection.HigherIsBetter;
+        Array.Sort(order, (a, b) =>
+        {
+            double x = keys[a], y = keys[b];
+            bool xMissing = double.IsNaN(x), yMissing = double.IsNaN(y);
+            if (xMissing != yMissing) return xMissing ? 1 : -1;
+            if (!xMissing && x != y) return higherIsBetter ? y.CompareTo(x) : x.CompareTo(y);
+            return a.CompareTo(b);
+        });
+        return order;
+    }
+
+    /// <summary>
+    /// Ordinal ranks (1 = best, every rank used once): each value's place in
+    /// <see cref="BestFirst"/>, so ties take consecutive ranks in index order and NaN ranks last.
+    /// What a table's "rank by p-value" column needs, where <see cref="Rank(ReadOnlySpan{double}, RankTies)"/>
+    /// gives the shared ranks a rank test needs.
+    /// </summary>
+    public static int[] OrdinalRanks(ReadOnlySpan<double> scores, ScoreDirection direction)
+    {
+        var order = BestFirst(scores, direction);
+        var ranks = new int[order.Length];
+        for (int place = 0; place < order.Length; place++) ranks[order[place]] = place + 1;
+        return ranks;
+    }
+
     /// <summary>The tie term T = sum of (t^3 - t) over runs of equal values in an ascending sample.</summary>
     public static double TieTermOfSorted(ReadOnlySpan<double> sortedValues)
     {

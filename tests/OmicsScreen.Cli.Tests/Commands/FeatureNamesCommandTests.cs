@@ -45,8 +45,8 @@ public sealed class FeatureNamesCommandTests : IDisposable
             "--pairs", "3", "--trees", "50", "--curve-folds", "2", "--curve-inner-pairs", "1", "--max-panel-size", "2", "--quiet");
 
         Assert.Equal(ExitCode.Success, screen.ExitCode);
-        // The console's rule: a control character is shown as '?'.
-        Assert.Contains("Lab IL?6 (f1)", screen.Out);
+        // The console's rule (UntrustedText.Printable): a control character is shown by its code.
+        Assert.Contains("Lab IL\\u00076 (f1)", screen.Out);
         Assert.DoesNotContain("\u0007", screen.Out);
         var shortlist = File.ReadAllLines(Path.Combine(results, "shortlist.tsv"));
         var header = shortlist[0].Split('\t');

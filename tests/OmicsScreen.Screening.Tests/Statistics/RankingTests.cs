@@ -60,4 +60,24 @@ public class RankingTests
     {
         Assert.Throws<ArgumentException>(() => Ranking.Rank([1.0, double.NaN]));
     }
+
+    [Fact]
+    public void Ordinal_ranks_match_scipy_ordinal_ranks_in_both_directions()
+    {
+        // Reference library: scipy 1.10.1 stats.rankdata(a, method="ordinal") gives [4 2 7 5 1 3 6],
+        // and rankdata(-a, method="ordinal") gives [2 5 1 3 7 6 4] (ties in order of appearance).
+        double[] values = [3, 2, 7, 3, 1, 2, 3];
+        Assert.Equal([4, 2, 7, 5, 1, 3, 6], Ranking.OrdinalRanks(values, ScoreDirection.LowerIsBetter));
+        Assert.Equal([2, 5, 1, 3, 7, 6, 4], Ranking.OrdinalRanks(values, ScoreDirection.HigherIsBetter));
+    }
+
+    [Fact]
+    public void Best_first_puts_missing_scores_last_in_index_order_whatever_the_direction()
+    {
+        // Common practice: a feature without a p-value (or an importance) ranks after every scored one.
+        double[] values = [double.NaN, 0.5, double.NaN, 0.01, double.PositiveInfinity];
+        Assert.Equal([3, 1, 4, 0, 2], Ranking.BestFirst(values, ScoreDirection.LowerIsBetter));
+        Assert.Equal([4, 1, 3, 0, 2], Ranking.BestFirst(values, ScoreDirection.HigherIsBetter));
+        Assert.Equal([4, 2, 5, 1, 3], Ranking.OrdinalRanks(values, ScoreDirection.LowerIsBetter));
+    }
 }
