@@ -48,7 +48,7 @@ public static class CohortEffectScale
     /// are the spreads that move the concordance index (the AUC's generalisation, Harrell et al.
     /// 1982) by the same 0.10, measured by simulation of a normal marker (4,000 samples, 5 draws;
     /// tests/OmicsScreen.TestSupport/reference/cohorts/effect_spreads.py): Spearman's rho 0.30
-    /// (rho 0.29 gives C 0.60) and a log hazard ratio per SD of 0.35 (C 0.596; a hazard ratio
+    /// (rho 0.295 gave C 0.599) and a log hazard ratio per SD of 0.35 (C 0.596; a hazard ratio
     /// 1.42 times another).
     /// </summary>
     public static double MinimumSpread(this CohortEffectMeasure measure) => measure switch

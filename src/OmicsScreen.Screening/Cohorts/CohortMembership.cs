@@ -13,7 +13,7 @@ internal static class CohortMembership
     public const int MinimumSamplesPerClass = 5;
 
     /// <summary>
-    /// ... or, for a measured outcome, this many samples with a value: a Spearman correlation or a
+    /// ... or, for a measured outcome, this many samples: a Spearman correlation or a
     /// regression forest on fewer says little (common practice).
     /// </summary>
     public const int MinimumMeasuredSamples = 20;
@@ -46,19 +46,15 @@ internal static class CohortMembership
     /// <summary>
     /// Whether these samples are enough for a screen of their own, by the outcome kind's rule:
     /// <see cref="MinimumSamplesPerClass"/> in every class, <see cref="MinimumMeasuredSamples"/>
-    /// with a measured value, or <see cref="MinimumEvents"/> events.
+    /// samples, or <see cref="MinimumEvents"/> events.
     /// </summary>
     public static bool LargeEnough(Panel panel, int[] rows)
     {
         switch (panel.Kind)
         {
             case OutcomeKind.Measured:
-                {
-                    var values = panel.Measured!.Values;
-                    int measured = 0;
-                    foreach (int row in rows) if (!double.IsNaN(values[row])) measured++;
-                    return measured >= MinimumMeasuredSamples;
-                }
+                // Every sample of a measured outcome has a value (the loader refuses a panel otherwise).
+                return rows.Length >= MinimumMeasuredSamples;
             case OutcomeKind.TimeToEvent:
                 {
                     var events = panel.FollowUp!.Events;
