@@ -27,7 +27,7 @@ public sealed class LoadedPanel
     /// Throws a <see cref="PanelNotScreenableException"/> carrying every Error finding (a single class, a
     /// class with one sample, all features constant, too few events) when the panel cannot be screened.
     /// </summary>
-    /// <param name="classesOnly">True for the steps that take class panels only in this version (grow); the screen takes every outcome kind.</param>
+    /// <param name="classesOnly">True for the steps that take class panels only in this version; the screen and grow take every outcome kind.</param>
     public LoadedPanel EnsureScreenable(bool classesOnly = true)
     {
         if (classesOnly) EnsureClasses();
@@ -40,8 +40,8 @@ public sealed class LoadedPanel
     }
 
     /// <summary>
-    /// Throws a <see cref="PanelNotScreenableException"/> unless the outcome is classes: `grow` and
-    /// locked panels (`apply`) of this version are built for classes only, and refusing before any
+    /// Throws a <see cref="PanelNotScreenableException"/> unless the outcome is classes: locked
+    /// panels (`apply`) of this version are built for classes only, and refusing before any
     /// work keeps a measured or time-to-event panel from half-writing a results folder.
     /// </summary>
     public LoadedPanel EnsureClasses()
@@ -51,7 +51,7 @@ public sealed class LoadedPanel
             ? $"the outcome '{Panel.OutcomeColumn}' is a measured quantity"
             : $"the outcome is a time to an event ('{Panel.OutcomeColumn}' and '{Panel.FollowUp!.EventColumn}')";
         throw new PanelNotScreenableException(
-            $"{Path.GetFileName(Inspection.MatrixPath)}: {kind}, and in this version `grow` and `apply` take panels of classes only; `omicsscreen screen` screens this outcome. "
+            $"{Path.GetFileName(Inspection.MatrixPath)}: {kind}, and in this version `apply` takes panels of classes only; `omicsscreen screen` screens this outcome. "
             + "`omicsscreen check` on the same files describes the outcome"
             + (Panel.Kind == OutcomeKind.Measured ? "; if its values are class labels, add --outcome-kind classes." : "."),
             Inspection.MatrixPath);

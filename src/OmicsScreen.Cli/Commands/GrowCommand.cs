@@ -7,7 +7,8 @@ namespace OmicsScreen.Cli.Commands;
 
 /// <summary>
 /// `omicsscreen grow`: one random forest on the whole panel, with its out-of-bag error and
-/// impurity decrease per feature. A quick look; the screen is what ranks markers.
+/// impurity decrease per feature (for a measured or time-to-event outcome also its out-of-bag R² or
+/// concordance and permutation importance). A quick look; the screen is what ranks markers.
 /// </summary>
 public sealed class GrowCommand : Command, IHelpLayout
 {
@@ -26,11 +27,10 @@ public sealed class GrowCommand : Command, IHelpLayout
         HelpName = "K",
     };
 
-    public Option<int> MinLeaf { get; } = new("--min-leaf")
+    public Option<int?> MinLeaf { get; } = new("--min-leaf")
     {
-        Description = "Fewest samples a leaf may hold (1 grows leaves to purity).",
+        Description = "Fewest samples a leaf may hold (1 grows leaves to purity). Default: 1 for classes, 5 for a measured or time-to-event outcome, as in `screen`.",
         HelpName = "N",
-        DefaultValueFactory = _ => 1,
     };
 
     public Option<int?> MaxDepth { get; } = new("--max-depth")
@@ -83,13 +83,14 @@ public sealed class GrowCommand : Command, IHelpLayout
     public IReadOnlyList<HelpExample> Examples =>
     [
         new("One forest of 500 trees: out-of-bag error, AUC and the top features", "omicsscreen grow wdbc.csv --outcome diagnosis"),
-        new("More trees, every feature's impurity decrease in a table",
-            "omicsscreen grow plasma.csv --samples sheet.tsv --outcome status --trees 2000 --importance-out importance.tsv"),
-        new("The summary as JSON for a pipeline", "omicsscreen grow wdbc.csv --outcome diagnosis --json"),
+        new("A regression forest on a measured outcome: out-of-bag R², every feature's importance in a table",
+            "omicsscreen grow plasma.csv --samples sheet.tsv --outcome activity_score --importance-out importance.tsv"),
+        new("A random survival forest on follow-up: out-of-bag concordance, the summary as JSON for a pipeline",
+            "omicsscreen grow plasma.csv --samples sheet.tsv --follow-up months --event relapse --json"),
     ];
 
     public GrowCommand(CliConsole console)
-        : base("grow", "Grow one random forest on a panel and report its out-of-bag error, AUC and impurity decrease per feature.")
+        : base("grow", "Grow one random forest on a panel and report its out-of-bag error (AUC, R² or concordance by outcome kind) and importance per feature.")
     {
         Input.AddTo(this);
         Options.Add(Trees);
@@ -108,7 +109,7 @@ public sealed class GrowCommand : Command, IHelpLayout
             Panel = Input.ToLoadOptions(parse),
             TreeCount = parse.GetValue(Trees),
             FeaturesPerSplit = ScreenOptionChecks.Given(parse.GetValue(FeaturesPerSplit), "--features-per-split", 1, "leave it out for the square root of the feature count"),
-            MinLeafSize = parse.GetValue(MinLeaf),
+            MinLeafSize = ScreenOptionChecks.Given(parse.GetValue(MinLeaf), "--min-leaf", 1, "leave it out for the outcome kind's default"),
             MaxDepth = parse.GetValue(MaxDepth),
             SampleFraction = parse.GetValue(SampleFraction),
             Balance = parse.GetValue(Balanced) ? BalanceMode.On : parse.GetValue(Balance),

@@ -5,6 +5,8 @@ using OmicsScreen.Data;
 using OmicsScreen.Data.Inspection;
 using OmicsScreen.Data.Output;
 using OmicsScreen.Engine.Forests;
+using OmicsScreen.Engine.Panels;
+using OmicsScreen.Screening.Screen;
 using OmicsScreen.Reporting.Json;
 using OmicsScreen.Reporting.Tables;
 using OmicsScreen.Runs.Output;
@@ -24,9 +26,10 @@ internal static class GrowRun
         InputPathGuard.Check(options.Panel.SampleSheetPath, "sample sheet");
         InputPathGuard.Check(options.Panel.FeatureSheetPath, "feature sheet");
         if (options.ImportanceFile is { } importancePath)
-            OutputPathGuard.CheckFile(importancePath, "--importance-out", [options.Panel.MatrixPath, options.Panel.SampleSheetPath, options.Panel.FeatureSheetPath], ImportanceWriter.HeaderLine);
+            OutputPathGuard.CheckFile(importancePath, "--importance-out", [options.Panel.MatrixPath, options.Panel.SampleSheetPath, options.Panel.FeatureSheetPath],
+                EarlierImportanceHeader(importancePath));
         var watch = Stopwatch.StartNew();
-        var loaded = PanelLoader.Load(options.Panel).EnsureScreenable();
+        var loaded = PanelLoader.Load(options.Panel).EnsureScreenable(classesOnly: false);
         var loadTime = watch.Elapsed;
         var panel = loaded.Panel;
         GrowFeasibility.Check(options, panel);
@@ -34,6 +37,8 @@ internal static class GrowRun
         foreach (var finding in loaded.Inspection.Findings)
             if (finding.Severity == FindingSeverity.Warning) warnings.Add(finding.Message);
         warnings.AddRange(GrowFeasibility.Warnings(options, panel));
+        if (panel.Kind != OutcomeKind.Classes && options.Balance == BalanceMode.On)
+            warnings.Add("--balance on draws class-balanced trees, and this outcome has no classes: every tree draws a plain bootstrap.");
         foreach (var warning in warnings) console.Error.WriteLine($"warning: {TextTable.Printable(warning)}");
         var forestOptions = options.ToForestOptions(panel);
         try
@@ -43,6 +48,17 @@ internal static class GrowRun
         catch (ArgumentException e)
         {
             throw new CommandInputException(e.Message);
+        }
+        if (panel.Kind != OutcomeKind.Classes)
+        {
+            var outcomeForest = GrowOutcomeForest.Grow(panel, forestOptions);
+            var byImpurity = RankDescending(outcomeForest.Impurity);
+            if (options.ImportanceFile is { } file)
+                AtomicFile.WriteText(file, writer => OutcomeImportanceWriter.Write(writer, panel.Kind, panel.Matrix.FeatureNames, byImpurity,
+                    outcomeForest.Impurity, outcomeForest.ImpurityShare, outcomeForest.Permutation, outcomeForest.PermutationStandardError));
+            if (options.Json) GrowOutcomeOutput.WriteJson(console.Out, loaded, forestOptions, outcomeForest, byImpurity, loadTime, warnings);
+            else GrowOutcomeOutput.WriteText(console.Out, loaded, forestOptions, outcomeForest, byImpurity, loadTime);
+            return ExitCode.Success;
         }
         var grown = ForestGrower.Grow(panel, forestOptions);
         var result = grown.Result;
@@ -56,6 +72,30 @@ internal static class GrowRun
         return ExitCode.Success;
     }
 
+    /// <summary>
+    /// The header an earlier importance file of this tool starts with, whichever outcome kind wrote
+    /// it (so a rerun may replace it); the class header when there is none, for the guard's message.
+    /// </summary>
+    private static string EarlierImportanceHeader(string path)
+    {
+        if (FileKinds.Of(Path.GetFullPath(path)) == FileKind.RegularFile)
+            foreach (var header in new[] { OutcomeImportanceWriter.MeasuredHeaderLine, OutcomeImportanceWriter.FollowUpHeaderLine })
+                if (OutputPathGuard.StartsWith(Path.GetFullPath(path), header)) return header;
+        return ImportanceWriter.HeaderLine;
+    }
+
+    /// <summary>Feature indices by decreasing value; ties by feature order, so the list is stable.</summary>
+    internal static int[] RankDescending(double[] values)
+    {
+        var order = Enumerable.Range(0, values.Length).ToArray();
+        Array.Sort(order, (a, b) =>
+        {
+            int byValue = values[b].CompareTo(values[a]);
+            return byValue != 0 ? byValue : a.CompareTo(b);
+        });
+        return order;
+    }
+
     /// <summary>Feature indices by decreasing impurity decrease; ties by feature order, so the list is stable.</summary>
     private static int[] RankByImpurity(ForestResult result)
     {
@@ -67,6 +107,8 @@ internal static class GrowRun
         });
         return order;
     }
+
+    internal static IEnumerable<(string Label, int Trees)> Checkpoints(int treeCount) => CurveCheckpoints(treeCount);
 
     private static void WriteText(TextWriter output, LoadedPanel loaded, ForestResult result, int[] ranked, TimeSpan loadTime)
     {
@@ -160,7 +202,7 @@ internal static class GrowRun
         ManifestJson.Write(output, document);
     }
 
-    private static string Fraction(double value) => value.ToString("0.0000", CultureInfo.InvariantCulture);
+    internal static string Fraction(double value) => value.ToString("0.0000", CultureInfo.InvariantCulture);
 
-    private static string Seconds(TimeSpan time) => time.TotalSeconds.ToString("0.000", CultureInfo.InvariantCulture) + " s";
+    internal static string Seconds(TimeSpan time) => time.TotalSeconds.ToString("0.000", CultureInfo.InvariantCulture) + " s";
 }

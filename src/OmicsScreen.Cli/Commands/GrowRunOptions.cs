@@ -13,7 +13,8 @@ public sealed record GrowRunOptions
     public required PanelLoadOptions Panel { get; init; }
     public int TreeCount { get; init; } = 500;
     public int FeaturesPerSplit { get; init; }
-    public int MinLeafSize { get; init; } = 1;
+    /// <summary>Fewest samples a leaf may hold; 0 means the outcome kind's default (1 for classes, 5 otherwise; as in `screen`).</summary>
+    public int MinLeafSize { get; init; }
     public int? MaxDepth { get; init; }
     public double? SampleFraction { get; init; }
     /// <summary>Class-balanced drawing, spelt as for `screen`; off by default for a single forest.</summary>
@@ -27,7 +28,7 @@ public sealed record GrowRunOptions
     {
         if (TreeCount < 1) throw new CommandInputException("--trees: the value must be at least 1.");
         if (FeaturesPerSplit < 0) throw new CommandInputException("--features-per-split: the value must be at least 1 (leave it out for the square root of the feature count).");
-        if (MinLeafSize < 1) throw new CommandInputException("--min-leaf: the value must be at least 1.");
+        if (MinLeafSize < 0) throw new CommandInputException("--min-leaf: the value must be at least 1.");
         if (MaxDepth is < 1)
             throw new CommandInputException(FormattableString.Invariant(
                 $"--max-depth {MaxDepth}: the root is level 0, so every tree would be a single leaf. Use 1 or more, or leave it out for no limit."));
@@ -51,7 +52,13 @@ public sealed record GrowRunOptions
         return smallest * 3 < largest * 2;
     }
 
-    /// <summary>The engine's options; samples of one subject are drawn together when the panel names subjects.</summary>
+    /// <summary>The smallest leaf for this panel's outcome kind: the given one, or the kind's default.</summary>
+    public int MinLeafFor(Panel panel) => MinLeafSize > 0 ? MinLeafSize : ScreenSettings.DefaultMinLeafSize(panel.Kind);
+
+    /// <summary>
+    /// The engine's options; samples of one subject are drawn together when the panel names
+    /// subjects. Class balance applies to classes only; other kinds draw a plain bootstrap.
+    /// </summary>
     public ForestOptions ToForestOptions(Panel panel) => new()
     {
         TreeCount = TreeCount,
@@ -60,14 +67,14 @@ public sealed record GrowRunOptions
         Tree = new TreeOptions
         {
             FeaturesPerSplit = FeaturesPerSplit > 0 ? FeaturesPerSplit : null,
-            MinLeafSize = MinLeafSize,
+            MinLeafSize = MinLeafFor(panel),
             MaxDepth = MaxDepth ?? int.MaxValue,
         },
         Sampling = new SamplingOptions
         {
             Drawing = SampleFraction is null ? SampleDrawing.Bootstrap : SampleDrawing.Subsample,
             SubsampleFraction = SampleFraction ?? SamplingOptions.Default.SubsampleFraction,
-            ClassBalanced = IsBalanced(Balance, panel.Outcome),
+            ClassBalanced = panel.Kind == OutcomeKind.Classes && IsBalanced(Balance, panel.Outcome),
             Groups = panel.Subject,
         },
     };

@@ -100,8 +100,6 @@ internal static class ScreenFeasibility
             warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--redundancy-rho {options.RedundancyCorrelation} groups markers whose Spearman |rho| is this low, and single linkage chains them: groups may join markers that share little; use 0.5 or more (the default is 0.7)."));
         if (panel.Kind != OutcomeKind.Classes && options.Balance == BalanceMode.On)
             warnings.Add("--balance on draws class-balanced trees, and this outcome has no classes: every tree draws a plain bootstrap.");
-        if (panel.Kind != OutcomeKind.Classes && panel.Cohort is not null)
-            warnings.Add("The cohort check covers class outcomes in this version: with a measured or time-to-event outcome the --cohort column is read but its cohort artefacts are not checked.");
         if (options.FeaturesPerSplit > 1 && options.FeaturesPerSplit == panel.FeatureCount)
             warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--features-per-split {options.FeaturesPerSplit} tries every feature at every split: the trees are then alike and the strongest markers mask the others' importance; leave it out for the square root of the feature count (Breiman 2001)."));
         return warnings;

@@ -11,9 +11,11 @@ internal static class CohortSummary
     {
         output.WriteLine();
         output.WriteLine(FormattableString.Invariant(
-            $"Cohort check ({cohorts.CohortColumn}: {cohorts.Cohorts.Count} cohorts): the features predict the cohort with out-of-bag accuracy {cohorts.CohortPredictionAccuracy:0.00} (largest cohort {cohorts.LargestCohortShare:0.00}); outcome-cohort association V = {cohorts.OutcomeCohortCramersV:0.00}."));
+            $"Cohort check ({cohorts.CohortColumn}: {cohorts.Cohorts.Count} cohorts): the features predict the cohort with out-of-bag accuracy {cohorts.CohortPredictionAccuracy:0.00} (largest cohort {cohorts.LargestCohortShare:0.00}); outcome-cohort association {AssociationSymbol(cohorts.Measure)} = {cohorts.OutcomeCohortAssociation:0.00}."));
         if (cohorts.Confounded)
-            output.WriteLine("  Outcome and cohort are strongly associated (most cases come from some cohorts): no method can separate a disease marker from a cohort marker in this design.");
+            output.WriteLine(cohorts.Measure == CohortEffectMeasure.Auc
+                ? "  Outcome and cohort are strongly associated (most cases come from some cohorts): no method can separate a disease marker from a cohort marker in this design."
+                : "  Outcome and cohort are strongly associated (the cohort nearly fixes the outcome): no method can separate a marker of the outcome from a cohort marker in this design.");
         var flagged = result.Shortlist.Select(e => (e, m: cohorts.Marker(e.Forest.FeatureIndex))).Where(x => x.m is { Flag: not CohortFlag.None }).ToList();
         if (flagged.Count == 0)
         {
@@ -21,10 +23,10 @@ internal static class CohortSummary
         }
         else
         {
-            var table = new TextTable("rank", "marker", "flag", "within-cohort AUC", "I2", "separates");
+            var table = new TextTable("rank", "marker", "flag", "within-cohort " + CohortMeasureWords.Short(cohorts.Measure), "I2", "separates");
             foreach (var (e, m) in flagged)
                 table.Add(e.Rank.ToString(System.Globalization.CultureInfo.InvariantCulture), e.Forest.Feature, CohortTables.FlagText(m!.Flag),
-                    FormattableString.Invariant($"{m.WithinCohort?.RandomEstimate:0.000}"), FormattableString.Invariant($"{m.WithinCohort?.I2:0.00}"),
+                    m.WithinCohort is null ? "" : FormattableString.Invariant($"{m.WithinCohortEffect:0.000}"), FormattableString.Invariant($"{m.WithinCohort?.I2:0.00}"),
                     FormattableString.Invariant($"{m.SeparatedCohort} ({m.CohortSeparation:0.00})"));
             table.WriteTo(output);
         }
@@ -37,6 +39,16 @@ internal static class CohortSummary
                 + (artefactsOutside.Count > named ? $", and {artefactsOutside.Count - named} more." : "."));
         foreach (var h in cohorts.HeldOut)
             output.WriteLine(FormattableString.Invariant(
-                $"  held out {h.Cohort} ({h.SampleCount} samples, {h.PanelSize} markers chosen on the others): AUC {h.Auc:0.000} [{h.AucInterval.Lower:0.000}, {h.AucInterval.Upper:0.000}], error {h.Error:0.000}"));
+                $"  held out {h.Cohort} ({h.SampleCount} samples, {h.PanelSize} markers chosen on the others): {HeldOutScore(cohorts.Measure, h)}"));
     }
+
+    /// <summary>V for classes (Cramér's), eta for the other kinds (the correlation ratio; see OutcomeCohortAssociation).</summary>
+    private static string AssociationSymbol(CohortEffectMeasure measure) => measure == CohortEffectMeasure.Auc ? "V" : "eta";
+
+    private static string HeldOutScore(CohortEffectMeasure measure, HeldOutCohort h) => measure switch
+    {
+        CohortEffectMeasure.SpearmanRho => FormattableString.Invariant($"R² {h.Score:0.000}, mean squared error {h.Error:0.###}"),
+        CohortEffectMeasure.HazardRatioPerSd => FormattableString.Invariant($"C {h.Score:0.000} [{h.ScoreInterval.Lower:0.000}, {h.ScoreInterval.Upper:0.000}]"),
+        _ => FormattableString.Invariant($"AUC {h.Score:0.000} [{h.ScoreInterval.Lower:0.000}, {h.ScoreInterval.Upper:0.000}], error {h.Error:0.000}"),
+    };
 }

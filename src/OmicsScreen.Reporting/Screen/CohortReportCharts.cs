@@ -32,15 +32,17 @@ internal static class CohortReportCharts
         for (int i = 0; i < rows.Length; i++)
         {
             var effect = marker.Effects[i];
-            double variance = effect.AucStandardError * effect.AucStandardError;
-            double weight = double.IsFinite(effect.Auc) && variance > 0 ? 1 / (variance + tau2) : double.NaN;
-            rows[i] = new ForestRow(effect.Cohort, effect.Auc, effect.AucInterval.Lower, effect.AucInterval.Upper, weight);
+            double variance = effect.StandardError * effect.StandardError;
+            double weight = double.IsFinite(effect.Effect) && variance > 0 ? 1 / (variance + tau2) : double.NaN;
+            rows[i] = new ForestRow(effect.Cohort, effect.Effect, effect.Interval.Lower, effect.Interval.Upper, weight);
         }
-        var pooled = marker.WithinCohort is { } within
-            ? new ForestRow(PooledLabel, within.RandomEstimate, within.RandomInterval.Lower, within.RandomInterval.Upper)
+        var pooled = marker.WithinCohort is not null
+            ? new ForestRow(PooledLabel, marker.WithinCohortEffect, marker.WithinCohortInterval.Lower, marker.WithinCohortInterval.Upper)
             : null;
-        return ForestPlotChart.Render(new ForestPlotOptions("AUC of " + marker.Feature + " in each cohort", AucAxisLabel, CohortAxisLabel,
-            NullValue: 0.5, Decimals: 2), rows, pooled);
+        var measure = marker.Measure;
+        string axis = measure == CohortEffectMeasure.Auc ? AucAxisLabel : CohortMeasureWords.Long(measure) + " (95% CI)";
+        return ForestPlotChart.Render(new ForestPlotOptions(CohortMeasureWords.Short(measure) + " of " + marker.Feature + " in each cohort", axis, CohortAxisLabel,
+            NullValue: measure.NullValue(), Decimals: 2), rows, pooled);
     }
 
     /// <summary>Pairwise Spearman correlation of the screened cohorts' mean importances; 1 on the diagonal.</summary>

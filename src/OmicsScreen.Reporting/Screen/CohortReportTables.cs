@@ -46,13 +46,14 @@ internal static class CohortReportTables
 
     public static HtmlTable ShortlistFlags(IReadOnlyList<(ShortlistEntry Entry, MarkerHeterogeneity Marker)> flagged)
     {
+        string name = flagged.Count > 0 ? CohortMeasureWords.Short(flagged[0].Marker.Measure) : "AUC";
         var table = new HtmlTable(ShortlistFlagsCaption,
         [
             new("Rank", ColumnAlignment.Numeric),
             new("Feature"),
             new("Flag"),
-            new("AUC, all samples [95% CI]"),
-            new("Within-cohort AUC [95% CI]"),
+            new(name + ", all samples [95% CI]"),
+            new("Within-cohort " + name + " [95% CI]"),
             new("I²", ColumnAlignment.Numeric),
             new("tau²", ColumnAlignment.Numeric),
             new("Cohort it separates"),
@@ -64,8 +65,8 @@ internal static class CohortReportTables
                 ReportNumber.Integer(entry.Rank),
                 marker.Feature,
                 FlagWords(marker.Flag),
-                Auc(marker.PooledAuc, marker.PooledAucInterval),
-                marker.WithinCohort is { } within ? Auc(within.RandomEstimate, within.RandomInterval) : ReportNumber.Missing,
+                Auc(marker.AllSamplesEffect, marker.AllSamplesInterval),
+                marker.WithinCohort is not null ? Auc(marker.WithinCohortEffect, marker.WithinCohortInterval) : ReportNumber.Missing,
                 I2(marker.WithinCohort),
                 Tau2(marker.WithinCohort),
                 marker.SeparatedCohort,
@@ -79,12 +80,13 @@ internal static class CohortReportTables
         string caption = shown < artefacts.Count
             ? OutsideArtefactsCaption + " (first " + ReportNumber.Integer(shown) + " of " + ReportNumber.Integer(artefacts.Count) + ")"
             : OutsideArtefactsCaption;
+        string name = artefacts.Count > 0 ? CohortMeasureWords.Short(artefacts[0].Marker.Measure) : "AUC";
         var table = new HtmlTable(caption,
         [
             new("Order", ColumnAlignment.Numeric),
             new("Feature"),
-            new("AUC, all samples [95% CI]"),
-            new("Within-cohort AUC [95% CI]"),
+            new(name + ", all samples [95% CI]"),
+            new("Within-cohort " + name + " [95% CI]"),
             new("Cohort it separates"),
             new("Separation AUC", ColumnAlignment.Numeric),
         ])
@@ -95,8 +97,8 @@ internal static class CohortReportTables
             table.AddRow(
                 ReportNumber.Integer(position),
                 marker.Feature,
-                Auc(marker.PooledAuc, marker.PooledAucInterval),
-                marker.WithinCohort is { } within ? Auc(within.RandomEstimate, within.RandomInterval) : ReportNumber.Missing,
+                Auc(marker.AllSamplesEffect, marker.AllSamplesInterval),
+                marker.WithinCohort is not null ? Auc(marker.WithinCohortEffect, marker.WithinCohortInterval) : ReportNumber.Missing,
                 marker.SeparatedCohort,
                 ReportNumber.Fixed(marker.CohortSeparation, 2));
         }
@@ -124,17 +126,20 @@ internal static class CohortReportTables
 
     public static HtmlTable HeldOut(CohortResult cohorts)
     {
+        bool measured = cohorts.Measure == CohortEffectMeasure.SpearmanRho;
+        string score = CohortMeasureWords.HeldOutScore(cohorts.Measure);
         var table = new HtmlTable(HeldOutCaption,
         [
             new("Held-out cohort"),
             new("Samples", ColumnAlignment.Numeric),
             new("Panel size", ColumnAlignment.Numeric),
-            new("AUC [95% CI]"),
-            new("Error", ColumnAlignment.Numeric),
+            measured ? new(score, ColumnAlignment.Numeric) : new(score + " [95% CI]"),
+            new(measured ? "Mean squared error" : cohorts.Measure == CohortEffectMeasure.HazardRatioPerSd ? "Error (1 - C)" : "Error", ColumnAlignment.Numeric),
         ]);
         foreach (var held in cohorts.HeldOut)
             table.AddRow(held.Cohort, ReportNumber.Integer(held.SampleCount), ReportNumber.Integer(held.PanelSize),
-                Auc(held.Auc, held.AucInterval), ReportNumber.Fixed(held.Error, 3));
+                measured ? ReportNumber.Fixed(held.Score, 3) : Auc(held.Score, held.ScoreInterval),
+                measured ? ReportNumber.Significant(held.Error, 3) : ReportNumber.Fixed(held.Error, 3));
         return table;
     }
 

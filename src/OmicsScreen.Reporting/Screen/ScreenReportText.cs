@@ -22,8 +22,6 @@ internal static class ScreenReportText
                 + "there the share of false markers on a planted measured design was 0.12 at a level of 0.10 (5 panels), the selection-aware R² was conservative by about 0.10, "
                 + "null time-to-event panels gave a non-empty list in 4 of 20 (20%, at a level of 10%), and the time-to-event screen found fewer true markers than a single-marker Cox test. "
                 + "Read the list and its estimates with that margin.");
-        if (kind != OutcomeKind.Classes && cohortsChecked is false)
-            cautions.Add("The cohort check covers class outcomes in this version; with a measured or time-to-event outcome a --cohort column is not yet checked for cohort artefacts.");
         return cautions;
     }
 

@@ -1,6 +1,5 @@
 using OmicsScreen.Engine.Parallelism;
 using OmicsScreen.Screening.Screen;
-using OmicsScreen.Screening.Univariate;
 using OmicsScreen.Screening.Work;
 
 namespace OmicsScreen.Screening.Cohorts;
@@ -17,11 +16,11 @@ namespace OmicsScreen.Screening.Cohorts;
 internal static class CohortAnalysis
 {
     /// <summary>The cohort check; progress is reported per cohort screen, and every inner screen honours the context's cancellation.</summary>
-    public static CohortResult Run(ScreenContext context, IReadOnlyList<int> order, UnivariateTable univariate, ScreenWork work)
+    public static CohortResult Run(ScreenContext context, IReadOnlyList<int> order, SingleMarkerStatistics singleMarkers, ScreenWork work)
     {
         var panel = context.Panel;
         var cohort = panel.Cohort ?? throw new ArgumentException("The panel names no cohort.");
-        var outcome = panel.Outcome;
+        var outcome = CohortOutcome.For(context, singleMarkers);
         void Done(int step, int total) => context.Report(ScreenStage.Cohorts, step, total);
         var rowsOf = CohortMembership.RowsOf(panel);
         var screenable = CohortMembership.ScreenableCohorts(panel, rowsOf);
@@ -33,20 +32,22 @@ internal static class CohortAnalysis
         var prediction = CohortPrediction.Grow(context, rowsOf);
         Done(++done, steps);
 
-        var (cramersV, associationP) = OutcomeCohortAssociation.OfClasses(outcome, cohort);
+        var (association, associationP) = outcome.Association();
 
         // Every feature across cohorts, in the screen's order; features are independent, so they
         // run in parallel and are gathered by index.
-        int positiveContrast = Math.Max(0, univariate.Contrasts.ToList().IndexOf(outcome.ClassNames[outcome.PositiveClass]));
         var markers = new MarkerHeterogeneity[panel.FeatureCount];
         Parallel.For(0, markers.Length, WorkerThreads.Options(context.ThreadCount),
-            i => markers[i] = MarkerAcrossCohorts.OfClasses(panel, univariate, order[i], positiveContrast, prediction.ImportanceRanks[order[i]]));
+            i => markers[i] = outcome.Marker(order[i], prediction.ImportanceRanks[order[i]], rowsOf));
         HeterogeneityFlags.Flag(markers, context.Options.QValueThreshold);
 
-        var heldOut = LeaveOneCohortOut.Validate(context, work, heldOutCohorts, rowsOf, () => Done(++done, steps));
+        var heldOut = LeaveOneCohortOut.Validate(context, work, outcome, heldOutCohorts, rowsOf, () => Done(++done, steps));
 
         return new CohortResult(cohort.ColumnName, cohort.LevelNames, screenable.Select(c => cohort.LevelNames[c]).ToArray(),
-            concordance, markers, heldOut, prediction.Accuracy, prediction.LargestShare, cramersV, associationP,
-            cramersV >= OutcomeCohortAssociation.ConfoundingStrength);
+            concordance, markers, heldOut, prediction.Accuracy, prediction.LargestShare, association, associationP,
+            association >= OutcomeCohortAssociation.ConfoundingStrength)
+        {
+            Measure = outcome.Measure,
+        };
     }
 }

@@ -9,17 +9,11 @@ namespace OmicsScreen.Screening.Cohorts;
 internal static class HeterogeneityFlags
 {
     /// <summary>
-    /// Smallest spread of within-cohort AUCs (largest minus smallest) a heterogeneity flag needs
-    /// besides a significant Cochran's Q: with many samples a tiny difference is significant and
-    /// of no consequence to a lab (common practice: a test and an effect size together).
-    /// </summary>
-    public const double MinimumAucSpread = 0.10;
-
-    /// <summary>
-    /// Flags a marker as heterogeneous when Cochran's Q test of its within-cohort AUCs survives
+    /// Flags a marker as heterogeneous when Cochran's Q test of its within-cohort effects survives
     /// Benjamini-Hochberg (1995) adjustment across all features at the screen's level, and its
-    /// within-cohort AUCs spread by at least <see cref="MinimumAucSpread"/>. An
-    /// artefact flag is kept as it is. Every marker gets its Q test's q-value.
+    /// within-cohort effects spread by at least the measure's minimum
+    /// (<see cref="CohortEffectScale.MinimumSpread"/>: 0.10 of AUC, 0.30 of rho, 0.35 of log hazard
+    /// ratio). An artefact flag is kept as it is. Every marker gets its Q test's q-value.
     /// </summary>
     public static void Flag(MarkerHeterogeneity[] markers, double level)
     {
@@ -33,14 +27,8 @@ internal static class HeterogeneityFlags
         for (int i = 0; i < markers.Length; i++)
         {
             var marker = markers[i];
-            double low = double.PositiveInfinity, high = double.NegativeInfinity;
-            foreach (var effect in marker.Effects)
-                if (double.IsFinite(effect.Auc))
-                {
-                    low = Math.Min(low, effect.Auc);
-                    high = Math.Max(high, effect.Auc);
-                }
-            bool heterogeneous = marker.WithinCohort is not null && qValues[i] <= level && high - low >= MinimumAucSpread;
+            double spread = marker.Measure.Spread(marker.Effects);
+            bool heterogeneous = marker.WithinCohort is not null && qValues[i] <= level && spread >= marker.Measure.MinimumSpread();
             markers[i] = marker with
             {
                 HeterogeneityQValue = marker.WithinCohort is null ? double.NaN : qValues[i],

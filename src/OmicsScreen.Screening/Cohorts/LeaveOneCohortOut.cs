@@ -16,7 +16,8 @@ internal static class LeaveOneCohortOut
     /// <param name="heldOutCohorts">Cohorts that can be held out (<see cref="CohortMembership.HeldOutCohorts"/>).</param>
     /// <param name="rowsOf">The samples of each cohort.</param>
     /// <param name="cohortDone">Told after each held-out cohort.</param>
-    public static List<HeldOutCohort> Validate(ScreenContext context, ScreenWork work, int[] heldOutCohorts, int[][] rowsOf, Action cohortDone)
+    public static List<HeldOutCohort> Validate(ScreenContext context, ScreenWork work, CohortOutcome outcome, int[] heldOutCohorts,
+        int[][] rowsOf, Action cohortDone)
     {
         var cohort = context.Panel.Cohort ?? throw new ArgumentException("The panel names no cohort.");
         var heldOut = new List<HeldOutCohort>();
@@ -28,29 +29,16 @@ internal static class LeaveOneCohortOut
             // cohorts' own shortlist, up to the curve's size limit; their size choice never sees it.
             var shortlist = work.HeldOutScreen(c).Shortlist;
             var panelFeatures = shortlist.AsSpan(0, Math.Min(shortlist.Length, context.Options.CurveMaxPanelSize)).ToArray();
-            heldOut.Add(panelFeatures.Length == 0
-                ? new HeldOutCohort(cohort.LevelNames[c], rowsOf[c].Length, 0, double.NaN, ConfidenceInterval.Undefined(0.95), double.NaN)
-                : Score(context, panelFeatures, training, rowsOf[c], cohort.LevelNames[c], RandomStreams.HeldOutScreenSeed(context.Options.Seed, c)));
+            if (panelFeatures.Length == 0)
+                heldOut.Add(new HeldOutCohort(cohort.LevelNames[c], rowsOf[c].Length, 0, double.NaN, ConfidenceInterval.Undefined(0.95), double.NaN));
+            else
+            {
+                var seed = RandomStreams.HeldOutScreenSeed(context.Options.Seed, c);
+                var scored = PanelScorer.Score(context, panelFeatures, training, rowsOf[c], RandomStreams.HeldOutScoring(seed));
+                heldOut.Add(outcome.HeldOut(cohort.LevelNames[c], panelFeatures.Length, scored, rowsOf[c]));
+            }
             cohortDone();
         }
         return heldOut;
-    }
-
-    /// <summary>The held-out cohort's AUC with its DeLong (1988) 95% interval (two classes, both present) and error.</summary>
-    private static HeldOutCohort Score(ScreenContext context, int[] features, int[] training, int[] test, string cohortName, ulong seed)
-    {
-        var scored = PanelScorer.Score(context, features, training, test, RandomStreams.HeldOutScoring(seed));
-        var positives = new List<double>();
-        var negatives = new List<double>();
-        for (int i = 0; i < test.Length; i++) (scored.IsPositive[i] ? positives : negatives).Add(scored.Predictions[i]);
-        double auc = double.NaN;
-        var interval = ConfidenceInterval.Undefined(0.95);
-        if (context.Outcome.ClassCount == 2 && positives.Count > 0 && negatives.Count > 0)
-        {
-            var estimate = DeLong.Estimate(positives.ToArray(), negatives.ToArray());
-            auc = estimate.Auc;
-            interval = AucInterval.Compute(estimate.Auc, estimate.StandardError);
-        }
-        return new HeldOutCohort(cohortName, test.Length, features.Length, auc, interval, scored.Error);
     }
 }

@@ -1,6 +1,5 @@
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Screening.Statistics;
-using OmicsScreen.Screening.Univariate;
 
 namespace OmicsScreen.Screening.Cohorts;
 
@@ -15,37 +14,30 @@ internal static class MarkerAcrossCohorts
     /// <summary>One-cohort-against-the-rest AUC from which a marker counts as separating cohorts.</summary>
     public const double StrongCohortSeparation = 0.75;
 
-    /// <summary>The positive class against the rest, cohort by cohort, from the per-cohort rank tests.</summary>
-    public static MarkerHeterogeneity OfClasses(Panel panel, UnivariateTable univariate, int feature, int contrast, int cohortRank)
+    /// <summary>
+    /// A feature's per-cohort effects (every cohort, in level order; NaN where a cohort gives none),
+    /// their pooling, the effect over all samples and its interval, put together with the
+    /// feature's cohort separation and the artefact flag.
+    /// </summary>
+    /// <param name="within">The random-effects pooling of the usable cohorts on the measure's pooled scale; null with fewer than two.</param>
+    public static MarkerHeterogeneity Assemble(Panel panel, int feature, CohortEffectMeasure measure, List<CohortEffect> effects,
+        MetaAnalysisResult? within, double allSamplesEffect, ConfidenceInterval allSamplesInterval, int cohortRank)
     {
-        var cohort = panel.Cohort!;
-        int perCohort = panel.FeatureCount * univariate.Contrasts.Count;
-        var effects = new List<CohortEffect>();
-        var estimates = new List<double>();
-        var variances = new List<double>();
-        for (int c = 0; c < cohort.LevelCount; c++)
-        {
-            var row = univariate.PerCohort[c * perCohort + feature * univariate.Contrasts.Count + contrast];
-            effects.Add(new CohortEffect(cohort.LevelNames[c], row.ClassSampleCount + row.RestSampleCount, row.Log2MedianRatio,
-                row.Auc, row.AucStandardError, row.AucInterval));
-            if (double.IsFinite(row.Auc) && row.AucStandardError > 0)
-            {
-                estimates.Add(row.Auc);
-                variances.Add(row.AucStandardError * row.AucStandardError);
-            }
-        }
-        var within = estimates.Count >= 2 ? RandomEffectsMetaAnalysis.DerSimonianLaird(estimates.ToArray(), variances.ToArray()) : null;
-        var pooled = univariate.Row(feature, contrast);
-        var (separation, separated) = CohortSeparation(panel.Matrix, feature, cohort);
-
+        var (separation, separated) = CohortSeparation(panel.Matrix, feature, panel.Cohort!);
+        double none = measure.NullValue();
         // An artefact: the pooled samples show an effect, the cohorts differ strongly, and within
-        // cohorts there is no consistent effect (the pooled within-cohort interval spans 0.5).
-        bool pooledEffect = !(pooled.AucInterval.Lower <= 0.5 && pooled.AucInterval.Upper >= 0.5);
-        bool noWithinEffect = within is not null && within.RandomInterval.Lower <= 0.5 && within.RandomInterval.Upper >= 0.5;
-        var flag = pooledEffect && noWithinEffect && separation >= StrongCohortSeparation ? CohortFlag.CohortArtefact : CohortFlag.None;
-        return new MarkerHeterogeneity(feature, panel.Matrix.FeatureNames[feature], effects, within, pooled.Auc, pooled.AucInterval,
-            separation, separated, cohortRank, flag);
+        // cohorts there is no consistent effect (the pooled within-cohort interval spans no effect).
+        bool pooledEffect = !(allSamplesInterval.Lower <= none && allSamplesInterval.Upper >= none);
+        var marker = new MarkerHeterogeneity(feature, panel.Matrix.FeatureNames[feature], effects, within, allSamplesEffect, allSamplesInterval,
+            separation, separated, cohortRank, CohortFlag.None) { Measure = measure };
+        var withinInterval = marker.WithinCohortInterval;
+        bool noWithinEffect = within is not null && withinInterval.Lower <= none && withinInterval.Upper >= none;
+        return pooledEffect && noWithinEffect && separation >= StrongCohortSeparation ? marker with { Flag = CohortFlag.CohortArtefact } : marker;
     }
+
+    /// <summary>Pools the effects with a finite value and a positive standard error on the measure's scale; null with fewer than two.</summary>
+    public static MetaAnalysisResult? Pool(IReadOnlyList<double> pooledScaleEstimates, IReadOnlyList<double> variances) =>
+        pooledScaleEstimates.Count >= 2 ? RandomEffectsMetaAnalysis.DerSimonianLaird(pooledScaleEstimates.ToArray(), variances.ToArray()) : null;
 
     /// <summary>The cohort that the feature separates best from the others, by Mann-Whitney AUC folded to at least 0.5.</summary>
     public static (double Auc, string Cohort) CohortSeparation(FeatureMatrix matrix, int feature, SampleGrouping cohort)

@@ -107,11 +107,10 @@ public static class ScreenRunner
         }
 
         CohortResult? cohorts = null;
-        // The cohort check compares classes per cohort; for other outcome kinds it is not run (stated in the report).
-        if (panel.Cohort is { LevelCount: >= 2 } && panel.Kind == OutcomeKind.Classes)
+        if (panel.Cohort is { LevelCount: >= 2 })
         {
             progress?.Report(new ScreenProgress(ScreenStage.Cohorts, 0, 1));
-            cohorts = CohortAnalysis.Run(context, order, univariate, work);
+            cohorts = CohortAnalysis.Run(context, order, singleMarkers, work);
             Finish(ScreenStage.Cohorts);
         }
 

@@ -27,8 +27,8 @@ public sealed class WorkPlan
         int folds = options.CurveFolds * options.CurveFoldRepeats;
         for (int i = 0; i < (options.CurveFolds > 0 ? folds : 0); i++)
             units.Add(new(new WorkUnit(WorkUnitKind.CurveFold, i), innerForests * sampleCount * (options.CurveFolds - 1.0) / options.CurveFolds / 2));
-        // The cohort check (and so its inner screens) runs for class outcomes only, as in ScreenRunner.
-        if (panel.Cohort is { LevelCount: >= 2 } && panel.Kind == OutcomeKind.Classes)
+        // The cohort check's inner screens, for every outcome kind, as ScreenRunner runs them.
+        if (panel.Cohort is { LevelCount: >= 2 })
         {
             var rows = CohortMembership.RowsOf(panel);
             var screenable = CohortMembership.ScreenableCohorts(panel, rows);

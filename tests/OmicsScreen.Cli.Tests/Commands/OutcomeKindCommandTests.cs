@@ -64,7 +64,7 @@ public sealed class OutcomeKindCommandTests : IDisposable
 
         var console = CliHarness.Run("check", matrix, "--samples", sheet, "--outcome", "x");
         Assert.Equal(ExitCode.Success, console.ExitCode);
-        Assert.Contains("Verdict: the panel can be screened (in this version `grow` and `apply` take panels of classes only).", console.Out);
+        Assert.Contains("Verdict: the panel can be screened (in this version `apply` takes panels of classes only).", console.Out);
         Assert.Contains("x: a measured quantity (--outcome-kind classes reads its values as classes instead)", console.Out);
         Assert.Contains("120 samples, 0 missing; min -1.879, quartiles -0.60225 / -0.0325 / 0.69175, max 2.639", console.Out);
     }
@@ -98,7 +98,7 @@ public sealed class OutcomeKindCommandTests : IDisposable
 
         var console = CliHarness.Run("check", matrix, "--samples", sheet, "--follow-up", "time", "--event", "status");
         Assert.Equal(ExitCode.Success, console.ExitCode);
-        Assert.Contains("Verdict: the panel can be screened (in this version `grow` and `apply` take panels of classes only).", console.Out);
+        Assert.Contains("Verdict: the panel can be screened (in this version `apply` takes panels of classes only).", console.Out);
         Assert.Contains("time to event: follow-up 'time', event 'status'", console.Out);
         Assert.Contains(FormattableString.Invariant($"{events} events, {samples - events} censored, of {samples} samples; {tied} event times shared by several events"), console.Out);
         Assert.Contains(FormattableString.Invariant($"{set.GetProperty("km_median").GetDouble():G6} (Kaplan-Meier)"), console.Out);
@@ -146,19 +146,24 @@ public sealed class OutcomeKindCommandTests : IDisposable
     [Theory]
     [InlineData("measured")]
     [InlineData("time")]
-    public void Grow_refuses_an_outcome_that_is_not_classes_and_writes_nothing(string kind)
+    public void Grow_grows_the_kinds_forest_and_states_the_kind_in_one_line(string kind)
     {
         var (matrix, sheet) = Files(DataSet("survival_reference.json", "invented_continuous"));
-        string output = Path.Combine(_folder.Path, "out");
+        string importance = Path.Combine(_folder.Path, "importance.tsv");
         string[] outcome = kind == "measured" ? ["--outcome", "x"] : ["--follow-up", "time", "--event", "status"];
 
-        var run = CliHarness.Run(["grow", matrix, "--samples", sheet, .. outcome, "--importance-out", Path.Combine(output, "importance.tsv")]);
+        var run = CliHarness.Run(["grow", matrix, "--samples", sheet, .. outcome, "--trees", "100", "--importance-out", importance]);
 
-        Assert.Equal(ExitCode.NotScreenable, run.ExitCode);
-        Assert.Contains("in this version `grow` and `apply` take panels of classes only; `omicsscreen screen` screens this outcome", run.Error);
-        Assert.Contains("omicsscreen check", run.Error);
-        Assert.DoesNotContain("   at ", run.Error);
-        Assert.False(Directory.Exists(output) && Directory.EnumerateFiles(output, "*", SearchOption.AllDirectories).Any());
+        Assert.True(run.ExitCode == ExitCode.Success, run.Error);
+        Assert.Single(run.Out.Split('\n'), line => line.StartsWith("Outcome: ", StringComparison.Ordinal));
+        Assert.Contains(kind == "measured" ? "a measured quantity: a regression forest" : "a random survival forest", run.Out);
+        Assert.Contains(kind == "measured" ? "out-of-bag R²" : "out-of-bag concordance (Harrell's C)", run.Out);
+        // The smallest leaf is the kind's default, as in `screen`.
+        Assert.Contains("smallest leaf 5", run.Out);
+        Assert.StartsWith(kind == "measured"
+            ? "rank\tfeature\tmean_variance_decrease\tshare_of_total\tpermutation_mse_rise\tpermutation_se\n"
+            : "rank\tfeature\tmean_log_rank_statistic\tshare_of_total\tpermutation_concordance_drop\tpermutation_se\n", File.ReadAllText(importance));
+        Assert.DoesNotContain("classes only", run.Error);
     }
 
     [Theory]

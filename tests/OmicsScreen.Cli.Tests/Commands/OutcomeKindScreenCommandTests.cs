@@ -99,27 +99,6 @@ public sealed class OutcomeKindScreenCommandTests : IDisposable
         Assert.Equal(5, manifest.RootElement.GetProperty("parameters").GetProperty("min_leaf").GetInt32());
     }
 
-    [Theory]
-    [InlineData("measured")]
-    [InlineData("time")]
-    public void A_cohort_column_is_read_with_a_warning_that_its_check_covers_classes_only(string kind)
-    {
-        var (matrix, _) = Files(followUp: kind == "time");
-        // The same sample sheet with a cohort column: the first 60 samples in one centre, the rest in another.
-        var lines = File.ReadAllLines(Path.Combine(_folder.Path, "samples.csv"));
-        string sheet = _folder.File("cohorts.csv", string.Join('\n', lines.Select((line, i) => line + (i == 0 ? ",centre" : i <= 60 ? ",north" : ",south"))) + "\n");
-        string output = Path.Combine(_folder.Path, "cohorts-" + kind);
-        string[] outcome = kind == "time" ? ["--follow-up", "months", "--event", "relapse"] : ["--outcome", "score"];
-
-        var run = CliHarness.Run(["screen", matrix, "--samples", sheet, .. outcome, "--cohort", "centre", "--pairs", "3", "--trees", "60",
-            "--curve-folds", "0", "--out", output, "--quiet"]);
-
-        Assert.True(run.ExitCode == ExitCode.Success, run.Error);
-        Assert.Contains("The cohort check covers class outcomes in this version", run.Error);
-        Assert.False(File.Exists(Path.Combine(output, "cohort_markers.tsv")));
-        Assert.Contains("The cohort check covers class outcomes in this version", File.ReadAllText(Path.Combine(output, "report.html")));
-    }
-
     [Fact]
     public void Outcome_permutations_are_refused_for_a_measured_outcome()
     {

@@ -67,9 +67,9 @@ public class CohortAnalysisTests
         var cohorts = result.Cohorts!;
         Assert.Equal(3, cohorts.HeldOut.Count);
         // The consistent marker carries over to every held-out cohort.
-        Assert.All(cohorts.HeldOut, h => Assert.True(h.Auc > 0.6, $"{h.Cohort}: AUC {h.Auc:0.000}"));
+        Assert.All(cohorts.HeldOut, h => Assert.True(h.Score > 0.6, $"{h.Cohort}: AUC {h.Score:0.000}"));
         // Case shares 25/25/60%: a moderate association, not confounding.
-        Assert.InRange(cohorts.OutcomeCohortCramersV, 0.2, 0.5);
+        Assert.InRange(cohorts.OutcomeCohortAssociation, 0.2, 0.5);
         Assert.False(cohorts.Confounded);
         // Feature 0 makes cohort c2 recognisable, so cohort is predicted above the largest share.
         Assert.True(cohorts.CohortPredictionAccuracy > cohorts.LargestCohortShare);
@@ -110,11 +110,11 @@ public class CohortAnalysisTests
         Assert.Equal(3, heldOut.Count);
         foreach (var h in heldOut)
         {
-            double halfWidth = (h.AucInterval.Upper - h.AucInterval.Lower) / 2 + point.SelectionAwareAucSd;
-            Assert.True(Math.Abs(h.Auc - point.SelectionAwareAuc) <= halfWidth,
-                $"{h.Cohort}: held-out AUC {h.Auc:0.000} vs selection-aware {point.SelectionAwareAuc:0.000} (allowed {halfWidth:0.000})");
+            double halfWidth = (h.ScoreInterval.Upper - h.ScoreInterval.Lower) / 2 + point.SelectionAwareAucSd;
+            Assert.True(Math.Abs(h.Score - point.SelectionAwareAuc) <= halfWidth,
+                $"{h.Cohort}: held-out AUC {h.Score:0.000} vs selection-aware {point.SelectionAwareAuc:0.000} (allowed {halfWidth:0.000})");
         }
-        Assert.InRange(heldOut.Average(h => h.Auc), point.SelectionAwareAuc - 0.08, point.SelectionAwareAuc + 0.08);
+        Assert.InRange(heldOut.Average(h => h.Score), point.SelectionAwareAuc - 0.08, point.SelectionAwareAuc + 0.08);
     }
 
     [Fact]

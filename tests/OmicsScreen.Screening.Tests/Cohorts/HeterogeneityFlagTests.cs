@@ -30,7 +30,7 @@ public sealed class HeterogeneityFlagTests
         for (int i = 0; i < flagged.Length; i++)
         {
             Assert.Equal(expected[i], flagged[i].HeterogeneityQValue, 1e-9);
-            double spread = flagged[i].Effects.Max(e => e.Auc) - flagged[i].Effects.Min(e => e.Auc);
+            double spread = flagged[i].Effects.Max(e => e.Effect) - flagged[i].Effects.Min(e => e.Effect);
             // Flagged only with q <= 0.1 and within-cohort AUCs at least 0.10 apart (common practice: a test and an effect size).
             Assert.Equal(expected[i] <= 0.1 && spread >= 0.10, flagged[i].Flag == CohortFlag.Heterogeneous);
         }
