@@ -22,8 +22,16 @@ public sealed class ApplyCommand : Command, IHelpLayout
     /// <summary>Unlike the screen's, the outcome is optional here: a cohort can be scored before its outcome is known.</summary>
     public Option<string?> Outcome { get; } = new("--outcome")
     {
-        Description = "Column holding each sample's known class. Without it samples are scored only, not evaluated.",
+        Description = "Column holding each sample's known outcome (a class, or a measured value for a panel locked on one). Without it samples are scored only, not evaluated.",
         HelpName = "COLUMN",
+    };
+
+    /// <summary>The time-dependent AUC's horizon, for a panel locked on a time to an event.</summary>
+    public Option<double?> Horizon { get; } = new("--horizon")
+    {
+        Description = "For a panel locked on a time to an event: also report the time-dependent AUC at this time (in the follow-up column's unit): "
+            + "events by then against samples followed beyond it, with censoring weights.",
+        HelpName = "TIME",
     };
 
     public Option<string> Out { get; } = CommonOptions.RequiredOut("Folder for scores.tsv, the evaluation tables and apply_report.html.");
@@ -42,7 +50,7 @@ public sealed class ApplyCommand : Command, IHelpLayout
 
     public IReadOnlyList<HelpSection> HelpSections =>
     [
-        new("Input", [Input.SampleSheet, Outcome, Input.SampleIdColumn, Input.Annotations, Input.FeaturesInRows, Input.Long, Input.FeatureColumns,
+        new("Input", [Input.SampleSheet, Outcome, Input.FollowUp, Input.Event, Horizon, Input.SampleIdColumn, Input.Annotations, Input.FeaturesInRows, Input.Long, Input.FeatureColumns,
             Input.ValueColumn, Input.DetectionLimit, Input.BelowDetectionFlag, Input.QualityFlag, Input.DropUnmatched]),
         new("Run", [Out, Force, ShowSampleIds, Json]),
     ];
@@ -51,16 +59,22 @@ public sealed class ApplyCommand : Command, IHelpLayout
     [
         new("Score a validation cohort whose outcome is known: AUC, error and calibration",
             "omicsscreen apply reports/plasma/locked_panel.json validation.csv --samples validation_sheet.tsv --outcome status --out reports/validation"),
-        new("Score samples whose outcome is not known yet", "omicsscreen apply reports/plasma/locked_panel.json new_samples.csv --out reports/new_samples"),
+        new("A panel locked on a measured outcome: R², RMSE and the calibration line",
+            "omicsscreen apply reports/activity/locked_panel.json validation.csv --samples validation_sheet.tsv --outcome activity_score --out reports/activity-validation"),
+        new("A panel locked on a time to an event: concordance, the AUC at 24 months and the risk groups' survival",
+            "omicsscreen apply reports/flare/locked_panel.json validation.csv --samples validation_sheet.tsv --follow-up months --event flare --horizon 24 --out reports/flare-validation"),
     ];
 
     public ApplyCommand(CliConsole console)
-        : base("apply", "Score a new cohort with a locked panel; with a known outcome, report AUC, error and calibration.")
+        : base("apply", "Score a new cohort with a locked panel; with a known outcome, report how well it does (AUC, R² or concordance) and its calibration or risk groups.")
     {
         Arguments.Add(Model);
         Arguments.Add(Input.Panel);
         Options.Add(Input.SampleSheet);
         Options.Add(Outcome);
+        Options.Add(Input.FollowUp);
+        Options.Add(Input.Event);
+        Options.Add(Horizon);
         Options.Add(Input.SampleIdColumn);
         Options.Add(Input.Annotations);
         Options.Add(Input.FeaturesInRows);
@@ -81,6 +95,9 @@ public sealed class ApplyCommand : Command, IHelpLayout
             MatrixPath = parse.GetValue(Input.Panel)!,
             SampleSheetPath = parse.GetValue(Input.SampleSheet),
             OutcomeColumn = parse.GetValue(Outcome),
+            FollowUpColumn = parse.GetValue(Input.FollowUp),
+            EventColumn = parse.GetValue(Input.Event),
+            Horizon = parse.GetValue(Horizon),
             SampleIdColumn = parse.GetValue(Input.SampleIdColumn),
             AnnotationColumns = parse.GetValue(Input.Annotations) ?? [],
             Layout = Input.LayoutOf(parse),

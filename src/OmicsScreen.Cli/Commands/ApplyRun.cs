@@ -26,8 +26,13 @@ internal static class ApplyRun
         using var folder = ResultsFolder.Open(options.OutputFolder, options.Force, ResultsKind.Apply,
             [options.ModelPath, options.MatrixPath, options.SampleSheetPath], console.Error);
         var started = DateTimeOffset.UtcNow;
-        var (model, discoveryIds) = LockedPanelFile.ReadWithDiscoveryIds(options.ModelPath);
-        var displayNames = LockedPanelFile.ReadDisplayNames(options.ModelPath);
+        var stored = LockedPanelFile.ReadAny(options.ModelPath);
+        CheckOptionsFit(stored.Kind, options);
+        if (stored.Kind == OutcomeKind.Measured) return ApplyMeasuredRun.Execute(console, options, folder, stored, started);
+        if (stored.Kind == OutcomeKind.TimeToEvent) return ApplyFollowUpRun.Execute(console, options, folder, stored, started);
+        var model = stored.Classes!;
+        var discoveryIds = stored.DiscoverySampleIdHashes;
+        var displayNames = stored.DisplayNames;
         var (matrix, outcome, inputs) = LoadCohort(options);
         var overlap = DiscoveryOverlap.Warnings(model, discoveryIds, inputs, matrix.SampleIds);
         LockedPanelScores scores;
@@ -100,10 +105,48 @@ internal static class ApplyRun
             return (matrix, null, [input]);
         }
         // No EnsureScreenable: a cohort of one class can still be scored and its error measured.
-        // But a locked panel scores classes, so a measured outcome is refused before anything is written.
-        var loaded = PanelLoader.Load(options.ToLoadOptions()).EnsureClasses();
+        // But a class panel scores classes, so another outcome kind is refused before anything is written.
+        var loaded = PanelLoader.Load(options.ToLoadOptions());
+        EnsureKind(loaded, OutcomeKind.Classes, options);
         return (loaded.Panel.Matrix, loaded.Panel.Outcome, loaded.Inputs);
     }
+
+    /// <summary>
+    /// Refuses options that belong to another outcome kind than the locked panel's, before the
+    /// cohort is read: a usage error naming the options the panel needs.
+    /// </summary>
+    private static void CheckOptionsFit(OutcomeKind kind, ApplyRunOptions options)
+    {
+        string model = Path.GetFileName(options.ModelPath);
+        switch (kind)
+        {
+            case OutcomeKind.Classes when options.FollowUpColumn is not null:
+                throw new CommandInputException($"{model} is a panel locked on classes, so it calls classes; --follow-up, --event and --horizon are for a panel locked on a time to an event. Name the known class with --outcome.");
+            case OutcomeKind.Measured when options.FollowUpColumn is not null:
+                throw new CommandInputException($"{model} is a panel locked on a measured outcome, so it predicts that quantity; --follow-up, --event and --horizon are for a panel locked on a time to an event. Name the known value with --outcome.");
+            case OutcomeKind.TimeToEvent when options.OutcomeColumn is not null:
+                throw new CommandInputException($"{model} is a panel locked on a time to an event, so it scores risk; name the cohort's follow-up with --follow-up and --event instead of --outcome.");
+        }
+    }
+
+    /// <summary>Refuses a cohort whose outcome, as read, is of another kind than the locked panel's (exit code 3: read, but not usable as it is).</summary>
+    internal static void EnsureKind(LoadedPanel loaded, OutcomeKind expected, ApplyRunOptions options)
+    {
+        if (loaded.Panel.Kind == expected) return;
+        string found = loaded.Panel.Kind switch
+        {
+            OutcomeKind.Measured => $"the outcome '{loaded.Panel.OutcomeColumn}' is a measured quantity",
+            OutcomeKind.TimeToEvent => "the outcome is a time to an event",
+            _ => $"the outcome '{loaded.Panel.OutcomeColumn}' reads as classes",
+        };
+        throw new CommandInputException(
+            $"{Path.GetFileName(options.MatrixPath)}: {found}, but {Path.GetFileName(options.ModelPath)} is a panel locked on {LockedPanelJson.KindText(expected)}. "
+            + $"Apply a panel locked on {LockedPanelJson.KindText(loaded.Panel.Kind)} (a screen of this outcome writes one), or name a column of {OutcomeText(expected)}; "
+            + "`omicsscreen check` on the same files describes the outcome.",
+            ExitCode.NotScreenable);
+    }
+
+    private static string OutcomeText(OutcomeKind kind) => kind == OutcomeKind.Classes ? "classes" : "the quantity the panel predicts";
 
     private static string[] KnownClassNames(ClassOutcome outcome)
     {

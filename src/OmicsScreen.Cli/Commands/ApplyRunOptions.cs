@@ -16,6 +16,16 @@ public sealed record ApplyRunOptions
     /// <summary>The outcome column; null when the outcome is not known, which skips the evaluation.</summary>
     public string? OutcomeColumn { get; init; }
 
+    /// <summary>For a panel locked on a time to an event: the follow-up time and event columns (both or neither).</summary>
+    public string? FollowUpColumn { get; init; }
+    public string? EventColumn { get; init; }
+
+    /// <summary>The time at which to compute the time-dependent AUC (follow-up panels; in the follow-up's unit); null for none.</summary>
+    public double? Horizon { get; init; }
+
+    /// <summary>Whether the cohort's outcome (classes, a measured value, or follow-up) is known.</summary>
+    public bool OutcomeKnown => OutcomeColumn is not null || FollowUpColumn is not null;
+
     public string? SampleIdColumn { get; init; }
 
     public IReadOnlyList<string> AnnotationColumns { get; init; } = [];
@@ -47,8 +57,16 @@ public sealed record ApplyRunOptions
     public void Validate()
     {
         if (string.IsNullOrWhiteSpace(OutputFolder)) throw new CommandInputException("Give the results folder with --out.");
-        if (SampleSheetPath is not null && OutcomeColumn is null)
-            throw new CommandInputException("A sample sheet was given without --outcome; name the outcome column, or leave out --samples to score without one.");
+        if ((FollowUpColumn is null) != (EventColumn is null))
+            throw new CommandInputException("--follow-up and --event go together: name the follow-up time column and the event column, or neither.");
+        if (OutcomeColumn is not null && FollowUpColumn is not null)
+            throw new CommandInputException("--outcome names a class or measured outcome and --follow-up a time to an event; give the one the locked panel was screened on.");
+        if (SampleSheetPath is not null && !OutcomeKnown)
+            throw new CommandInputException("A sample sheet was given without --outcome (or --follow-up and --event); name the outcome column, or leave out --samples to score without one.");
+        if (Horizon is { } horizon && !(double.IsFinite(horizon) && horizon > 0))
+            throw new CommandInputException(FormattableString.Invariant($"--horizon {horizon} is not a positive time; give it in the follow-up column's unit, for example --horizon 24 for two years of months."));
+        if (Horizon is not null && FollowUpColumn is null)
+            throw new CommandInputException("--horizon needs the cohort's follow-up: name its columns with --follow-up and --event.");
     }
 
     /// <summary>The panel load options when the outcome is known.</summary>
@@ -56,7 +74,9 @@ public sealed record ApplyRunOptions
     {
         MatrixPath = MatrixPath,
         SampleSheetPath = SampleSheetPath,
-        OutcomeColumn = OutcomeColumn ?? throw new InvalidOperationException("No outcome column."),
+        OutcomeColumn = OutcomeKnown ? OutcomeColumn : throw new InvalidOperationException("No outcome column."),
+        FollowUpColumn = FollowUpColumn,
+        EventColumn = EventColumn,
         SampleIdColumn = SampleIdColumn,
         AnnotationColumns = AnnotationColumns,
         Layout = Layout,

@@ -70,7 +70,8 @@ public sealed record ScreenHeadline
         {
             ResultsFolder = folder,
             Report = Path.Combine(folder, ScreenRun.ReportFileName),
-            LockedPanelFile = result.Kind == OutcomeKind.Classes ? Path.Combine(folder, Runs.Locking.LockedPanelFile.DefaultFileName) : null,
+            // Class headlines always named the file; for the other kinds it is named when one was written.
+            LockedPanelFile = result.Kind == OutcomeKind.Classes || result.LockedPanelSize > 0 ? Path.Combine(folder, Runs.Locking.LockedPanelFile.DefaultFileName) : null,
             Samples = loaded.Panel.SampleCount,
             Features = loaded.Panel.FeatureCount,
             Repeats = result.Settings.RepeatCount,

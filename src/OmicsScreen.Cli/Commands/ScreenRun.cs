@@ -162,9 +162,8 @@ internal static class ScreenRun
             folder.WriteText("marker_statistics_by_cohort.tsv", w => UnivariateTableWriter.WritePerCohort(w, result.Univariate));
         if (result.Cohorts is { } cohorts) CohortTableFiles.Write(folder, cohorts);
         // The shortlist (or its prefix the curve recommends), locked for scoring new cohorts with
-        // `apply`; an empty shortlist locks nothing.
-        // Locked panels (and `apply`) are for class outcomes in this version.
-        if (result.LockedPanelSize > 0 && result.Kind == Engine.Panels.OutcomeKind.Classes)
+        // `apply`, for every outcome kind; an empty shortlist locks nothing.
+        if (result.LockedPanelSize > 0)
             folder.WrittenFiles.Add(PanelLocking.LockInto(folder.Path, loaded, result));
         var finished = DateTimeOffset.UtcNow;
         var report = ReportInput(options, loaded, result, folder, started, finished, loadSeconds) with { MergedParts = mergedParts };
@@ -272,7 +271,7 @@ internal static class ScreenRun
         output.WriteLine();
         output.WriteLine($"Results: {folder}");
         output.WriteLine($"Report: {Path.Combine(folder, ReportFileName)}");
-        if (result.LockedPanelSize > 0 && result.Kind == Engine.Panels.OutcomeKind.Classes)
+        if (result.LockedPanelSize > 0)
             output.WriteLine($"Locked panel for `omicsscreen apply`: {Path.Combine(folder, LockedPanelFile.DefaultFileName)}");
         output.WriteLine("A screen is not a diagnostic test: confirm every marker in independent cohorts before any use.");
     }

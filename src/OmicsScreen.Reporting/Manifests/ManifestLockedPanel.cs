@@ -1,3 +1,5 @@
+using System.Text.Json.Serialization;
+
 namespace OmicsScreen.Reporting.Manifests;
 
 /// <summary>The locked panel `apply` scored with, as its manifest records it.</summary>
@@ -15,4 +17,8 @@ public sealed record ManifestLockedPanel
 
     /// <summary>Discovery input file name to SHA-256, as the locked panel records them.</summary>
     public required IReadOnlyDictionary<string, string> DiscoveryInputsSha256 { get; init; }
+
+    /// <summary>`measured` or `time_to_event`; left out for class panels, whose manifests read as before.</summary>
+    [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)]
+    public string? OutcomeKind { get; init; }
 }

@@ -71,8 +71,7 @@ public static class ErrorControlText
             return "No panel locked: no marker passed error control, so there is nothing to carry into an assay (any curve shown is for information only).";
         var curve = result.PanelSize;
         string what = locked == listed ? Invariant($"all {listed} shortlisted markers") : Invariant($"the top {locked} of the {listed} shortlisted markers");
-        // Only class panels are written for `apply` in this version; for other kinds the same rule chooses the panel.
-        string label = result.Kind == Engine.Panels.OutcomeKind.Classes ? "Locked panel" : "Panel chosen (no panel file is written for this outcome kind)";
+        const string label = "Locked panel";
         if (curve is null)
             return Invariant($"{label}: {what} (no panel-size curve was computed, so there is no selection-aware estimate).");
         string metric = OutcomeKindReport.MetricName(curve.Metric);

@@ -104,18 +104,17 @@ public static class ScreenReport
     private static void WriteLockedPanel(HtmlBuilder html, ScreenResult result, ScreenReportInput input)
     {
         html.BeginSection("The locked panel");
-        if (Math.Min(result.LockedPanelSize, result.Shortlist.Count) > 0 && result.Kind != OutcomeKind.Classes)
-        {
-            html.Paragraph("The size rule chooses these " + ReportNumber.Integer(result.LockedPanelSize) + " markers, the first of the shortlist. For a measured or time-to-event outcome this version "
-                + "writes no panel file: `omicsscreen apply` scores class panels only. The selection-aware estimate above is that of this choice.");
-            html.Table(ScreenReportTables.LockedPanel(result, input.FeatureLabels));
-        }
-        else if (Math.Min(result.LockedPanelSize, result.Shortlist.Count) > 0)
+        if (Math.Min(result.LockedPanelSize, result.Shortlist.Count) > 0)
         {
             html.Paragraph(string.Create(CultureInfo.InvariantCulture,
                 $"The panel locked for `omicsscreen apply` ({LockedPanelFileName}) holds these {result.LockedPanelSize} markers, the first of the shortlist."));
+            if (result.Kind != OutcomeKind.Classes)
+                html.Paragraph(result.Kind == OutcomeKind.Measured
+                    ? "Its forest (a regression forest on these markers alone, grown on every discovery sample) predicts the outcome; `apply` reports R², RMSE and the calibration line on a new cohort."
+                    : "Its forest (a random survival forest on these markers alone, grown on every discovery sample) gives each sample a risk score, its ensemble mortality, which ranks samples but is not a calibrated survival probability; "
+                        + "`apply` splits a new cohort at the discovery median risk score and reports the concordance, a time-dependent AUC at a horizon you name, and the Kaplan-Meier curves of the two risk groups.");
             html.Table(ScreenReportTables.LockedPanel(result, input.FeatureLabels));
-            if (result.PanelSize is { LockedOutOfFoldScores.Count: > 0 } curve)
+            if (result.Kind == OutcomeKind.Classes && result.PanelSize is { LockedOutOfFoldScores.Count: > 0 } curve)
                 html.Figure(ScreenReportCharts.LockedPanelRoc(curve),
                     "Cross-validated ROC curve of the locking procedure: in every outer fold the screen, its shortlist and the size choice were repeated on the training part only, "
                     + "and the held-out samples were scored by a forest on that fold's panel (every sample of a fold that locked nothing scored alike). "

@@ -128,8 +128,7 @@ internal static class ScreenReportCharts
             : [];
         var lines = new List<ReferenceLine> { new(ChartAxis.Y, OutcomeKindReport.ChanceLevel(curve, panel), OutcomeKindReport.ChanceLabel(curve)) };
         if (lockedPanelSize > 0)
-            lines.Add(new ReferenceLine(ChartAxis.X, lockedPanelSize, panel.Kind == OutcomeKind.Classes
-                ? Invariant($"Locked panel: {lockedPanelSize} markers") : Invariant($"Chosen panel: {lockedPanelSize} markers")));
+            lines.Add(new ReferenceLine(ChartAxis.X, lockedPanelSize, Invariant($"Locked panel: {lockedPanelSize} markers")));
         return XYChart.Render(
             new XYChartOptions("Panel-size curve: selection-aware and optimistic estimates", PanelSizeAxisLabel, PanelSizeScoreLabel(curve), Width: 820,
                 XScale: AxisScaleKind.Log10, YMaximum: 1),

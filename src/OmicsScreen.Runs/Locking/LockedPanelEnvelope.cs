@@ -23,7 +23,15 @@ namespace OmicsScreen.Runs.Locking;
 public static class LockedPanelEnvelope
 {
     public const string FormatName = "omicsscreen-locked-panel";
+    /// <summary>The version of class panels' files, unchanged since the first.</summary>
     public const int FormatVersion = 1;
+
+    /// <summary>
+    /// The version of measured and time-to-event panels' files: a reader of version 1 would take
+    /// their content for a class panel, so they carry a version it refuses by name. The newest
+    /// version this reader reads.
+    /// </summary>
+    public const int OutcomeKindsVersion = 2;
 
     private const string ChecksumMismatch = "checksum does not match: the file was changed or truncated.";
     private const string ChecksumFix = "Restore the file as it was written, or lock the panel again from the discovery results.";
@@ -41,7 +49,8 @@ public static class LockedPanelEnvelope
     };
 
     /// <summary>Writes the envelope and content atomically; the content node is copied, not taken over.</summary>
-    public static void Write(string path, JsonObject content)
+    /// <param name="version">The format version the content needs: <see cref="FormatVersion"/> for classes, <see cref="OutcomeKindsVersion"/> for the other kinds.</param>
+    public static void Write(string path, JsonObject content, int version = FormatVersion)
     {
         ArgumentNullException.ThrowIfNull(path);
         ArgumentNullException.ThrowIfNull(content);
@@ -49,7 +58,7 @@ public static class LockedPanelEnvelope
         var envelope = new JsonObject
         {
             ["format"] = FormatName,
-            ["version"] = FormatVersion,
+            ["version"] = version,
             ["content_sha256"] = Checksum(copy),
             ["content"] = copy,
         };
@@ -122,9 +131,9 @@ public static class LockedPanelEnvelope
                 "Give the locked_panel.json of a screen's results folder.");
         if (envelope["version"] is not JsonValue versionValue || !versionValue.TryGetValue(out int version) || version < 1)
             throw PanelInputException.At(path, null, null, "has no valid format version.", ChecksumFix);
-        if (version > FormatVersion)
+        if (version > OutcomeKindsVersion)
             throw PanelInputException.At(path, null, null,
-                FormattableString.Invariant($"has format version {version}, which this version of OmicsScreen cannot read (it reads version {FormatVersion})."),
+                FormattableString.Invariant($"has format version {version}, which this version of OmicsScreen cannot read (it reads versions up to {OutcomeKindsVersion})."),
                 "Use the OmicsScreen version that wrote it, or a newer one.");
         if (envelope["content"] is not JsonObject content || !TryGetString(envelope, "content_sha256", out var expected))
             throw PanelInputException.At(path, null, null, ChecksumMismatch, ChecksumFix);

@@ -1,4 +1,5 @@
 using System.Security.Cryptography;
+using OmicsScreen.Engine.Panels;
 using OmicsScreen.Screening.Locking;
 
 namespace OmicsScreen.Runs.Locking;
@@ -35,6 +36,36 @@ public static class LockedPanelFile
     /// <summary>The panel and, when the screen recorded them, the SHA-256 of each discovery sample id.</summary>
     public static (LockedPanel Panel, HashSet<string>? DiscoverySampleIdHashes) ReadWithDiscoveryIds(string path) =>
         LockedPanelEnvelope.Read(path, content => (LockedPanelJson.FromJson(content), DiscoveryOverlap.ReadSampleIdHashes(content)));
+
+    /// <summary>A locked panel of any outcome kind, with its hashed discovery sample ids and display names.</summary>
+    /// <exception cref="Data.PanelInputException">The file is missing, not ours, changed, truncated or structurally invalid; the message names it.</exception>
+    public static LoadedLockedPanel ReadAny(string path) => LockedPanelEnvelope.Read(path, content =>
+    {
+        var kind = LockedPanelJson.KindOf(content);
+        return new LoadedLockedPanel
+        {
+            Kind = kind,
+            Classes = kind == OutcomeKind.Classes ? LockedPanelJson.FromJson(content) : null,
+            Measured = kind == OutcomeKind.Measured ? LockedPanelJson.MeasuredFromJson(content) : null,
+            FollowUp = kind == OutcomeKind.TimeToEvent ? LockedPanelJson.FollowUpFromJson(content) : null,
+            DiscoverySampleIdHashes = DiscoveryOverlap.ReadSampleIdHashes(content),
+            DisplayNames = MarkerLabels.ReadDisplayNames(content),
+        };
+    });
+
+    /// <summary>Writes a measured panel's file (format version <see cref="LockedPanelEnvelope.OutcomeKindsVersion"/>).</summary>
+    public static void Write(string path, LockedMeasuredPanel panel)
+    {
+        ArgumentNullException.ThrowIfNull(panel);
+        LockedPanelEnvelope.Write(path, LockedPanelJson.ToJson(panel), LockedPanelEnvelope.OutcomeKindsVersion);
+    }
+
+    /// <summary>Writes a follow-up panel's file (format version <see cref="LockedPanelEnvelope.OutcomeKindsVersion"/>).</summary>
+    public static void Write(string path, LockedFollowUpPanel panel)
+    {
+        ArgumentNullException.ThrowIfNull(panel);
+        LockedPanelEnvelope.Write(path, LockedPanelJson.ToJson(panel), LockedPanelEnvelope.OutcomeKindsVersion);
+    }
 
     /// <summary>The markers' display names recorded when the panel was locked (id to name; empty when none were).</summary>
     public static Dictionary<string, string> ReadDisplayNames(string path) => LockedPanelEnvelope.Read(path, MarkerLabels.ReadDisplayNames);

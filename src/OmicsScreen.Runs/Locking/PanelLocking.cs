@@ -1,4 +1,6 @@
+using System.Text.Json.Nodes;
 using OmicsScreen.Data;
+using OmicsScreen.Engine.Panels;
 using OmicsScreen.Screening.Locking;
 using OmicsScreen.Screening.Screen;
 
@@ -20,7 +22,7 @@ public static class PanelLocking
         var screen = result.Settings.Options;
         var inputs = new Dictionary<string, string>(StringComparer.Ordinal);
         foreach (var input in loaded.Inputs) inputs[Path.GetFileName(input.Path)] = input.Sha256;
-        var locked = PanelLocker.Lock(loaded.Panel, result, new PanelLockOptions
+        var lockOptions = new PanelLockOptions
         {
             PanelSize = panelSize,
             Seed = screen.Seed,
@@ -28,11 +30,26 @@ public static class PanelLocking
             ThreadCount = screen.ThreadCount,
             ToolVersion = ToolVersion.Current,
             InputSha256 = inputs,
-        });
-        var content = LockedPanelJson.ToJson(locked);
+        };
+        // Class panels keep format version 1 and their exact bytes; the other kinds need version 2.
+        var (content, markers, version) = loaded.Panel.Kind switch
+        {
+            OutcomeKind.Measured => Content(PanelLocker.LockMeasured(loaded.Panel, result, lockOptions)),
+            OutcomeKind.TimeToEvent => Content(PanelLocker.LockFollowUp(loaded.Panel, result, lockOptions)),
+            _ => Content(PanelLocker.Lock(loaded.Panel, result, lockOptions)),
+        };
         content[DiscoveryOverlap.SampleIdHashesKey] = DiscoveryOverlap.SampleIdHashes(loaded.Panel.Matrix.SampleIds);
-        if (MarkerLabels.DisplayNames(loaded, locked.MarkerNames) is { } displayNames) content[MarkerLabels.DisplayNamesKey] = displayNames;
-        LockedPanelEnvelope.Write(Path.Combine(resultsFolder, LockedPanelFile.DefaultFileName), content);
+        if (MarkerLabels.DisplayNames(loaded, markers) is { } displayNames) content[MarkerLabels.DisplayNamesKey] = displayNames;
+        LockedPanelEnvelope.Write(Path.Combine(resultsFolder, LockedPanelFile.DefaultFileName), content, version);
         return LockedPanelFile.DefaultFileName;
     }
+
+    private static (JsonObject Content, IReadOnlyList<string> Markers, int Version) Content(LockedPanel panel) =>
+        (LockedPanelJson.ToJson(panel), panel.MarkerNames, LockedPanelEnvelope.FormatVersion);
+
+    private static (JsonObject Content, IReadOnlyList<string> Markers, int Version) Content(LockedMeasuredPanel panel) =>
+        (LockedPanelJson.ToJson(panel), panel.MarkerNames, LockedPanelEnvelope.OutcomeKindsVersion);
+
+    private static (JsonObject Content, IReadOnlyList<string> Markers, int Version) Content(LockedFollowUpPanel panel) =>
+        (LockedPanelJson.ToJson(panel), panel.MarkerNames, LockedPanelEnvelope.OutcomeKindsVersion);
 }

@@ -99,7 +99,7 @@ public sealed class ResultsFolder : IDisposable
 
     /// <summary>The files a verb writes into its folder, the manifest aside.</summary>
     public static IReadOnlyList<string> OutputNames(ResultsKind kind) => kind == ResultsKind.Apply
-        ? [ApplyResultFiles.Scores, ApplyResultFiles.Evaluation, ApplyResultFiles.Calibration, ApplyResultFiles.Confusion, ApplyResultFiles.Report]
+        ? [ApplyResultFiles.Scores, ApplyResultFiles.Evaluation, ApplyResultFiles.Calibration, ApplyResultFiles.Confusion, ApplyResultFiles.RiskGroups, ApplyResultFiles.Report]
         :
         [
             "shortlist.tsv", "features.tsv", "panel_size_curve.tsv", "marker_statistics.tsv", "marker_statistics_by_cohort.tsv",

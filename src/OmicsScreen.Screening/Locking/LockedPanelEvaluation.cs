@@ -1,5 +1,6 @@
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Screening.Statistics;
+using OmicsScreen.Screening.Statistics.Survival;
 
 namespace OmicsScreen.Screening.Locking;
 
@@ -89,6 +90,107 @@ public static class LockedPanelEvaluation
             int count = end - start;
             bins[b] = new CalibrationBin(keys[sortedOrder[start]], keys[sortedOrder[end - 1]], sum / count,
                 (double)positives / count, count);
+        }
+        return bins;
+    }
+
+    /// <summary>
+    /// A measured panel on a cohort with the outcome known: R² and RMSE of the predictions, the
+    /// calibration line (observed on predicted, <see cref="CalibrationLine"/>) and groups of
+    /// samples by rank of prediction, as <see cref="Calibrate"/> groups probabilities.
+    /// </summary>
+    public static LockedMeasuredPerformance EvaluateMeasured(LockedMeasuredScores scores, ReadOnlySpan<double> observed)
+    {
+        ArgumentNullException.ThrowIfNull(scores);
+        if (observed.Length != scores.SampleCount) throw new ArgumentException("The outcome must have one value per scored sample.");
+        int n = scores.SampleCount;
+        var predicted = scores.Predictions;
+        double mean = 0;
+        foreach (double y in observed) mean += y;
+        mean /= n;
+        double residual = 0, total = 0;
+        for (int s = 0; s < n; s++)
+        {
+            residual += (observed[s] - predicted[s]) * (observed[s] - predicted[s]);
+            total += (observed[s] - mean) * (observed[s] - mean);
+        }
+        double rSquared = total > 0 ? 1 - residual / total : double.NaN;
+        double rmse = n > 0 ? Math.Sqrt(residual / n) : double.NaN;
+        return new LockedMeasuredPerformance(n, rSquared, rmse, CalibrationLine.Fit(predicted, observed),
+            GroupByPrediction(predicted, observed), predicted.ToArray(), observed.ToArray());
+    }
+
+    /// <summary>
+    /// A follow-up panel on a cohort with follow-up known: Harrell's C of the risk score with its
+    /// interval, the cumulative/dynamic AUC at the horizon when one is given (<see cref="TimeDependentAuc"/>),
+    /// and the Kaplan-Meier curves of the two risk groups with the log-rank test between them.
+    /// </summary>
+    /// <exception cref="ArgumentException">The horizon has no cases or no controls in this cohort.</exception>
+    public static LockedFollowUpPerformance EvaluateFollowUp(LockedFollowUpScores scores, ReadOnlySpan<double> time, ReadOnlySpan<bool> eventObserved,
+        double? horizon)
+    {
+        ArgumentNullException.ThrowIfNull(scores);
+        if (time.Length != scores.SampleCount || eventObserved.Length != scores.SampleCount)
+            throw new ArgumentException("The follow-up must have one time and event per scored sample.");
+        var risk = scores.RiskScores;
+        TimeDependentAucEstimate? timeAuc = horizon is { } t ? TimeDependentAuc.CumulativeDynamic(time, eventObserved, risk, t) : null;
+        var concordance = HarrellConcordance.Estimate(time, eventObserved, risk);
+
+        int events = 0, highEvents = 0;
+        var low = new List<int>();
+        var high = new List<int>();
+        for (int s = 0; s < scores.SampleCount; s++)
+        {
+            if (eventObserved[s]) events++;
+            if (scores.HighRisk[s])
+            {
+                high.Add(s);
+                if (eventObserved[s]) highEvents++;
+            }
+            else low.Add(s);
+        }
+        var allTimes = time.ToArray();
+        var allEvents = eventObserved.ToArray();
+        SurvivalCurve? Curve(List<int> group)
+        {
+            if (group.Count == 0) return null;
+            var t = new double[group.Count];
+            var e = new bool[group.Count];
+            for (int i = 0; i < group.Count; i++)
+            {
+                t[i] = allTimes[group[i]];
+                e[i] = allEvents[group[i]];
+            }
+            return KaplanMeier.Estimate(t, e);
+        }
+        var lowCurve = Curve(low);
+        var highCurve = Curve(high);
+        LogRankResult? logRank = low.Count > 0 && high.Count > 0 ? LogRankTest.TwoGroups(time, eventObserved, scores.HighRisk) : null;
+        return new LockedFollowUpPerformance(scores.SampleCount, events, high.Count, highEvents, concordance, timeAuc, lowCurve, highCurve, logRank);
+    }
+
+    /// <summary>Groups by rank of prediction into near-equal groups, B = clamp(n / 10, 1, 10), ties kept in sample order.</summary>
+    private static IReadOnlyList<MeasuredCalibrationBin> GroupByPrediction(ReadOnlySpan<double> predicted, ReadOnlySpan<double> observed)
+    {
+        int sampleCount = predicted.Length;
+        if (sampleCount == 0) return [];
+        int binCount = Math.Clamp(sampleCount / MinimumBinSize, 1, MaximumBinCount);
+        var keys = predicted.ToArray();
+        var order = new int[sampleCount];
+        for (int i = 0; i < sampleCount; i++) order[i] = i;
+        var sortedOrder = order.OrderBy(i => keys[i]).ThenBy(i => i).ToArray();
+        var bins = new MeasuredCalibrationBin[binCount];
+        for (int b = 0; b < binCount; b++)
+        {
+            int start = (int)((long)b * sampleCount / binCount), end = (int)((long)(b + 1) * sampleCount / binCount);
+            double sumPredicted = 0, sumObserved = 0;
+            for (int k = start; k < end; k++)
+            {
+                sumPredicted += keys[sortedOrder[k]];
+                sumObserved += observed[sortedOrder[k]];
+            }
+            int count = end - start;
+            bins[b] = new MeasuredCalibrationBin(keys[sortedOrder[start]], keys[sortedOrder[end - 1]], sumPredicted / count, sumObserved / count, count);
         }
         return bins;
     }

@@ -1,9 +1,13 @@
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Panels;
+using OmicsScreen.Engine.Regression;
+using OmicsScreen.Engine.Survival;
 using OmicsScreen.Engine.Trees;
+using OmicsScreen.Screening.Importance;
 using OmicsScreen.Screening.Randomness;
 using OmicsScreen.Screening.Screen;
+using OmicsScreen.Screening.Statistics;
 
 namespace OmicsScreen.Screening.Locking;
 
@@ -24,6 +28,33 @@ public static class PanelLocker
     /// </summary>
     public static LockedPanel Lock(Panel panel, ScreenResult result, PanelLockOptions options)
     {
+        var (markers, forestOptions) = Plan(panel, result, options);
+        return Lock(panel, markers, forestOptions, options);
+    }
+
+    /// <summary>
+    /// As <see cref="Lock(Panel, ScreenResult, PanelLockOptions)"/> for a measured outcome: the
+    /// same markers and forest settings (the screen's smallest leaf for the kind), a regression forest.
+    /// </summary>
+    public static LockedMeasuredPanel LockMeasured(Panel panel, ScreenResult result, PanelLockOptions options)
+    {
+        var (markers, forestOptions) = Plan(panel, result, options);
+        return LockMeasured(panel, markers, forestOptions, options);
+    }
+
+    /// <summary>
+    /// As <see cref="Lock(Panel, ScreenResult, PanelLockOptions)"/> for censored follow-up: the
+    /// same markers and forest settings (the screen's smallest leaf for the kind), a random survival forest.
+    /// </summary>
+    public static LockedFollowUpPanel LockFollowUp(Panel panel, ScreenResult result, PanelLockOptions options)
+    {
+        var (markers, forestOptions) = Plan(panel, result, options);
+        return LockFollowUp(panel, markers, forestOptions, options);
+    }
+
+    /// <summary>The markers to keep (panel indices, in shortlist order) and the locked forest's options.</summary>
+    private static (int[] Markers, ForestOptions Options) Plan(Panel panel, ScreenResult result, PanelLockOptions options)
+    {
         ArgumentNullException.ThrowIfNull(panel);
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(options);
@@ -40,7 +71,7 @@ public static class PanelLocker
             ThreadCount = options.ThreadCount,
             Tree = screenOptions.Tree with { FeaturesPerSplit = null },
         };
-        return Lock(panel, markers, forestOptions, options);
+        return (markers, forestOptions);
     }
 
     /// <summary>Locks the given features (panel indices, in the order they will be kept) with explicit forest options.</summary>
@@ -82,4 +113,80 @@ public static class PanelLocker
         locked.Validate();
         return locked;
     }
+
+    /// <summary>
+    /// Locks the given features for a measured outcome: a regression forest on all discovery
+    /// samples, with its out-of-bag R² and RMSE (<see cref="RegressionOutOfBag"/>).
+    /// </summary>
+    public static LockedMeasuredPanel LockMeasured(Panel panel, ReadOnlySpan<int> markerFeatures, ForestOptions forestOptions, PanelLockOptions options)
+    {
+        ArgumentNullException.ThrowIfNull(panel);
+        ArgumentNullException.ThrowIfNull(forestOptions);
+        ArgumentNullException.ThrowIfNull(options);
+        if (markerFeatures.Length < 1) throw new ArgumentException("A locked panel needs at least one marker.");
+        var outcome = panel.Measured ?? throw new ArgumentException("A measured panel needs a measured outcome.");
+        var matrix = panel.Matrix.SelectFeatures(markerFeatures);
+        var binned = new BinMapper().Bin(matrix, forestOptions.ThreadCount);
+        // A measured outcome has no classes to balance.
+        var regressionOptions = forestOptions with { Sampling = forestOptions.Sampling with { ClassBalanced = false } };
+        var forest = RegressionForestTrainer.Train(binned, outcome.Values, regressionOptions);
+        var outOfBag = new RegressionOutOfBag(forest, outcome.Values);
+        var trees = new RegressionTree[forest.TreeCount];
+        for (int t = 0; t < trees.Length; t++) trees[t] = forest.Tree(t);
+        var locked = new LockedMeasuredPanel(matrix.FeatureNames.ToArray(), trees, outcome.ColumnName, Scales(matrix),
+            outOfBag.RSquared, outOfBag.RootMeanSquaredError, Provenance(forestOptions, options, matrix.FeatureCount, forest.TreeCount, panel.SampleCount));
+        locked.Validate();
+        return locked;
+    }
+
+    /// <summary>
+    /// Locks the given features for censored follow-up: a random survival forest on all discovery
+    /// samples, its out-of-bag Harrell's C, and the median of the out-of-bag risk scores as the
+    /// cut between the low- and high-risk groups (so the cut is not tuned on samples a tree has seen).
+    /// </summary>
+    public static LockedFollowUpPanel LockFollowUp(Panel panel, ReadOnlySpan<int> markerFeatures, ForestOptions forestOptions, PanelLockOptions options)
+    {
+        ArgumentNullException.ThrowIfNull(panel);
+        ArgumentNullException.ThrowIfNull(forestOptions);
+        ArgumentNullException.ThrowIfNull(options);
+        if (markerFeatures.Length < 1) throw new ArgumentException("A locked panel needs at least one marker.");
+        var outcome = panel.FollowUp ?? throw new ArgumentException("A follow-up panel needs follow-up times and events.");
+        var matrix = panel.Matrix.SelectFeatures(markerFeatures);
+        var binned = new BinMapper().Bin(matrix, forestOptions.ThreadCount);
+        var survivalOptions = forestOptions with { Sampling = forestOptions.Sampling with { ClassBalanced = false } };
+        var forest = SurvivalForestTrainer.Train(binned, outcome.FollowUp, survivalOptions);
+        var concordance = SurvivalImportance.OutOfBagConcordance(forest);
+
+        var risk = forest.OutOfBagRisk();
+        var finite = new List<double>(risk.Length);
+        foreach (double r in risk) if (!double.IsNaN(r)) finite.Add(r);
+        var sorted = finite.ToArray();
+        Array.Sort(sorted);
+        // A forest so small that no sample was ever out of bag has no out-of-bag median; the
+        // in-bag risk of every sample is then the only cut there is.
+        if (sorted.Length == 0)
+        {
+            sorted = forest.Risk(binned);
+            Array.Sort(sorted);
+        }
+        double cut = Quantile.MedianOfSorted(sorted);
+
+        var trees = new LockedRiskTree[forest.TreeCount];
+        for (int t = 0; t < trees.Length; t++) trees[t] = new LockedRiskTree(forest.Tree(t).Topology, forest.Tree(t).Mortality.ToArray());
+        var locked = new LockedFollowUpPanel(matrix.FeatureNames.ToArray(), trees, outcome.TimeColumn, outcome.EventColumn, Scales(matrix),
+            concordance.Concordance, cut, outcome.EventCount,
+            Provenance(forestOptions, options, matrix.FeatureCount, forest.TreeCount, panel.SampleCount));
+        locked.Validate();
+        return locked;
+    }
+
+    private static MarkerScale[] Scales(FeatureMatrix matrix)
+    {
+        var scales = new MarkerScale[matrix.FeatureCount];
+        for (int f = 0; f < scales.Length; f++) scales[f] = MarkerScale.Describe(matrix, f);
+        return scales;
+    }
+
+    private static LockProvenance Provenance(ForestOptions forestOptions, PanelLockOptions options, int markerCount, int treeCount, int sampleCount) =>
+        new(options.ToolVersion, forestOptions.Seed, markerCount, treeCount, sampleCount, options.InputSha256);
 }

@@ -8,7 +8,7 @@ namespace OmicsScreen.Cli.Tests.Commands;
 /// <summary>
 /// `screen` on a measured and a time-to-event outcome, end to end through the CLI: the tables name
 /// the measures of the kind, the planted markers come first, the report speaks of R² or
-/// concordance, and no locked panel is written (apply takes class panels only in this version).
+/// concordance, and the locked panel is written for `apply` (ApplyOutcomeKindCommandTests applies it).
 /// The panels are invented (planted markers SIM000 and SIM001; the answer is known by construction).
 /// </summary>
 public sealed class OutcomeKindScreenCommandTests : IDisposable
@@ -61,7 +61,7 @@ public sealed class OutcomeKindScreenCommandTests : IDisposable
         Assert.True(run.ExitCode == ExitCode.Success, run.Error);
         using var headline = JsonDocument.Parse(run.Out);
         Assert.Equal(followUp ? "time_to_event" : "measured", headline.RootElement.GetProperty("outcome_kind").GetString());
-        Assert.False(headline.RootElement.TryGetProperty("locked_panel_file", out _));
+        Assert.True(File.Exists(headline.RootElement.GetProperty("locked_panel_file").GetString()));
         Assert.True(headline.RootElement.TryGetProperty(followUp ? "out_of_bag_concordance" : "out_of_bag_r_squared", out _));
         var first = headline.RootElement.GetProperty("shortlist")[0];
         Assert.Equal(JsonValueKind.Null, first.GetProperty("auc").ValueKind);
@@ -83,11 +83,13 @@ public sealed class OutcomeKindScreenCommandTests : IDisposable
         Assert.Contains(followUp ? "cox_model_converged" : "spearman_rho", statistics[0].Split('\t'));
         Assert.Contains(followUp ? "selection_aware_concordance" : "selection_aware_r_squared",
             File.ReadAllLines(Path.Combine(output, "panel_size_curve.tsv"))[0].Split('\t'));
-        Assert.False(File.Exists(Path.Combine(output, "locked_panel.json")));
+        Assert.Contains(followUp ? "\"outcome_kind\": \"time_to_event\"" : "\"outcome_kind\": \"measured\"",
+            File.ReadAllText(Path.Combine(output, "locked_panel.json")));
 
         string report = File.ReadAllText(Path.Combine(output, "report.html"));
         Assert.Contains(followUp ? "concordance (Harrell&#39;s C)" : "R²", report);
-        Assert.Contains("writes no panel file", report);
+        Assert.DoesNotContain("writes no panel file", report);
+        Assert.Contains("The panel locked for", report);
         Assert.Contains(followUp ? "Survival by the top markers" : "The top markers against the outcome", report);
         Assert.Contains("not a diagnostic test", report);
         Assert.DoesNotContain("P001", report);

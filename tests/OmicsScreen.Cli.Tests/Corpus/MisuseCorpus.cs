@@ -402,10 +402,17 @@ internal static class MisuseCorpus
         yield return new("11 grow with few trees warns", s => Grow(s, "--trees", "10"),
             ExitCode.Success, ["warning: --trees 10 is few", "out-of-bag error"]);
 
-        // apply has no numeric settings; the one combination that cannot work is a sheet without an outcome.
+        // apply's one number is the horizon of a follow-up panel; a sheet without an outcome cannot work either.
         yield return new("11 apply with a sample sheet but no --outcome", s =>
                 ["apply", Path.Combine(s.ScreenFolder("r"), "locked_panel.json"), ReferenceData.Wdbc("wdbc.csv"), "--samples", s.Sheet(), "--out", s.PathOf("applied")],
             ExitCode.Usage, ["sample sheet was given without --outcome", "name the outcome column"]);
+        yield return new("11 apply --horizon 0", s =>
+                ["apply", Path.Combine(s.ScreenFolder("r"), "locked_panel.json"), ReferenceData.Wdbc("wdbc.csv"), "--samples", s.Sheet(),
+                    "--follow-up", "months", "--event", "relapse", "--horizon", "0", "--out", s.PathOf("applied")],
+            ExitCode.Usage, ["--horizon 0 is not a positive time", "follow-up column's unit"]);
+        yield return new("11 apply --horizon without follow-up", s =>
+                ["apply", Path.Combine(s.ScreenFolder("r"), "locked_panel.json"), ReferenceData.Wdbc("wdbc.csv"), "--horizon", "12", "--out", s.PathOf("applied")],
+            ExitCode.Usage, ["--horizon needs the cohort's follow-up", "--follow-up and --event"]);
     }
 
     /// <summary>A 40-sample panel with 4 cases and 36 controls, the first two features shifted in cases.</summary>
