@@ -110,7 +110,9 @@ internal static class PanelSizeEstimator
 
         // The estimate of the locked panel repeats the lock rule inside every fold: the inner
         // screen's shortlist, cut at the size the same rule picks from the OTHER folds' scores, so
-        // no fold's held-out part takes part in choosing the size it is scored at.
+        // no fold's held-out part takes part in choosing the size it is scored at. Where the
+        // outcome kind says so, the size may reach the full list's length, the inner list then
+        // continued down the inner order (ScreenOutcome.FoldPanelsTakeLockedLength).
         var lockedScores = new double[folds.Count];
         // Every fold's held-out probabilities of the positive class under the locked procedure,
         // pooled: the cross-validated ROC curve of the locked panel (two classes only).
@@ -122,7 +124,8 @@ internal static class PanelSizeEstimator
         {
             var fold = folds[i];
             var inner = innerScreens[i];
-            int listLength = Math.Min(inner.Shortlist.Length, limit);
+            bool lockedLength = model.FoldPanelsTakeLockedLength;
+            int listLength = Math.Min(lockedLength ? shortlistLength : inner.Shortlist.Length, limit);
             if (listLength == 0)
             {
                 withoutPanel++;
@@ -142,7 +145,7 @@ internal static class PanelSizeEstimator
             }
             int size = LockedSize(sizes, otherMeans, otherErrors, listLength);
             sizeSum += size;
-            var panelFeatures = inner.Shortlist.AsSpan(0, size);
+            var panelFeatures = lockedLength ? ListThenOrder(inner, size).AsSpan() : inner.Shortlist.AsSpan(0, size);
             int onGrid = Array.IndexOf(sizes, size);
             PanelScore locked;
             if (onGrid >= 0 && panelFeatures.SequenceEqual(inner.Order.AsSpan(0, size)))
@@ -164,6 +167,29 @@ internal static class PanelSizeEstimator
             LockedOutOfFoldScores = binary ? outOfFoldScores.ToArray() : [],
             LockedOutOfFoldPositive = binary ? outOfFoldPositive.ToArray() : [],
         };
+    }
+
+    /// <summary>
+    /// The first <paramref name="size"/> markers of the inner screen's list, continued down its
+    /// order past the list's end when the list is shorter: the fold's panel when folds take the
+    /// locked panel's length (<see cref="ScreenOutcome.FoldPanelsTakeLockedLength"/>).
+    /// </summary>
+    internal static int[] ListThenOrder(InnerScreenResult inner, int size)
+    {
+        var panel = new List<int>(size);
+        var listed = new HashSet<int>();
+        foreach (int f in inner.Shortlist)
+        {
+            if (panel.Count == size) break;
+            panel.Add(f);
+            listed.Add(f);
+        }
+        foreach (int f in inner.Order)
+        {
+            if (panel.Count == size) break;
+            if (!listed.Contains(f)) panel.Add(f);
+        }
+        return panel.ToArray();
     }
 
     /// <summary>Appends a fold's held-out probabilities of the positive class and the samples' classes (two classes only).</summary>

@@ -59,6 +59,14 @@ internal abstract class ScreenOutcome
     /// <summary>What a fold scores when its procedure locks no panel: chance, or the training part's mean or largest class.</summary>
     public abstract PanelScore ChanceScore(int[] trainingRows, int[] testRows);
 
+    /// <summary>
+    /// How long a curve fold's panel may be. False (classes): at most the fold's own inner list,
+    /// and a fold whose inner list is empty scores chance. True: as long as the list whose prefix
+    /// is locked, the fold's inner list first, then its order past the list's end
+    /// (<see cref="PanelSizeEstimator"/>): the fold then estimates a panel of the locked length.
+    /// </summary>
+    public virtual bool FoldPanelsTakeLockedLength => false;
+
     /// <summary>The single-marker statistics of every feature on all samples, with each feature's rank by their p-value.</summary>
     public abstract SingleMarkerStatistics SingleMarkers(Panel panel, int threadCount);
 

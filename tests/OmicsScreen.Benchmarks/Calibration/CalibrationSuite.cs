@@ -83,7 +83,7 @@ public static class CalibrationSuite
         if (p.PairFound is { } pair) found += pair ? ", pair found" : ", pair missed";
         if (p.ThresholdFound is { } threshold) found += threshold ? ", threshold found" : ", threshold missed";
         return Invariant(
-            $"[{done}/{total}] {p.Design} seed {p.Seed}: shortlist {p.Shortlisted} (false {p.FalseDiscoveries}, FDP {p.FalseDiscoveryProportion:F3}, decoy estimate {Number(p.DecoyEstimate)}){found}; {estimate}; {p.Seconds:F1} s (total {elapsed:F0} s){(p.SpecialMarkers.Length > 0 ? " [" + p.SpecialMarkers + "]" : "")}{(p.FalseEntries.Length > 0 ? " {false: " + p.FalseEntries + "}" : "")}{(p.MissedEntries.Length > 0 ? " {missed: " + p.MissedEntries + "}" : "")}");
+            $"[{done}/{total}] {p.Design} seed {p.Seed}: shortlist {p.Shortlisted} (false {p.FalseDiscoveries}, FDP {p.FalseDiscoveryProportion:F3}, decoy estimate {Number(p.DecoyEstimate)}){found}; {estimate}; null p <= 1e-3/1e-4: {p.SmallNullPValues}; {p.Seconds:F1} s (total {elapsed:F0} s){(p.SpecialMarkers.Length > 0 ? " [" + p.SpecialMarkers + "]" : "")}{(p.FalseEntries.Length > 0 ? " {false: " + p.FalseEntries + "}" : "")}{(p.MissedEntries.Length > 0 ? " {missed: " + p.MissedEntries + "}" : "")}");
     }
 
     /// <summary>The 1-minute load average from /proc/loadavg, for reading wall times on a shared machine; "n/a" elsewhere.</summary>

@@ -59,6 +59,9 @@ public sealed record PanelCalibration(
     /// <summary>Each false shortlisted marker's evidence (frequency, forest, rank-test, final p, q, largest |Pearson r| with a related feature), for reading a failure; empty when none.</summary>
     public string FalseEntries { get; init; } = "";
 
+    /// <summary>Unrelated features at p &lt;= 0.001 / &lt;= 0.0001 by the forest's p, the rank test's and the final p.</summary>
+    public string SmallNullPValues { get; init; } = "";
+
     /// <summary>Each related marker the baseline found and the screen missed, with its evidence; empty when none.</summary>
     public string MissedEntries { get; init; } = "";
 

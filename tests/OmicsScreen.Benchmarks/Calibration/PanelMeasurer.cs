@@ -59,8 +59,19 @@ public static class PanelMeasurer
         }
 
         var nullPValues = new List<double>(panel.FeatureCount);
+        // Small p-values of unrelated features, per kind of evidence: which of them is liberal, if any.
+        var smallShares = new int[3, 2];
         foreach (var feature in result.Features)
-            if (!truth[feature.FeatureIndex]) nullPValues.Add(feature.PValue);
+        {
+            if (truth[feature.FeatureIndex]) continue;
+            nullPValues.Add(feature.PValue);
+            double[] evidence = [feature.ForestP, feature.RankTestP, feature.PValue];
+            for (int e = 0; e < 3; e++)
+            {
+                if (evidence[e] <= 1e-3) smallShares[e, 0]++;
+                if (evidence[e] <= 1e-4) smallShares[e, 1]++;
+            }
+        }
 
         int lockedSize = result.LockedPanelSize;
         double fresh = double.NaN;
@@ -90,6 +101,8 @@ public static class PanelMeasurer
             MeanFoldPanelSize = result.PanelSize?.MeanFoldPanelSize ?? double.NaN,
             FalseEntries = FalseEntries(panel, truth, result),
             MissedEntries = MissedEntries(truth, baseline, shortlisted, result),
+            SmallNullPValues = FormattableString.Invariant(
+                $"forest {smallShares[0, 0]}/{smallShares[0, 1]}, rank {smallShares[1, 0]}/{smallShares[1, 1]}, final {smallShares[2, 0]}/{smallShares[2, 1]} of {nullPValues.Count}"),
         };
     }
 
