@@ -31,13 +31,15 @@ internal static class GrowFeasibility
         string draw = options.SampleFraction is null
             ? string.Create(CultureInfo.InvariantCulture, $"the panel has {sampleCount} samples, a bootstrap of which holds about {distinct:0} distinct ones")
             : string.Create(CultureInfo.InvariantCulture, $"--sample-fraction {options.SampleFraction} draws {drawn} of the panel's {sampleCount} samples");
-        if (2 * options.MinLeafSize > distinct)
+        // The smallest leaf the forest will use: the given one or the outcome kind's default.
+        int minLeaf = options.MinLeafFor(panel);
+        if (2 * minLeaf > distinct)
         {
-            string fix = options.MinLeafSize > 1
+            string fix = minLeaf > 1
                 ? string.Create(CultureInfo.InvariantCulture, $"Use --min-leaf {Math.Max(1, (int)(distinct / 4))} or less (the default 1 grows full trees).")
                 : "Draw more samples per tree: a larger --sample-fraction, or leave it out for a bootstrap.";
             throw new CommandInputException(string.Create(CultureInfo.InvariantCulture,
-                $"--min-leaf {options.MinLeafSize} leaves every tree a single leaf: {draw}, and a split needs 2 x {options.MinLeafSize} of them. {fix}"));
+                $"--min-leaf {minLeaf} leaves every tree a single leaf: {draw}, and a split needs 2 x {minLeaf} of them. {fix}"));
         }
     }
 

@@ -60,8 +60,9 @@ public static class CohortOutcomePooling
         var x = new double[matrix.SampleCount];
         MarkerValues.ModelScale(matrix, feature, x);
         var measured = x.Where(v => !double.IsNaN(v)).ToArray();
-        double mean = measured.Average();
-        double sd = Math.Sqrt(measured.Sum(v => (v - mean) * (v - mean)) / (measured.Length - 1));
+        // Fewer than two measured values give no SD: every cohort is then skipped below.
+        double mean = measured.Length > 0 ? measured.Average() : double.NaN;
+        double sd = measured.Length > 1 ? Math.Sqrt(measured.Sum(v => (v - mean) * (v - mean)) / (measured.Length - 1)) : double.NaN;
         var t = time.ToArray();
         var e = eventObserved.ToArray();
         var effects = new List<CohortOutcomeEffect>();

@@ -47,4 +47,25 @@ public sealed class HeterogeneityFlagTests
         HeterogeneityFlags.Flag(markers, 0.1);
         Assert.Equal(CohortFlag.CohortArtefact, markers[0].Flag);
     }
+
+    [Fact]
+    public void Heterogeneity_needs_the_measures_own_spread()
+    {
+        // Rho 0.35 and 0.62 are 0.27 apart: under the 0.30 a measured marker needs, so not flagged
+        // whatever Cochran's Q says; 0.35 and 0.70 are (common practice: a test and an effect size).
+        foreach (var (high, flagged) in new[] { (0.62, false), (0.70, true) })
+        {
+            var effects = new List<CohortEffect>
+            {
+                new("a", 400, double.NaN, 0.35, 0.05, ConfidenceInterval.Undefined(0.95)),
+                new("b", 400, double.NaN, high, 0.05, ConfidenceInterval.Undefined(0.95)),
+            };
+            var meta = RandomEffectsMetaAnalysis.DerSimonianLaird([Math.Atanh(0.35), Math.Atanh(high)], [0.0025, 0.0025]);
+            Assert.True(meta.QPValue < 0.001);
+            var markers = new[] { new MarkerHeterogeneity(0, "M", effects, meta, 0.5, ConfidenceInterval.Undefined(0.95), 0.5, "a", 1, CohortFlag.None)
+                { Measure = CohortEffectMeasure.SpearmanRho } };
+            HeterogeneityFlags.Flag(markers, 0.1);
+            Assert.Equal(flagged, markers[0].Flag == CohortFlag.Heterogeneous);
+        }
+    }
 }
