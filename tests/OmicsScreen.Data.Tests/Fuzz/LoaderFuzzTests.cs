@@ -48,14 +48,25 @@ public sealed class LoaderFuzzTests : IDisposable
         int caseCount = FuzzCorpus.CaseCount(FuzzCorpus.DefaultCaseCount);
         var problems = new string?[caseCount];
         var milliseconds = new long[caseCount];
+        // A case that runs past the time bound has every thread's stack written while it is still
+        // stalled (issue 15: a rare pause, a different case each time, seen with dynamic PGO on).
+        using var watchdog = StallWatchdog.TryStart(FuzzCaseRunner.TimeBound);
+        string? stall = null;
         // One case at a time: the loader spreads each load over the cores itself.
         for (int number = 0; number < caseCount; number++)
         {
             var fuzzCase = FuzzCorpus.Case(masterSeed, number, TextSeeds, BinarySeeds);
             string caseFolder = _folder.File(FormattableString.Invariant($"case-{number}"));
+            watchdog?.Begin(FormattableString.Invariant($"case {number} of master seed {masterSeed}"));
             var clock = Stopwatch.StartNew();
             string? problem = FuzzCaseRunner.Run(fuzzCase, caseFolder);
             milliseconds[number] = clock.ElapsedMilliseconds;
+            watchdog?.End();
+            if (stall is null && watchdog?.FindStall() is { } stalled)
+            {
+                stall = stalled;
+                problem = problem is null ? stalled : problem + Environment.NewLine + "  " + stalled;
+            }
             if (problem is null)
             {
                 TryDelete(caseFolder);
@@ -68,6 +79,8 @@ public sealed class LoaderFuzzTests : IDisposable
         _output.WriteLine(FormattableString.Invariant(
             $"{caseCount} cases of master seed {masterSeed}; slowest: case {slowest}, {milliseconds[slowest]} ms; mean {milliseconds.Average():0.0} ms"));
         var failures = problems.Where(p => p is not null).Select(p => p!).ToList();
+        // A stall whose dump was still being written when the last case ended.
+        if (stall is null && watchdog?.FindStall() is { } late) failures.Add(late);
         Assert.True(failures.Count == 0, Report(failures, caseCount));
     }
 
