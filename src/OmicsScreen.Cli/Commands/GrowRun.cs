@@ -29,7 +29,7 @@ internal static class GrowRun
             OutputPathGuard.CheckFile(importancePath, "--importance-out", [options.Panel.MatrixPath, options.Panel.SampleSheetPath, options.Panel.FeatureSheetPath],
                 EarlierImportanceHeader(importancePath));
         var watch = Stopwatch.StartNew();
-        var loaded = PanelLoader.Load(options.Panel).EnsureScreenable(classesOnly: false);
+        var loaded = PanelLoader.Load(options.Panel).EnsureScreenable();
         var loadTime = watch.Elapsed;
         var panel = loaded.Panel;
         GrowFeasibility.Check(options, panel);

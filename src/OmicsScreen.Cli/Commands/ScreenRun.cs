@@ -52,7 +52,7 @@ internal static class ScreenRun
         using var folder = ResultsFolder.Open(options.ResolveOutputFolder(), options.Force, ResultsKind.Screen, InputPaths(options.Panel), console.Error);
         var started = DateTimeOffset.UtcNow;
         var watch = Stopwatch.StartNew();
-        var loaded = PanelLoader.Load(options.Panel).EnsureScreenable(classesOnly: false);
+        var loaded = PanelLoader.Load(options.Panel).EnsureScreenable();
         double loadSeconds = watch.Elapsed.TotalSeconds;
         PrintKeepFeaturesNote(console, options);
         ScreenFeasibility.Check(options.Screen, loaded.Panel);
@@ -92,7 +92,7 @@ internal static class ScreenRun
 
     private static int ExecutePart(CliConsole console, ScreenRunOptions options)
     {
-        var loaded = PanelLoader.Load(options.Panel).EnsureScreenable(classesOnly: false);
+        var loaded = PanelLoader.Load(options.Panel).EnsureScreenable();
         PrintKeepFeaturesNote(console, options);
         ScreenFeasibility.Check(options.Screen, loaded.Panel);
         return PartRun.Execute(console, options, loaded, options.Part!.Value);

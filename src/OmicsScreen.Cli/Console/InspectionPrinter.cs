@@ -74,8 +74,7 @@ internal static class InspectionPrinter
         }
         output.WriteLine();
         output.WriteLine(!i.CanScreen ? "Verdict: the panel cannot be screened until the errors are fixed."
-            : i.OutcomeKind == OutcomeKind.Classes ? "Verdict: the panel can be screened."
-            : "Verdict: the panel can be screened (in this version `apply` takes panels of classes only).");
+            : "Verdict: the panel can be screened.");
     }
 
     public static void WriteJson(LoadedPanel loaded, TextWriter output)

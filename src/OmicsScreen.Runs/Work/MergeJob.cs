@@ -56,7 +56,7 @@ public sealed class MergeJob : IDisposable
         try
         {
             var watch = Stopwatch.StartNew();
-            var loaded = PanelLoader.Load(first.LoadOptions).EnsureScreenable(classesOnly: false);
+            var loaded = PanelLoader.Load(first.LoadOptions).EnsureScreenable();
             double loadSeconds = watch.Elapsed.TotalSeconds;
             MergeChecks.CheckInputsUnchanged(first, loaded);
             var screen = first.ScreenOptions with { ThreadCount = threadCount };

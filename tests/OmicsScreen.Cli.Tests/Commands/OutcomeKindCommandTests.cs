@@ -6,8 +6,8 @@ using OmicsScreen.TestSupport;
 namespace OmicsScreen.Cli.Tests.Commands;
 
 /// <summary>
-/// `check` and `screen` on a measured and a time-to-event outcome (console and JSON), and the
-/// refusal of the verbs that only handle classes (grow, apply). Expected summaries come from R: the Kaplan-Meier and reverse
+/// `check`, `screen` and `grow` on a measured and a time-to-event outcome (console and JSON): every verb
+/// takes every outcome kind, and `check` says so in its verdict. Expected summaries come from R: the Kaplan-Meier and reverse
 /// Kaplan-Meier medians of reference/survival/survival_reference.json (survival 3.5.3) and the
 /// type-7 quartiles of reference/survival/outcome_quartiles.json (make_outcome_quartiles.R).
 /// </summary>
@@ -64,7 +64,7 @@ public sealed class OutcomeKindCommandTests : IDisposable
 
         var console = CliHarness.Run("check", matrix, "--samples", sheet, "--outcome", "x");
         Assert.Equal(ExitCode.Success, console.ExitCode);
-        Assert.Contains("Verdict: the panel can be screened (in this version `apply` takes panels of classes only).", console.Out);
+        Assert.Contains("Verdict: the panel can be screened.", console.Out);
         Assert.Contains("x: a measured quantity (--outcome-kind classes reads its values as classes instead)", console.Out);
         Assert.Contains("120 samples, 0 missing; min -1.879, quartiles -0.60225 / -0.0325 / 0.69175, max 2.639", console.Out);
     }
@@ -98,7 +98,7 @@ public sealed class OutcomeKindCommandTests : IDisposable
 
         var console = CliHarness.Run("check", matrix, "--samples", sheet, "--follow-up", "time", "--event", "status");
         Assert.Equal(ExitCode.Success, console.ExitCode);
-        Assert.Contains("Verdict: the panel can be screened (in this version `apply` takes panels of classes only).", console.Out);
+        Assert.Contains("Verdict: the panel can be screened.", console.Out);
         Assert.Contains("time to event: follow-up 'time', event 'status'", console.Out);
         Assert.Contains(FormattableString.Invariant($"{events} events, {samples - events} censored, of {samples} samples; {tied} event times shared by several events"), console.Out);
         Assert.Contains(FormattableString.Invariant($"{set.GetProperty("km_median").GetDouble():G6} (Kaplan-Meier)"), console.Out);

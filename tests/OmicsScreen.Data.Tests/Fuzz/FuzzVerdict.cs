@@ -24,8 +24,16 @@ internal static class FuzzVerdict
                 if (matrix.State(f, s) == CellState.Measured && !float.IsFinite(values[s]))
                     return $"loaded the non-finite value {values[s]} as measured (feature '{matrix.FeatureNames[f]}', sample '{matrix.SampleIds[s]}')";
         }
-        if (panel.Outcome.ClassCount < 1 || panel.Outcome.SampleCount != panel.SampleCount)
-            return "loaded an outcome without a class for every sample";
+        // Every kind passes the screenability gate now; each must carry an outcome for every sample.
+        switch (panel.Kind)
+        {
+            case OutcomeKind.Classes when panel.Outcome.ClassCount < 1 || panel.Outcome.SampleCount != panel.SampleCount:
+                return "loaded an outcome without a class for every sample";
+            case OutcomeKind.Measured when panel.Measured!.SampleCount != panel.SampleCount:
+                return "loaded a measured outcome without a value for every sample";
+            case OutcomeKind.TimeToEvent when panel.FollowUp!.SampleCount != panel.SampleCount:
+                return "loaded a follow-up without a time for every sample";
+        }
         if (Capacity(fuzzCase) is var (maxSamples, maxFeatures) && (panel.SampleCount > maxSamples || panel.FeatureCount > maxFeatures))
             return $"loaded {panel.SampleCount} samples x {panel.FeatureCount} features, more than the file can hold ({maxSamples} x {maxFeatures})";
         if (fuzzCase.IsUnchanged)

@@ -26,7 +26,8 @@ public sealed class StallWatchdogTests
         Assert.Contains("case 7 of master seed 11 ran longer than 2 s", stall);
         // The stalled thread's own frame, as createdump's crash report names it.
         Assert.Contains("OmicsScreen.Data.Tests.Fuzz.StallWatchdogTests.StallingCase", stall);
-        string stacksFile = stall.Split(": ", 2)[1].Split(" (", 2)[0];
+        // The message names the stacks file after "taken during the stall: " (the collector counts before it hold ": " too).
+        string stacksFile = stall.Split("taken during the stall: ", 2)[1].Split(" (", 2)[0];
         Assert.True(File.Exists(stacksFile), stacksFile);
         Assert.StartsWith(Path.GetTempPath(), stacksFile, StringComparison.Ordinal);
         Directory.Delete(Path.GetDirectoryName(stacksFile)!, recursive: true);

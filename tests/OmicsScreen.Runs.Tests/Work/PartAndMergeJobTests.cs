@@ -22,7 +22,7 @@ public sealed class PartAndMergeJobTests : IDisposable
         HalfSamplePairs = 2, TreesPerForest = 40, CurveFolds = 2, CurveInnerPairs = 1, CurveMaxPanelSize = 3, DecoyCount = 50,
     };
 
-    private static LoadedPanel Load() => PanelLoader.Load(Panel).EnsureScreenable(classesOnly: false);
+    private static LoadedPanel Load() => PanelLoader.Load(Panel).EnsureScreenable();
 
     private PartRequest Request(int index, int count) => new()
     {
