@@ -40,7 +40,7 @@ public class BenjaminiHochbergTests
     public void Adjusted_values_match_the_wdbc_reference_columns()
     {
         // Source: reference/wdbc/feature_stats.csv welch_p_bh and mw_p_bh (bh_adjust in make_reference.py).
-        var data = WdbcData.Instance;
+        var data = WdbcFeatureStatistics.Instance;
         foreach (var (raw, adjusted) in new[] { ("welch_p", "welch_p_bh"), ("mw_p", "mw_p_bh") })
         {
             var p = data.FeatureNames.Select(n => data.FeatureStats[n][raw]).ToArray();

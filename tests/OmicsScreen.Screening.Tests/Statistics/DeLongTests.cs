@@ -51,7 +51,7 @@ public class DeLongTests
     [Fact]
     public void Auc_agrees_with_mann_whitney()
     {
-        var data = WdbcData.Instance;
+        var data = WdbcFeatureStatistics.Instance;
         var (malignant, benign) = data.Split(0);
         Assert.Equal(MannWhitney.Test(malignant, benign).Auc, DeLong.Estimate(malignant, benign).Auc, 12);
     }

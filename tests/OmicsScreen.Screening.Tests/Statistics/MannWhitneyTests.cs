@@ -10,7 +10,7 @@ public class MannWhitneyTests
     {
         // Source: reference/wdbc/feature_stats.csv, scipy.stats.mannwhitneyu(malignant, benign,
         // alternative="two-sided", method="asymptotic") and roc_auc_score (see its README).
-        foreach (var (name, expected, malignant, benign) in WdbcData.Instance.FeaturesByClass())
+        foreach (var (name, expected, malignant, benign) in WdbcFeatureStatistics.Instance.FeaturesByClass())
         {
             var result = MannWhitney.Test(malignant, benign);
             Tolerance.Relative(expected["mw_u_malignant"], result.U, 1e-9, name + " U");

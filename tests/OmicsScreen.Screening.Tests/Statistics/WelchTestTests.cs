@@ -10,7 +10,7 @@ public class WelchTestTests
     {
         // Source: reference/wdbc/feature_stats.csv, scipy.stats.ttest_ind(equal_var=False) and the
         // Welch-Satterthwaite df written out in make_reference.py.
-        foreach (var (name, expected, malignant, benign) in WdbcData.Instance.FeaturesByClass())
+        foreach (var (name, expected, malignant, benign) in WdbcFeatureStatistics.Instance.FeaturesByClass())
         {
             var result = WelchTest.Test(malignant, benign);
             Tolerance.Relative(expected["welch_t"], result.T, 1e-9, name + " t");

@@ -145,7 +145,7 @@ public class UnivariateScreenTests
         // Source: reference/wdbc/feature_stats.csv (scipy.stats.mannwhitneyu, numpy median, BH).
         // The panel stores float32, which keeps the order of these values, so rank statistics stay
         // exact; medians carry float32 rounding (about 1e-7 relative).
-        var data = WdbcData.Instance;
+        var data = WdbcFeatureStatistics.Instance;
         var features = data.Columns.Select(c => c.Select(v => (float)v).ToArray()).ToArray();
         var classes = data.Diagnosis.Select(d => d == "benign" ? 0 : 1).ToArray();
         var panel = BuildPanel(data.FeatureNames, features, ["benign", "malignant"], classes, positiveClass: 1);

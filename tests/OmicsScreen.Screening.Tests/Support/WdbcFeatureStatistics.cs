@@ -7,11 +7,11 @@ namespace OmicsScreen.Screening.Tests.Support;
 /// The Wisconsin breast cancer reference data in double precision (read by the shared test
 /// loader), with the scipy/pandas per-feature statistics beside them.
 /// </summary>
-internal sealed class WdbcData
+internal sealed class WdbcFeatureStatistics
 {
-    private static readonly Lazy<WdbcData> Shared = new(Load);
+    private static readonly Lazy<WdbcFeatureStatistics> Shared = new(Load);
 
-    private WdbcData(string[] featureNames, string[] diagnosis, double[][] columns, Dictionary<string, Dictionary<string, double>> stats)
+    private WdbcFeatureStatistics(string[] featureNames, string[] diagnosis, double[][] columns, Dictionary<string, Dictionary<string, double>> stats)
     {
         FeatureNames = featureNames;
         Diagnosis = diagnosis;
@@ -19,7 +19,7 @@ internal sealed class WdbcData
         FeatureStats = stats;
     }
 
-    public static WdbcData Instance => Shared.Value;
+    public static WdbcFeatureStatistics Instance => Shared.Value;
 
     public string[] FeatureNames { get; }
     public string[] Diagnosis { get; }
@@ -47,7 +47,7 @@ internal sealed class WdbcData
         return (malignant.ToArray(), benign.ToArray());
     }
 
-    private static WdbcData Load()
+    private static WdbcFeatureStatistics Load()
     {
         var (featureNames, diagnosis, columns) = TestSupport.WdbcData.LoadDoubles();
         var stats = new Dictionary<string, Dictionary<string, double>>(StringComparer.Ordinal);
@@ -58,6 +58,6 @@ internal sealed class WdbcData
                 if (column != "feature") values[column] = double.Parse(text, NumberStyles.Float, CultureInfo.InvariantCulture);
             stats[row["feature"]] = values;
         }
-        return new WdbcData(featureNames, diagnosis, columns, stats);
+        return new WdbcFeatureStatistics(featureNames, diagnosis, columns, stats);
     }
 }
