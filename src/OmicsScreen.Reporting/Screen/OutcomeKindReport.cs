@@ -195,6 +195,51 @@ internal static class OutcomeKindReport
     }
 
     /// <summary>
+    /// The points of the observed-against-out-of-bag-predicted scatter of a measured outcome, in
+    /// panel order: every sample some tree of the forest on all samples left out, its out-of-bag
+    /// prediction against its observed value. No sample id travels with them.
+    /// </summary>
+    public static (double[] Predicted, double[] Observed) OutOfBagPoints(Panel panel, ReferenceForestSummary forest)
+    {
+        var observed = panel.Measured!.Values;
+        var predictions = forest.OutOfBagPredictions;
+        var x = new List<double>(predictions.Count);
+        var y = new List<double>(predictions.Count);
+        for (int s = 0; s < predictions.Count; s++)
+        {
+            if (double.IsNaN(predictions[s])) continue;
+            x.Add(predictions[s]);
+            y.Add(observed[s]);
+        }
+        return (x.ToArray(), y.ToArray());
+    }
+
+    /// <summary>Observed against out-of-bag predicted, one point per sample, with the identity line over the joint range.</summary>
+    public static SvgImage ObservedAgainstOutOfBag(Panel panel, ReferenceForestSummary forest)
+    {
+        var (predicted, observed) = OutOfBagPoints(panel, forest);
+        var series = new List<XYSeries> { new(Invariant($"Samples ({predicted.Length})"), predicted, observed, XYSeriesStyle.Points) };
+        if (predicted.Length > 0)
+        {
+            double low = Math.Min(predicted.Min(), observed.Min()), high = Math.Max(predicted.Max(), observed.Max());
+            series.Add(new XYSeries("Observed = predicted", [low, high], [low, high], XYSeriesStyle.DashedLine));
+        }
+        return XYChart.Render(new XYChartOptions("Observed against out-of-bag predicted " + panel.OutcomeColumn,
+            "Out-of-bag predicted " + panel.OutcomeColumn, "Observed " + panel.OutcomeColumn, Width: 560, Height: 460), series);
+    }
+
+    /// <summary>The scatter's caption, with the forest's out-of-bag R² and how many samples it rests on.</summary>
+    public static string ObservedAgainstOutOfBagCaption(Panel panel, ReferenceForestSummary forest)
+    {
+        int plotted = OutOfBagPoints(panel, forest).Predicted.Length;
+        string rSquared = forest.OutOfBagRSquared is { } r2 && double.IsFinite(r2) ? Invariant($"{r2:0.000}") : "not defined";
+        return "Each point is one sample: its observed outcome against the prediction of the forest grown on all samples and features, averaged over the trees that did not see it (out of bag). "
+            + Invariant($"Out-of-bag R² {rSquared} over these {plotted} samples (1 - residual / total sum of squares about their mean). ")
+            + "The dashed line is observed = predicted. Forest predictions shrink towards the mean, so the cloud is flatter than that line; "
+            + "points far from it are samples the features do not explain.";
+    }
+
+    /// <summary>
     /// Kaplan-Meier curves of the samples at or above the marker's median and those below it
     /// (below-detection cells count as below), with the log-rank p-value in the legend.
     /// </summary>

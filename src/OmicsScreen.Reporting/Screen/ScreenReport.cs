@@ -154,6 +154,14 @@ public static class ScreenReport
             html.EndSection();
         }
 
+        if (result.Kind == OutcomeKind.Measured && result.ReferenceForest.OutOfBagPredictions.Count > 0)
+        {
+            html.BeginSection("Observed against out-of-bag predicted");
+            html.Figure(OutcomeKindReport.ObservedAgainstOutOfBag(input.Panel, result.ReferenceForest),
+                OutcomeKindReport.ObservedAgainstOutOfBagCaption(input.Panel, result.ReferenceForest));
+            html.EndSection();
+        }
+
         if (result.PanelSize is { } curve)
         {
             html.BeginSection("How many markers to measure");

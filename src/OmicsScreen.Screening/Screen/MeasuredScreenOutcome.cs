@@ -52,6 +52,7 @@ internal sealed class MeasuredScreenOutcome(MeasuredOutcome outcome) : ScreenOut
         var summary = new ReferenceForestSummary(outOfBag.MeanSquaredError, [], null, outOfBag.ErrorCurve.ToArray())
         {
             OutOfBagRSquared = outOfBag.RSquared,
+            OutOfBagPredictions = outOfBag.Predictions.ToArray(),
         };
         return new ReferenceForest(summary, null);
     }
