@@ -170,6 +170,12 @@ public static class ScreenReport
                 + "Dashed line: optimistic estimate, markers chosen once on all samples. Shading: ± 1 SD over outer folds. "
                 + "The diamond marks the recommended size: the smallest within one standard error of the best (Breiman et al. 1984). "
                 + "The size axis is log-spaced, as the sizes tried grow roughly geometrically; the horizontal reference line is chance and the vertical one the locked panel's size.");
+            if (curve.Metric == "r_squared")
+            {
+                html.Table(ScreenReportTables.PanelSizeNumbers(curve));
+                html.Legend("RMSE: the held-out root mean squared error in the outcome's units, computed in each outer fold and averaged over folds, beside R² (1 - residual / total sum of squares about the fold's mean). "
+                    + "Both are in panel_size_curve.tsv (selection_aware_rmse, optimistic_rmse).");
+            }
             html.EndSection();
         }
 

@@ -119,6 +119,9 @@ internal sealed class MeasuredScreenOutcome(MeasuredOutcome outcome) : ScreenOut
             total += (y - mean) * (y - mean);
         }
         double rSquared = total > 0 ? 1 - residual / total : double.NaN;
-        return new PanelScore(rSquared, residual / testRows.Length, predictions, []);
+        return new PanelScore(rSquared, residual / testRows.Length, predictions, [])
+        {
+            RootMeanSquaredError = Math.Sqrt(residual / testRows.Length),
+        };
     }
 }

@@ -99,6 +99,31 @@ public sealed class OutcomeKindFigureTests
         Assert.DoesNotContain("QX0", html);
     }
 
+    [Fact]
+    public void A_measured_curve_writes_RMSE_beside_R_squared_in_the_table_the_manifest_and_the_report()
+    {
+        var panel = MeasuredPanel();
+        var result = ScreenRunner.Run(panel, Quick with { CurveFolds = 3, CurveInnerPairs = 1, CurveMaxPanelSize = 3 });
+        var curve = result.PanelSize!;
+        using var writer = new StringWriter();
+        ScreenTables.WritePanelSizeCurve(writer, curve);
+        var lines = writer.ToString().TrimEnd('\n').Split('\n');
+        var header = lines[0].Split('\t');
+        int aware = Array.IndexOf(header, "selection_aware_rmse"), optimistic = Array.IndexOf(header, "optimistic_rmse");
+        Assert.True(aware > Array.IndexOf(header, "selection_aware_r_squared") && optimistic > aware, string.Join(",", header));
+        for (int i = 0; i < curve.Points.Count; i++)
+        {
+            var cells = lines[i + 1].Split('\t');
+            Assert.Equal(curve.Points[i].SelectionAwareRootMeanSquaredError.ToString("F4", CultureInfo.InvariantCulture), cells[aware]);
+            Assert.Equal(curve.Points[i].OptimisticRootMeanSquaredError.ToString("F4", CultureInfo.InvariantCulture), cells[optimistic]);
+        }
+        var recommended = curve.Points.Single(p => p.PanelSize == curve.RecommendedSize);
+        Assert.Equal(recommended.SelectionAwareRootMeanSquaredError, Manifests.ManifestResults.Of(result).RecommendedPanelSizeSelectionAwareRmse);
+        string html = ScreenReport.Render(ScreenReportSample.Input(result: result) with { Panel = panel });
+        Assert.Contains("The panel-size curve in numbers", html);
+        Assert.Contains("root mean squared error is " + ReportNumber.Significant(recommended.SelectionAwareRootMeanSquaredError, 3), html);
+    }
+
     private static int CountOf(string text, string part)
     {
         int count = 0;
