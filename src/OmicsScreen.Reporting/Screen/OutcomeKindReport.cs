@@ -1,6 +1,7 @@
 using System.Globalization;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Reporting.Charts;
+using OmicsScreen.Screening.Locking;
 using OmicsScreen.Screening.Resampling;
 using OmicsScreen.Screening.Screen;
 using OmicsScreen.Screening.Statistics;
@@ -273,29 +274,29 @@ internal static class OutcomeKindReport
             var t = time.Where((_, i) => high[i] == group).ToArray();
             var e = events.Where((_, i) => high[i] == group).ToArray();
             if (t.Length == 0) continue;
-            var (x, y) = Steps(KaplanMeier.Estimate(t, e));
-            series.Add(new XYSeries((group ? "At or above the median" : "Below the median") + Invariant($" ({t.Length})"), x, y,
+            series.Add(KaplanMeierSteps.Series((group ? "At or above the median" : "Below the median") + Invariant($" ({t.Length})"), KaplanMeier.Estimate(t, e),
                 group ? XYSeriesStyle.Line : XYSeriesStyle.DashedLine));
         }
         return XYChart.Render(new XYChartOptions(label + p, "Time (" + followUp.TimeColumn + ")", "Share without the event (Kaplan-Meier)",
             YMinimum: 0, YMaximum: 1, Width: 520, Height: 420), series);
     }
 
-    /// <summary>A survival curve as a step line from (0, 1).</summary>
-    private static (List<double> X, List<double> Y) Steps(SurvivalCurve curve)
+    /// <summary>
+    /// Kaplan-Meier curves of the locked panel's discovery risk groups: the samples split at the
+    /// median of the panel forest's out-of-bag risk scores, as `apply` splits a new cohort.
+    /// </summary>
+    public static SvgImage DiscoveryRiskGroups(Panel panel, LockedFollowUpPerformance groups) =>
+        KaplanMeierSteps.RiskGroups("Discovery risk groups of the locked panel", "Time (" + panel.FollowUp!.TimeColumn + ")", groups);
+
+    public static string DiscoveryRiskGroupsCaption(LockedFollowUpPerformance groups)
     {
-        var x = new List<double> { 0 };
-        var y = new List<double> { 1 };
-        double level = 1;
-        for (int i = 0; i < curve.Time.Length; i++)
-        {
-            x.Add(curve.Time[i]);
-            y.Add(level);
-            level = curve.Survival[i];
-            x.Add(curve.Time[i]);
-            y.Add(level);
-        }
-        return (x, y);
+        string test = groups.LogRank is { } logRank
+            ? "Log-rank test of high against low risk: chi-square " + ReportNumber.Significant(logRank.ChiSquare, 3) + ", p " + KaplanMeierSteps.LogRankP(logRank.PValue) + ". "
+            : "One group is empty, so there is no log-rank test. ";
+        return Invariant($"Kaplan-Meier estimates of the share of discovery samples still without the event, in the locked panel's two risk groups ({groups.HighRiskCount} high, {groups.SampleCount - groups.HighRiskCount} low): ")
+            + "each sample is scored by the trees of the panel's forest that did not see it (out of bag) and is high risk when its score is above the median of those scores, the cut `apply` uses on a new cohort. "
+            + test
+            + "The markers were chosen on these same samples, so the separation is optimistic: only an independent cohort shows how well the groups separate, and separated curves show ranking, not calibrated risk.";
     }
 
     /// <summary>

@@ -114,6 +114,8 @@ public static class ScreenReport
                     : "Its forest (a random survival forest on these markers alone, grown on every discovery sample) gives each sample a risk score, its ensemble mortality, which ranks samples but is not a calibrated survival probability; "
                         + "`apply` splits a new cohort at the discovery median risk score and reports the concordance, a time-dependent AUC at a horizon you name, and the Kaplan-Meier curves of the two risk groups.");
             html.Table(ScreenReportTables.LockedPanel(result, input.FeatureLabels));
+            if (result.Kind == OutcomeKind.TimeToEvent && input.LockedRiskGroups is { } groups)
+                html.Figure(OutcomeKindReport.DiscoveryRiskGroups(input.Panel, groups), OutcomeKindReport.DiscoveryRiskGroupsCaption(groups));
             if (result.Kind == OutcomeKind.Classes && result.PanelSize is { LockedOutOfFoldScores.Count: > 0 } curve)
                 html.Figure(ScreenReportCharts.LockedPanelRoc(curve),
                     "Cross-validated ROC curve of the locking procedure: in every outer fold the screen, its shortlist and the size choice were repeated on the training part only, "

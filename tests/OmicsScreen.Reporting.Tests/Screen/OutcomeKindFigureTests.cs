@@ -3,7 +3,10 @@ using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Engine.Randomness;
 using OmicsScreen.Engine.Regression;
+using OmicsScreen.Reporting.Charts;
 using OmicsScreen.Reporting.Screen;
+using OmicsScreen.Screening.Locking;
+using OmicsScreen.Screening.Statistics.Survival;
 using OmicsScreen.Screening.Randomness;
 using OmicsScreen.Screening.Screen;
 
@@ -122,6 +125,81 @@ public sealed class OutcomeKindFigureTests
         string html = ScreenReport.Render(ScreenReportSample.Input(result: result) with { Panel = panel });
         Assert.Contains("The panel-size curve in numbers", html);
         Assert.Contains("root mean squared error is " + ReportNumber.Significant(recommended.SelectionAwareRootMeanSquaredError, 3), html);
+    }
+
+    /// <summary>Invented follow-up: exponential event times with log hazard 0.9 z0 + 0.6 z1, exponential censoring (about a third censored).</summary>
+    internal static Panel FollowUpPanel(int samples = 120, int features = 30, ulong seed = 29)
+    {
+        var generator = SeedSchedule.Generator(seed, 0, 0, SeedPurpose.Sampling);
+        var columns = new float[features][];
+        var z = new double[features][];
+        for (int f = 0; f < features; f++)
+        {
+            columns[f] = new float[samples];
+            z[f] = new double[samples];
+            for (int s = 0; s < samples; s++)
+            {
+                z[f][s] = generator.NextGaussian();
+                columns[f][s] = (float)(5 + z[f][s]);
+            }
+        }
+        var times = new double[samples];
+        var events = new bool[samples];
+        for (int s = 0; s < samples; s++)
+        {
+            double eventTime = -Math.Log(1 - generator.NextDouble()) / Math.Exp(0.9 * z[0][s] + 0.6 * z[1][s]);
+            double censorTime = -Math.Log(1 - generator.NextDouble()) / 0.5;
+            times[s] = Math.Min(eventTime, censorTime);
+            events[s] = eventTime <= censorTime;
+        }
+        var matrix = new FeatureMatrix(Enumerable.Range(0, features).Select(f => $"SIM{f:D3}").ToArray(),
+            Enumerable.Range(0, samples).Select(s => $"QX{s:D4}").ToArray(), columns, new CellState[]?[features]);
+        return new Panel(matrix, new FollowUpOutcome("months", "relapse", times, events));
+    }
+
+    [Fact]
+    public void Kaplan_Meier_steps_turn_at_the_estimators_own_points()
+    {
+        // Small invented follow-up with ties and censoring; KaplanMeier is checked against R's survival package elsewhere.
+        double[] time = [1, 2, 2, 3, 4, 4, 5, 7, 8, 9];
+        bool[] events = [true, true, false, true, false, true, true, false, true, false];
+        var curve = KaplanMeier.Estimate(time, events);
+        var (x, y) = KaplanMeierSteps.Of(curve);
+        Assert.Equal((0.0, 1.0), (x[0], y[0]));
+        Assert.Equal(1 + 2 * curve.Time.Length, x.Count);
+        for (int i = 0; i < curve.Time.Length; i++)
+        {
+            // The line runs level to each time at the previous estimate, then drops to the estimate there.
+            Assert.Equal(curve.Time[i], x[1 + 2 * i]);
+            Assert.Equal(i == 0 ? 1.0 : curve.Survival[i - 1], y[1 + 2 * i]);
+            Assert.Equal(curve.Time[i], x[2 + 2 * i]);
+            Assert.Equal(curve.Survival[i], y[2 + 2 * i]);
+        }
+    }
+
+    [Fact]
+    public void The_report_of_a_follow_up_screen_draws_the_locked_panels_discovery_risk_groups_with_the_log_rank_p()
+    {
+        var panel = FollowUpPanel();
+        var result = ScreenRunner.Run(panel, Quick with { CurveFolds = 3, CurveInnerPairs = 1, CurveMaxPanelSize = 3 });
+        Assert.True(result.LockedPanelSize > 0, "the planted markers should be locked");
+        var (_, groups) = PanelLocker.LockFollowUpWithRiskGroups(panel, result, new PanelLockOptions { Seed = Quick.Seed, TreeCount = 60, ToolVersion = "test" });
+        var input = ScreenReportSample.Input(result: result) with { Panel = panel, LockedRiskGroups = groups };
+        string html = ScreenReport.Render(input);
+
+        var logRank = groups.LogRank!.Value;
+        Assert.Contains("Discovery risk groups of the locked panel, log-rank p " + logRank.PValue.ToString("G2", CultureInfo.InvariantCulture), html);
+        Assert.Contains("chi-square " + ReportNumber.Significant(logRank.ChiSquare, 3), html);
+        Assert.Contains($"High risk ({groups.HighRiskCount})", html);
+        Assert.Contains($"Low risk ({groups.SampleCount - groups.HighRiskCount})", html);
+        Assert.DoesNotContain("QX0", html);
+
+        // The chart is the shared step drawing of the groups' curves, the same as apply's.
+        string svg = OutcomeKindReport.DiscoveryRiskGroups(panel, groups).Markup;
+        Assert.Equal(KaplanMeierSteps.RiskGroups("Discovery risk groups of the locked panel", "Time (months)", groups).Markup, svg);
+
+        // Without the groups (nothing locked, or another kind) the figure is absent.
+        Assert.DoesNotContain("Discovery risk groups", ScreenReport.Render(input with { LockedRiskGroups = null }));
     }
 
     private static int CountOf(string text, string part)
