@@ -237,7 +237,8 @@ internal static class OutcomeKindReport
         return "Each point is one sample: its observed outcome against the prediction of the forest grown on all samples and features, averaged over the trees that did not see it (out of bag). "
             + Invariant($"Out-of-bag R² {rSquared} over these {plotted} samples (1 - residual / total sum of squares about their mean). ")
             + "The dashed line is observed = predicted. Forest predictions shrink towards the mean, so the cloud is flatter than that line; "
-            + "points far from it are samples the features do not explain.";
+            + "points far from it are samples the features do not explain. "
+            + "A forest over all features is diluted by the many unrelated to the outcome, so this R² is usually below what a short panel reaches on the panel-size curve.";
     }
 
     /// <summary>
