@@ -287,7 +287,7 @@ internal static class OutcomeKindReport
     /// median of the panel forest's out-of-bag risk scores, as `apply` splits a new cohort.
     /// </summary>
     public static SvgImage DiscoveryRiskGroups(Panel panel, LockedFollowUpPerformance groups) =>
-        KaplanMeierSteps.RiskGroups("Discovery risk groups of the locked panel", "Time (" + panel.FollowUp!.TimeColumn + ")", groups);
+        KaplanMeierSteps.RiskGroups("Discovery risk groups", "Time (" + panel.FollowUp!.TimeColumn + ")", groups);
 
     public static string DiscoveryRiskGroupsCaption(LockedFollowUpPerformance groups)
     {

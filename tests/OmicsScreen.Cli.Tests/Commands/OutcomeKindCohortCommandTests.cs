@@ -145,7 +145,7 @@ public sealed class OutcomeKindCohortCommandTests : IDisposable
             Assert.True(first.AsSpan().SequenceEqual(File.ReadAllBytes(Path.Combine(merged, table))), $"{table}: merged parts differ from one run");
         }
         // The report's figures drawn from the forest on all samples are the same too (a merge grows it again).
-        string figure = kind == "time" ? "Discovery risk groups of the locked panel" : "Observed against out-of-bag predicted score";
+        string figure = kind == "time" ? "Discovery risk groups" : "Observed against out-of-bag predicted score";
         string single = Svg(File.ReadAllText(Path.Combine(one, "report.html")), figure);
         Assert.Equal(single, Svg(File.ReadAllText(Path.Combine(two, "report.html")), figure));
         Assert.Equal(single, Svg(File.ReadAllText(Path.Combine(merged, "report.html")), figure));

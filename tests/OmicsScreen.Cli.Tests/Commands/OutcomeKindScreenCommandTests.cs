@@ -91,7 +91,7 @@ public sealed class OutcomeKindScreenCommandTests : IDisposable
         Assert.DoesNotContain("writes no panel file", report);
         Assert.Contains("The panel locked for", report);
         Assert.Contains(followUp ? "Survival by the top markers" : "The top markers against the outcome", report);
-        Assert.Contains(followUp ? "Discovery risk groups of the locked panel, log-rank p" : "Observed against out-of-bag predicted", report);
+        Assert.Contains(followUp ? "Discovery risk groups, log-rank p" : "Observed against out-of-bag predicted", report);
         Assert.Contains("not a diagnostic test", report);
         Assert.DoesNotContain("P001", report);
 

@@ -188,7 +188,7 @@ public sealed class OutcomeKindFigureTests
         string html = ScreenReport.Render(input);
 
         var logRank = groups.LogRank!.Value;
-        Assert.Contains("Discovery risk groups of the locked panel, log-rank p " + logRank.PValue.ToString("G2", CultureInfo.InvariantCulture), html);
+        Assert.Contains("Discovery risk groups, log-rank p " + logRank.PValue.ToString("G2", CultureInfo.InvariantCulture), html);
         Assert.Contains("chi-square " + ReportNumber.Significant(logRank.ChiSquare, 3), html);
         Assert.Contains($"High risk ({groups.HighRiskCount})", html);
         Assert.Contains($"Low risk ({groups.SampleCount - groups.HighRiskCount})", html);
@@ -196,7 +196,7 @@ public sealed class OutcomeKindFigureTests
 
         // The chart is the shared step drawing of the groups' curves, the same as apply's.
         string svg = OutcomeKindReport.DiscoveryRiskGroups(panel, groups).Markup;
-        Assert.Equal(KaplanMeierSteps.RiskGroups("Discovery risk groups of the locked panel", "Time (months)", groups).Markup, svg);
+        Assert.Equal(KaplanMeierSteps.RiskGroups("Discovery risk groups", "Time (months)", groups).Markup, svg);
 
         // Without the groups (nothing locked, or another kind) the figure is absent.
         Assert.DoesNotContain("Discovery risk groups", ScreenReport.Render(input with { LockedRiskGroups = null }));
