@@ -163,10 +163,15 @@ internal static class ScreenRun
         if (result.Cohorts is { } cohorts) CohortTableFiles.Write(folder, cohorts);
         // The shortlist (or its prefix the curve recommends), locked for scoring new cohorts with
         // `apply`, for every outcome kind; an empty shortlist locks nothing.
+        LockedPanelWritten? locked = null;
         if (result.LockedPanelSize > 0)
-            folder.WrittenFiles.Add(PanelLocking.LockInto(folder.Path, loaded, result));
+        {
+            locked = PanelLocking.Lock(folder.Path, loaded, result);
+            folder.WrittenFiles.Add(locked.FileName);
+        }
         var finished = DateTimeOffset.UtcNow;
-        var report = ReportInput(options, loaded, result, folder, started, finished, loadSeconds) with { MergedParts = mergedParts };
+        var report = ReportInput(options, loaded, result, folder, started, finished, loadSeconds)
+            with { MergedParts = mergedParts, LockedRiskGroups = locked?.DiscoveryRiskGroups };
         folder.WriteText(ReportFileName, w => w.Write(ScreenReport.Render(report)));
         var manifest = ScreenManifestBuilder.Build(options.CommandLine, options.Panel, loaded, result, started, finished, loadSeconds, folder.WrittenFiles, Warnings(options, loaded), mergedParts);
         folder.WriteText(ResultsFolder.ManifestFileName, w => ManifestJson.Write(w, manifest));

@@ -28,6 +28,13 @@ public sealed record ManifestResults
     [System.Text.Json.Serialization.JsonIgnore(Condition = System.Text.Json.Serialization.JsonIgnoreCondition.WhenWritingNull)]
     public double? ReferenceOutOfBagConcordance { get; init; }
 
+    /// <summary>
+    /// Selection-aware held-out RMSE (outcome units, mean over outer folds) at the recommended
+    /// panel size of a measured outcome's curve; absent for other kinds and without a curve.
+    /// </summary>
+    [System.Text.Json.Serialization.JsonIgnore(Condition = System.Text.Json.Serialization.JsonIgnoreCondition.WhenWritingNull)]
+    public double? RecommendedPanelSizeSelectionAwareRmse { get; init; }
+
     public static ManifestResults Of(ScreenResult result) => new()
     {
         Shortlisted = result.Shortlist.Count,
@@ -46,6 +53,9 @@ public sealed record ManifestResults
         ReferenceOutOfBagAuc = result.ReferenceForest.OutOfBagAuc,
         ReferenceOutOfBagRSquared = result.ReferenceForest.OutOfBagRSquared,
         ReferenceOutOfBagConcordance = result.ReferenceForest.OutOfBagConcordance,
+        RecommendedPanelSizeSelectionAwareRmse = result.PanelSize is { Metric: "r_squared" } curve
+            ? NullWhenNaN(curve.Points.FirstOrDefault(p => p.PanelSize == curve.RecommendedSize)?.SelectionAwareRootMeanSquaredError ?? double.NaN)
+            : null,
     };
 
     private static double? NullWhenNaN(double value) => double.IsNaN(value) ? null : value;

@@ -1,6 +1,7 @@
 using System.Globalization;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Reporting.Charts;
+using OmicsScreen.Screening.Locking;
 using OmicsScreen.Screening.Resampling;
 using OmicsScreen.Screening.Screen;
 using OmicsScreen.Screening.Statistics;
@@ -195,6 +196,52 @@ internal static class OutcomeKindReport
     }
 
     /// <summary>
+    /// The points of the observed-against-out-of-bag-predicted scatter of a measured outcome, in
+    /// panel order: every sample some tree of the forest on all samples left out, its out-of-bag
+    /// prediction against its observed value. No sample id travels with them.
+    /// </summary>
+    public static (double[] Predicted, double[] Observed) OutOfBagPoints(Panel panel, ReferenceForestSummary forest)
+    {
+        var observed = panel.Measured!.Values;
+        var predictions = forest.OutOfBagPredictions;
+        var x = new List<double>(predictions.Count);
+        var y = new List<double>(predictions.Count);
+        for (int s = 0; s < predictions.Count; s++)
+        {
+            if (double.IsNaN(predictions[s])) continue;
+            x.Add(predictions[s]);
+            y.Add(observed[s]);
+        }
+        return (x.ToArray(), y.ToArray());
+    }
+
+    /// <summary>Observed against out-of-bag predicted, one point per sample, with the identity line over the joint range.</summary>
+    public static SvgImage ObservedAgainstOutOfBag(Panel panel, ReferenceForestSummary forest)
+    {
+        var (predicted, observed) = OutOfBagPoints(panel, forest);
+        var series = new List<XYSeries> { new(Invariant($"Samples ({predicted.Length})"), predicted, observed, XYSeriesStyle.Points) };
+        if (predicted.Length > 0)
+        {
+            double low = Math.Min(predicted.Min(), observed.Min()), high = Math.Max(predicted.Max(), observed.Max());
+            series.Add(new XYSeries("Observed = predicted", [low, high], [low, high], XYSeriesStyle.DashedLine));
+        }
+        return XYChart.Render(new XYChartOptions("Observed against out-of-bag predicted " + panel.OutcomeColumn,
+            "Out-of-bag predicted " + panel.OutcomeColumn, "Observed " + panel.OutcomeColumn, Width: 560, Height: 460), series);
+    }
+
+    /// <summary>The scatter's caption, with the forest's out-of-bag R² and how many samples it rests on.</summary>
+    public static string ObservedAgainstOutOfBagCaption(Panel panel, ReferenceForestSummary forest)
+    {
+        int plotted = OutOfBagPoints(panel, forest).Predicted.Length;
+        string rSquared = forest.OutOfBagRSquared is { } r2 && double.IsFinite(r2) ? Invariant($"{r2:0.000}") : "not defined";
+        return "Each point is one sample: its observed outcome against the prediction of the forest grown on all samples and features, averaged over the trees that did not see it (out of bag). "
+            + Invariant($"Out-of-bag R² {rSquared} over these {plotted} samples (1 - residual / total sum of squares about their mean). ")
+            + "The dashed line is observed = predicted. Forest predictions shrink towards the mean, so the cloud is flatter than that line; "
+            + "points far from it are samples the features do not explain. "
+            + "A forest over all features is diluted by the many unrelated to the outcome, so this R² is usually below what a short panel reaches on the panel-size curve.";
+    }
+
+    /// <summary>
     /// Kaplan-Meier curves of the samples at or above the marker's median and those below it
     /// (below-detection cells count as below), with the log-rank p-value in the legend.
     /// </summary>
@@ -228,29 +275,29 @@ internal static class OutcomeKindReport
             var t = time.Where((_, i) => high[i] == group).ToArray();
             var e = events.Where((_, i) => high[i] == group).ToArray();
             if (t.Length == 0) continue;
-            var (x, y) = Steps(KaplanMeier.Estimate(t, e));
-            series.Add(new XYSeries((group ? "At or above the median" : "Below the median") + Invariant($" ({t.Length})"), x, y,
+            series.Add(KaplanMeierSteps.Series((group ? "At or above the median" : "Below the median") + Invariant($" ({t.Length})"), KaplanMeier.Estimate(t, e),
                 group ? XYSeriesStyle.Line : XYSeriesStyle.DashedLine));
         }
         return XYChart.Render(new XYChartOptions(label + p, "Time (" + followUp.TimeColumn + ")", "Share without the event (Kaplan-Meier)",
             YMinimum: 0, YMaximum: 1, Width: 520, Height: 420), series);
     }
 
-    /// <summary>A survival curve as a step line from (0, 1).</summary>
-    private static (List<double> X, List<double> Y) Steps(SurvivalCurve curve)
+    /// <summary>
+    /// Kaplan-Meier curves of the locked panel's discovery risk groups: the samples split at the
+    /// median of the panel forest's out-of-bag risk scores, as `apply` splits a new cohort.
+    /// </summary>
+    public static SvgImage DiscoveryRiskGroups(Panel panel, LockedFollowUpPerformance groups) =>
+        KaplanMeierSteps.RiskGroups("Discovery risk groups", "Time (" + panel.FollowUp!.TimeColumn + ")", groups);
+
+    public static string DiscoveryRiskGroupsCaption(LockedFollowUpPerformance groups)
     {
-        var x = new List<double> { 0 };
-        var y = new List<double> { 1 };
-        double level = 1;
-        for (int i = 0; i < curve.Time.Length; i++)
-        {
-            x.Add(curve.Time[i]);
-            y.Add(level);
-            level = curve.Survival[i];
-            x.Add(curve.Time[i]);
-            y.Add(level);
-        }
-        return (x, y);
+        string test = groups.LogRank is { } logRank
+            ? "Log-rank test of high against low risk: chi-square " + ReportNumber.Significant(logRank.ChiSquare, 3) + ", p " + KaplanMeierSteps.LogRankP(logRank.PValue) + ". "
+            : "One group is empty, so there is no log-rank test. ";
+        return Invariant($"Kaplan-Meier estimates of the share of discovery samples still without the event, in the locked panel's two risk groups ({groups.HighRiskCount} high, {groups.SampleCount - groups.HighRiskCount} low): ")
+            + "each sample is scored by the trees of the panel's forest that did not see it (out of bag) and is high risk when its score is above the median of those scores, the cut `apply` uses on a new cohort. "
+            + test
+            + "The markers were chosen on these same samples, so the separation is optimistic: only an independent cohort shows how well the groups separate, and separated curves show ranking, not calibrated risk.";
     }
 
     /// <summary>

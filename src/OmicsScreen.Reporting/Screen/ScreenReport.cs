@@ -114,6 +114,8 @@ public static class ScreenReport
                     : "Its forest (a random survival forest on these markers alone, grown on every discovery sample) gives each sample a risk score, its ensemble mortality, which ranks samples but is not a calibrated survival probability; "
                         + "`apply` splits a new cohort at the discovery median risk score and reports the concordance, a time-dependent AUC at a horizon you name, and the Kaplan-Meier curves of the two risk groups.");
             html.Table(ScreenReportTables.LockedPanel(result, input.FeatureLabels));
+            if (result.Kind == OutcomeKind.TimeToEvent && input.LockedRiskGroups is { } groups)
+                html.Figure(OutcomeKindReport.DiscoveryRiskGroups(input.Panel, groups), OutcomeKindReport.DiscoveryRiskGroupsCaption(groups));
             if (result.Kind == OutcomeKind.Classes && result.PanelSize is { LockedOutOfFoldScores.Count: > 0 } curve)
                 html.Figure(ScreenReportCharts.LockedPanelRoc(curve),
                     "Cross-validated ROC curve of the locking procedure: in every outer fold the screen, its shortlist and the size choice were repeated on the training part only, "
@@ -154,6 +156,14 @@ public static class ScreenReport
             html.EndSection();
         }
 
+        if (result.Kind == OutcomeKind.Measured && result.ReferenceForest.OutOfBagPredictions.Count > 0)
+        {
+            html.BeginSection("Observed against out-of-bag predicted");
+            html.Figure(OutcomeKindReport.ObservedAgainstOutOfBag(input.Panel, result.ReferenceForest),
+                OutcomeKindReport.ObservedAgainstOutOfBagCaption(input.Panel, result.ReferenceForest));
+            html.EndSection();
+        }
+
         if (result.PanelSize is { } curve)
         {
             html.BeginSection("How many markers to measure");
@@ -162,6 +172,12 @@ public static class ScreenReport
                 + "Dashed line: optimistic estimate, markers chosen once on all samples. Shading: ± 1 SD over outer folds. "
                 + "The diamond marks the recommended size: the smallest within one standard error of the best (Breiman et al. 1984). "
                 + "The size axis is log-spaced, as the sizes tried grow roughly geometrically; the horizontal reference line is chance and the vertical one the locked panel's size.");
+            if (curve.Metric == "r_squared")
+            {
+                html.Table(ScreenReportTables.PanelSizeNumbers(curve));
+                html.Legend("RMSE: the held-out root mean squared error in the outcome's units, computed in each outer fold and averaged over folds, beside R² (1 - residual / total sum of squares about the fold's mean). "
+                    + "Both are in panel_size_curve.tsv (selection_aware_rmse, optimistic_rmse).");
+            }
             html.EndSection();
         }
 

@@ -1,4 +1,5 @@
 using OmicsScreen.Engine.Panels;
+using OmicsScreen.Screening.Locking;
 using OmicsScreen.Screening.Screen;
 
 namespace OmicsScreen.Reporting.Screen;
@@ -23,6 +24,7 @@ namespace OmicsScreen.Reporting.Screen;
 /// <param name="ShowSampleIds">When false (the default), no sample identifier appears anywhere in the report.</param>
 /// <param name="MergedParts">When above 0, the run was split into this many parts on separate processes and merged.</param>
 /// <param name="Warnings">What the run warned about (the loader's warnings, weak settings), as printed on the console; null or empty for none.</param>
+/// <param name="LockedRiskGroups">For follow-up, the locked panel's discovery risk groups (out-of-bag risk against the panel's cut); null otherwise or when nothing was locked.</param>
 public sealed record ScreenReportInput(
     Panel Panel,
     ScreenResult Result,
@@ -39,7 +41,8 @@ public sealed record ScreenReportInput(
     bool ShowSampleIds = false,
     int MergedParts = 0,
     IReadOnlyList<string>? Warnings = null,
-    FeatureLabels? Labels = null)
+    FeatureLabels? Labels = null,
+    LockedFollowUpPerformance? LockedRiskGroups = null)
 {
     /// <summary>The features' lab-facing names and annotations; none when the inputs gave none.</summary>
     public FeatureLabels FeatureLabels => Labels ?? FeatureLabels.None;

@@ -220,6 +220,29 @@ internal static class ScreenReportTables
         return table;
     }
 
+    /// <summary>
+    /// A measured outcome's panel-size curve in numbers: per size the held-out R² (mean ± SD over
+    /// outer folds) and RMSE, selection-aware and optimistic.
+    /// </summary>
+    public static HtmlTable PanelSizeNumbers(PanelSizeCurve curve)
+    {
+        var table = new HtmlTable("The panel-size curve in numbers (mean over outer folds)",
+        [
+            new("Markers", ColumnAlignment.Numeric),
+            new("Selection-aware R² ± SD", ColumnAlignment.Numeric),
+            new("Selection-aware RMSE", ColumnAlignment.Numeric),
+            new("Optimistic R²", ColumnAlignment.Numeric),
+            new("Optimistic RMSE", ColumnAlignment.Numeric),
+        ]);
+        foreach (var point in curve.Points)
+            table.AddRow(ReportNumber.Integer(point.PanelSize) + (point.PanelSize == curve.RecommendedSize ? " (recommended)" : ""),
+                ReportNumber.Fixed(point.SelectionAwareAuc, 3) + " ± " + ReportNumber.Fixed(point.SelectionAwareAucSd, 3),
+                ReportNumber.Significant(point.SelectionAwareRootMeanSquaredError, 3),
+                ReportNumber.Fixed(point.OptimisticAuc, 3),
+                ReportNumber.Significant(point.OptimisticRootMeanSquaredError, 3));
+        return table;
+    }
+
     public static HtmlTable Files(string caption, IReadOnlyList<ReportedFile> files)
     {
         var table = new HtmlTable(caption, [new("File", ColumnAlignment.Unbroken), new("Role"), new("SHA-256", ColumnAlignment.Unbroken)]);

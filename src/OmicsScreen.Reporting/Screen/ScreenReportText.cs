@@ -101,7 +101,13 @@ internal static class ScreenReportText
         double low = recommended.SelectionAwareAuc - 1.96 * recommended.SelectionAwareAucStandardError;
         double high = recommended.SelectionAwareAuc + 1.96 * recommended.SelectionAwareAucStandardError;
         string folds = curve.FoldRepeats > 1 ? Invariant($"{curve.FoldCount}-fold, repeated {curve.FoldRepeats} times") : Invariant($"{curve.FoldCount}-fold");
+        // A measured outcome's error in its own units beside R²: the held-out RMSE, mean over folds.
+        string rmse = curve.Metric == "r_squared" && double.IsFinite(recommended.SelectionAwareRootMeanSquaredError)
+            ? "Its selection-aware held-out root mean squared error is " + ReportNumber.Significant(recommended.SelectionAwareRootMeanSquaredError, 3)
+                + " in the outcome's units (mean over outer folds). "
+            : "";
         return Invariant($"Recommended panel size: {curve.RecommendedSize} markers, with a selection-aware held-out {metric} of {recommended.SelectionAwareAuc:0.000} (95% interval about {low:0.000} to {high:0.000}; {folds} cross-validation with the markers chosen afresh in each training part). ")
+            + rmse
             + Invariant($"Choosing the markers once on all samples would suggest {recommended.OptimisticAuc:0.000}: that figure is optimistic and should not be quoted.");
     }
 

@@ -96,6 +96,13 @@ public static class ScreenTables
             TsvColumn<PanelSizePoint>.Number("optimistic_error", p => p.OptimisticError, NumberFormat.Fixed(4)),
             TsvColumn<PanelSizePoint>.Integer("outer_folds", p => p.FoldCount),
         };
+        // A measured outcome's curve also gives the held-out RMSE (outcome units) beside R²;
+        // the other kinds' tables keep their columns.
+        if (metric == "r_squared")
+        {
+            columns.Insert(6, TsvColumn<PanelSizePoint>.Number("selection_aware_rmse", p => p.SelectionAwareRootMeanSquaredError, NumberFormat.Fixed(4)));
+            columns.Insert(10, TsvColumn<PanelSizePoint>.Number("optimistic_rmse", p => p.OptimisticRootMeanSquaredError, NumberFormat.Fixed(4)));
+        }
         return new TsvTableWriter<PanelSizePoint>(columns).Write(writer, curve.Points);
     }
 

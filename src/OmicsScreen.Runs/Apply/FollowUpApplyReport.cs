@@ -99,41 +99,8 @@ public static class FollowUpApplyReport
     }
 
     /// <summary>The Kaplan-Meier curves of the two risk groups, with the log-rank p in the title.</summary>
-    public static SvgImage RiskGroupCurves(LockedFollowUpPanel model, LockedFollowUpPerformance performance)
-    {
-        var series = new List<XYSeries>();
-        int low = performance.SampleCount - performance.HighRiskCount;
-        if (performance.LowRisk is { } lowCurve)
-        {
-            var (x, y) = Steps(lowCurve);
-            series.Add(new XYSeries(FormattableString.Invariant($"Low risk ({low})"), x, y, XYSeriesStyle.DashedLine));
-        }
-        if (performance.HighRisk is { } highCurve)
-        {
-            var (x, y) = Steps(highCurve);
-            series.Add(new XYSeries(FormattableString.Invariant($"High risk ({performance.HighRiskCount})"), x, y, XYSeriesStyle.Line));
-        }
-        string p = performance.LogRank is { } test && !double.IsNaN(test.PValue) ? ", log-rank p " + Significant(test.PValue) : "";
-        return XYChart.Render(new XYChartOptions("Risk groups of the locked panel" + p, "Time (" + model.TimeColumn + " units)",
-            "Share without the event (Kaplan-Meier)", YMinimum: 0, YMaximum: 1, Width: 560, Height: 420), series);
-    }
-
-    /// <summary>A survival curve as a step line from (0, 1).</summary>
-    private static (List<double> X, List<double> Y) Steps(SurvivalCurve curve)
-    {
-        var x = new List<double> { 0 };
-        var y = new List<double> { 1 };
-        double level = 1;
-        for (int i = 0; i < curve.Time.Length; i++)
-        {
-            x.Add(curve.Time[i]);
-            y.Add(level);
-            level = curve.Survival[i];
-            x.Add(curve.Time[i]);
-            y.Add(level);
-        }
-        return (x, y);
-    }
+    public static SvgImage RiskGroupCurves(LockedFollowUpPanel model, LockedFollowUpPerformance performance) =>
+        KaplanMeierSteps.RiskGroups("Risk groups of the locked panel", "Time (" + model.TimeColumn + " units)", performance);
 
     private static List<string> Cautions(LockedFollowUpScores scores, LockedFollowUpPerformance? performance)
     {

@@ -15,7 +15,14 @@ public static class PanelLocking
     /// SHA-256, the hashed discovery sample ids and the markers' display names, and writes it into
     /// the results folder; returns the file name written.
     /// </summary>
-    public static string LockInto(string resultsFolder, LoadedPanel loaded, ScreenResult result, int? panelSize = null)
+    public static string LockInto(string resultsFolder, LoadedPanel loaded, ScreenResult result, int? panelSize = null) =>
+        Lock(resultsFolder, loaded, result, panelSize).FileName;
+
+    /// <summary>
+    /// As <see cref="LockInto"/>, returning with the file name what the screen report draws of the
+    /// locked panel: for follow-up, its discovery risk groups (<see cref="PanelLocker.DiscoveryRiskGroups"/>).
+    /// </summary>
+    public static LockedPanelWritten Lock(string resultsFolder, LoadedPanel loaded, ScreenResult result, int? panelSize = null)
     {
         ArgumentNullException.ThrowIfNull(loaded);
         ArgumentNullException.ThrowIfNull(result);
@@ -32,16 +39,27 @@ public static class PanelLocking
             InputSha256 = inputs,
         };
         // Class panels keep format version 1 and their exact bytes; the other kinds need version 2.
-        var (content, markers, version) = loaded.Panel.Kind switch
+        LockedFollowUpPerformance? riskGroups = null;
+        (JsonObject Content, IReadOnlyList<string> Markers, int Version) written;
+        switch (loaded.Panel.Kind)
         {
-            OutcomeKind.Measured => Content(PanelLocker.LockMeasured(loaded.Panel, result, lockOptions)),
-            OutcomeKind.TimeToEvent => Content(PanelLocker.LockFollowUp(loaded.Panel, result, lockOptions)),
-            _ => Content(PanelLocker.Lock(loaded.Panel, result, lockOptions)),
-        };
+            case OutcomeKind.Measured:
+                written = Content(PanelLocker.LockMeasured(loaded.Panel, result, lockOptions));
+                break;
+            case OutcomeKind.TimeToEvent:
+                var (followUp, groups) = PanelLocker.LockFollowUpWithRiskGroups(loaded.Panel, result, lockOptions);
+                written = Content(followUp);
+                riskGroups = groups;
+                break;
+            default:
+                written = Content(PanelLocker.Lock(loaded.Panel, result, lockOptions));
+                break;
+        }
+        var (content, markers, version) = written;
         content[DiscoveryOverlap.SampleIdHashesKey] = DiscoveryOverlap.SampleIdHashes(loaded.Panel.Matrix.SampleIds);
         if (MarkerLabels.DisplayNames(loaded, markers) is { } displayNames) content[MarkerLabels.DisplayNamesKey] = displayNames;
         LockedPanelEnvelope.Write(Path.Combine(resultsFolder, LockedPanelFile.DefaultFileName), content, version);
-        return LockedPanelFile.DefaultFileName;
+        return new LockedPanelWritten(LockedPanelFile.DefaultFileName, riskGroups);
     }
 
     private static (JsonObject Content, IReadOnlyList<string> Markers, int Version) Content(LockedPanel panel) =>

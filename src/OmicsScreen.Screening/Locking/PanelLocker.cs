@@ -46,10 +46,55 @@ public static class PanelLocker
     /// As <see cref="Lock(Panel, ScreenResult, PanelLockOptions)"/> for censored follow-up: the
     /// same markers and forest settings (the screen's smallest leaf for the kind), a random survival forest.
     /// </summary>
-    public static LockedFollowUpPanel LockFollowUp(Panel panel, ScreenResult result, PanelLockOptions options)
+    public static LockedFollowUpPanel LockFollowUp(Panel panel, ScreenResult result, PanelLockOptions options) =>
+        LockFollowUpWithRiskGroups(panel, result, options).Panel;
+
+    /// <summary>
+    /// As <see cref="LockFollowUp(Panel, ScreenResult, PanelLockOptions)"/>, with the discovery
+    /// risk groups: every discovery sample placed by its out-of-bag risk score against the
+    /// panel's cut, as `apply` places a new cohort's samples (<see cref="DiscoveryRiskGroups"/>).
+    /// </summary>
+    public static (LockedFollowUpPanel Panel, LockedFollowUpPerformance DiscoveryRiskGroups) LockFollowUpWithRiskGroups(Panel panel,
+        ScreenResult result, PanelLockOptions options)
     {
         var (markers, forestOptions) = Plan(panel, result, options);
-        return LockFollowUp(panel, markers, forestOptions, options);
+        return LockFollowUpWithRiskGroups(panel, markers, forestOptions, options);
+    }
+
+    /// <summary>As <see cref="LockFollowUp(Panel, ReadOnlySpan{int}, ForestOptions, PanelLockOptions)"/>, with the discovery risk groups.</summary>
+    public static (LockedFollowUpPanel Panel, LockedFollowUpPerformance DiscoveryRiskGroups) LockFollowUpWithRiskGroups(Panel panel,
+        ReadOnlySpan<int> markerFeatures, ForestOptions forestOptions, PanelLockOptions options)
+    {
+        var (locked, risk) = LockFollowUpAndRisk(panel, markerFeatures, forestOptions, options);
+        return (locked, DiscoveryRiskGroups(panel, risk, locked.RiskGroupCut));
+    }
+
+    /// <summary>
+    /// The discovery samples split at the cut as <see cref="LockedFollowUpPanel.IsHighRisk"/>
+    /// splits a new cohort (high when the risk score is above it), each scored by the trees that
+    /// did not see it, so the curves are not flattered by in-bag fit: their Kaplan-Meier curves,
+    /// the log-rank test between them and Harrell's C of the scores
+    /// (<see cref="LockedPanelEvaluation.EvaluateFollowUp"/>). Samples without a score are left out.
+    /// </summary>
+    public static LockedFollowUpPerformance DiscoveryRiskGroups(Panel panel, ReadOnlySpan<double> riskScores, double cut)
+    {
+        ArgumentNullException.ThrowIfNull(panel);
+        var followUp = panel.FollowUp ?? throw new ArgumentException("Risk groups need follow-up times and events.");
+        if (riskScores.Length != panel.SampleCount) throw new ArgumentException("The risk scores must have one value per sample.");
+        var kept = new List<int>(riskScores.Length);
+        for (int s = 0; s < riskScores.Length; s++) if (!double.IsNaN(riskScores[s])) kept.Add(s);
+        var ids = new string[kept.Count];
+        var risk = new double[kept.Count];
+        var high = new bool[kept.Count];
+        var time = new double[kept.Count];
+        var events = new bool[kept.Count];
+        for (int i = 0; i < kept.Count; i++)
+        {
+            int s = kept[i];
+            (ids[i], risk[i], time[i], events[i]) = (panel.Matrix.SampleIds[s], riskScores[s], followUp.Times[s], followUp.Events[s]);
+            high[i] = risk[i] > cut;
+        }
+        return LockedPanelEvaluation.EvaluateFollowUp(new LockedFollowUpScores(ids, risk, high, cut, []), time, events, horizon: null);
     }
 
     /// <summary>The markers to keep (panel indices, in shortlist order) and the locked forest's options.</summary>
@@ -144,7 +189,12 @@ public static class PanelLocker
     /// samples, its out-of-bag Harrell's C, and the median of the out-of-bag risk scores as the
     /// cut between the low- and high-risk groups (so the cut is not tuned on samples a tree has seen).
     /// </summary>
-    public static LockedFollowUpPanel LockFollowUp(Panel panel, ReadOnlySpan<int> markerFeatures, ForestOptions forestOptions, PanelLockOptions options)
+    public static LockedFollowUpPanel LockFollowUp(Panel panel, ReadOnlySpan<int> markerFeatures, ForestOptions forestOptions, PanelLockOptions options) =>
+        LockFollowUpAndRisk(panel, markerFeatures, forestOptions, options).Panel;
+
+    /// <summary>The locked follow-up panel and the discovery risk scores its cut is the median of (out of bag, or in bag when no sample ever was).</summary>
+    private static (LockedFollowUpPanel Panel, double[] Risk) LockFollowUpAndRisk(Panel panel, ReadOnlySpan<int> markerFeatures, ForestOptions forestOptions,
+        PanelLockOptions options)
     {
         ArgumentNullException.ThrowIfNull(panel);
         ArgumentNullException.ThrowIfNull(forestOptions);
@@ -166,7 +216,8 @@ public static class PanelLocker
         // in-bag risk of every sample is then the only cut there is.
         if (sorted.Length == 0)
         {
-            sorted = forest.Risk(binned);
+            risk = forest.Risk(binned);
+            sorted = (double[])risk.Clone();
             Array.Sort(sorted);
         }
         double cut = Quantile.MedianOfSorted(sorted);
@@ -177,7 +228,7 @@ public static class PanelLocker
             concordance.Concordance, cut, outcome.EventCount,
             Provenance(forestOptions, options, matrix.FeatureCount, forest.TreeCount, panel.SampleCount));
         locked.Validate();
-        return locked;
+        return (locked, risk);
     }
 
     private static MarkerScale[] Scales(FeatureMatrix matrix)

@@ -52,6 +52,7 @@ internal sealed class MeasuredScreenOutcome(MeasuredOutcome outcome) : ScreenOut
         var summary = new ReferenceForestSummary(outOfBag.MeanSquaredError, [], null, outOfBag.ErrorCurve.ToArray())
         {
             OutOfBagRSquared = outOfBag.RSquared,
+            OutOfBagPredictions = outOfBag.Predictions.ToArray(),
         };
         return new ReferenceForest(summary, null);
     }
@@ -118,6 +119,9 @@ internal sealed class MeasuredScreenOutcome(MeasuredOutcome outcome) : ScreenOut
             total += (y - mean) * (y - mean);
         }
         double rSquared = total > 0 ? 1 - residual / total : double.NaN;
-        return new PanelScore(rSquared, residual / testRows.Length, predictions, []);
+        return new PanelScore(rSquared, residual / testRows.Length, predictions, [])
+        {
+            RootMeanSquaredError = Math.Sqrt(residual / testRows.Length),
+        };
     }
 }

@@ -7,4 +7,8 @@ namespace OmicsScreen.Screening.Screen;
 /// <param name="Error">Share of wrong majority votes, mean squared error, or 1 - C.</param>
 /// <param name="Predictions">Each test sample's probability of the positive class, predicted value, or risk score.</param>
 /// <param name="IsPositive">Each test sample's class against the positive one; empty for other outcome kinds.</param>
-internal sealed record PanelScore(double Score, double Error, double[] Predictions, bool[] IsPositive);
+internal sealed record PanelScore(double Score, double Error, double[] Predictions, bool[] IsPositive)
+{
+    /// <summary>Root mean squared error of the predictions on the test rows (measured outcome); NaN for other kinds.</summary>
+    public double RootMeanSquaredError { get; init; } = double.NaN;
+}

@@ -69,10 +69,8 @@ internal static class PanelSizeEstimator
         int limit = Math.Min(options.CurveMaxPanelSize, matrix.FeatureCount);
         var sizes = SizesFor(limit, shortlistLength);
         var selectionAware = new double[folds.Count, sizes.Length];
-        var selectionAwareError = new double[folds.Count, sizes.Length];
-        var optimistic = new double[folds.Count, sizes.Length];
-        var optimisticError = new double[folds.Count, sizes.Length];
         var selectionAwareScores = new PanelScore[folds.Count, sizes.Length];
+        var optimisticScores = new PanelScore[folds.Count, sizes.Length];
         var innerScreens = new InnerScreenResult[folds.Count];
         for (int i = 0; i < folds.Count; i++)
         {
@@ -86,8 +84,8 @@ internal static class PanelSizeEstimator
                 var aware = Score(context, innerOrder.AsSpan(0, sizes[s]), fold, RandomStreams.PanelScoring(innerSeed, s));
                 var flattered = Score(context, fullOrder.AsSpan(0, sizes[s]), fold, RandomStreams.PanelScoring(innerSeed, s));
                 selectionAwareScores[i, s] = aware;
-                (selectionAware[i, s], selectionAwareError[i, s]) = (aware.Score, aware.Error);
-                (optimistic[i, s], optimisticError[i, s]) = (flattered.Score, flattered.Error);
+                optimisticScores[i, s] = flattered;
+                selectionAware[i, s] = aware.Score;
             }
             context.Report(ScreenStage.PanelSizeCurve, i + 1, folds.Count);
         }
@@ -95,15 +93,14 @@ internal static class PanelSizeEstimator
         var points = new PanelSizePoint[sizes.Length];
         var means = new double[sizes.Length];
         var errors = new double[sizes.Length];
+        var awareColumn = new PanelScore[folds.Count];
+        var optimisticColumn = new PanelScore[folds.Count];
         for (int s = 0; s < sizes.Length; s++)
         {
-            var (hMean, hSd) = SampleMoments.OfColumn(selectionAware, s);
-            var (oMean, oSd) = SampleMoments.OfColumn(optimistic, s);
-            double se = hSd / Math.Sqrt(folds.Count);
-            points[s] = new PanelSizePoint(sizes[s], hMean, hSd, se, SampleMoments.OfColumn(selectionAwareError, s).Mean, oMean, oSd,
-                SampleMoments.OfColumn(optimisticError, s).Mean, folds.Count);
-            means[s] = hMean;
-            errors[s] = se;
+            for (int i = 0; i < folds.Count; i++) (awareColumn[i], optimisticColumn[i]) = (selectionAwareScores[i, s], optimisticScores[i, s]);
+            points[s] = Summarise(sizes[s], awareColumn, optimisticColumn);
+            means[s] = points[s].SelectionAwareAuc;
+            errors[s] = points[s].SelectionAwareAucStandardError;
         }
         int chosen = OneStandardErrorRule.Choose(sizes, means, errors, ScoreDirection.HigherIsBetter);
         int lockedSize = LockedSize(sizes, means, errors, Math.Min(shortlistLength, limit));
@@ -166,6 +163,32 @@ internal static class PanelSizeEstimator
             MeanFoldPanelSize = sizeSum / folds.Count,
             LockedOutOfFoldScores = binary ? outOfFoldScores.ToArray() : [],
             LockedOutOfFoldPositive = binary ? outOfFoldPositive.ToArray() : [],
+        };
+    }
+
+    /// <summary>
+    /// One size's point from its outer folds' held-out scores, in fold order: the mean and SD over
+    /// folds of the score, its standard error SD / sqrt(folds), and the means of the error and of
+    /// the root mean squared error (NaN for the kinds that have none).
+    /// </summary>
+    internal static PanelSizePoint Summarise(int panelSize, ReadOnlySpan<PanelScore> selectionAware, ReadOnlySpan<PanelScore> optimistic)
+    {
+        int foldCount = selectionAware.Length;
+        if (optimistic.Length != foldCount) throw new ArgumentException("Both estimates need one score per fold.");
+        var (awareScore, awareError, awareRmse) = (new double[foldCount], new double[foldCount], new double[foldCount]);
+        var (optimisticScore, optimisticError, optimisticRmse) = (new double[foldCount], new double[foldCount], new double[foldCount]);
+        for (int i = 0; i < foldCount; i++)
+        {
+            (awareScore[i], awareError[i], awareRmse[i]) = (selectionAware[i].Score, selectionAware[i].Error, selectionAware[i].RootMeanSquaredError);
+            (optimisticScore[i], optimisticError[i], optimisticRmse[i]) = (optimistic[i].Score, optimistic[i].Error, optimistic[i].RootMeanSquaredError);
+        }
+        var (awareMean, awareSd) = SampleMoments.Of(awareScore);
+        var (optimisticMean, optimisticSd) = SampleMoments.Of(optimisticScore);
+        return new PanelSizePoint(panelSize, awareMean, awareSd, awareSd / Math.Sqrt(foldCount), SampleMoments.Of(awareError).Mean,
+            optimisticMean, optimisticSd, SampleMoments.Of(optimisticError).Mean, foldCount)
+        {
+            SelectionAwareRootMeanSquaredError = SampleMoments.Of(awareRmse).Mean,
+            OptimisticRootMeanSquaredError = SampleMoments.Of(optimisticRmse).Mean,
         };
     }
 

@@ -19,4 +19,11 @@ public sealed record ReferenceForestSummary(
 
     /// <summary>Out-of-bag Harrell's C of a follow-up (risk = the forest's mortality); null for other kinds.</summary>
     public double? OutOfBagConcordance { get; init; }
+
+    /// <summary>
+    /// Each sample's out-of-bag prediction of a measured outcome, in panel order (the mean over the
+    /// trees that left it out; NaN where none did); empty for other kinds. The report plots it
+    /// against the observed values; a merge regrows this forest, so it needs no place in a part.
+    /// </summary>
+    public IReadOnlyList<double> OutOfBagPredictions { get; init; } = [];
 }

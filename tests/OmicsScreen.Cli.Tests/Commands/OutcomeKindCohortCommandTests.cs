@@ -144,5 +144,20 @@ public sealed class OutcomeKindCohortCommandTests : IDisposable
             Assert.True(first.AsSpan().SequenceEqual(File.ReadAllBytes(Path.Combine(two, table))), $"{table}: 1 and 2 threads differ");
             Assert.True(first.AsSpan().SequenceEqual(File.ReadAllBytes(Path.Combine(merged, table))), $"{table}: merged parts differ from one run");
         }
+        // The report's figures drawn from the forest on all samples are the same too (a merge grows it again).
+        string figure = kind == "time" ? "Discovery risk groups" : "Observed against out-of-bag predicted score";
+        string single = Svg(File.ReadAllText(Path.Combine(one, "report.html")), figure);
+        Assert.Equal(single, Svg(File.ReadAllText(Path.Combine(two, "report.html")), figure));
+        Assert.Equal(single, Svg(File.ReadAllText(Path.Combine(merged, "report.html")), figure));
+    }
+
+    /// <summary>The inline SVG whose title starts with <paramref name="title"/>.</summary>
+    private static string Svg(string html, string title)
+    {
+        int at = html.IndexOf("<title>" + title, StringComparison.Ordinal);
+        Assert.True(at >= 0, $"no figure titled '{title}' in the report");
+        int start = html.LastIndexOf("<svg", at, StringComparison.Ordinal);
+        int end = html.IndexOf("</svg>", at, StringComparison.Ordinal);
+        return html[start..end];
     }
 }

@@ -91,6 +91,7 @@ public sealed class OutcomeKindScreenCommandTests : IDisposable
         Assert.DoesNotContain("writes no panel file", report);
         Assert.Contains("The panel locked for", report);
         Assert.Contains(followUp ? "Survival by the top markers" : "The top markers against the outcome", report);
+        Assert.Contains(followUp ? "Discovery risk groups, log-rank p" : "Observed against out-of-bag predicted", report);
         Assert.Contains("not a diagnostic test", report);
         Assert.DoesNotContain("P001", report);
 
@@ -99,6 +100,14 @@ public sealed class OutcomeKindScreenCommandTests : IDisposable
         Assert.Equal(followUp ? "time_to_event" : "measured", panel.GetProperty("outcome_kind").GetString());
         Assert.False(panel.TryGetProperty("classes", out _));
         Assert.Equal(5, manifest.RootElement.GetProperty("parameters").GetProperty("min_leaf").GetInt32());
+
+        // A measured outcome's curve gives the held-out RMSE beside R², in the table, the manifest and the report.
+        var curveHeader = File.ReadAllLines(Path.Combine(output, "panel_size_curve.tsv"))[0].Split('\t');
+        var results = manifest.RootElement.GetProperty("results");
+        Assert.Equal(!followUp, curveHeader.Contains("selection_aware_rmse"));
+        Assert.Equal(!followUp, curveHeader.Contains("optimistic_rmse"));
+        Assert.Equal(!followUp, results.TryGetProperty("recommended_panel_size_selection_aware_rmse", out _));
+        Assert.Equal(!followUp, report.Contains("Selection-aware RMSE", StringComparison.Ordinal));
     }
 
     [Fact]

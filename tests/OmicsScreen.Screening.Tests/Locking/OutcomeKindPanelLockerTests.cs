@@ -3,6 +3,7 @@ using OmicsScreen.Engine.Panels;
 using OmicsScreen.Engine.Regression;
 using OmicsScreen.Engine.Survival;
 using OmicsScreen.Screening.Locking;
+using OmicsScreen.Screening.Statistics.Survival;
 using OmicsScreen.TestSupport;
 
 namespace OmicsScreen.Screening.Tests.Locking;
@@ -74,6 +75,49 @@ public class OutcomeKindPanelLockerTests
         var performance = LockedPanelEvaluation.EvaluateFollowUp(scores, test.FollowUp!.Times, test.FollowUp.Events, null);
         Assert.InRange(performance.Concordance.Concordance, 0.6, 1.0);
         Assert.Equal(scores.RiskScores.Count(r => r > locked.RiskGroupCut), scores.HighRiskCount);
+    }
+
+    /// <summary>
+    /// The discovery risk groups the screen report draws: each discovery sample placed by the
+    /// forest's out-of-bag risk against the cut (high above it, as apply places new samples), each
+    /// group's Kaplan-Meier curve the engine's estimator (KaplanMeier, checked against R's survival
+    /// package in SurvivalStatisticsTests) and the log-rank p the existing LogRankTest routine's.
+    /// </summary>
+    [Fact]
+    public void The_discovery_risk_groups_are_the_out_of_bag_halves_with_their_Kaplan_Meier_curves_and_log_rank_test()
+    {
+        var (train, _) = OutcomeKindLockedPanels.Survival();
+        int[] markers = [0, 1, 2];
+        var (locked, groups) = PanelLocker.LockFollowUpWithRiskGroups(train, markers, OutcomeKindLockedPanels.ForestOptions(), Options);
+
+        var binned = new Engine.Binning.BinMapper().Bin(train.Matrix.SelectFeatures(markers));
+        var forest = SurvivalForestTrainer.Train(binned, train.FollowUp!.FollowUp, OutcomeKindLockedPanels.ForestOptions());
+        var risk = forest.OutOfBagRisk();
+        var kept = Enumerable.Range(0, risk.Length).Where(s => !double.IsNaN(risk[s])).ToArray();
+        var time = kept.Select(s => train.FollowUp.Times[s]).ToArray();
+        var events = kept.Select(s => train.FollowUp.Events[s]).ToArray();
+        var high = kept.Select(s => risk[s] > locked.RiskGroupCut).ToArray();
+
+        Assert.Equal(kept.Length, groups.SampleCount);
+        Assert.Equal(high.Count(h => h), groups.HighRiskCount);
+        // The median cut puts half the scored samples on each side (ties aside).
+        Assert.InRange(groups.HighRiskCount, kept.Length / 2 - 1, kept.Length / 2 + 1);
+        var expectedHigh = KaplanMeier.Estimate(time.Where((_, i) => high[i]).ToArray(), events.Where((_, i) => high[i]).ToArray());
+        var expectedLow = KaplanMeier.Estimate(time.Where((_, i) => !high[i]).ToArray(), events.Where((_, i) => !high[i]).ToArray());
+        Assert.Equal(expectedHigh.Time, groups.HighRisk!.Time);
+        Assert.Equal(expectedHigh.Survival, groups.HighRisk.Survival);
+        Assert.Equal(expectedLow.Time, groups.LowRisk!.Time);
+        Assert.Equal(expectedLow.Survival, groups.LowRisk.Survival);
+        var logRank = LogRankTest.TwoGroups(time, events, high);
+        var drawn = groups.LogRank!.Value;
+        Assert.Equal(logRank.PValue, drawn.PValue);
+        Assert.Equal(logRank.ChiSquare, drawn.ChiSquare);
+        // Harrell's C of the out-of-bag scores is the panel's out-of-bag concordance.
+        Assert.Equal(locked.OutOfBagConcordance, groups.Concordance.Concordance, 12);
+        // The prognostic markers separate the halves (hazard ratio about e^1.2 between them by design).
+        Assert.True(drawn.PValue < 0.01, $"log-rank p {drawn.PValue}");
+        // Locking with the groups locks the same panel.
+        Assert.Equal(locked.RiskGroupCut, PanelLocker.LockFollowUp(train, markers, OutcomeKindLockedPanels.ForestOptions(), Options).RiskGroupCut);
     }
 
     [Fact]
