@@ -14,7 +14,10 @@ namespace OmicsScreen.Screening.Importance;
 /// <see cref="MinimumExceedances"/> decoys reach x, that count says little, so the p-value comes
 /// from a generalized Pareto tail fitted to the largest decoys instead (Knijnenburg et al. 2009):
 /// p(x) = (tail share) x P(Y &gt; x - threshold). This gives q-values the resolution to rank a list
-/// when features outnumber decoys. Below <see cref="MinimumTailFitCount"/> decoys no tail is fitted
+/// when features outnumber decoys. P(Y &gt; y) is the fitted tail's one-sided 80% upper bound
+/// (<see cref="GeneralizedParetoTailBound"/>), not its point value: carried past the largest decoys,
+/// the point value came out too small often enough that null panels got lists in up to 19% of
+/// runs at a false discovery rate of 0.10 (README, "How well the error control holds"). Below <see cref="MinimumTailFitCount"/> decoys no tail is fitted
 /// and the plain Monte Carlo p-value is used throughout.
 /// </remarks>
 public static class DecoyNull
@@ -53,15 +56,15 @@ public static class DecoyNull
 
         // The tail: the top tailCount decoys above a threshold halfway between the tailCount-th and
         // the next largest value (Knijnenburg et al. 2009).
-        GeneralizedParetoTail? tail = null;
+        GeneralizedParetoTailBound? tail = null;
         double threshold = double.PositiveInfinity;
         int tailCount = Math.Min(MaximumTailCount, decoyCount / 4);
-        if (decoyCount >= MinimumTailFitCount && tailCount >= 3)
+        if (decoyCount >= MinimumTailFitCount && tailCount >= 4)
         {
             threshold = 0.5 * (ascending[decoyCount - tailCount] + ascending[decoyCount - tailCount - 1]);
             var exceedances = new double[tailCount];
             for (int i = 0; i < tailCount; i++) exceedances[i] = ascending[decoyCount - tailCount + i] - threshold;
-            tail = GeneralizedParetoTail.Fit(exceedances);
+            tail = GeneralizedParetoTailBound.Fit(exceedances);
         }
 
         for (int i = 0; i < scored.Length; i++)
@@ -77,7 +80,7 @@ public static class DecoyNull
             int others = leaveSelfOut ? decoyCount - 1 : decoyCount;
             double monteCarlo = (1.0 + atOrAbove) / (1.0 + others);
             if (tail is not null && atOrAbove < MinimumExceedances && value > threshold)
-                pValues[i] = Math.Min(monteCarlo, (double)tailCount / (1 + others) * tail.Survival(value - threshold));
+                pValues[i] = Math.Min(monteCarlo, (double)tailCount / (1 + others) * tail.UpperSurvival(value - threshold));
             else pValues[i] = monteCarlo;
         }
         return pValues;

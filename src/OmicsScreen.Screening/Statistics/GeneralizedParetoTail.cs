@@ -31,8 +31,12 @@ public sealed record GeneralizedParetoTail(double Scale, double Shape)
             // of the sample lies above it (Landwehr, Matalas & Wallis 1979).
             a1 += sorted[i] * (count - 1 - i) / (count - 1);
         }
-        a0 /= count;
-        a1 /= count;
+        return FromMoments(a0 / count, a1 / count);
+    }
+
+    /// <summary>The fit from the two probability-weighted moments a0 = E[Y] and a1 = E[Y(1 - F(Y))].</summary>
+    internal static GeneralizedParetoTail FromMoments(double a0, double a1)
+    {
         double denominator = a0 - 2 * a1;
         double shape = denominator > 0 ? 2 - a0 / denominator : double.PositiveInfinity;
         if (!(shape > 0) || double.IsInfinity(shape) || a0 <= 0)
@@ -40,6 +44,13 @@ public sealed record GeneralizedParetoTail(double Scale, double Shape)
         // A shape of 1 or more has no mean; cap it below 1 so the moment fit stays defined.
         shape = Math.Min(shape, 0.9);
         return new GeneralizedParetoTail(a0 * (1 - shape), shape);
+    }
+
+    /// <summary>ln P(Y &gt; y) for an exceedance y (0 for y &lt;= 0), exact where P underflows.</summary>
+    public double LogSurvival(double exceedance)
+    {
+        if (exceedance <= 0) return 0;
+        return Shape == 0 ? -exceedance / Scale : -Math.Log(1 + Shape * exceedance / Scale) / Shape;
     }
 
     /// <summary>P(Y &gt; y) for an exceedance y (1 for y &lt;= 0).</summary>

@@ -12,6 +12,10 @@ exact p-values a non-empty list has probability about 0.10 (Benjamini & Hochberg
 needs p <= 1e-4 at 1,000 features, ten times past the decoys' resolution, so the answer rests on
 the extrapolation.
 
+Two rules are compared: the fitted tail's point value (the rule before 2026-12-05) and its one-sided
+80% upper bound, the fitted log tail probability plus 0.8416 jackknife standard errors from the fits
+that leave out one exceedance (Efron & Stein 1981; GeneralizedParetoTailBound.cs), the rule since.
+
 Usage: /usr/bin/python3 decoy_tail_simulation.py [panels]   (prints one line per law and D)
 """
 import sys
@@ -43,16 +47,39 @@ def survival(y, scale, shape):
     return np.exp(-y / scale) if shape == 0 else (1 + shape * y / scale) ** (-1 / shape)
 
 
-def p_values(decoys, scored):
+ONE_SIDED_Z = 0.8416212335729143
+
+
+def log_survival(y, scale, shape):
+    y = np.maximum(y, 0)
+    return -y / scale if shape == 0 else -np.log1p(shape * y / scale) / shape
+
+
+def upper_survival(exceedances, y):
+    """The fit's log tail probability plus z jackknife standard errors, exponentiated."""
+    n = len(exceedances)
+    full = log_survival(y, *fit_tail(exceedances))
+    leave_one_out = np.array([log_survival(y, *fit_tail(np.delete(exceedances, i))) for i in range(n)])
+    se = np.sqrt((n - 1) / n * np.sum((leave_one_out - leave_one_out.mean(axis=0)) ** 2, axis=0))
+    return np.minimum(1.0, np.exp(full + ONE_SIDED_Z * se))
+
+
+def p_values(decoys, scored, bound=False):
     d = len(decoys)
     ascending = np.sort(decoys)
     tail_count = min(MAXIMUM_TAIL, d // 4)
     threshold = 0.5 * (ascending[d - tail_count] + ascending[d - tail_count - 1])
-    scale, shape = fit_tail(ascending[d - tail_count:] - threshold)
+    exceedances = ascending[d - tail_count:] - threshold
+    scale, shape = fit_tail(exceedances)
     at_or_above = d - np.searchsorted(ascending, scored, side="left")
     monte_carlo = (1 + at_or_above) / (1 + d)
-    tail = tail_count / (1 + d) * survival(scored - threshold, scale, shape)
     use_tail = (at_or_above < MINIMUM_EXCEEDANCES) & (scored > threshold)
+    if bound:
+        tail = np.ones_like(monte_carlo)
+        if use_tail.any():
+            tail[use_tail] = tail_count / (1 + d) * upper_survival(exceedances, scored[use_tail] - threshold)
+        return np.where(use_tail, np.minimum(monte_carlo, tail), monte_carlo)
+    tail = tail_count / (1 + d) * survival(scored - threshold, scale, shape)
     return np.where(use_tail, np.minimum(monte_carlo, tail), monte_carlo)
 
 
@@ -76,15 +103,18 @@ LAWS = {
 def main():
     panels = int(sys.argv[1]) if len(sys.argv) > 1 else 2000
     rng = np.random.default_rng(20261205)
-    print("law\tdecoys\tpanels\tnon-empty share\tshare of p <= 1e-4")
+    print("law\tdecoys\tpanels\tnon-empty share (fit)\tnon-empty share (80% bound)\tshare of p <= 1e-4 (fit, bound)")
     for name, draw in LAWS.items():
         for decoys in (1000, 5000):
-            non_empty, small = 0, 0
+            non_empty, small = [0, 0], [0, 0]
             for _ in range(panels):
-                p = p_values(draw(rng, decoys), draw(rng, FEATURES))
-                non_empty += bh_non_empty(p)
-                small += int(np.sum(p <= 1e-4))
-            print(f"{name}\t{decoys}\t{panels}\t{non_empty / panels:.3f}\t{small / panels / FEATURES:.6f}")
+                decoy_values, features = draw(rng, decoys), draw(rng, FEATURES)
+                for k, bound in enumerate((False, True)):
+                    p = p_values(decoy_values, features, bound)
+                    non_empty[k] += bh_non_empty(p)
+                    small[k] += int(np.sum(p <= 1e-4))
+            print(f"{name}\t{decoys}\t{panels}\t{non_empty[0] / panels:.3f}\t{non_empty[1] / panels:.3f}\t"
+                  f"{small[0] / panels / FEATURES:.6f}, {small[1] / panels / FEATURES:.6f}")
 
 
 if __name__ == "__main__":

@@ -21,11 +21,14 @@ public sealed class DecoyNullTests
     public void Beyond_the_largest_decoys_the_fitted_tail_gives_smaller_p_values_that_keep_falling()
     {
         // 2,000 exponential decoys (the -ln of a uniform p-value): the tail is exponential with
-        // scale 1, so P(X >= 12) is exp(-12) = 6.1e-6, far below the count's floor of 1/2001.
+        // scale 1, so P(X >= 12) is exp(-12) = 6.1e-6, far below the count's floor of 1/2001. The
+        // p-value is the tail's 80% upper bound (GeneralizedParetoTailBound): at or above the truth,
+        // and here, ten scales past the threshold, about 7 times it (the shape's uncertainty grows
+        // with the square of the distance carried).
         var decoys = Enumerable.Range(0, 2000).Select(i => -Math.Log(1 - (i + 0.5) / 2000)).ToArray();
         var p = DecoyNull.PValues(decoys, [9, 12, 15]);
         Assert.True(p[0] > p[1] && p[1] > p[2]);
-        Assert.InRange(p[1], Math.Exp(-12) / 2, Math.Exp(-12) * 2);
+        Assert.InRange(p[1], Math.Exp(-12), Math.Exp(-12) * 10);
         Assert.True(p[0] < 1.0 / 2001);
     }
 
