@@ -1,3 +1,4 @@
+using OmicsScreen.TestSupport;
 using System.Globalization;
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Panels;
@@ -25,23 +26,9 @@ public sealed class OutcomeKindFigureTests
     /// <summary>40 features around 5 (SD 1); y = z0 + 0.8 z1 + N(0, 1), so the forest explains part of y.</summary>
     internal static Panel MeasuredPanel(int samples = 90, int features = 40, ulong seed = 23)
     {
-        var generator = SeedSchedule.Generator(seed, 0, 0, SeedPurpose.Sampling);
-        var columns = new float[features][];
-        var z = new double[features][];
-        for (int f = 0; f < features; f++)
-        {
-            columns[f] = new float[samples];
-            z[f] = new double[samples];
-            for (int s = 0; s < samples; s++)
-            {
-                z[f][s] = generator.NextGaussian();
-                columns[f][s] = (float)(5 + z[f][s]);
-            }
-        }
+        var (matrix, z, generator) = StandardNormalFeatures.Draw(samples, features, seed, s => $"QX{s:D4}");
         var y = new double[samples];
         for (int s = 0; s < samples; s++) y[s] = z[0][s] + 0.8 * z[1][s] + generator.NextGaussian();
-        var matrix = new FeatureMatrix(Enumerable.Range(0, features).Select(f => $"SIM{f:D3}").ToArray(),
-            Enumerable.Range(0, samples).Select(s => $"QX{s:D4}").ToArray(), columns, new CellState[]?[features]);
         return new Panel(matrix, new MeasuredOutcome("score", y));
     }
 
@@ -130,19 +117,7 @@ public sealed class OutcomeKindFigureTests
     /// <summary>Invented follow-up: exponential event times with log hazard 0.9 z0 + 0.6 z1, exponential censoring (about a third censored).</summary>
     internal static Panel FollowUpPanel(int samples = 120, int features = 30, ulong seed = 29)
     {
-        var generator = SeedSchedule.Generator(seed, 0, 0, SeedPurpose.Sampling);
-        var columns = new float[features][];
-        var z = new double[features][];
-        for (int f = 0; f < features; f++)
-        {
-            columns[f] = new float[samples];
-            z[f] = new double[samples];
-            for (int s = 0; s < samples; s++)
-            {
-                z[f][s] = generator.NextGaussian();
-                columns[f][s] = (float)(5 + z[f][s]);
-            }
-        }
+        var (matrix, z, generator) = StandardNormalFeatures.Draw(samples, features, seed, s => $"QX{s:D4}");
         var times = new double[samples];
         var events = new bool[samples];
         for (int s = 0; s < samples; s++)
@@ -152,8 +127,6 @@ public sealed class OutcomeKindFigureTests
             times[s] = Math.Min(eventTime, censorTime);
             events[s] = eventTime <= censorTime;
         }
-        var matrix = new FeatureMatrix(Enumerable.Range(0, features).Select(f => $"SIM{f:D3}").ToArray(),
-            Enumerable.Range(0, samples).Select(s => $"QX{s:D4}").ToArray(), columns, new CellState[]?[features]);
         return new Panel(matrix, new FollowUpOutcome("months", "relapse", times, events));
     }
 

@@ -1,3 +1,4 @@
+using OmicsScreen.TestSupport;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Engine.Randomness;
 using OmicsScreen.Screening.Resampling;
@@ -28,22 +29,8 @@ public class OutcomeKindScreenTests
     /// </summary>
     private static (FeatureMatrix Matrix, double[][] Standardised) Features(int samples, int features, ulong seed)
     {
-        var generator = SeedSchedule.Generator(seed, 0, 0, SeedPurpose.Sampling);
-        var columns = new float[features][];
-        var z = new double[features][];
-        for (int f = 0; f < features; f++)
-        {
-            columns[f] = new float[samples];
-            z[f] = new double[samples];
-            for (int s = 0; s < samples; s++)
-            {
-                z[f][s] = generator.NextGaussian();
-                columns[f][s] = (float)(5 + z[f][s]);
-            }
-        }
-        var names = Enumerable.Range(0, features).Select(f => $"SIM{f:D3}").ToArray();
-        var ids = Enumerable.Range(0, samples).Select(s => $"S{s:D3}").ToArray();
-        return (new FeatureMatrix(names, ids, columns, new CellState[]?[features]), z);
+        var (matrix, z, _) = StandardNormalFeatures.Draw(samples, features, seed, s => $"S{s:D3}");
+        return (matrix, z);
     }
 
     private static Panel MeasuredPanel(int samples, int features, ulong seed, bool planted)

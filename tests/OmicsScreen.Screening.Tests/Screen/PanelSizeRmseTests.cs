@@ -1,3 +1,4 @@
+using OmicsScreen.TestSupport;
 using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Engine.Randomness;
@@ -17,23 +18,9 @@ public sealed class PanelSizeRmseTests
     /// <summary>Invented panel: 30 features around 5 (SD 1), y = 1.2 z0 + 0.7 z1 + N(0, 1).</summary>
     private static Panel MeasuredPanel(int samples = 120, int features = 30, ulong seed = 61)
     {
-        var generator = SeedSchedule.Generator(seed, 0, 0, SeedPurpose.Sampling);
-        var columns = new float[features][];
-        var z = new double[features][];
-        for (int f = 0; f < features; f++)
-        {
-            columns[f] = new float[samples];
-            z[f] = new double[samples];
-            for (int s = 0; s < samples; s++)
-            {
-                z[f][s] = generator.NextGaussian();
-                columns[f][s] = (float)(5 + z[f][s]);
-            }
-        }
+        var (matrix, z, generator) = StandardNormalFeatures.Draw(samples, features, seed, s => $"QR{s:D4}");
         var y = new double[samples];
         for (int s = 0; s < samples; s++) y[s] = 1.2 * z[0][s] + 0.7 * z[1][s] + generator.NextGaussian();
-        var matrix = new FeatureMatrix(Enumerable.Range(0, features).Select(f => $"SIM{f:D3}").ToArray(),
-            Enumerable.Range(0, samples).Select(s => $"QR{s:D4}").ToArray(), columns, new CellState[]?[features]);
         return new Panel(matrix, new MeasuredOutcome("score", y));
     }
 
