@@ -63,13 +63,19 @@ public static class ApplyReport
 
         if (performance is not null) AddPerformance(html, model, performance);
 
+        AddScaleCheck(html, scores.Warnings.Select(w => w.Message).ToList());
+        return html.EndDocument();
+    }
+
+    /// <summary>The scale check of every apply report: the markers that look measured on another scale, or a line saying none does.</summary>
+    internal static void AddScaleCheck(HtmlBuilder html, IReadOnlyList<string> warnings)
+    {
         html.BeginSection("Scale check");
-        if (scores.Warnings.Count == 0)
+        if (warnings.Count == 0)
             html.Paragraph("Every marker's median and spread are within the discovery range (median inside discovery Q1 - 3 IQR to Q3 + 3 IQR, IQR within a factor of 4).");
         else
-            html.BulletList(scores.Warnings.Select(w => w.Message));
+            html.BulletList(warnings);
         html.EndSection();
-        return html.EndDocument();
     }
 
     private static void AddPerformance(HtmlBuilder html, LockedPanel model, LockedPanelPerformance performance)

@@ -55,12 +55,7 @@ public static class MeasuredApplyReport
 
         if (performance is not null) AddPerformance(html, model, performance);
 
-        html.BeginSection("Scale check");
-        if (scores.Warnings.Count == 0)
-            html.Paragraph("Every marker's median and spread are within the discovery range (median inside discovery Q1 - 3 IQR to Q3 + 3 IQR, IQR within a factor of 4).");
-        else
-            html.BulletList(scores.Warnings.Select(w => w.Message));
-        html.EndSection();
+        ApplyReport.AddScaleCheck(html, scores.Warnings.Select(w => w.Message).ToList());
         return html.EndDocument();
     }
 
