@@ -15,7 +15,19 @@ internal abstract class ApplyKind<TModel, TKnown, TScores, TPerformance>
     where TKnown : class
     where TPerformance : class
 {
-    protected ApplyKind(TModel model) => Model = model;
+    private readonly Func<TModel, TScores, TPerformance?, string, bool, IReadOnlyList<string>, IReadOnlyDictionary<string, string>, string> _page;
+    private readonly Func<string, IReadOnlyList<string>, IReadOnlyDictionary<string, string>, TModel, TScores, TPerformance?, AppliedPanel> _result;
+
+    /// <param name="page">The kind's page: (panel, scores, performance, matrix path, show sample ids, discovery overlap, display names) to HTML.</param>
+    /// <param name="result">The kind's record of what was applied: (folder, discovery overlap, display names, panel, scores, performance).</param>
+    protected ApplyKind(TModel model,
+        Func<TModel, TScores, TPerformance?, string, bool, IReadOnlyList<string>, IReadOnlyDictionary<string, string>, string> page,
+        Func<string, IReadOnlyList<string>, IReadOnlyDictionary<string, string>, TModel, TScores, TPerformance?, AppliedPanel> result)
+    {
+        Model = model;
+        _page = page;
+        _result = result;
+    }
 
     public TModel Model { get; }
 
@@ -43,9 +55,11 @@ internal abstract class ApplyKind<TModel, TKnown, TScores, TPerformance>
     /// <summary>Writes the scores table, and with the outcome known the evaluation and the kind's other tables.</summary>
     public abstract void WriteTables(ResultsFolder folder, TScores scores, TKnown? known, TPerformance? performance, IReadOnlyList<string> discoveryOverlap);
 
-    public abstract string Report(ApplyRequest request, TScores scores, TPerformance? performance, IReadOnlyList<string> discoveryOverlap,
-        IReadOnlyDictionary<string, string> displayNames);
+    public string Report(ApplyRequest request, TScores scores, TPerformance? performance, IReadOnlyList<string> discoveryOverlap,
+        IReadOnlyDictionary<string, string> displayNames) =>
+        _page(Model, scores, performance, request.MatrixPath, request.ShowSampleIds, discoveryOverlap, displayNames);
 
-    public abstract AppliedPanel Result(string folder, IReadOnlyList<string> discoveryOverlap, IReadOnlyDictionary<string, string> displayNames,
-        TScores scores, TPerformance? performance);
+    public AppliedPanel Result(string folder, IReadOnlyList<string> discoveryOverlap, IReadOnlyDictionary<string, string> displayNames,
+        TScores scores, TPerformance? performance) =>
+        _result(folder, discoveryOverlap, displayNames, Model, scores, performance);
 }

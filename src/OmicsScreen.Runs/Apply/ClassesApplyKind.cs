@@ -9,7 +9,8 @@ namespace OmicsScreen.Runs.Apply;
 
 /// <summary>`apply` with a panel locked on classes: class probabilities and calls, and with the classes known the AUC, error, calibration and confusion.</summary>
 internal sealed class ClassesApplyKind(LockedPanel model)
-    : ApplyKind<LockedPanel, ClassOutcome, LockedPanelScores, LockedPanelPerformance>(model)
+    : ApplyKind<LockedPanel, ClassOutcome, LockedPanelScores, LockedPanelPerformance>(model, ApplyReport.Build,
+        (folder, overlap, names, panel, scores, performance) => new ClassesApplied(folder, overlap, names, panel, scores, performance))
 {
     public override OutcomeKind Kind => OutcomeKind.Classes;
 
@@ -42,14 +43,6 @@ internal sealed class ClassesApplyKind(LockedPanel model)
         folder.WriteText(ApplyResultFiles.Calibration, w => ApplyTables.WriteCalibration(w, performance));
         folder.WriteText(ApplyResultFiles.Confusion, w => ApplyTables.WriteConfusion(w, performance));
     }
-
-    public override string Report(ApplyRequest request, LockedPanelScores scores, LockedPanelPerformance? performance,
-        IReadOnlyList<string> discoveryOverlap, IReadOnlyDictionary<string, string> displayNames) =>
-        ApplyReport.Build(Model, scores, performance, request.MatrixPath, request.ShowSampleIds, discoveryOverlap, displayNames);
-
-    public override AppliedPanel Result(string folder, IReadOnlyList<string> discoveryOverlap, IReadOnlyDictionary<string, string> displayNames,
-        LockedPanelScores scores, LockedPanelPerformance? performance) =>
-        new ClassesApplied(folder, discoveryOverlap, displayNames, Model, scores, performance);
 
     private static string[] KnownClassNames(ClassOutcome outcome)
     {

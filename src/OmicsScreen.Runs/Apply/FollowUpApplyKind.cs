@@ -13,7 +13,8 @@ namespace OmicsScreen.Runs.Apply;
 /// known Harrell's C, the time-dependent AUC at --horizon and the risk groups' survival.
 /// </summary>
 internal sealed class FollowUpApplyKind(LockedFollowUpPanel model)
-    : ApplyKind<LockedFollowUpPanel, FollowUpOutcome, LockedFollowUpScores, LockedFollowUpPerformance>(model)
+    : ApplyKind<LockedFollowUpPanel, FollowUpOutcome, LockedFollowUpScores, LockedFollowUpPerformance>(model, FollowUpApplyReport.Build,
+        (folder, overlap, names, panel, scores, performance) => new FollowUpApplied(folder, overlap, names, panel, scores, performance))
 {
     public override OutcomeKind Kind => OutcomeKind.TimeToEvent;
 
@@ -45,12 +46,4 @@ internal sealed class FollowUpApplyKind(LockedFollowUpPanel model)
         folder.WriteText(ApplyResultFiles.Evaluation, w => ManifestJson.Write(w, ApplyFollowUpEvaluation.Of(Model, scores, performance, discoveryOverlap)));
         folder.WriteText(ApplyResultFiles.RiskGroups, w => ApplyTables.WriteRiskGroupCurves(w, performance));
     }
-
-    public override string Report(ApplyRequest request, LockedFollowUpScores scores, LockedFollowUpPerformance? performance,
-        IReadOnlyList<string> discoveryOverlap, IReadOnlyDictionary<string, string> displayNames) =>
-        FollowUpApplyReport.Build(Model, scores, performance, request.MatrixPath, request.ShowSampleIds, discoveryOverlap, displayNames);
-
-    public override AppliedPanel Result(string folder, IReadOnlyList<string> discoveryOverlap, IReadOnlyDictionary<string, string> displayNames,
-        LockedFollowUpScores scores, LockedFollowUpPerformance? performance) =>
-        new FollowUpApplied(folder, discoveryOverlap, displayNames, Model, scores, performance);
 }

@@ -9,7 +9,8 @@ namespace OmicsScreen.Runs.Apply;
 
 /// <summary>`apply` with a panel locked on a measured outcome: predictions, and with the outcome known R², RMSE and the calibration line.</summary>
 internal sealed class MeasuredApplyKind(LockedMeasuredPanel model)
-    : ApplyKind<LockedMeasuredPanel, double[], LockedMeasuredScores, LockedMeasuredPerformance>(model)
+    : ApplyKind<LockedMeasuredPanel, double[], LockedMeasuredScores, LockedMeasuredPerformance>(model, MeasuredApplyReport.Build,
+        (folder, overlap, names, panel, scores, performance) => new MeasuredApplied(folder, overlap, names, panel, scores, performance))
 {
     public override OutcomeKind Kind => OutcomeKind.Measured;
 
@@ -34,12 +35,4 @@ internal sealed class MeasuredApplyKind(LockedMeasuredPanel model)
         folder.WriteText(ApplyResultFiles.Evaluation, w => ManifestJson.Write(w, ApplyMeasuredEvaluation.Of(Model, scores, performance, discoveryOverlap)));
         folder.WriteText(ApplyResultFiles.Calibration, w => ApplyTables.WriteMeasuredCalibration(w, performance));
     }
-
-    public override string Report(ApplyRequest request, LockedMeasuredScores scores, LockedMeasuredPerformance? performance,
-        IReadOnlyList<string> discoveryOverlap, IReadOnlyDictionary<string, string> displayNames) =>
-        MeasuredApplyReport.Build(Model, scores, performance, request.MatrixPath, request.ShowSampleIds, discoveryOverlap, displayNames);
-
-    public override AppliedPanel Result(string folder, IReadOnlyList<string> discoveryOverlap, IReadOnlyDictionary<string, string> displayNames,
-        LockedMeasuredScores scores, LockedMeasuredPerformance? performance) =>
-        new MeasuredApplied(folder, discoveryOverlap, displayNames, Model, scores, performance);
 }
