@@ -2,6 +2,7 @@ using System.CommandLine;
 using OmicsScreen.Cli.Console;
 using OmicsScreen.Cli.Help;
 using OmicsScreen.Data;
+using OmicsScreen.Runs.Apply;
 
 namespace OmicsScreen.Cli.Commands;
 
@@ -91,27 +92,30 @@ public sealed class ApplyCommand : Command, IHelpLayout
         Options.Add(Json);
         SetAction(parse => CommandRunner.Run(console, () => ApplyRun.Execute(console, new ApplyRunOptions
         {
-            ModelPath = parse.GetValue(Model)!,
-            MatrixPath = parse.GetValue(Input.Panel)!,
-            SampleSheetPath = parse.GetValue(Input.SampleSheet),
-            OutcomeColumn = parse.GetValue(Outcome),
-            FollowUpColumn = parse.GetValue(Input.FollowUp),
-            EventColumn = parse.GetValue(Input.Event),
-            Horizon = parse.GetValue(Horizon),
-            SampleIdColumn = parse.GetValue(Input.SampleIdColumn),
-            AnnotationColumns = parse.GetValue(Input.Annotations) ?? [],
-            Layout = Input.LayoutOf(parse),
-            FeatureColumns = parse.GetValue(Input.FeatureColumns) is { Length: > 0 } describing ? describing : null,
-            ValueColumn = parse.GetValue(Input.ValueColumn),
-            DetectionLimitColumn = parse.GetValue(Input.DetectionLimit),
-            BelowDetectionFlagColumn = parse.GetValue(Input.BelowDetectionFlag),
-            QualityFlagColumn = parse.GetValue(Input.QualityFlag),
-            DropUnmatchedSamples = parse.GetValue(Input.DropUnmatched),
-            OutputFolder = parse.GetValue(Out)!,
-            Force = parse.GetValue(Force),
-            ShowSampleIds = parse.GetValue(ShowSampleIds),
+            Request = new ApplyRequest
+            {
+                ModelPath = parse.GetValue(Model)!,
+                MatrixPath = parse.GetValue(Input.Panel)!,
+                SampleSheetPath = parse.GetValue(Input.SampleSheet),
+                OutcomeColumn = parse.GetValue(Outcome),
+                FollowUpColumn = parse.GetValue(Input.FollowUp),
+                EventColumn = parse.GetValue(Input.Event),
+                Horizon = parse.GetValue(Horizon),
+                SampleIdColumn = parse.GetValue(Input.SampleIdColumn),
+                AnnotationColumns = parse.GetValue(Input.Annotations) ?? [],
+                Layout = Input.LayoutOf(parse),
+                FeatureColumns = parse.GetValue(Input.FeatureColumns) is { Length: > 0 } describing ? describing : null,
+                ValueColumn = parse.GetValue(Input.ValueColumn),
+                DetectionLimitColumn = parse.GetValue(Input.DetectionLimit),
+                BelowDetectionFlagColumn = parse.GetValue(Input.BelowDetectionFlag),
+                QualityFlagColumn = parse.GetValue(Input.QualityFlag),
+                DropUnmatchedSamples = parse.GetValue(Input.DropUnmatched),
+                OutputFolder = parse.GetValue(Out)!,
+                Force = parse.GetValue(Force),
+                ShowSampleIds = parse.GetValue(ShowSampleIds),
+                CommandLine = ["omicsscreen", .. parse.Tokens.Select(t => t.Value)],
+            },
             Json = parse.GetValue(Json),
-            CommandLine = ["omicsscreen", .. parse.Tokens.Select(t => t.Value)],
         })));
     }
 }

@@ -1,171 +1,45 @@
 using System.Globalization;
 using OmicsScreen.Cli.Console;
-using OmicsScreen.Data;
-using OmicsScreen.Engine.Panels;
 using OmicsScreen.Reporting.Json;
-using OmicsScreen.Reporting.Manifests;
-using OmicsScreen.Runs;
 using OmicsScreen.Runs.Apply;
 using OmicsScreen.Runs.Locking;
-using OmicsScreen.Runs.Output;
-using OmicsScreen.Runs.Results;
-using OmicsScreen.Screening.Locking;
 
 namespace OmicsScreen.Cli.Commands;
 
-/// <summary>Reads a locked panel and a new cohort, scores it, evaluates it when the outcome is known, and writes the results folder.</summary>
+/// <summary>`apply` on the console: the job (<see cref="ApplyJob"/>), then its warnings and the summary or --json headline of the panel's kind.</summary>
 internal static class ApplyRun
 {
     public static int Execute(CliConsole console, ApplyRunOptions options)
     {
-        options.Validate();
-        InputPathGuard.Check(options.ModelPath, "locked panel");
-        InputPathGuard.Check(options.MatrixPath, "matrix");
-        InputPathGuard.Check(options.SampleSheetPath, "sample sheet");
-        // The folder is checked and locked before any work; a refused run leaves it as it was.
-        using var folder = ResultsFolder.Open(options.OutputFolder, options.Force, ResultsKind.Apply,
-            [options.ModelPath, options.MatrixPath, options.SampleSheetPath], console.Error);
-        var started = DateTimeOffset.UtcNow;
-        var stored = LockedPanelFile.ReadAny(options.ModelPath);
-        CheckOptionsFit(stored.Kind, options);
-        if (stored.Kind == OutcomeKind.Measured) return ApplyMeasuredRun.Execute(console, options, folder, stored, started);
-        if (stored.Kind == OutcomeKind.TimeToEvent) return ApplyFollowUpRun.Execute(console, options, folder, stored, started);
-        var model = stored.Classes!;
-        var discoveryIds = stored.DiscoverySampleIdHashes;
-        var displayNames = stored.DisplayNames;
-        var (matrix, outcome, inputs) = LoadCohort(options);
-        var overlap = DiscoveryOverlap.Warnings(model, discoveryIds, inputs, matrix.SampleIds);
-        LockedPanelScores scores;
-        try
+        var applied = ApplyJob.Run(options.Request, console.Error);
+        foreach (var warning in applied.Warnings) console.Error.WriteLine($"warning: {TextTable.Printable(warning)}");
+        // Each headline is written as its own type: the JSON holds the properties of the type it is given.
+        switch (applied)
         {
-            scores = LockedPanelScorer.Score(model, matrix);
+            case ClassesApplied classes:
+                if (options.Json) ManifestJson.Write(console.Out, ApplyClassesHeadline.Of(classes));
+                else PrintSummary(console.Out, classes);
+                break;
+            case MeasuredApplied measured:
+                if (options.Json) ManifestJson.Write(console.Out, ApplyMeasuredHeadline.Of(measured));
+                else PrintSummary(console.Out, measured);
+                break;
+            case FollowUpApplied followUp:
+                if (options.Json) ManifestJson.Write(console.Out, ApplyFollowUpHeadline.Of(followUp));
+                else PrintSummary(console.Out, followUp);
+                break;
         }
-        catch (MissingMarkersException e)
-        {
-            throw new CommandInputException($"{Path.GetFileName(options.MatrixPath)}: {e.Message}", ExitCode.InputError);
-        }
-        LockedPanelPerformance? performance = null;
-        if (outcome is not null)
-        {
-            try
-            {
-                performance = LockedPanelEvaluation.Evaluate(scores, outcome);
-            }
-            catch (ArgumentException e)
-            {
-                throw new CommandInputException($"{Path.GetFileName(options.MatrixPath)}: {e.Message}", ExitCode.InputError);
-            }
-        }
-
-        folder.ClearEarlierOutputs();
-        var knownClasses = outcome is null ? null : KnownClassNames(outcome);
-        folder.WriteText(ApplyResultFiles.Scores, w => ApplyTables.WriteScores(w, scores, knownClasses));
-        if (performance is not null)
-        {
-            folder.WriteText(ApplyResultFiles.Evaluation, w => ManifestJson.Write(w, ApplyEvaluation.Of(model, scores, performance, overlap)));
-            folder.WriteText(ApplyResultFiles.Calibration, w => ApplyTables.WriteCalibration(w, performance));
-            folder.WriteText(ApplyResultFiles.Confusion, w => ApplyTables.WriteConfusion(w, performance));
-        }
-        folder.WriteText(ApplyResultFiles.Report, w => w.Write(ApplyReport.Build(model, scores, performance, options.MatrixPath, options.ShowSampleIds, overlap, displayNames)));
-        var manifest = new ApplyManifest
-        {
-            Version = ToolVersion.Current,
-            CommandLine = ShellWords.Join(options.CommandLine),
-            StartedUtc = started.ToString("O"),
-            FinishedUtc = DateTimeOffset.UtcNow.ToString("O"),
-            Model = new ManifestLockedPanel
-            {
-                Path = options.ModelPath,
-                Sha256 = LockedPanelFile.FileSha256(options.ModelPath),
-                Markers = model.MarkerNames,
-                MarkerDisplayNames = displayNames,
-                DiscoveryInputsSha256 = model.Provenance.InputSha256,
-            },
-            Inputs = inputs.Select(i => new ManifestInput(i.Path, i.ByteCount, i.Sha256)).ToArray(),
-            Outputs = folder.WrittenFiles.ToArray(),
-        };
-        folder.WriteText(ResultsFolder.ManifestFileName, w => ManifestJson.Write(w, manifest));
-
-        foreach (var warning in overlap) console.Error.WriteLine($"warning: {TextTable.Printable(warning)}");
-        if (options.Json)
-        {
-            foreach (var warning in scores.Warnings) console.Error.WriteLine($"warning: {TextTable.Printable(warning.Message)}");
-            ManifestJson.Write(console.Out, ApplyHeadline.Of(model, scores, performance, folder.Path, overlap, displayNames));
-        }
-        else PrintSummary(console, model, scores, performance, folder.Path, displayNames);
         return ExitCode.Success;
     }
 
-    private static (FeatureMatrix Matrix, ClassOutcome? Outcome, IReadOnlyList<InputFileRecord> Inputs) LoadCohort(ApplyRunOptions options)
+    private static void PrintSummary(TextWriter output, ClassesApplied applied)
     {
-        if (options.OutcomeColumn is null)
-        {
-            var (matrix, input) = MatrixLoader.Load(options.MatrixPath, options.Layout, options.SampleIdColumn, options.AnnotationColumns,
-                longColumns: options.MatrixColumns());
-            return (matrix, null, [input]);
-        }
-        // No EnsureScreenable: a cohort of one class can still be scored and its error measured.
-        // But a class panel scores classes, so another outcome kind is refused before anything is written.
-        var loaded = PanelLoader.Load(options.ToLoadOptions());
-        EnsureKind(loaded, OutcomeKind.Classes, options);
-        return (loaded.Panel.Matrix, loaded.Panel.Outcome, loaded.Inputs);
-    }
-
-    /// <summary>
-    /// Refuses options that belong to another outcome kind than the locked panel's, before the
-    /// cohort is read: a usage error naming the options the panel needs.
-    /// </summary>
-    private static void CheckOptionsFit(OutcomeKind kind, ApplyRunOptions options)
-    {
-        string model = Path.GetFileName(options.ModelPath);
-        switch (kind)
-        {
-            case OutcomeKind.Classes when options.FollowUpColumn is not null:
-                throw new CommandInputException($"{model} is a panel locked on classes, so it calls classes; --follow-up, --event and --horizon are for a panel locked on a time to an event. Name the known class with --outcome.");
-            case OutcomeKind.Measured when options.FollowUpColumn is not null:
-                throw new CommandInputException($"{model} is a panel locked on a measured outcome, so it predicts that quantity; --follow-up, --event and --horizon are for a panel locked on a time to an event. Name the known value with --outcome.");
-            case OutcomeKind.TimeToEvent when options.OutcomeColumn is not null:
-                throw new CommandInputException($"{model} is a panel locked on a time to an event, so it scores risk; name the cohort's follow-up with --follow-up and --event instead of --outcome.");
-        }
-    }
-
-    /// <summary>Refuses a cohort whose outcome, as read, is of another kind than the locked panel's (exit code 3: read, but not usable as it is).</summary>
-    internal static void EnsureKind(LoadedPanel loaded, OutcomeKind expected, ApplyRunOptions options)
-    {
-        if (loaded.Panel.Kind == expected) return;
-        string found = loaded.Panel.Kind switch
-        {
-            OutcomeKind.Measured => $"the outcome '{loaded.Panel.OutcomeColumn}' is a measured quantity",
-            OutcomeKind.TimeToEvent => "the outcome is a time to an event",
-            _ => $"the outcome '{loaded.Panel.OutcomeColumn}' reads as classes",
-        };
-        throw new CommandInputException(
-            $"{Path.GetFileName(options.MatrixPath)}: {found}, but {Path.GetFileName(options.ModelPath)} is a panel locked on {LockedPanelJson.KindText(expected)}. "
-            + $"Apply a panel locked on {LockedPanelJson.KindText(loaded.Panel.Kind)} (a screen of this outcome writes one), or name a column of {OutcomeText(expected)}; "
-            + "`omicsscreen check` on the same files describes the outcome.",
-            ExitCode.NotScreenable);
-    }
-
-    private static string OutcomeText(OutcomeKind kind) => kind == OutcomeKind.Classes ? "classes" : "the quantity the panel predicts";
-
-    private static string[] KnownClassNames(ClassOutcome outcome)
-    {
-        var names = new string[outcome.SampleCount];
-        var classes = outcome.SampleClasses;
-        for (int s = 0; s < names.Length; s++) names[s] = outcome.ClassNames[classes[s]];
-        return names;
-    }
-
-    private static void PrintSummary(CliConsole console, LockedPanel model, LockedPanelScores scores, LockedPanelPerformance? performance, string folder,
-        IReadOnlyDictionary<string, string> displayNames)
-    {
-        var output = console.Out;
-        foreach (var warning in scores.Warnings) console.Error.WriteLine($"warning: {TextTable.Printable(warning.Message)}");
+        var (model, scores, performance) = (applied.Model, applied.Scores, applied.Performance);
         string rule = model.Threshold is { } threshold
             ? FormattableString.Invariant($"{model.ClassNames[model.PositiveClass]} when its probability is at least {threshold:0.###}")
             : "majority vote of the trees";
         output.WriteLine($"Scored {scores.SampleCount} samples with a locked panel of {model.MarkerCount} markers and {model.Trees.Count} trees; call: {rule}.");
-        output.WriteLine(TextTable.Printable("Markers (matched by id): " + string.Join(", ", model.MarkerNames.Select(m => MarkerLabels.Label(m, displayNames)))));
+        PrintMarkers(output, applied);
         var called = new int[scores.ClassCount];
         foreach (int c in scores.PredictedClasses) called[c]++;
         output.WriteLine("Called: " + string.Join(", ", scores.ClassNames.Select((name, c) => $"{called[c]} {name}")) + ".");
@@ -192,6 +66,52 @@ internal static class ApplyRun
             table.WriteTo(output);
         }
         output.WriteLine();
-        output.WriteLine($"Results in {folder}");
+        output.WriteLine($"Results in {applied.Folder}");
     }
+
+    private static void PrintSummary(TextWriter output, MeasuredApplied applied)
+    {
+        var (model, scores, performance) = (applied.Model, applied.Scores, applied.Performance);
+        output.WriteLine($"Predicted {model.OutcomeName} for {scores.SampleCount} samples with a locked panel of {model.MarkerCount} markers and {model.Trees.Count} trees (a regression forest).");
+        PrintMarkers(output, applied);
+        if (performance is not null)
+        {
+            var line = performance.Calibration;
+            output.WriteLine();
+            output.WriteLine(FormattableString.Invariant(
+                $"R² {performance.RSquared:0.000}, RMSE {performance.RootMeanSquaredError:G4}; discovery out-of-bag R² {model.OutOfBagRSquared:0.000}."));
+            output.WriteLine(FormattableString.Invariant(
+                $"Calibration (observed on predicted): slope {line.Slope:0.000} [95% CI {line.SlopeInterval.Lower:0.000} to {line.SlopeInterval.Upper:0.000}], intercept {line.Intercept:G4} [95% CI {line.InterceptInterval.Lower:G4} to {line.InterceptInterval.Upper:G4}]."));
+        }
+        output.WriteLine();
+        output.WriteLine($"Results in {applied.Folder}");
+        output.WriteLine("A locked panel is a candidate for validation in independent cohorts, not a measurement of the outcome.");
+    }
+
+    private static void PrintSummary(TextWriter output, FollowUpApplied applied)
+    {
+        var (model, scores, performance) = (applied.Model, applied.Scores, applied.Performance);
+        int high = scores.HighRiskCount;
+        output.WriteLine(FormattableString.Invariant(
+            $"Scored {scores.SampleCount} samples with a locked panel of {model.MarkerCount} markers and {model.Trees.Count} trees (a random survival forest); risk groups: {high} high, {scores.SampleCount - high} low (cut at the discovery median risk score {model.RiskGroupCut:G4})."));
+        PrintMarkers(output, applied);
+        if (performance is not null)
+        {
+            var c = performance.Concordance;
+            output.WriteLine();
+            output.WriteLine(FormattableString.Invariant(
+                $"Concordance (Harrell's C) {c.Concordance:0.000} [95% CI {c.Interval.Lower:0.000} to {c.Interval.Upper:0.000}] over {performance.EventCount} events; discovery out-of-bag C {model.OutOfBagConcordance:0.000}."));
+            if (performance.TimeDependentAuc is { } auc)
+                output.WriteLine(FormattableString.Invariant(
+                    $"Time-dependent AUC at {auc.Horizon:G6}: {auc.Auc:0.000} ({auc.Cases} events by then against {auc.Controls} samples followed beyond it, censoring-weighted)."));
+            if (performance.LogRank is { } test)
+                output.WriteLine(FormattableString.Invariant($"Risk groups: log-rank chi-square {test.ChiSquare:0.00}, p {test.PValue:G2}."));
+        }
+        output.WriteLine();
+        output.WriteLine($"Results in {applied.Folder}");
+        output.WriteLine("A risk score ranks samples; it is not a calibrated survival probability. Validate the panel in independent cohorts before any use.");
+    }
+
+    private static void PrintMarkers(TextWriter output, AppliedPanel applied) =>
+        output.WriteLine(TextTable.Printable("Markers (matched by id): " + string.Join(", ", applied.Markers.Select(m => MarkerLabels.Label(m, applied.DisplayNames)))));
 }

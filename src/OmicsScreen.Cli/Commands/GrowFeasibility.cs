@@ -1,5 +1,6 @@
 using System.Globalization;
 using OmicsScreen.Engine.Panels;
+using OmicsScreen.Runs.Results;
 
 namespace OmicsScreen.Cli.Commands;
 
@@ -47,8 +48,8 @@ internal static class GrowFeasibility
     public static List<string> Warnings(GrowRunOptions options, Panel panel)
     {
         var warnings = new List<string>();
-        if (options.TreeCount < ScreenFeasibility.FewTrees)
-            warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--trees {options.TreeCount} is few: the out-of-bag error and the importances of so small a forest change visibly with the seed; use {ScreenFeasibility.FewTrees} or more (the default is 500)."));
+        if (options.TreeCount < ScreenWarnings.FewTrees)
+            warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--trees {options.TreeCount} is few: the out-of-bag error and the importances of so small a forest change visibly with the seed; use {ScreenWarnings.FewTrees} or more (the default is 500)."));
         if (options.FeaturesPerSplit > 1 && options.FeaturesPerSplit == panel.FeatureCount)
             warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--features-per-split {options.FeaturesPerSplit} tries every feature at every split: the trees are then alike and the strongest features mask the others' importance; leave it out for the square root of the feature count (Breiman 2001)."));
         return warnings;

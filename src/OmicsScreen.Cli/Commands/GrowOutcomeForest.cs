@@ -5,6 +5,7 @@ using OmicsScreen.Engine.Panels;
 using OmicsScreen.Engine.Regression;
 using OmicsScreen.Engine.Survival;
 using OmicsScreen.Screening.Importance;
+using OmicsScreen.Screening.Screen;
 using OmicsScreen.Screening.Statistics;
 using OmicsScreen.Screening.Statistics.Survival;
 
@@ -65,7 +66,7 @@ internal sealed record GrowOutcomeForest(
             var followUp = panel.FollowUp!.FollowUp;
             var forest = SurvivalForestTrainer.Train(binned, followUp, options);
             var concordance = SurvivalImportance.OutOfBagConcordance(forest);
-            var curve = ConcordanceCurve(forest);
+            var curve = OutOfBagConcordanceCurve.Of(forest);
             var training = watch.Elapsed;
             watch.Restart();
             var impurity = forest.MeanSplitStatistic();
@@ -85,44 +86,5 @@ internal sealed record GrowOutcomeForest(
         if (total > 0)
             for (int i = 0; i < values.Length; i++) shares[i] = values[i] / total;
         return shares;
-    }
-
-    /// <summary>
-    /// Harrell's C of the out-of-bag mortality of trees 0..t, for every t: each sample's mortality
-    /// averaged over the trees so far that left it out, over the samples some tree has left out.
-    /// </summary>
-    private static double[] ConcordanceCurve(SurvivalForest forest)
-    {
-        int n = forest.SampleCount;
-        var times = forest.FollowUp.Times;
-        var events = forest.FollowUp.Events;
-        var sums = new double[n];
-        var counts = new int[n];
-        var curve = new double[forest.TreeCount];
-        var kept = new List<int>(n);
-        for (int t = 0; t < forest.TreeCount; t++)
-        {
-            var rows = forest.OutOfBagRows(t);
-            var mortality = forest.OutOfBagMortality(t);
-            for (int i = 0; i < rows.Length; i++)
-            {
-                sums[rows[i]] += mortality[i];
-                counts[rows[i]]++;
-            }
-            kept.Clear();
-            for (int s = 0; s < n; s++) if (counts[s] > 0) kept.Add(s);
-            var time = new double[kept.Count];
-            var observed = new bool[kept.Count];
-            var risk = new double[kept.Count];
-            for (int i = 0; i < kept.Count; i++)
-            {
-                time[i] = times[kept[i]];
-                observed[i] = events[kept[i]];
-                risk[i] = sums[kept[i]] / counts[kept[i]];
-            }
-            var estimate = HarrellConcordance.Estimate(time, observed, risk);
-            curve[t] = estimate.ComparablePairs == 0 ? double.NaN : estimate.Concordance;
-        }
-        return curve;
     }
 }

@@ -1,29 +1,17 @@
 using System.Globalization;
 using OmicsScreen.Engine.Panels;
-using OmicsScreen.Screening.Importance;
 using OmicsScreen.Screening.Screen;
 
 namespace OmicsScreen.Cli.Commands;
 
 /// <summary>
 /// Settings that cannot give a meaningful screen of this panel, refused with the option to
-/// change before any forest is grown, and settings that are legal but weak, named in warnings:
-/// both depend on the panel's size, so the options record alone cannot check them.
+/// change before any forest is grown: they depend on the panel's size, so the options record
+/// alone cannot check them. Settings that are legal but weak are the Runs project's
+/// <see cref="Runs.Results.ScreenWarnings"/>.
 /// </summary>
 internal static class ScreenFeasibility
 {
-    /// <summary>Fewer trees than this leave out-of-bag estimates and importances visibly seed-dependent (common practice: a few hundred trees).</summary>
-    public const int FewTrees = 100;
-
-    /// <summary>Fewer half-sample pairs than this give under 10 repeats: selection frequencies in steps of a tenth or coarser.</summary>
-    public const int FewPairs = 5;
-
-    /// <summary>Above this false discovery rate a shortlist is mostly a list of candidates (common practice: 0.05 to 0.2).</summary>
-    public const double LooseQ = 0.25;
-
-    /// <summary>Below this Spearman |rho| single linkage chains markers that share little into one group.</summary>
-    public const double LowRedundancyRho = 0.5;
-
     /// <exception cref="CommandInputException">The settings cannot give a meaningful screen of <paramref name="panel"/>.</exception>
     public static void Check(ScreenOptions options, Panel panel)
     {
@@ -79,30 +67,6 @@ internal static class ScreenFeasibility
                     + $"on half-samples of about {innerHalf} samples (a bootstrap of which holds about {innerDistinct:0} distinct ones), and a split needs 2 x {options.MinLeafSize}. "
                     + $"Use --min-leaf {Math.Max(1, innerHalf / 4)} or less, or --curve-folds 0 to skip the curve."));
         }
-    }
-
-    /// <summary>Settings that are legal for this panel but make the screen weak, each in one sentence naming the option and a better value.</summary>
-    public static List<string> Warnings(ScreenOptions options, Panel panel)
-    {
-        var warnings = new List<string>();
-        if (options.TreesPerForest < FewTrees)
-            warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--trees {options.TreesPerForest} is few: out-of-bag estimates and importances of so small a forest change visibly with the seed; use {FewTrees} or more (the default is 500)."));
-        if (options.HalfSamplePairs < FewPairs)
-            warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--pairs {options.HalfSamplePairs} gives only {2 * options.HalfSamplePairs} half-sample repeats: selection frequencies move in steps of {1.0 / (2 * options.HalfSamplePairs):0.##} and the stability of the list rests on few lists; use {FewPairs} or more (the default is 25)."));
-        int decoys = ScreenSettings.DecoyCountFor(options, panel.FeatureCount);
-        if (decoys > 0 && decoys < DecoyNull.MinimumTailFitCount)
-            warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--decoys {decoys} is too few for the p-values' tail fit (it needs {DecoyNull.MinimumTailFitCount}): no p-value can fall below 1/({decoys} + 1) = {1.0 / (decoys + 1):0.####}, so only strong markers can reach the shortlist; leave --decoys out for the automatic count."));
-        if (options.OutcomePermutations > 0 && options.OutcomePermutations < DecoyNull.MinimumTailFitCount)
-            warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--outcome-permutations {options.OutcomePermutations} gives permutation p-values no smaller than 1/({options.OutcomePermutations} + 1) = {1.0 / (options.OutcomePermutations + 1):0.####}, so the forest's evidence hardly counts; use {DecoyNull.MinimumTailFitCount} or more, or 0."));
-        if (options.QValueThreshold > LooseQ)
-            warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--max-q {options.QValueThreshold} lets up to {options.QValueThreshold:0%} of the shortlist be false markers; treat the list as candidates, or use 0.05 to 0.2."));
-        if (options.RedundancyCorrelation < LowRedundancyRho)
-            warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--redundancy-rho {options.RedundancyCorrelation} groups markers whose Spearman |rho| is this low, and single linkage chains them: groups may join markers that share little; use 0.5 or more (the default is 0.7)."));
-        if (panel.Kind != OutcomeKind.Classes && options.Balance == BalanceMode.On)
-            warnings.Add("--balance on draws class-balanced trees, and this outcome has no classes: every tree draws a plain bootstrap.");
-        if (options.FeaturesPerSplit > 1 && options.FeaturesPerSplit == panel.FeatureCount)
-            warnings.Add(string.Create(CultureInfo.InvariantCulture, $"--features-per-split {options.FeaturesPerSplit} tries every feature at every split: the trees are then alike and the strongest markers mask the others' importance; leave it out for the square root of the feature count (Breiman 2001)."));
-        return warnings;
     }
 
     /// <summary>The expected number of distinct samples in a bootstrap of <paramref name="count"/> from <paramref name="count"/>: count x (1 - (1 - 1/count)^count).</summary>

@@ -1,15 +1,11 @@
 using System.Diagnostics;
 using System.Globalization;
-using System.Security.Cryptography;
 using OmicsScreen.Cli.Console;
 using OmicsScreen.Cli.Memory;
 using OmicsScreen.Cli.Work;
 using OmicsScreen.Data;
-using OmicsScreen.Data.Inspection;
 using OmicsScreen.Reporting.Json;
 using OmicsScreen.Reporting.Screen;
-using OmicsScreen.Reporting.Univariate;
-using OmicsScreen.Runs;
 using OmicsScreen.Runs.Locking;
 using OmicsScreen.Runs.Output;
 using OmicsScreen.Runs.Results;
@@ -49,7 +45,7 @@ internal static class ScreenRun
         if (options.Part is not null) return ExecutePart(console, options);
 
         // The folder is checked and locked before any work; a refused run leaves it as it was.
-        using var folder = ResultsFolder.Open(options.ResolveOutputFolder(), options.Force, ResultsKind.Screen, InputPaths(options.Panel), console.Error);
+        using var folder = ResultsFolder.Open(options.ResolveOutputFolder(), options.Force, ResultsKind.Screen, ResultsFolder.InputPaths(options.Panel), console.Error);
         var started = DateTimeOffset.UtcNow;
         var watch = Stopwatch.StartNew();
         var loaded = PanelLoader.Load(options.Panel).EnsureScreenable();
@@ -65,7 +61,7 @@ internal static class ScreenRun
             Path.Combine(options.ResolveOutputFolder(), CheckpointFolderName));
         // From here on the run replaces the folder's earlier results; a refusal is never preceded by warnings.
         folder.ClearEarlierOutputs();
-        PrintWarnings(console, Warnings(options, loaded));
+        PrintWarnings(console, ScreenWarnings.Of(options.Screen, loaded));
         var plan = WorkPlan.For(loaded.Panel, settings);
         if (options.Resume && !options.Quiet)
             console.Error.WriteLine($"resume: {checkpoint.CountPresent(plan.Units.Select(u => u.Unit))} of {plan.Units.Count} work units are in the checkpoint.");
@@ -105,119 +101,31 @@ internal static class ScreenRun
                 + "(a first-stage screen), q-values and the selection-aware panel-size curve do not account for that choice: confirm in independent samples.");
     }
 
-    /// <summary>
-    /// What the run should be warned about: the loader's warnings (an outcome column given twice,
-    /// constant features, dropped samples) and settings that are legal but weak. Printed before the
-    /// work starts and kept in the manifest's warnings list.
-    /// </summary>
-    /// <param name="withSampleIds">False for the report without --show-sample-ids: a warning that names samples says how many instead.</param>
-    internal static List<string> Warnings(ScreenRunOptions options, LoadedPanel loaded, bool withSampleIds = true)
-    {
-        var warnings = new List<string>();
-        foreach (var finding in loaded.Inspection.Findings)
-        {
-            if (finding.Severity != FindingSeverity.Warning) continue;
-            if (!withSampleIds && finding.Code == "unmatched-samples-dropped")
-                warnings.Add($"{loaded.Inspection.DroppedSamples.Count} samples were dropped because they are in only one file (--drop-unmatched); the console named them, and --show-sample-ids lists them here.");
-            else if (!withSampleIds && finding.Code == "names-differ-only-by-case" && finding.Message.Contains("sample ids", StringComparison.Ordinal))
-                warnings.Add("Some sample ids differ from another only by upper and lower case; they are kept as different samples. `omicsscreen check` names them.");
-            else warnings.Add(finding.Message);
-        }
-        warnings.AddRange(ScreenFeasibility.Warnings(options.Screen, loaded.Panel));
-        return warnings;
-    }
-
     internal static void PrintWarnings(CliConsole console, IEnumerable<string> warnings)
     {
         foreach (var warning in warnings) console.Error.WriteLine($"warning: {TextTable.Printable(warning)}");
     }
 
-    /// <summary>The files a run reads, which its outputs must never replace.</summary>
-    internal static IEnumerable<string?> InputPaths(PanelLoadOptions panel) => [panel.MatrixPath, panel.SampleSheetPath, panel.FeatureSheetPath];
-
     /// <summary>
-    /// Writes every table, the locked panel, the report and (last) the manifest of a finished
-    /// screen, and prints its summary: the same for a single run and for merged parts.
+    /// Writes the results folder of a finished screen (<see cref="ScreenResultsWriter"/>) and prints
+    /// its summary: the same for a single run and for merged parts.
     /// </summary>
     internal static void WriteResults(CliConsole console, ScreenRunOptions options, LoadedPanel loaded, ScreenResult result,
         ResultsFolder folder, DateTimeOffset started, double loadSeconds, int mergedParts)
     {
-        var labels = MarkerLabels.Of(loaded);
-        folder.WriteText("shortlist.tsv", w => ScreenTables.WriteShortlist(w, result, labels));
-        folder.WriteText("features.tsv", w => ScreenTables.WriteFeatures(w, result, labels));
-        if (result.PanelSize is { } curve) folder.WriteText("panel_size_curve.tsv", w => ScreenTables.WritePanelSizeCurve(w, curve));
-        switch (result.Kind)
+        var request = new ScreenResultsRequest
         {
-            case Engine.Panels.OutcomeKind.Measured:
-                folder.WriteText("marker_statistics.tsv", w => OutcomeMarkerTableWriter.WriteMeasured(w, result.MeasuredMarkers));
-                break;
-            case Engine.Panels.OutcomeKind.TimeToEvent:
-                folder.WriteText("marker_statistics.tsv", w => OutcomeMarkerTableWriter.WriteFollowUp(w, result.FollowUpMarkers));
-                break;
-            default:
-                folder.WriteText("marker_statistics.tsv", w => UnivariateTableWriter.WriteAllSamples(w, result.Univariate));
-                break;
-        }
-        if (result.Univariate.PerCohort.Count > 0)
-            folder.WriteText("marker_statistics_by_cohort.tsv", w => UnivariateTableWriter.WritePerCohort(w, result.Univariate));
-        if (result.Cohorts is { } cohorts) CohortTableFiles.Write(folder, cohorts);
-        // The shortlist (or its prefix the curve recommends), locked for scoring new cohorts with
-        // `apply`, for every outcome kind; an empty shortlist locks nothing.
-        LockedPanelWritten? locked = null;
-        if (result.LockedPanelSize > 0)
-        {
-            locked = PanelLocking.Lock(folder.Path, loaded, result);
-            folder.WrittenFiles.Add(locked.FileName);
-        }
-        var finished = DateTimeOffset.UtcNow;
-        var report = ReportInput(options, loaded, result, folder, started, finished, loadSeconds)
-            with { MergedParts = mergedParts, LockedRiskGroups = locked?.DiscoveryRiskGroups };
-        folder.WriteText(ReportFileName, w => w.Write(ScreenReport.Render(report)));
-        var manifest = ScreenManifestBuilder.Build(options.CommandLine, options.Panel, loaded, result, started, finished, loadSeconds, folder.WrittenFiles, Warnings(options, loaded), mergedParts);
-        folder.WriteText(ResultsFolder.ManifestFileName, w => ManifestJson.Write(w, manifest));
-
-        if (options.Json) ManifestJson.Write(console.Out, ScreenHeadline.Of(loaded, result, folder.Path));
-        else PrintSummary(console.Out, loaded, result, folder.Path);
-    }
-
-    /// <summary>What the report shows: the run's provenance, with the SHA-256 of every table already written beside it.</summary>
-    private static ScreenReportInput ReportInput(ScreenRunOptions options, LoadedPanel loaded, ScreenResult result, ResultsFolder folder,
-        DateTimeOffset started, DateTimeOffset finished, double loadSeconds)
-    {
-        var inputs = new List<ReportedFile>(loaded.Inputs.Count);
-        for (int i = 0; i < loaded.Inputs.Count; i++)
-            inputs.Add(new ReportedFile(i == 0 ? "matrix" : loaded.Inputs[i].Path == options.Panel.FeatureSheetPath ? "feature sheet" : "sample sheet",
-                loaded.Inputs[i].Path, loaded.Inputs[i].Sha256));
-        var tables = new List<ReportedFile>(folder.WrittenFiles.Count);
-        foreach (var name in folder.WrittenFiles)
-        {
-            using var stream = File.OpenRead(Path.Combine(folder.Path, name));
-            tables.Add(new ReportedFile("result table", name, Convert.ToHexStringLower(SHA256.HashData(stream))));
-        }
-        int threads = result.Settings.ThreadCount;
-        return new ScreenReportInput(loaded.Panel, result, inputs, LayoutText(options.Panel), tables,
-            ShellWords.Join(options.CommandLine), ToolVersion.Current, started, finished, loadSeconds,
-            Environment.ProcessorCount, threads, options.ShowSampleIds, Warnings: Warnings(options, loaded, withSampleIds: options.ShowSampleIds),
-            Labels: MarkerLabels.Of(loaded));
-    }
-
-    /// <summary>The layout, and any feature block or list the panel was narrowed to, with what that means for the error control.</summary>
-    internal static string LayoutText(PanelLoadOptions panel)
-    {
-        string text = panel.Layout switch
-        {
-            PanelLayout.SamplesInRows => "samples in rows",
-            PanelLayout.FeaturesInRows => "features in rows (--features-in-rows)",
-            _ => "long table, one row per sample and feature (--long)",
+            Panel = options.Panel,
+            Screen = options.Screen,
+            ShowSampleIds = options.ShowSampleIds,
+            CommandLine = options.CommandLine,
         };
-        if (panel.FeatureBlock is { } block) text += $"; feature block {block} only";
-        if (panel.KeepFeatures is { } keep)
-            text += $"; only {keep.Count} features from a list (when the list was chosen on these samples, "
-                + "the q-values and the selection-aware curve do not account for that choice)";
-        return text;
+        var written = ScreenResultsWriter.Write(request, loaded, result, folder, started, loadSeconds, mergedParts);
+        if (options.Json) ManifestJson.Write(console.Out, ScreenHeadline.Of(loaded, result, written.Folder));
+        else PrintSummary(console.Out, loaded, result, written);
     }
 
-    private static void PrintSummary(TextWriter output, LoadedPanel loaded, ScreenResult result, string folder)
+    private static void PrintSummary(TextWriter output, LoadedPanel loaded, ScreenResult result, ScreenResultsWritten written)
     {
         var panel = loaded.Panel;
         var settings = result.Settings;
@@ -274,10 +182,10 @@ internal static class ScreenRun
         output.WriteLine(ErrorControlText.LockedPanelSentence(result));
         if (result.Cohorts is { } cohorts) CohortSummary.Print(output, result, cohorts);
         output.WriteLine();
-        output.WriteLine($"Results: {folder}");
-        output.WriteLine($"Report: {Path.Combine(folder, ReportFileName)}");
-        if (result.LockedPanelSize > 0)
-            output.WriteLine($"Locked panel for `omicsscreen apply`: {Path.Combine(folder, LockedPanelFile.DefaultFileName)}");
+        output.WriteLine($"Results: {written.Folder}");
+        output.WriteLine($"Report: {written.Report}");
+        if (written.LockedPanel is { } lockedPanel)
+            output.WriteLine($"Locked panel for `omicsscreen apply`: {lockedPanel}");
         output.WriteLine("A screen is not a diagnostic test: confirm every marker in independent cohorts before any use.");
     }
 

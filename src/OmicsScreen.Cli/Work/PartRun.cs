@@ -1,6 +1,7 @@
 using OmicsScreen.Cli.Commands;
 using OmicsScreen.Cli.Console;
 using OmicsScreen.Data;
+using OmicsScreen.Runs.Results;
 using OmicsScreen.Runs.Work;
 
 namespace OmicsScreen.Cli.Work;
@@ -23,7 +24,7 @@ internal static class PartRun
             ShowSampleIds = options.ShowSampleIds,
             CommandLine = options.CommandLine,
         });
-        ScreenRun.PrintWarnings(console, ScreenRun.Warnings(options, loaded));
+        ScreenRun.PrintWarnings(console, ScreenWarnings.Of(options.Screen, loaded));
 
         var progress = new ProgressDisplay(console, options.Quiet);
         try

@@ -15,24 +15,16 @@ public static class ApplyReport
     public static string Build(LockedPanel model, LockedPanelScores scores, LockedPanelPerformance? performance, string matrixPath, bool showSampleIds,
         IReadOnlyList<string> discoveryOverlap, IReadOnlyDictionary<string, string>? displayNames = null)
     {
-        displayNames ??= new Dictionary<string, string>();
-        var html = new HtmlBuilder().BeginDocument($"Locked panel applied to {Path.GetFileName(matrixPath)}");
-        html.Caution("Read before using these scores", [.. discoveryOverlap, .. Cautions(model, scores, performance)]);
-
-        html.BeginSection("The locked panel");
         var rule = model.Threshold is { } threshold
             ? $"{model.ClassNames[model.PositiveClass]} when the fraction of trees voting for it is at least {Number(threshold)} (Youden threshold on the discovery out-of-bag probabilities)"
             : "the class most trees vote for";
-        html.DefinitionList(
-        [
-            new("Markers", string.Join(", ", model.MarkerNames.Select(m => MarkerLabels.Label(m, displayNames)))),
-            new("Trees", model.Trees.Count.ToString(CultureInfo.InvariantCulture)),
-            new("Call", rule),
-            new("Discovery out-of-bag AUC", model.OutOfBagAuc is { } auc ? Number(auc) : "not applicable"),
-            new("Discovery samples", model.Provenance.DiscoverySampleCount.ToString(CultureInfo.InvariantCulture)),
-            new("Locked by", $"OmicsScreen {model.Provenance.ToolVersion}, seed {model.Provenance.Seed.ToString(CultureInfo.InvariantCulture)}"),
-        ]);
-        html.EndSection();
+        var html = BeginPage(matrixPath, "Read before using these scores", [.. discoveryOverlap, .. Cautions(model, scores, performance)],
+            outcome: null, model.MarkerNames, displayNames ?? new Dictionary<string, string>(), model.Trees.Count,
+            [
+                new("Call", rule),
+                new("Discovery out-of-bag AUC", model.OutOfBagAuc is { } auc ? Number(auc) : "not applicable"),
+            ],
+            model.Provenance);
 
         html.BeginSection("Scores");
         var called = new int[scores.ClassCount];
@@ -65,6 +57,44 @@ public static class ApplyReport
 
         AddScaleCheck(html, scores.Warnings.Select(w => w.Message).ToList());
         return html.EndDocument();
+    }
+
+    /// <summary>
+    /// The head of every apply page: its title, the cautions (the discovery overlap first) and the
+    /// locked panel: the outcome when it is not classes, the markers and trees, what the kind adds,
+    /// and the discovery samples and tool that locked it.
+    /// </summary>
+    internal static HtmlBuilder BeginPage(string matrixPath, string cautionHeading, IEnumerable<string> cautions, KeyValuePair<string, string>? outcome,
+        IReadOnlyList<string> markerNames, IReadOnlyDictionary<string, string> displayNames, int treeCount,
+        IEnumerable<KeyValuePair<string, string>> kindEntries, LockProvenance provenance)
+    {
+        var html = new HtmlBuilder().BeginDocument($"Locked panel applied to {Path.GetFileName(matrixPath)}");
+        html.Caution(cautionHeading, cautions);
+        html.BeginSection("The locked panel");
+        var entries = new List<KeyValuePair<string, string>>();
+        if (outcome is { } outcomeEntry) entries.Add(outcomeEntry);
+        entries.Add(new("Markers", string.Join(", ", markerNames.Select(m => MarkerLabels.Label(m, displayNames)))));
+        entries.Add(new("Trees", treeCount.ToString(CultureInfo.InvariantCulture)));
+        entries.AddRange(kindEntries);
+        entries.Add(new("Discovery samples", provenance.DiscoverySampleCount.ToString(CultureInfo.InvariantCulture)));
+        entries.Add(new("Locked by", $"OmicsScreen {provenance.ToolVersion}, seed {provenance.Seed.ToString(CultureInfo.InvariantCulture)}"));
+        html.DefinitionList(entries);
+        html.EndSection();
+        return html;
+    }
+
+    /// <summary>
+    /// The cautions every apply page draws from the scale check: markers measured in no sample,
+    /// and markers that look measured on another scale. <paramref name="scores"/> names what rests
+    /// on the other markers, <paramref name="meaningless"/> what may mean nothing until the units match.
+    /// </summary>
+    internal static IEnumerable<string> ScaleCautions(IReadOnlyList<ScaleWarning> warnings, string scores, string meaningless)
+    {
+        int unmeasured = warnings.Count(w => w.Unmeasured);
+        if (unmeasured > 0)
+            yield return FormattableString.Invariant($"{unmeasured} marker(s) were measured in no sample of this cohort (see the scale check); {scores} rest on the other markers only.");
+        if (warnings.Count > unmeasured)
+            yield return FormattableString.Invariant($"{warnings.Count - unmeasured} marker(s) look measured on another scale than in discovery (see the scale check); {meaningless} may be meaningless until the units match.");
     }
 
     /// <summary>The scale check of every apply report: the markers that look measured on another scale, or a line saying none does.</summary>
@@ -120,11 +150,7 @@ public static class ApplyReport
         };
         if (model.Threshold is not null)
             cautions.Add("The threshold was chosen on the discovery cohort; in a cohort with another case mix or assay it may not balance sensitivity and specificity.");
-        int unmeasured = scores.Warnings.Count(w => w.Unmeasured);
-        if (unmeasured > 0)
-            cautions.Add(FormattableString.Invariant($"{unmeasured} marker(s) were measured in no sample of this cohort (see the scale check); the scores rest on the other markers only."));
-        if (scores.Warnings.Count > unmeasured)
-            cautions.Add(FormattableString.Invariant($"{scores.Warnings.Count - unmeasured} marker(s) look measured on another scale than in discovery (see the scale check); their scores may be meaningless until the units match."));
+        cautions.AddRange(ScaleCautions(scores.Warnings, "the scores", "their scores"));
         if (performance is null)
             cautions.Add("No outcome was given, so nothing here says how well the panel works on this cohort.");
         else if (performance.SampleCount < 50)

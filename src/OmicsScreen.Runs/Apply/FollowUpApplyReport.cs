@@ -19,22 +19,15 @@ public static class FollowUpApplyReport
     public static string Build(LockedFollowUpPanel model, LockedFollowUpScores scores, LockedFollowUpPerformance? performance, string matrixPath,
         bool showSampleIds, IReadOnlyList<string> discoveryOverlap, IReadOnlyDictionary<string, string> displayNames)
     {
-        var html = new HtmlBuilder().BeginDocument($"Locked panel applied to {Path.GetFileName(matrixPath)}");
-        html.Caution("Read before using these risk scores", [.. discoveryOverlap, .. Cautions(scores, performance)]);
-
-        html.BeginSection("The locked panel");
-        html.DefinitionList(
-        [
+        var html = ApplyReport.BeginPage(matrixPath, "Read before using these risk scores", [.. discoveryOverlap, .. Cautions(scores, performance)],
             new("Outcome", $"time to an event (discovery follow-up '{model.TimeColumn}', event '{model.EventColumn}', {model.DiscoveryEventCount} events)"),
-            new("Markers", string.Join(", ", model.MarkerNames.Select(m => MarkerLabels.Label(m, displayNames)))),
-            new("Trees", model.Trees.Count.ToString(CultureInfo.InvariantCulture)),
-            new("Risk score", "ensemble mortality: the mean over the trees of the leaf's Nelson-Aalen cumulative hazard summed over the discovery event times (a random survival forest, Ishwaran et al. 2008); higher means more events expected, earlier"),
-            new("Risk groups", $"high when the risk score is above {Number(model.RiskGroupCut)}, the median of the discovery out-of-bag risk scores; low otherwise"),
-            new("Discovery out-of-bag concordance (Harrell's C)", Number(model.OutOfBagConcordance)),
-            new("Discovery samples", model.Provenance.DiscoverySampleCount.ToString(CultureInfo.InvariantCulture)),
-            new("Locked by", $"OmicsScreen {model.Provenance.ToolVersion}, seed {model.Provenance.Seed.ToString(CultureInfo.InvariantCulture)}"),
-        ]);
-        html.EndSection();
+            model.MarkerNames, displayNames, model.Trees.Count,
+            [
+                new("Risk score", "ensemble mortality: the mean over the trees of the leaf's Nelson-Aalen cumulative hazard summed over the discovery event times (a random survival forest, Ishwaran et al. 2008); higher means more events expected, earlier"),
+                new("Risk groups", $"high when the risk score is above {Number(model.RiskGroupCut)}, the median of the discovery out-of-bag risk scores; low otherwise"),
+                new("Discovery out-of-bag concordance (Harrell's C)", Number(model.OutOfBagConcordance)),
+            ],
+            model.Provenance);
 
         html.BeginSection("Risk scores");
         int high = scores.HighRiskCount;
@@ -106,11 +99,7 @@ public static class FollowUpApplyReport
             "The risk groups are cut at the discovery median; in a cohort with another case mix, follow-up or assay the groups need not be halves, and the cut is not a clinical threshold.",
             "Only an independent cohort, measured as it will be in use, shows how well the panel ranks risk; a cohort from the discovery centres is not enough.",
         };
-        int unmeasured = scores.Warnings.Count(w => w.Unmeasured);
-        if (unmeasured > 0)
-            cautions.Add(FormattableString.Invariant($"{unmeasured} marker(s) were measured in no sample of this cohort (see the scale check); the risk scores rest on the other markers only."));
-        if (scores.Warnings.Count > unmeasured)
-            cautions.Add(FormattableString.Invariant($"{scores.Warnings.Count - unmeasured} marker(s) look measured on another scale than in discovery (see the scale check); the risk scores may be meaningless until the units match."));
+        cautions.AddRange(ApplyReport.ScaleCautions(scores.Warnings, "the risk scores", "the risk scores"));
         if (performance is null)
             cautions.Add("No follow-up was given, so nothing here says how well the panel ranks risk on this cohort.");
         else if (performance.EventCount < 50)

@@ -17,22 +17,14 @@ public static class MeasuredApplyReport
     public static string Build(LockedMeasuredPanel model, LockedMeasuredScores scores, LockedMeasuredPerformance? performance, string matrixPath,
         bool showSampleIds, IReadOnlyList<string> discoveryOverlap, IReadOnlyDictionary<string, string> displayNames)
     {
-        var html = new HtmlBuilder().BeginDocument($"Locked panel applied to {Path.GetFileName(matrixPath)}");
-        html.Caution("Read before using these predictions", [.. discoveryOverlap, .. Cautions(scores, performance)]);
-
-        html.BeginSection("The locked panel");
-        html.DefinitionList(
-        [
-            new("Outcome", $"{model.OutcomeName}, a measured quantity"),
-            new("Markers", string.Join(", ", model.MarkerNames.Select(m => MarkerLabels.Label(m, displayNames)))),
-            new("Trees", model.Trees.Count.ToString(CultureInfo.InvariantCulture)),
-            new("Prediction", "the mean over the trees of the discovery samples' mean outcome in the leaf a sample reaches (a regression forest, Breiman 2001)"),
-            new("Discovery out-of-bag R²", Number(model.OutOfBagRSquared)),
-            new("Discovery out-of-bag RMSE", Number(model.OutOfBagRootMeanSquaredError)),
-            new("Discovery samples", model.Provenance.DiscoverySampleCount.ToString(CultureInfo.InvariantCulture)),
-            new("Locked by", $"OmicsScreen {model.Provenance.ToolVersion}, seed {model.Provenance.Seed.ToString(CultureInfo.InvariantCulture)}"),
-        ]);
-        html.EndSection();
+        var html = ApplyReport.BeginPage(matrixPath, "Read before using these predictions", [.. discoveryOverlap, .. Cautions(scores, performance)],
+            new("Outcome", $"{model.OutcomeName}, a measured quantity"), model.MarkerNames, displayNames, model.Trees.Count,
+            [
+                new("Prediction", "the mean over the trees of the discovery samples' mean outcome in the leaf a sample reaches (a regression forest, Breiman 2001)"),
+                new("Discovery out-of-bag R²", Number(model.OutOfBagRSquared)),
+                new("Discovery out-of-bag RMSE", Number(model.OutOfBagRootMeanSquaredError)),
+            ],
+            model.Provenance);
 
         html.BeginSection("Predictions");
         var sorted = scores.Predictions.Order().ToArray();
@@ -113,11 +105,7 @@ public static class MeasuredApplyReport
             "Predictions are averages of discovery samples, so they shrink towards the discovery mean; read the calibration line before reading a prediction as a value of the outcome.",
             "Only an independent cohort, measured as it will be in use, shows how well the panel predicts; a cohort from the discovery centres is not enough.",
         };
-        int unmeasured = scores.Warnings.Count(w => w.Unmeasured);
-        if (unmeasured > 0)
-            cautions.Add(FormattableString.Invariant($"{unmeasured} marker(s) were measured in no sample of this cohort (see the scale check); the predictions rest on the other markers only."));
-        if (scores.Warnings.Count > unmeasured)
-            cautions.Add(FormattableString.Invariant($"{scores.Warnings.Count - unmeasured} marker(s) look measured on another scale than in discovery (see the scale check); the predictions may be meaningless until the units match."));
+        cautions.AddRange(ApplyReport.ScaleCautions(scores.Warnings, "the predictions", "the predictions"));
         if (performance is null)
             cautions.Add("No outcome was given, so nothing here says how well the panel works on this cohort.");
         else if (performance.SampleCount < 50)

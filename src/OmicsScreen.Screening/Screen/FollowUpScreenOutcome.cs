@@ -58,26 +58,10 @@ internal sealed class FollowUpScreenOutcome(FollowUpOutcome outcome) : ScreenOut
         return new ReferenceForest(summary, null);
     }
 
-    private double[] ErrorCurve(SurvivalForest forest)
+    private static double[] ErrorCurve(SurvivalForest forest)
     {
-        int n = forest.SampleCount;
-        var sums = new double[n];
-        var counts = new int[n];
-        var curve = new double[forest.TreeCount];
-        var kept = new List<int>(n);
-        for (int t = 0; t < forest.TreeCount; t++)
-        {
-            var rows = forest.OutOfBagRows(t);
-            var mortality = forest.OutOfBagMortality(t);
-            for (int i = 0; i < rows.Length; i++)
-            {
-                sums[rows[i]] += mortality[i];
-                counts[rows[i]]++;
-            }
-            kept.Clear();
-            for (int s = 0; s < n; s++) if (counts[s] > 0) kept.Add(s);
-            curve[t] = 1 - ConcordanceOf(kept, s => sums[s] / counts[s]);
-        }
+        var curve = OutOfBagConcordanceCurve.Of(forest);
+        for (int t = 0; t < curve.Length; t++) curve[t] = 1 - curve[t];
         return curve;
     }
 
@@ -140,20 +124,6 @@ internal sealed class FollowUpScreenOutcome(FollowUpOutcome outcome) : ScreenOut
         new(0.5, 0.5, new double[testRows.Length], []);
 
     /// <summary>Harrell's C of a risk score over some samples; NaN with no comparable pair.</summary>
-    private double ConcordanceOf(IReadOnlyList<int> samples, Func<int, double> risk, bool byPosition = false)
-    {
-        var times = _followUp.Times;
-        var events = _followUp.Events;
-        var t = new double[samples.Count];
-        var e = new bool[samples.Count];
-        var r = new double[samples.Count];
-        for (int i = 0; i < samples.Count; i++)
-        {
-            t[i] = times[samples[i]];
-            e[i] = events[samples[i]];
-            r[i] = risk(byPosition ? i : samples[i]);
-        }
-        var estimate = HarrellConcordance.Estimate(t, e, r);
-        return estimate.ComparablePairs == 0 ? double.NaN : estimate.Concordance;
-    }
+    private double ConcordanceOf(IReadOnlyList<int> samples, Func<int, double> risk, bool byPosition = false) =>
+        SampleConcordance.Of(_followUp, samples, risk, byPosition);
 }
