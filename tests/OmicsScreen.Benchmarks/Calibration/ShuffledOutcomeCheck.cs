@@ -97,7 +97,7 @@ public static class ShuffledOutcomeCheck
         var outcome = ScreenOutcome.For(panel);
         var decoyRankP = outcome.RankTestPValues(plan.Values(panel.Matrix), allRows, threads);
         var featureRankP = result.Features.Select(f => f.RankTestP).ToArray();
-        var decoys = DecoyEvidence.From(result.Repeats, new DirectTestEvidence(featureRankP, decoyRankP, [], [], []));
+        var decoys = DecoyEvidence.From(result.Repeats, new DirectTestEvidence(featureRankP, decoyRankP, [], [], []) { Weights = outcome.CombinationWeights });
         var pValues = result.Features.Select(f => f.PValue).ToArray();
         var check = DecoyNull.PValues(DecoyEvidence.Surprise(decoys.CombinedP), DecoyEvidence.Surprise(result.Features.Select(f => f.CombinedP).ToArray()));
         for (int f = 0; f < pValues.Length; f++)
