@@ -24,7 +24,7 @@ internal sealed record DecoyEvidence(double[] Means, double[] Frequencies, doubl
         var forestP = DecoyNull.DecoyPValues(means);
         var combinedP = new double[means.Length];
         for (int d = 0; d < means.Length; d++)
-            combinedP[d] = ScreenAggregation.Combine(forestP[d], At(direct.DecoyRankP, d), At(direct.DecoyInteractionP, d));
+            combinedP[d] = ScreenAggregation.Combine(forestP[d], At(direct.DecoyRankP, d), At(direct.DecoyInteractionP, d), direct.Weights);
         return new DecoyEvidence(means, frequencies, combinedP, DecoyNull.DecoyPValues(Surprise(combinedP)));
     }
 

@@ -49,7 +49,7 @@ internal static class ScreenAggregation
         bool scanned = interactionP.Length == featureCount;
         var combinedP = new double[featureCount];
         for (int f = 0; f < featureCount; f++)
-            combinedP[f] = Combine(forestP[f], combined ? rankTestP[f] : double.NaN, scanned ? interactionP[f] : double.NaN);
+            combinedP[f] = Combine(forestP[f], combined ? rankTestP[f] : double.NaN, scanned ? interactionP[f] : double.NaN, direct.Weights);
         // The combination is then calibrated against the decoys' combinations, computed the same
         // way: whatever the rank test's normal approximation or the combination's tail gets wrong
         // on this panel, it gets wrong for the decoys too.
@@ -79,16 +79,6 @@ internal static class ScreenAggregation
     }
 
     /// <summary>
-    /// Weights of the forest, the rank test and the interaction scan in the combination. Any
-    /// weights keep the p-values valid, because the combination is calibrated against the decoys'
-    /// combinations computed with the same weights; they only move power between kinds of marker.
-    /// Marginal shifts are by far the commonest signal in omics panels, so the scan, which finds
-    /// only pairs acting together, gets a fifth: a pair it finds keeps a scan p-value so small that
-    /// a fifth of the weight still carries it (calibration suite, README).
-    /// </summary>
-    private static readonly double[] CombinationWeights = [0.4, 0.4, 0.2];
-
-    /// <summary>
     /// Each test's p-value enters the combination capped at this value, so a test can subtract
     /// little from another's evidence (at most its weight times tan(0.4 pi), about 3.1). Without
     /// the cap a p-value near 1 becomes a huge negative Cauchy variable (tan((0.5 - p) pi)) that
@@ -102,11 +92,17 @@ internal static class ScreenAggregation
     /// </summary>
     public const double CombinationCap = 0.9;
 
+    /// <summary>The combination with <see cref="CombinationWeights.Even"/> weights (class and measured screens).</summary>
+    public static double Combine(double forestP, double rankTestP, double interactionP) =>
+        Combine(forestP, rankTestP, interactionP, CombinationWeights.Even);
+
     /// <summary>The weighted Cauchy combination of the forest's p-value and the direct tests' (NaN where a test did not run), each capped at <see cref="CombinationCap"/>.</summary>
-    public static double Combine(double forestP, double rankTestP, double interactionP)
+    public static double Combine(double forestP, double rankTestP, double interactionP, CombinationWeights weights)
     {
+        ArgumentNullException.ThrowIfNull(weights);
         Span<double> pValues = [Math.Min(forestP, CombinationCap), Math.Min(rankTestP, CombinationCap), Math.Min(interactionP, CombinationCap)];
-        return CauchyCombination.Combine(pValues, CombinationWeights);
+        Span<double> weightValues = [weights.Forest, weights.RankTest, weights.InteractionScan];
+        return CauchyCombination.Combine(pValues, weightValues);
     }
 
     /// <summary>Feature indices in the screen's final order (<see cref="FeatureSummary.Order"/>).</summary>

@@ -52,6 +52,9 @@ internal abstract class ScreenOutcome
     /// </summary>
     public abstract double[] RankTestPValues(FeatureMatrix values, int[] rows, int threadCount);
 
+    /// <summary>How the forest's p-value and the direct tests' are weighed in the combination (<see cref="CombinationWeights"/>).</summary>
+    public virtual CombinationWeights CombinationWeights => CombinationWeights.Even;
+
     /// <summary>A forest on <paramref name="features"/> grown on the training rows and scored on the test rows.</summary>
     public abstract PanelScore ScorePanel(BinnedMatrix matrix, ReadOnlySpan<int> features, int[] trainingRows, ReadOnlySpan<int> testRows,
         ForestOptions options);

@@ -10,7 +10,8 @@ namespace OmicsScreen.Benchmarks.Calibration;
 /// <see cref="CalibrationCatalogue"/> for each seed with the default screen, in this process
 /// (it measures error control, not time), prints each panel as it finishes and then the table,
 /// the goals and the p-value uniformity.
-/// Usage: calibration [--seeds N] [--first-seed S] [--quick] [--threads T] [--kind classes|measured|follow-up] [--only NAME[,NAME...]]
+/// Usage: calibration [--seeds N] [--first-seed S] [--quick] [--threads T] [--kind classes|measured|follow-up] [--only NAME[,NAME...]],
+/// or calibration shuffled ... (<see cref="ShuffledOutcomeCheck"/>), or calibration evidence|weigh ... (<see cref="CombinationStudy"/>).
 /// </summary>
 public static class CalibrationSuite
 {
@@ -18,6 +19,18 @@ public static class CalibrationSuite
     {
         ArgumentNullException.ThrowIfNull(args);
         ArgumentNullException.ThrowIfNull(output);
+        if (args.Count > 0 && args[0] is "shuffled" or "evidence" or "weigh")
+        {
+            try
+            {
+                return args[0] == "shuffled" ? ShuffledOutcomeCheck.Run(args.Skip(1).ToList(), output) : CombinationStudy.Run(args, output);
+            }
+            catch (Exception error) when (error is ArgumentException or FormatException)
+            {
+                Console.Error.WriteLine(error.Message);
+                return 2;
+            }
+        }
         CalibrationSettings settings;
         try
         {

@@ -115,9 +115,13 @@ public class OutcomeKindScreenTests
         // Issues 17 and 18 (known truth): the planted outcome shuffled over the samples is unrelated
         // to every feature, so any list is false; under this global null Benjamini-Hochberg at 0.10
         // gives a non-empty list with probability at most 0.10 (Benjamini & Hochberg 1995).
-        // The measured kind FAILS this check on the same seeds (lists of one marker in 2 of 10,
-        // measured 2026-12-05); it is recorded in README (issue 17) and not yet fixed, so it is not
-        // run here rather than weakened.
+        // The measured kind is not run here: on these seeds it lists one marker in 2 of 10 (seeds 4
+        // and 7), and over 1,000 such shuffled panels (seeds 1-1,000, these options; `calibration
+        // shuffled` of the benchmark program, 2026-12-05) it lists in 9.5% (Wilson 95% interval
+        // 7.8-11.5%), the level Benjamini-Hochberg promises under the global null. At a list rate of
+        // 9.5%, 2 or more lists in 10 panels has probability 0.25 (binomial), so no rule at the
+        // nominal level can promise 9 of 10; the measured kind's rate is checked at a sample size
+        // that can tell a valid rule from a liberal one instead (next test).
         int nonEmpty = 0;
         var lists = new List<int>();
         for (ulong seed = 1; seed <= 10; seed++)
@@ -128,6 +132,27 @@ public class OutcomeKindScreenTests
             if (result.Shortlist.Count > 0) nonEmpty++;
         }
         Assert.True(nonEmpty <= 1, $"non-empty lists in {nonEmpty} of 10 shuffled panels (lengths {string.Join(", ", lists)})");
+    }
+
+    [Fact]
+    public void A_shuffled_measured_outcome_gives_lists_at_no_more_than_the_nominal_rate_over_30_seeds()
+    {
+        // Known truth: the shuffled outcome is unrelated to every feature, and under this global null
+        // Benjamini-Hochberg at 0.10 gives a non-empty list with probability at most 0.10 (Benjamini &
+        // Hochberg 1995). With 30 panels, a rule at that rate gives more than 6 lists with probability
+        // 0.026 (binomial tail); a rule listing in a quarter of null panels passes with probability
+        // 0.35 only. Measured on these seeds 2026-12-05: 5 of 30 (seeds 4, 7, 23, 26, 30); over
+        // 1,000 seeds 9.5% (benchmark program, `calibration shuffled`).
+        int nonEmpty = 0;
+        var listed = new List<ulong>();
+        for (ulong seed = 1; seed <= 30; seed++)
+        {
+            var result = ScreenRunner.Run(Shuffled(MeasuredPanel(100, 60, 80 + seed, planted: true), seed), Quick(seed));
+            if (result.Shortlist.Count == 0) continue;
+            nonEmpty++;
+            listed.Add(seed);
+        }
+        Assert.True(nonEmpty <= 6, $"non-empty lists in {nonEmpty} of 30 shuffled measured panels (seeds {string.Join(", ", listed)})");
     }
 
     /// <summary>The panel with its outcome (value, or time with its event) moved to a random other sample.</summary>

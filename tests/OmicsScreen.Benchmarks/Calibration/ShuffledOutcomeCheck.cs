@@ -1,0 +1,199 @@
+using System.Diagnostics;
+using System.Globalization;
+using OmicsScreen.Engine.Panels;
+using OmicsScreen.Engine.Randomness;
+using OmicsScreen.Screening.Importance;
+using OmicsScreen.Screening.Screen;
+using OmicsScreen.Screening.Statistics;
+using OmicsScreen.TestSupport;
+
+namespace OmicsScreen.Benchmarks.Calibration;
+
+/// <summary>
+/// Issue 17's shuffled-outcome check on many panels: the planted panels of
+/// OutcomeKindScreenTests (standard-normal features; measured y = 1.0 z0 + 0.8 z1 + 1.2 [z2 &gt; 0.5]
+/// + e, or follow-up with that log hazard), the outcome moved to a random other sample, so every
+/// feature is null (known truth). Each panel is screened; the decoys' evidence is recomputed as
+/// the screen computes it, so the smallest p-value can be traced to its source: a count of decoys
+/// (the Monte Carlo p-value) or the generalized Pareto tail, and the forest's and the rank test's
+/// p-values beneath it. Prints the list rate beside the rates of simpler rules on the same p-values,
+/// and how uniform the null p-values are.
+/// Usage: calibration shuffled [--kind measured|follow-up] [--panels N] [--first-seed S]
+/// [--samples N] [--features N] [--defaults] [--threads T]
+/// </summary>
+public static class ShuffledOutcomeCheck
+{
+    private sealed record PanelTrace(int Seed, int Listed, double SmallestP, int DecoysAtOrAbove, bool FromTail,
+        double ForestP, double RankP, double CombinedP, bool ListByCount, bool ListByRankTest, bool ListUncalibrated,
+        double[] PValues, double[] ForestPs, double[] RankPs, double Seconds);
+
+    public static int Run(IReadOnlyList<string> args, TextWriter output)
+    {
+        ArgumentNullException.ThrowIfNull(args);
+        ArgumentNullException.ThrowIfNull(output);
+        var kind = OutcomeKind.Measured;
+        int panels = 200, firstSeed = 1, samples = 100, features = 60, threads = 0;
+        bool defaults = false;
+        for (int i = 0; i < args.Count; i++)
+        {
+            string Value() => i + 1 < args.Count ? args[++i] : throw new ArgumentException($"{args[i]} needs a value.");
+            int Integer() => int.Parse(Value(), NumberStyles.None, CultureInfo.InvariantCulture);
+            switch (args[i])
+            {
+                case "--kind": kind = Value() == "follow-up" ? OutcomeKind.TimeToEvent : OutcomeKind.Measured; break;
+                case "--panels": panels = Integer(); break;
+                case "--first-seed": firstSeed = Integer(); break;
+                case "--samples": samples = Integer(); break;
+                case "--features": features = Integer(); break;
+                case "--threads": threads = Integer(); break;
+                case "--defaults": defaults = true; break;
+                default: throw new ArgumentException($"Unknown option '{args[i]}' of the shuffled-outcome check.");
+            }
+        }
+
+        output.WriteLine(Invariant($"# shuffled-outcome check: {kind}, {panels} panels of {samples} x {features} (seeds {firstSeed}-{firstSeed + panels - 1}), {(defaults ? "default options" : "the test's quick options (6 pairs, 150 trees)")}; load average {Load()}"));
+        var traces = new List<PanelTrace>();
+        var watch = Stopwatch.StartNew();
+        for (int seed = firstSeed; seed < firstSeed + panels; seed++)
+        {
+            var trace = Measure(kind, samples, features, (ulong)seed, defaults, threads);
+            traces.Add(trace);
+            output.WriteLine(Invariant(
+                $"seed {seed}: list {trace.Listed}; smallest p {trace.SmallestP:G3} ({(trace.FromTail ? "tail" : "count")}, {trace.DecoysAtOrAbove} decoys at or above; forest p {trace.ForestP:G3}, rank p {trace.RankP:G3}, combined {trace.CombinedP:G3}); list by count {Yes(trace.ListByCount)}, by rank test alone {Yes(trace.ListByRankTest)}, uncalibrated {Yes(trace.ListUncalibrated)}; {trace.Seconds:F1} s"));
+            output.Flush();
+        }
+
+        int count = traces.Count;
+        output.WriteLine();
+        output.WriteLine(Invariant($"Panels with a list (BH 0.10; a valid rule gives at most 10%; 95% Wilson interval):"));
+        Rate(output, "the screen", traces.Count(t => t.Listed > 0), count);
+        Rate(output, "calibration by decoy count only (no tail)", traces.Count(t => t.ListByCount), count);
+        Rate(output, "rank test alone", traces.Count(t => t.ListByRankTest), count);
+        Rate(output, "combination, uncalibrated", traces.Count(t => t.ListUncalibrated), count);
+        output.WriteLine(Invariant($"Lists whose smallest p came from the tail: {traces.Count(t => t.Listed > 0 && t.FromTail)} of {traces.Count(t => t.Listed > 0)}"));
+        output.WriteLine();
+        output.WriteLine("Null p-values pooled over panels (share at or under each level; KS distance to uniform):");
+        Uniformity(output, "screen p", traces.SelectMany(t => t.PValues).ToList());
+        Uniformity(output, "forest p", traces.SelectMany(t => t.ForestPs).ToList());
+        Uniformity(output, "rank p", traces.SelectMany(t => t.RankPs).ToList());
+        // Under the global null with independent uniform p-values, 1 - (1 - smallest)^features is uniform (Šidák).
+        Uniformity(output, "smallest screen p per panel, Sidak-adjusted", traces.Select(t => 1 - Math.Pow(1 - t.SmallestP, features)).ToList());
+        output.WriteLine(Invariant($"Wall time {watch.Elapsed.TotalSeconds:F0} s; load average at the end {Load()}."));
+        return 0;
+    }
+
+    private static PanelTrace Measure(OutcomeKind kind, int samples, int features, ulong seed, bool defaults, int threads)
+    {
+        var watch = Stopwatch.StartNew();
+        var panel = Shuffled(kind == OutcomeKind.Measured ? MeasuredPanel(samples, features, 80 + seed) : FollowUpPanel(samples, features, 80 + seed), seed);
+        var options = defaults
+            ? new ScreenOptions { Seed = seed, CurveFolds = 0, ThreadCount = threads }
+            : new ScreenOptions { Seed = seed, HalfSamplePairs = 6, TreesPerForest = 150, CurveFolds = 0, ThreadCount = threads };
+        var result = ScreenRunner.Run(panel, options);
+
+        // The decoys' evidence as the screen computed it (ScreenRunner): same plan, same rank test.
+        var allRows = Enumerable.Range(0, panel.SampleCount).ToArray();
+        var plan = DecoyPlan.For(panel.FeatureCount, result.Settings.DecoyCount, options.Seed);
+        var outcome = ScreenOutcome.For(panel);
+        var decoyRankP = outcome.RankTestPValues(plan.Values(panel.Matrix), allRows, threads);
+        var featureRankP = result.Features.Select(f => f.RankTestP).ToArray();
+        var decoys = DecoyEvidence.From(result.Repeats, new DirectTestEvidence(featureRankP, decoyRankP, [], [], []) { Weights = outcome.CombinationWeights });
+        var pValues = result.Features.Select(f => f.PValue).ToArray();
+        var check = DecoyNull.PValues(DecoyEvidence.Surprise(decoys.CombinedP), DecoyEvidence.Surprise(result.Features.Select(f => f.CombinedP).ToArray()));
+        for (int f = 0; f < pValues.Length; f++)
+            if (check[f] != pValues[f]) throw new InvalidOperationException($"seed {seed}: recomputed p-value of feature {f} differs ({check[f]} vs {pValues[f]}).");
+
+        int smallest = 0;
+        for (int f = 1; f < pValues.Length; f++) if (pValues[f] < pValues[smallest]) smallest = f;
+        var best = result.Features[smallest];
+        int decoyCount = decoys.CombinedP.Length;
+        int atOrAbove = decoys.CombinedP.Count(p => p <= best.CombinedP);
+        double countP = (1.0 + atOrAbove) / (1.0 + decoyCount);
+        // The count-only rule: every feature's p-value is its Monte Carlo p-value against the decoys.
+        var byCount = result.Features.Select(f => (1.0 + decoys.CombinedP.Count(p => p <= f.CombinedP)) / (1.0 + decoyCount)).ToArray();
+        return new PanelTrace((int)seed, result.Shortlist.Count, best.PValue, atOrAbove, best.PValue < countP,
+            best.ForestP, best.RankTestP, best.CombinedP,
+            BenjaminiHochberg.RejectionSet(byCount, 0.10).Any(x => x),
+            BenjaminiHochberg.RejectionSet(featureRankP, 0.10).Any(x => x),
+            BenjaminiHochberg.RejectionSet(result.Features.Select(f => f.CombinedP).ToArray(), 0.10).Any(x => x),
+            pValues, result.Features.Select(f => f.ForestP).ToArray(), featureRankP, watch.Elapsed.TotalSeconds);
+    }
+
+    /// <summary>OutcomeKindScreenTests.MeasuredPanel with planted markers, drawn the same way.</summary>
+    private static Panel MeasuredPanel(int samples, int features, ulong seed)
+    {
+        var (matrix, z, _) = StandardNormalFeatures.Draw(samples, features, seed, s => $"S{s:D3}");
+        var noise = SeedSchedule.Generator(seed, 1, 0, SeedPurpose.Sampling);
+        var y = new double[samples];
+        for (int s = 0; s < samples; s++) y[s] = 1.0 * z[0][s] + 0.8 * z[1][s] + (z[2][s] > 0.5 ? 1.2 : 0) + noise.NextGaussian();
+        return new Panel(matrix, new MeasuredOutcome("score", y));
+    }
+
+    /// <summary>OutcomeKindScreenTests.FollowUpPanel with planted markers, drawn the same way.</summary>
+    private static Panel FollowUpPanel(int samples, int features, ulong seed)
+    {
+        var (matrix, z, _) = StandardNormalFeatures.Draw(samples, features, seed, s => $"S{s:D3}");
+        var draws = SeedSchedule.Generator(seed, 2, 0, SeedPurpose.Sampling);
+        var times = new double[samples];
+        var events = new bool[samples];
+        for (int s = 0; s < samples; s++)
+        {
+            double logHazard = 0.8 * z[0][s] + 0.7 * z[1][s] + (z[2][s] > 0.5 ? 1.0 : 0);
+            double eventTime = -Math.Log(1 - draws.NextDouble()) / Math.Exp(logHazard);
+            double censorTime = -Math.Log(1 - draws.NextDouble()) / 0.5;
+            times[s] = Math.Min(eventTime, censorTime);
+            events[s] = eventTime <= censorTime;
+        }
+        return new Panel(matrix, new FollowUpOutcome("months", "relapse", times, events));
+    }
+
+    /// <summary>OutcomeKindScreenTests.Shuffled: the outcome moved to a random other sample.</summary>
+    private static Panel Shuffled(Panel panel, ulong seed)
+    {
+        int n = panel.SampleCount;
+        var order = Enumerable.Range(0, n).ToArray();
+        SeedSchedule.Generator(seed, 3, 0, SeedPurpose.Sampling).Shuffle(order.AsSpan());
+        if (panel.Kind == OutcomeKind.Measured)
+        {
+            var y = panel.Measured!.Values.ToArray();
+            return new Panel(panel.Matrix, new MeasuredOutcome("score", order.Select(i => y[i]).ToArray()));
+        }
+        var times = panel.FollowUp!.Times.ToArray();
+        var events = panel.FollowUp.Events.ToArray();
+        return new Panel(panel.Matrix, new FollowUpOutcome("months", "relapse",
+            order.Select(i => times[i]).ToArray(), order.Select(i => events[i]).ToArray()));
+    }
+
+    /// <summary>The rate with its 95% Wilson (1927) score interval.</summary>
+    private static void Rate(TextWriter output, string label, int hits, int count)
+    {
+        const double z = 1.959963984540054;
+        double p = (double)hits / count, denominator = 1 + z * z / count;
+        double centre = (p + z * z / (2 * count)) / denominator;
+        double half = z * Math.Sqrt(p * (1 - p) / count + z * z / (4.0 * count * count)) / denominator;
+        output.WriteLine(Invariant($"  {label}: {hits} of {count} ({p:P1}; {Math.Max(0, centre - half):P1}-{Math.Min(1, centre + half):P1})"));
+    }
+
+    private static void Uniformity(TextWriter output, string label, IReadOnlyList<double> pValues)
+    {
+        var levels = new[] { 0.001, 0.002, 0.005, 0.01, 0.05, 0.1, 0.5 };
+        output.WriteLine(Invariant($"  {label} ({pValues.Count}): ") + string.Join(", ", levels.Select(l => Invariant($"<= {l}: {PValueUniformity.ShareAtOrBelow(pValues, l):F4}")))
+            + Invariant($"; KS {PValueUniformity.KolmogorovSmirnovDistance(pValues):F3} (5% critical {PValueUniformity.CriticalDistance(pValues.Count):F3})"));
+    }
+
+    private static string Yes(bool value) => value ? "yes" : "no";
+
+    private static string Load()
+    {
+        try
+        {
+            return File.Exists("/proc/loadavg") ? File.ReadAllText("/proc/loadavg").Split(' ')[0] : "n/a";
+        }
+        catch (IOException)
+        {
+            return "n/a";
+        }
+    }
+
+    private static string Invariant(FormattableString text) => FormattableString.Invariant(text);
+}
