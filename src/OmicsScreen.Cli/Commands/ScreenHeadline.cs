@@ -59,6 +59,12 @@ public sealed record ScreenHeadline
         /// <summary>Harrell's C of the marker against follow-up; absent for other kinds.</summary>
         [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)]
         public double? Concordance { get; init; }
+
+        /// <summary>The shape of the forest's partial dependence on the marker, in words (shortlist.tsv's effect_shape).</summary>
+        public string EffectShape { get; init; } = "";
+
+        /// <summary>The marker's named forest partners, strongest first (shortlist.tsv's forest_partners).</summary>
+        public IReadOnlyList<string> ForestPartners { get; init; } = [];
     }
 
     public static ScreenHeadline Of(LoadedPanel loaded, ScreenResult result, string folder)
@@ -90,6 +96,8 @@ public sealed record ScreenHeadline
             {
                 SpearmanRho = e.Measured?.Rho,
                 Concordance = e.FollowUp?.Concordance.Concordance,
+                EffectShape = result.Effects.Of(e.Forest.FeatureIndex)?.Shape.Description ?? "",
+                ForestPartners = EffectTables.PartnerNames(result, e.Forest.FeatureIndex).ToArray(),
             }).ToList(),
             RecommendedPanelSize = result.PanelSize?.RecommendedSize,
             LockedPanelSize = result.LockedPanelSize,

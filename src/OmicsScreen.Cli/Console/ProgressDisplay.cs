@@ -124,6 +124,7 @@ internal sealed class ProgressDisplay : IProgress<ScreenProgress>
         ScreenStage.ReferenceForest => "reference forest",
         ScreenStage.Repeats => "half-sample repeats",
         ScreenStage.OutcomePermutations => "outcome permutations",
+        ScreenStage.Effects => "effect shapes and partners",
         ScreenStage.PanelSizeCurve => "panel-size curve",
         ScreenStage.Cohorts => "cohort check",
         ScreenStage.WorkUnits => "work units",

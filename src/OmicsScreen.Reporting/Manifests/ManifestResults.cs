@@ -35,8 +35,12 @@ public sealed record ManifestResults
     [System.Text.Json.Serialization.JsonIgnore(Condition = System.Text.Json.Serialization.JsonIgnoreCondition.WhenWritingNull)]
     public double? RecommendedPanelSizeSelectionAwareRmse { get; init; }
 
+    /// <summary>Each shortlisted marker's effect shape and forest partners (issue 19).</summary>
+    public ManifestEffects? Effects { get; init; }
+
     public static ManifestResults Of(ScreenResult result) => new()
     {
+        Effects = ManifestEffects.Of(result),
         Shortlisted = result.Shortlist.Count,
         ShortlistRule = result.Settings.Options.Rule == Screening.Screen.ShortlistRule.QValue ? "q-value" : "decoy-bound",
         RecommendedPanelSize = result.PanelSize?.RecommendedSize,

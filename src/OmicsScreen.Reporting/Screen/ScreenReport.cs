@@ -96,7 +96,7 @@ public static class ScreenReport
             html.Legend("Group: markers sharing a redundancy group are strongly correlated and can stand in for one another. "
                 + "Selection frequency: share of repeats that selected the marker. Median rank [IQR]: its rank over repeats, with quartiles.");
             html.Table(ScreenReportTables.ShortlistStatistics(result, input.FeatureLabels));
-            html.Legend(OutcomeKindReport.ShortlistLegend(result.Kind));
+            html.Legend(OutcomeKindReport.ShortlistLegend(result.Kind) + " " + EffectTables.ShortlistLegend);
         }
         html.EndSection();
     }
@@ -213,6 +213,8 @@ public static class ScreenReport
                     "Values of " + input.FeatureLabels.Label(feature.FeatureIndex, feature.Feature) + " by class.");
             html.EndSection();
         }
+
+        EffectReportSection.Write(html, input);
 
         WriteStatisticianFigures(html, input);
 

@@ -67,6 +67,7 @@ internal static class ScreenReportTables
         headers.AddRange(effects.Select(e => new HtmlTableColumn(e, e == "log2 ratio" ? ColumnAlignment.Numeric : ColumnAlignment.Text)));
         headers.Add(new("Univariate rank", ColumnAlignment.Numeric));
         if (result.Kind == OutcomeKind.Classes) headers.Add(new("Acts with"));
+        headers.Add(new("Partners in the forest"));
         var table = new HtmlTable(ShortlistStatisticsCaption, headers) { FirstColumnIsRowHeader = false };
         foreach (var entry in result.Shortlist)
         {
@@ -74,7 +75,7 @@ internal static class ScreenReportTables
             {
                 ReportNumber.Integer(entry.Rank),
                 labels.Label(entry.Forest.FeatureIndex, entry.Forest.Feature),
-                entry.Univariate is { } row ? ScreenTables.DirectionText(row) : ScreenTables.DirectionOf(result, entry.Forest.FeatureIndex),
+                EffectTables.DirectionWords(entry, result),
             };
             switch (result.Kind)
             {
@@ -100,6 +101,7 @@ internal static class ScreenReportTables
                 int partner = ActsWith(entry.Forest);
                 cells.Add(partner < 0 ? "" : labels.Label(partner, result.Features[partner].Feature));
             }
+            cells.Add(string.Join(", ", result.Effects.Of(entry.Forest.FeatureIndex)?.Partners.Select(p => labels.Label(p, result.Features[p].Feature)) ?? []));
             table.AddRow([.. cells]);
         }
         return table;

@@ -44,6 +44,7 @@ public static class ScreenTables
             _ => ClassColumns(),
         });
         columns.Add(TsvColumn<ShortlistEntry>.Integer("univariate_rank", e => e.UnivariateRank));
+        columns.AddRange(EffectTables.ShortlistColumns(result));
         AddLabelColumns(columns, labels, e => e.Forest.FeatureIndex);
         return new TsvTableWriter<ShortlistEntry>(columns).Write(writer, result.Shortlist);
     }

@@ -102,8 +102,8 @@ public sealed class ResultsFolder : IDisposable
         ? [ApplyResultFiles.Scores, ApplyResultFiles.Evaluation, ApplyResultFiles.Calibration, ApplyResultFiles.Confusion, ApplyResultFiles.RiskGroups, ApplyResultFiles.Report]
         :
         [
-            "shortlist.tsv", "features.tsv", "panel_size_curve.tsv", "marker_statistics.tsv", "marker_statistics_by_cohort.tsv",
-            .. ScreenResultFiles.CohortTables, Locking.LockedPanelFile.DefaultFileName, ScreenResultFiles.Report,
+            "shortlist.tsv", "features.tsv", "panel_size_curve.tsv", Reporting.Screen.EffectTables.FileName, "marker_statistics.tsv",
+            "marker_statistics_by_cohort.tsv", .. ScreenResultFiles.CohortTables, Locking.LockedPanelFile.DefaultFileName, ScreenResultFiles.Report,
         ];
 
     private static void Check(string shown, string full, bool force, ResultsKind kind, IEnumerable<string?> inputPaths)

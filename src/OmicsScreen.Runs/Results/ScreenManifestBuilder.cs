@@ -67,6 +67,7 @@ public static class ScreenManifestBuilder
         ScreenStage.ReferenceForest => "reference_forest",
         ScreenStage.Repeats => "repeats",
         ScreenStage.OutcomePermutations => "outcome_permutations",
+        ScreenStage.Effects => "effects",
         ScreenStage.PanelSizeCurve => "panel_size_curve",
         ScreenStage.Cohorts => "cohorts",
         ScreenStage.WorkUnits => "work_units",

@@ -24,6 +24,7 @@ public static class ScreenResultsWriter
         folder.WriteText("shortlist.tsv", w => ScreenTables.WriteShortlist(w, result, labels));
         folder.WriteText("features.tsv", w => ScreenTables.WriteFeatures(w, result, labels));
         if (result.PanelSize is { } curve) folder.WriteText("panel_size_curve.tsv", w => ScreenTables.WritePanelSizeCurve(w, curve));
+        folder.WriteText(EffectTables.FileName, w => EffectTables.WriteEffectShapes(w, result));
         switch (result.Kind)
         {
             case OutcomeKind.Measured:

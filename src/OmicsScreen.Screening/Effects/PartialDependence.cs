@@ -64,7 +64,7 @@ public static class PartialDependence
     }
 
     /// <summary>The occupied value bins of the feature (at most maxGridPoints, at evenly spaced sample quantiles) and their median values.</summary>
-    private static (byte[] Codes, double[] Values) Grid(FeatureMatrix raw, BinnedMatrix binned, int feature, int maxGridPoints)
+    internal static (byte[] Codes, double[] Values) Grid(FeatureMatrix raw, BinnedMatrix binned, int feature, int maxGridPoints)
     {
         var bins = binned.Bins(feature);
         var codes = binned.Codes(feature);

@@ -12,7 +12,11 @@ namespace OmicsScreen.Screening.Effects;
 /// </summary>
 public sealed record TreeLeafValues(SplitTopology Topology, double[] NodeValues)
 {
-    /// <summary>Class trees: 1 where the leaf votes for the positive class, else 0, so the forest's mean is its vote share.</summary>
+    /// <summary>
+    /// Class trees: the positive class's share of the node's (class-weighted) training samples, so
+    /// the forest's mean is its probability of the positive class (leaf frequencies; a 0/1 vote
+    /// would make every curve a count of trees).
+    /// </summary>
     public static TreeLeafValues[] OfClassForest(Forest forest, int positiveClass)
     {
         ArgumentNullException.ThrowIfNull(forest);
@@ -20,9 +24,15 @@ public sealed record TreeLeafValues(SplitTopology Topology, double[] NodeValues)
         for (int t = 0; t < trees.Length; t++)
         {
             var tree = forest.Tree(t);
-            var classes = tree.NodeClasses;
+            var weights = tree.ClassWeights;
+            int classCount = tree.ClassCount;
             var values = new double[tree.NodeCount];
-            for (int node = 0; node < values.Length; node++) values[node] = classes[node] == positiveClass ? 1 : 0;
+            for (int node = 0; node < values.Length; node++)
+            {
+                double total = 0;
+                for (int c = 0; c < classCount; c++) total += weights[node * classCount + c];
+                values[node] = total > 0 ? weights[node * classCount + positiveClass] / total : 0;
+            }
             trees[t] = new TreeLeafValues(tree.Topology, values);
         }
         return trees;

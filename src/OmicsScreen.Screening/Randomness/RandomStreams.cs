@@ -17,7 +17,8 @@ namespace OmicsScreen.Screening.Randomness;
 /// screen's seed, clear of that inner screen's own repeats (it never has a million of them);</item>
 /// <item>int.MaxValue: the reference forest on all samples and the outcome-permutation null's observed forest;
 /// int.MaxValue - 1: the forest predicting the cohort and the locked panel's forest;
-/// int.MaxValue - 2: the decoys (sources and permutations, once per run);</item>
+/// int.MaxValue - 2: the decoys (sources and permutations, once per run);
+/// int.MaxValue - 3: the interaction-partner scan's forest; int.MaxValue - 4: its stratum-permuted copies;</item>
 /// <item>purpose Resampling, index slots: 0 half-samples (repeat = pair), 1 outer folds (repeat =
 /// fold repeat), 2 decoy sources, 1000 + fold inner seeds of the curve's folds (repeat = fold
 /// repeat), 2000 + cohort and 3000 + cohort the seeds of each cohort's own screen and of the
@@ -45,6 +46,12 @@ public static class RandomStreams
 
     /// <summary>Repeat coordinate of the decoys' streams: one per run, shared by every repeat.</summary>
     public const int DecoyRepeat = int.MaxValue - 2;
+
+    /// <summary>Repeat coordinate of the interaction-partner scan's forest.</summary>
+    public const int PartnerForestRepeat = int.MaxValue - 3;
+
+    /// <summary>Repeat coordinate of the interaction-partner scan's stratum-permuted copies.</summary>
+    public const int PartnerCopyRepeat = int.MaxValue - 4;
 
     /// <summary>First repeat coordinate of the forests that score a panel at an inner screen's seed.</summary>
     public const int ScoringRepeatBase = 1 << 20;
@@ -88,6 +95,16 @@ public static class RandomStreams
 
     /// <summary>The forest scoring a held-out cohort with the other cohorts' panel; <paramref name="heldOutSeed"/> is <see cref="HeldOutScreenSeed"/>.</summary>
     public static ForestStreams HeldOutScoring(ulong heldOutSeed) => new(heldOutSeed, ScoringRepeatBase);
+
+    /// <summary>The interaction-partner scan's forest on the panel and the markers' stratum-permuted copies.</summary>
+    public static ForestStreams PartnerForest(ulong runSeed) => new(runSeed, PartnerForestRepeat);
+
+    /// <summary>The shuffle of the interaction-partner scan's copy <paramref name="copy"/> (marker i's copy m is i x copies + m).</summary>
+    public static Xoshiro256StarStar PartnerCopy(ulong runSeed, int copy)
+    {
+        ArgumentOutOfRangeException.ThrowIfNegative(copy);
+        return SeedSchedule.Generator(runSeed, PartnerCopyRepeat, copy, SeedPurpose.PermutedCopy);
+    }
 
     /// <summary>The generator of half-sample pair <paramref name="pair"/>.</summary>
     public static Xoshiro256StarStar HalfSamples(ulong runSeed, int pair) =>

@@ -2,6 +2,7 @@ using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Metrics;
 using OmicsScreen.Engine.Panels;
+using OmicsScreen.Screening.Effects;
 using OmicsScreen.Screening.Importance;
 using OmicsScreen.Screening.Resampling;
 using OmicsScreen.Screening.Statistics;
@@ -39,8 +40,17 @@ internal sealed class ClassScreenOutcome(ClassOutcome outcome) : ScreenOutcome
         var votes = new OutOfBagVotes(forest, outcome);
         var summary = new ReferenceForestSummary(votes.Error, votes.PerClassError.ToArray(), votes.Auc, votes.ErrorCurve.ToArray());
         return new ReferenceForest(summary,
-            (binned, groups, threads) => OutOfBagPermutationImportance.MeasureGroups(forest, binned, outcome, groups, threads));
+            (binned, groups, threads) => OutOfBagPermutationImportance.MeasureGroups(forest, binned, outcome, groups, threads))
+        {
+            LeafValues = TreeLeafValues.OfClassForest(forest, outcome.PositiveClass),
+        };
     }
+
+    public override IReadOnlyList<TreeLeafValues> GrowLeafValues(BinnedMatrix matrix, ForestOptions options) =>
+        TreeLeafValues.OfClassForest(ForestTrainer.Train(matrix, outcome, options), outcome.PositiveClass);
+
+    /// <summary>The classes.</summary>
+    public override int[] PartnerStrata() => outcome.SampleClasses.ToArray();
 
     /// <summary>The rank tests of every class contrast; a feature's rank is by its smallest p over contrasts.</summary>
     public override SingleMarkerStatistics SingleMarkers(Panel panel, int threadCount)

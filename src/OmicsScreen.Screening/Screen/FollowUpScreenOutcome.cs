@@ -3,6 +3,7 @@ using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Engine.Parallelism;
 using OmicsScreen.Engine.Survival;
+using OmicsScreen.Screening.Effects;
 using OmicsScreen.Screening.Importance;
 using OmicsScreen.Screening.Resampling;
 using OmicsScreen.Screening.Statistics;
@@ -69,8 +70,29 @@ internal sealed class FollowUpScreenOutcome(FollowUpOutcome outcome) : ScreenOut
         {
             OutOfBagConcordance = concordance.Concordance,
         };
-        return new ReferenceForest(summary, null);
+        return new ReferenceForest(summary, null) { LeafValues = TreeLeafValues.OfSurvivalForest(forest) };
     }
+
+    public override IReadOnlyList<TreeLeafValues> GrowLeafValues(BinnedMatrix matrix, ForestOptions options) =>
+        TreeLeafValues.OfSurvivalForest(SurvivalForestTrainer.Train(matrix, _followUp, options));
+
+    /// <summary>Events and censored samples apart, each in fifths of follow-up time by rank, so a copy keeps its marker's link to early or late events.</summary>
+    public override int[] PartnerStrata()
+    {
+        var times = _followUp.Times.ToArray();
+        var events = _followUp.Events.ToArray();
+        var strata = new int[times.Length];
+        for (int seen = 0; seen < 2; seen++)
+        {
+            var rows = Enumerable.Range(0, times.Length).Where(s => events[s] == (seen == 1)).ToArray();
+            var bins = Effects.PartnerStrata.RankBins(rows.Select(s => times[s]).ToArray(), TimeStratumCount);
+            for (int i = 0; i < rows.Length; i++) strata[rows[i]] = seen * TimeStratumCount + bins[i];
+        }
+        return strata;
+    }
+
+    /// <summary>Time strata of the partner scan's copies within events and within censored samples.</summary>
+    public const int TimeStratumCount = 5;
 
     private static double[] ErrorCurve(SurvivalForest forest)
     {

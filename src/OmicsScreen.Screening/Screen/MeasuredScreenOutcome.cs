@@ -3,6 +3,7 @@ using OmicsScreen.Engine.Panels;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Parallelism;
 using OmicsScreen.Engine.Regression;
+using OmicsScreen.Screening.Effects;
 using OmicsScreen.Screening.Importance;
 using OmicsScreen.Screening.Resampling;
 using OmicsScreen.Screening.Statistics;
@@ -54,8 +55,17 @@ internal sealed class MeasuredScreenOutcome(MeasuredOutcome outcome) : ScreenOut
             OutOfBagRSquared = outOfBag.RSquared,
             OutOfBagPredictions = outOfBag.Predictions.ToArray(),
         };
-        return new ReferenceForest(summary, null);
+        return new ReferenceForest(summary, null) { LeafValues = TreeLeafValues.OfRegressionForest(forest) };
     }
+
+    public override IReadOnlyList<TreeLeafValues> GrowLeafValues(BinnedMatrix matrix, ForestOptions options) =>
+        TreeLeafValues.OfRegressionForest(RegressionForestTrainer.Train(matrix, _values, options));
+
+    /// <summary>Tenths of the outcome by rank (ties by sample order), so a copy keeps its marker's trend with the outcome.</summary>
+    public override int[] PartnerStrata() => Effects.PartnerStrata.RankBins(_values, PartnerStratumCount);
+
+    /// <summary>Strata of the partner scan's copies.</summary>
+    public const int PartnerStratumCount = 10;
 
     public override SingleMarkerStatistics SingleMarkers(Panel panel, int threadCount)
     {

@@ -73,6 +73,15 @@ internal abstract class ScreenOutcome
     /// <summary>The single-marker statistics of every feature on all samples, with each feature's rank by their p-value.</summary>
     public abstract SingleMarkerStatistics SingleMarkers(Panel panel, int threadCount);
 
+    /// <summary>A forest of the screen's kind on all samples of <paramref name="matrix"/>, read as leaf values (effects: partial dependence, partner scan).</summary>
+    public abstract IReadOnlyList<Effects.TreeLeafValues> GrowLeafValues(BinnedMatrix matrix, ForestOptions options);
+
+    /// <summary>
+    /// The strata the interaction-partner scan permutes its copies within: fine enough that a copy
+    /// keeps its marker's link to the outcome, coarse enough to hold several samples each.
+    /// </summary>
+    public abstract int[] PartnerStrata();
+
     /// <summary>The values of the given rows, in their order.</summary>
     protected static double[] AtRows(double[] values, ReadOnlySpan<int> rows)
     {

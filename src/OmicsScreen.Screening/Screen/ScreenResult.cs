@@ -44,6 +44,9 @@ public sealed record ScreenResult(
     /// <summary>Every feature's statistics against follow-up, in panel order; empty for other kinds.</summary>
     public IReadOnlyList<FollowUpMarker> FollowUpMarkers { get; init; } = [];
 
+    /// <summary>How each shortlisted marker acts: effect shapes and interaction partners (empty for an empty shortlist).</summary>
+    public Effects.ScreenEffects Effects { get; init; } = OmicsScreen.Screening.Effects.ScreenEffects.Empty;
+
     /// <summary>The outcome kind screened.</summary>
     public OmicsScreen.Engine.Panels.OutcomeKind Kind { get; init; } = OmicsScreen.Engine.Panels.OutcomeKind.Classes;
 }

@@ -3,6 +3,7 @@ using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Screening.Cohorts;
+using OmicsScreen.Screening.Effects;
 using OmicsScreen.Screening.Importance;
 using OmicsScreen.Screening.Randomness;
 using OmicsScreen.Screening.Statistics;
@@ -97,6 +98,10 @@ public static class ScreenRunner
               ?? Enumerable.Repeat(double.NaN, groupMembers.Count).ToArray();
         var shortlist = shortlisted.Select((f, i) => singleMarkers.Entry(i + 1, features[f], groups[i], groupImportance[groups[i] - 1])).ToList();
 
+        progress?.Report(new ScreenProgress(ScreenStage.Effects, 0, 1));
+        var effects = EffectAnalysis.Run(context, referenceForest.LeafValues, shortlisted, order);
+        Finish(ScreenStage.Effects);
+
         PanelSizeCurve? curve = null;
         if (options.CurveFolds > 0)
         {
@@ -126,6 +131,7 @@ public static class ScreenRunner
             MeasuredMarkers = singleMarkers.Measured,
             FollowUpMarkers = singleMarkers.FollowUp,
             Kind = panel.Kind,
+            Effects = effects,
         };
     }
 

@@ -8,6 +8,9 @@ public enum ScreenStage
     ReferenceForest,
     Repeats,
     OutcomePermutations,
+
+    /// <summary>Effect shapes and interaction partners of the shortlisted markers.</summary>
+    Effects,
     PanelSizeCurve,
     Cohorts,
 

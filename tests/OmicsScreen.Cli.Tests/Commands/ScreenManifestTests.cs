@@ -12,7 +12,9 @@ namespace OmicsScreen.Cli.Tests.Commands;
 /// masked as <see cref="Masked"/> masks (timestamps, version, paths, the locked panel's SHA-256
 /// (it holds the version), core count and stage seconds differ by run and machine; every key and
 /// its order, and every other value, must not). One key was added deliberately since:
-/// panel.outcome_kind ("classes") of the screen manifest, when screens of other outcome kinds came.
+/// panel.outcome_kind ("classes") of the screen manifest, when screens of other outcome kinds came;
+/// and with effect shapes and forest partners (issue 19) results.effects, seconds.effects and the
+/// output effect_shapes.tsv.
 /// </summary>
 public sealed class ScreenManifestTests : IDisposable
 {

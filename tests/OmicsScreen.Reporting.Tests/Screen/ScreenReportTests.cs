@@ -122,7 +122,9 @@ public sealed class ScreenReportTests
         // then the cohort section: one forest plot per top marker and, from three screened cohorts, the agreement map
         int forests = result.Cohorts is null ? 0 : Math.Min(CohortReportCharts.ForestPlotMarkerLimit, result.Shortlist.Count);
         int cohortMap = result.Cohorts is { ScreenedCohorts.Count: >= CohortReportCharts.HeatMapMinimumCohorts } ? 1 : 0;
-        int expected = 5 + strips + (result.Shortlist.Count >= 2 ? 1 : 0) + forests + cohortMap + StatisticianCharts(result);
+        // and how each marker acts (issue 19): a curve per shortlisted marker up to the limit, a heat map per strongest named pair
+        int effects = Math.Min(EffectReportSection.ChartLimit, result.Effects.Markers.Count(m => m.Curve.GridCount >= 2)) + result.Effects.Surfaces.Count;
+        int expected = 5 + strips + (result.Shortlist.Count >= 2 ? 1 : 0) + forests + cohortMap + StatisticianCharts(result) + effects;
         Assert.Equal(expected, charts.Count);
 
         foreach (var chart in charts)

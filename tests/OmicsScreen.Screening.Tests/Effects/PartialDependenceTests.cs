@@ -107,6 +107,29 @@ public class PartialDependenceTests
         Assert.InRange(shape.Step, 6.0 - step, 6.0 + step);
     }
 
+    [Theory]
+    [InlineData(11UL)]
+    [InlineData(12UL)]
+    public void A_planted_class_threshold_is_found_within_one_grid_step_on_the_class_probability(ulong seed)
+    {
+        // Classes: P(class 1) = 0.85 above 6.0 and 0.15 below (a threshold, no trend either side);
+        // the curve is the forest's probability of class 1 (each leaf's class share).
+        var (raw, binned, y) = Simulated(seed, x => x > 6.0 ? 1 : 0);
+        var draws = new Xoshiro256StarStar(seed + 100);
+        var classes = y.Select(v => draws.NextDouble() < (v > 0.5 ? 0.85 : 0.15) ? 1 : 0).ToArray();
+        var forest = ForestTrainer.Train(binned, new ClassOutcome("y", ["a", "b"], classes, 1),
+            new ForestOptions { TreeCount = 200, Seed = seed, ThreadCount = 1, Tree = new TreeOptions { MinLeafSize = 5 } });
+        var trees = TreeLeafValues.OfClassForest(forest, 1);
+        var curve = PartialDependence.Compute(trees, raw, binned, 0, threadCount: 1);
+        Assert.All(curve.Average, p => Assert.InRange(p, 0, 1));
+        double noiseRange = Enumerable.Range(1, NoiseFeatures).Max(f => PartialDependence.Compute(trees, raw, binned, f, threadCount: 1).Range);
+        var shape = EffectShapeReader.Read(curve, 2 * noiseRange);
+        Assert.Equal(EffectShapeKind.RisesAbove, shape.Kind);
+        int at = Array.FindIndex(curve.GridValues, v => v >= shape.Step);
+        double step = curve.GridValues[at] - curve.GridValues[at - 1];
+        Assert.InRange(shape.Step, 6.0 - step, 6.0 + step);
+    }
+
     [Fact]
     public void Linear_u_shaped_and_absent_effects_read_as_such()
     {

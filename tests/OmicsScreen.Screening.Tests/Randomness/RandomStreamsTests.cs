@@ -55,6 +55,8 @@ public class RandomStreamsTests
         Add("reference forest", ForestSeeds(RandomStreams.ReferenceForest(RunSeed)));
         Add("cohort forest", ForestSeeds(RandomStreams.CohortForest(RunSeed)));
         Add("locked panel forest", ForestSeeds(RandomStreams.LockedPanelForest(RunSeed)));
+        Add("partner forest", ForestSeeds(RandomStreams.PartnerForest(RunSeed)));
+        AddGenerators("partner copies", Enumerable.Range(0, Columns * 10).Select(c => RandomStreams.PartnerCopy(RunSeed, c)));
 
         AddGenerators("half-samples", Enumerable.Range(0, Repeats / 2).Select(p => RandomStreams.HalfSamples(RunSeed, p)));
         AddGenerators("outer folds", Enumerable.Range(0, FoldRepeats).Select(k => RandomStreams.OuterFolds(RunSeed, k)));

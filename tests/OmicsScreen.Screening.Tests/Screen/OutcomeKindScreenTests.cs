@@ -1,3 +1,4 @@
+using OmicsScreen.Screening.Effects;
 using OmicsScreen.TestSupport;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Engine.Randomness;
@@ -78,6 +79,20 @@ public class OutcomeKindScreenTests
         // mostly-noise features per split recovers far less (0.16 measured with this seed). The check is
         // that the out-of-bag R² is clearly positive and below the truth; the bounds come from measurement.
         Assert.InRange(result.ReferenceForest.OutOfBagRSquared!.Value, 0.08, 0.66);
+        // Effect shapes (issue 19) on the forest's mean: marker 2's planted step at z = 0.5, i.e. at
+        // 5 + 0.5 = 5.5 in its units (the simulation's known truth); marker 0's linear effect rises.
+        AssertStepsNear(result, 2, 5.5);
+        Assert.Contains(result.Effects.Of(0)!.Shape.Kind, new[] { EffectShapeKind.Rises, EffectShapeKind.RisesAbove });
+    }
+
+    /// <summary>The marker's curve reads "rises above about X" with X within one grid step of the planted threshold.</summary>
+    private static void AssertStepsNear(ScreenResult result, int feature, double threshold)
+    {
+        var effect = result.Effects.Of(feature)!;
+        Assert.Equal(EffectShapeKind.RisesAbove, effect.Shape.Kind);
+        var grid = effect.Curve.GridValues;
+        int at = Array.FindIndex(grid, v => v >= effect.Shape.Step);
+        Assert.InRange(effect.Shape.Step, threshold - (grid[at] - grid[at - 1]), threshold + (grid[at] - grid[at - 1]));
     }
 
     [Fact]
@@ -91,6 +106,9 @@ public class OutcomeKindScreenTests
         Assert.Equal("higher values, shorter survival", result.Shortlist.First(e => e.Forest.FeatureIndex == 0).FollowUp!.Direction);
         Assert.InRange(result.ReferenceForest.OutOfBagConcordance!.Value, 0.6, 0.9);
         Assert.Equal(result.ReferenceForest.OutOfBagError, 1 - result.ReferenceForest.OutOfBagConcordance!.Value, 12);
+        // Effect shapes (issue 19) on the forest's mortality: marker 2's planted hazard step at 5.5.
+        AssertStepsNear(result, 2, 5.5);
+        Assert.Contains(result.Effects.Of(0)!.Shape.Kind, new[] { EffectShapeKind.Rises, EffectShapeKind.RisesAbove });
     }
 
     [Theory]
@@ -239,6 +257,9 @@ public class OutcomeKindScreenTests
         Assert.Equal(one.Repeats.DecoyCorrected, two.Repeats.DecoyCorrected);
         Assert.Equal(one.Features, two.Features);
         Assert.Equal(one.PanelSize!.Points, two.PanelSize!.Points);
+        // Effect curves and the partner scan (issue 19) too.
+        Assert.Equal(one.Effects.Markers.Select(m => m.Curve.Individual), two.Effects.Markers.Select(m => m.Curve.Individual));
+        Assert.Equal(one.Effects.Partners.Pairs, two.Effects.Partners.Pairs);
     }
 
     [Fact]

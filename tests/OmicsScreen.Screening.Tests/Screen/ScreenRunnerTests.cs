@@ -73,6 +73,22 @@ public class ScreenRunnerTests
         Assert.Equal(one.Features, two.Features);
         Assert.Equal(one.Shortlist.Select(e => e.Forest.Feature), two.Shortlist.Select(e => e.Forest.Feature));
         Assert.Equal(one.PanelSize!.Points, two.PanelSize!.Points);
+        // Effect shapes and interaction partners (issue 19): curves, bands, shape words, the scan's pairs.
+        Assert.NotEmpty(one.Effects.Markers);
+        Assert.Equal(one.Effects.Markers.Count, two.Effects.Markers.Count);
+        for (int i = 0; i < one.Effects.Markers.Count; i++)
+        {
+            var (a, b) = (one.Effects.Markers[i], two.Effects.Markers[i]);
+            Assert.Equal(a.Curve.Individual, b.Curve.Individual);
+            Assert.Equal(a.Curve.Average, b.Curve.Average);
+            Assert.Equal(a.Curve.Lower, b.Curve.Lower);
+            Assert.Equal(a.Curve.Upper, b.Curve.Upper);
+            Assert.Equal(a.Shape, b.Shape);
+            Assert.Equal(a.Partners, b.Partners);
+        }
+        Assert.Equal(one.Effects.Partners.Pairs, two.Effects.Partners.Pairs);
+        Assert.Equal(one.Effects.SmallestEffect, two.Effects.SmallestEffect);
+        Assert.Equal(one.Effects.Surfaces.Select(s => s.Average), two.Effects.Surfaces.Select(s => s.Average));
     }
 
     [Fact]
