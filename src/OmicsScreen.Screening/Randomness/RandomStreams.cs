@@ -14,19 +14,21 @@ namespace OmicsScreen.Screening.Randomness;
 /// <list type="bullet">
 /// <item>repeat coordinates 0 .. 2 x pairs - 1: the half-sample repeats' forests (and their permuted copies);</item>
 /// <item>repeat coordinates 1 &lt;&lt; 20 and up: forests that score a panel, grown at an inner
-/// screen's seed, clear of that inner screen's own repeats (it never has a million of them);</item>
+/// screen's seed, clear of that inner screen's own repeats (it never has a million of them); from
+/// (1 &lt;&lt; 20) + (1 &lt;&lt; 16) the forests that score a fold's clinical covariates;</item>
 /// <item>int.MaxValue: the reference forest on all samples and the outcome-permutation null's observed forest;
 /// int.MaxValue - 1: the forest predicting the cohort and the locked panel's forest;
 /// int.MaxValue - 2: the decoys (sources and permutations, once per run);</item>
 /// <item>purpose Resampling, index slots: 0 half-samples (repeat = pair), 1 outer folds (repeat =
-/// fold repeat), 2 decoy sources, 1000 + fold inner seeds of the curve's folds (repeat = fold
+/// fold repeat), 2 decoy sources, 3 the added value's bootstrap (repeat 0), 1000 + fold inner seeds of the curve's folds (repeat = fold
 /// repeat), 2000 + cohort and 3000 + cohort the seeds of each cohort's own screen and of the
 /// screen without it (so at most 1,000 folds and 1,000 cohorts, checked).</item>
 /// </list>
 /// Deliberate sharing (both forests see the same samples, so their comparison is paired):
 /// the clean and the decoy-carrying forest of one repeat (<see cref="ScreenRepeat"/>); the reference
 /// forest and the outcome-permutation null's observed forest (<see cref="ReferenceForest"/>); a curve
-/// fold's selection-aware and optimistic forests of one panel size (<see cref="PanelScoring"/>).
+/// fold's selection-aware and optimistic forests of one panel size (<see cref="PanelScoring"/>); a curve
+/// fold's covariates-alone and covariates-with-panel forests (<see cref="CovariateScoring"/>).
 /// Sharing kept for byte-identical results, not by design: the cohort forest and the locked panel's
 /// forest both use int.MaxValue - 1 at the run seed (<see cref="CohortForest"/>,
 /// <see cref="LockedPanelForest"/>); they answer different questions (the cohort from all features,
@@ -50,7 +52,7 @@ public static class RandomStreams
     public const int ScoringRepeatBase = 1 << 20;
 
     /// <summary>Index slots of the Resampling purpose.</summary>
-    private const int HalfSampleSlot = 0, OuterFoldSlot = 1, DecoySourceSlot = 2;
+    private const int HalfSampleSlot = 0, OuterFoldSlot = 1, DecoySourceSlot = 2, AddedValueBootstrapSlot = 3;
 
     /// <summary>Index slot offsets of the inner screens' seeds; each family holds fewer than <see cref="SlotFamilyWidth"/> members.</summary>
     private const int CurveFoldSlot = 1000, CohortScreenSlot = 2000, HeldOutScreenSlot = 3000;
@@ -86,6 +88,19 @@ public static class RandomStreams
         return new(innerSeed, ScoringRepeatBase + sizeIndex);
     }
 
+    /// <summary>
+    /// Offset, above <see cref="ScoringRepeatBase"/>, of the forests that score clinical
+    /// covariates in a curve fold; a curve never has this many panel sizes.
+    /// </summary>
+    public const int CovariateScoringOffset = 1 << 16;
+
+    /// <summary>
+    /// The forests scoring a curve fold's covariates alone and its covariates beside the fold's
+    /// locked panel (shared on purpose: the same bootstraps make the gain a paired comparison);
+    /// <paramref name="innerSeed"/> is the fold's <see cref="CurveFoldScreenSeed"/>.
+    /// </summary>
+    public static ForestStreams CovariateScoring(ulong innerSeed) => new(innerSeed, ScoringRepeatBase + CovariateScoringOffset);
+
     /// <summary>The forest scoring a held-out cohort with the other cohorts' panel; <paramref name="heldOutSeed"/> is <see cref="HeldOutScreenSeed"/>.</summary>
     public static ForestStreams HeldOutScoring(ulong heldOutSeed) => new(heldOutSeed, ScoringRepeatBase);
 
@@ -100,6 +115,10 @@ public static class RandomStreams
     /// <summary>The generator choosing which features get a decoy.</summary>
     public static Xoshiro256StarStar DecoySources(ulong runSeed) =>
         SeedSchedule.Generator(runSeed, DecoyRepeat, DecoySourceSlot, SeedPurpose.Resampling);
+
+    /// <summary>The generator resampling samples for the added value's paired bootstrap (measured and follow-up outcomes).</summary>
+    public static Xoshiro256StarStar AddedValueBootstrap(ulong runSeed) =>
+        SeedSchedule.Generator(runSeed, 0, AddedValueBootstrapSlot, SeedPurpose.Resampling);
 
     /// <summary>The seed every decoy's permutation derives from (once per run).</summary>
     public static ulong DecoyPermutationSeed(ulong runSeed) =>

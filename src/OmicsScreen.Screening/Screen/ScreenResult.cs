@@ -46,4 +46,10 @@ public sealed record ScreenResult(
 
     /// <summary>The outcome kind screened.</summary>
     public OmicsScreen.Engine.Panels.OutcomeKind Kind { get; init; } = OmicsScreen.Engine.Panels.OutcomeKind.Classes;
+
+    /// <summary>
+    /// What the panel adds over the clinical covariates (--covariates), measured in the curve's
+    /// outer folds; null without covariates, without the curve, or with more than two classes.
+    /// </summary>
+    public OmicsScreen.Screening.Covariates.AddedValue? AddedValue { get; init; }
 }

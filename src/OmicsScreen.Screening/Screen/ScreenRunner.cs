@@ -3,6 +3,7 @@ using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Screening.Cohorts;
+using OmicsScreen.Screening.Covariates;
 using OmicsScreen.Screening.Importance;
 using OmicsScreen.Screening.Randomness;
 using OmicsScreen.Screening.Statistics;
@@ -106,6 +107,9 @@ public static class ScreenRunner
             Finish(ScreenStage.PanelSizeCurve);
         }
 
+        // What the panel adds over the clinical covariates, in the curve's own outer folds.
+        var addedValue = curve is null ? null : AddedValueEstimator.Estimate(context, work.CurveFolds, curve);
+
         CohortResult? cohorts = null;
         if (panel.Cohort is { LevelCount: >= 2 })
         {
@@ -126,6 +130,7 @@ public static class ScreenRunner
             MeasuredMarkers = singleMarkers.Measured,
             FollowUpMarkers = singleMarkers.FollowUp,
             Kind = panel.Kind,
+            AddedValue = addedValue,
         };
     }
 
