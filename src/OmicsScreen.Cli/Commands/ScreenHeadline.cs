@@ -48,6 +48,10 @@ public sealed record ScreenHeadline
 
     public required double LockedPanelEstimate { get; init; }
 
+    /// <summary>What the panel adds over the covariates of --covariates (as in the manifest's results); absent without them.</summary>
+    [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)]
+    public Reporting.Manifests.ManifestAddedValue? AddedValue { get; init; }
+
     /// <summary>One shortlisted marker, with the columns of shortlist.tsv a reader needs first; DisplayName is null when the inputs name none.</summary>
     public sealed record ShortlistedMarker(int Rank, string Feature, string? DisplayName, double SelectionFrequency, double MedianRank,
         double QValue, string Direction, double? Auc, int RedundancyGroup)
@@ -98,6 +102,7 @@ public sealed record ScreenHeadline
                 ? names.ToDictionary(p => p.Key, p => p.Value!.GetValue<string>(), StringComparer.Ordinal)
                 : new Dictionary<string, string>(StringComparer.Ordinal),
             LockedPanelEstimate = result.LockedPanelEstimate,
+            AddedValue = result.AddedValue is { } added ? Reporting.Manifests.ManifestAddedValue.Of(added) : null,
         };
     }
 

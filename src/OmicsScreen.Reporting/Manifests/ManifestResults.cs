@@ -35,8 +35,13 @@ public sealed record ManifestResults
     [System.Text.Json.Serialization.JsonIgnore(Condition = System.Text.Json.Serialization.JsonIgnoreCondition.WhenWritingNull)]
     public double? RecommendedPanelSizeSelectionAwareRmse { get; init; }
 
+    /// <summary>What the panel adds over the covariates of --covariates; absent without them.</summary>
+    [System.Text.Json.Serialization.JsonIgnore(Condition = System.Text.Json.Serialization.JsonIgnoreCondition.WhenWritingNull)]
+    public ManifestAddedValue? AddedValue { get; init; }
+
     public static ManifestResults Of(ScreenResult result) => new()
     {
+        AddedValue = result.AddedValue is { } added ? ManifestAddedValue.Of(added) : null,
         Shortlisted = result.Shortlist.Count,
         ShortlistRule = result.Settings.Options.Rule == Screening.Screen.ShortlistRule.QValue ? "q-value" : "decoy-bound",
         RecommendedPanelSize = result.PanelSize?.RecommendedSize,

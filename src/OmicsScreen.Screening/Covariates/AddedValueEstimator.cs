@@ -33,13 +33,8 @@ namespace OmicsScreen.Screening.Covariates;
 internal static class AddedValueEstimator
 {
     /// <summary>
-    /// Smallest leaf of the added value's forests. Their predictions are compared as scores, so
-    /// they should be smooth: a forest of fully grown trees on one or two covariates is a bagged
-    /// step function of them, jagged where the outcome is noisy, and a forest on the covariates
-    /// plus a few markers correlated with them averages those steps out and seems to "add" AUC the
-    /// markers do not carry (seen on the age-proxy simulation of the tests: +0.05 with leaves of 1).
-    /// Leaves of 10 are the probability forest's usual size (Malley et al. 2012, Methods Inf Med
-    /// 51(1); ranger's default for probability forests, from memory).
+    /// Smallest leaf of the covariates' forest: the probability forest's usual size (Malley et al.
+    /// 2012, Methods Inf Med 51(1); ranger's default for probability forests, from memory).
     /// </summary>
     private const int ProbabilityLeafSize = 10;
 
@@ -66,7 +61,7 @@ internal static class AddedValueEstimator
             var fold = folds[i];
             var foldPanel = curve.FoldPanels[i];
             var streams = RandomStreams.CovariateScoring(RandomStreams.CurveFoldScreenSeed(context.Options.Seed, fold.Repeat, fold.Fold));
-            var alone = Score(context, covariates, covariateColumns, fold, streams);
+            var alone = Score(context, covariates, covariateColumns, fold, streams, covariatesOnly: true);
             PanelScore both;
             if (foldPanel.Features.Length == 0)
             {
@@ -77,7 +72,7 @@ internal static class AddedValueEstimator
             {
                 sizeSum += foldPanel.Features.Length;
                 var beside = context.Matrix.SelectFeatures(foldPanel.Features).Beside(covariates);
-                both = Score(context, beside, Enumerable.Range(0, beside.FeatureCount).ToArray(), fold, streams);
+                both = Score(context, beside, Enumerable.Range(0, beside.FeatureCount).ToArray(), fold, streams, covariatesOnly: false);
             }
             for (int t = 0; t < fold.TestRows.Length; t++)
             {
@@ -129,17 +124,27 @@ internal static class AddedValueEstimator
         return builder.Build();
     }
 
-    private static PanelScore Score(ScreenContext context, BinnedMatrix matrix, int[] features, OuterFold fold, ForestStreams streams)
+    /// <summary>
+    /// A forest on some columns of <paramref name="matrix"/> scored on the fold's test rows. With
+    /// <paramref name="covariatesOnly"/>, every column is tried at every split (bagged trees) and
+    /// leaves hold at least <see cref="ProbabilityLeafSize"/> samples: with a handful of columns a
+    /// random subset of floor(sqrt(k)) forces a split on whatever was drawn, for two covariates a
+    /// covariate without signal half of the time, and fully grown trees on one strong covariate
+    /// give a jagged step function of it; both weaken the covariates' forest and would credit the
+    /// panel with the difference (seen on the tests' age-proxy simulation: +0.05 AUC with the
+    /// curve's settings, markers carrying nothing but age). A forest holding panel markers is the
+    /// curve's own panel forest (floor(sqrt(k)) columns per split, the screen's smallest leaf), so
+    /// the panel alone and the panel beside the covariates are scored alike.
+    /// </summary>
+    private static PanelScore Score(ScreenContext context, BinnedMatrix matrix, int[] features, OuterFold fold, ForestStreams streams,
+        bool covariatesOnly)
     {
-        // Every column is tried at every split (bagged trees): with a handful of columns, a random
-        // subset of floor(sqrt(k)) forces a split on whatever was drawn, for two covariates a
-        // covariate without signal half of the time, which weakens the covariates' forest against
-        // the panel's and would credit the panel with the difference (seen on the tests' age-proxy
-        // simulation). Leaves hold at least ProbabilityLeafSize samples (see there).
         var options = context.Settings.ForestOptions(context.Subject, streams);
         options = options with
         {
-            Tree = options.Tree with { FeaturesPerSplit = features.Length, MinLeafSize = Math.Max(options.Tree.MinLeafSize, ProbabilityLeafSize) },
+            Tree = covariatesOnly
+                ? options.Tree with { FeaturesPerSplit = features.Length, MinLeafSize = Math.Max(options.Tree.MinLeafSize, ProbabilityLeafSize) }
+                : options.Tree with { FeaturesPerSplit = null },
         };
         return context.ScreenOutcome.ScorePanel(matrix, features, fold.TrainingRows, fold.TestRows, options);
     }
