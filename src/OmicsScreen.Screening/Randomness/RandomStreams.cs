@@ -18,7 +18,8 @@ namespace OmicsScreen.Screening.Randomness;
 /// (1 &lt;&lt; 20) + (1 &lt;&lt; 16) the forests that score a fold's clinical covariates;</item>
 /// <item>int.MaxValue: the reference forest on all samples and the outcome-permutation null's observed forest;
 /// int.MaxValue - 1: the forest predicting the cohort and the locked panel's forest;
-/// int.MaxValue - 2: the decoys (sources and permutations, once per run);</item>
+/// int.MaxValue - 2: the decoys (sources and permutations, once per run); int.MaxValue - 3: the
+/// forest telling markers that track a covariate;</item>
 /// <item>purpose Resampling, index slots: 0 half-samples (repeat = pair), 1 outer folds (repeat =
 /// fold repeat), 2 decoy sources, 3 the added value's bootstrap (repeat 0), 1000 + fold inner seeds of the curve's folds (repeat = fold
 /// repeat), 2000 + cohort and 3000 + cohort the seeds of each cohort's own screen and of the
@@ -48,6 +49,9 @@ public static class RandomStreams
     /// <summary>Repeat coordinate of the decoys' streams: one per run, shared by every repeat.</summary>
     public const int DecoyRepeat = int.MaxValue - 2;
 
+    /// <summary>Repeat coordinate of the forest that tells markers tracking a covariate (its trees and the permuted copies of its decoys).</summary>
+    public const int TrackingRepeat = int.MaxValue - 3;
+
     /// <summary>First repeat coordinate of the forests that score a panel at an inner screen's seed.</summary>
     public const int ScoringRepeatBase = 1 << 20;
 
@@ -73,6 +77,9 @@ public static class RandomStreams
 
     /// <summary>The forest predicting the cohort from every feature.</summary>
     public static ForestStreams CohortForest(ulong runSeed) => new(runSeed, CohortForestRepeat);
+
+    /// <summary>The forest on the shortlisted markers and their permuted copies that tells which markers only track a covariate.</summary>
+    public static ForestStreams TrackingForest(ulong runSeed) => new(runSeed, TrackingRepeat);
 
     /// <summary>The locked panel's forest on all discovery samples.</summary>
     public static ForestStreams LockedPanelForest(ulong runSeed) => new(runSeed, LockRepeat);
@@ -163,6 +170,16 @@ public static class RandomStreams
     /// <summary>The generator permuting one redundancy group in one tree; repeat coordinate 1 keeps it apart from the feature streams.</summary>
     public static Xoshiro256StarStar GroupPermutation(ulong treeSeed, int group) =>
         SeedSchedule.Generator(treeSeed, 1, group, SeedPurpose.Permutation);
+
+    /// <summary>
+    /// The generator permuting one feature within the strata of covariate <paramref name="covariate"/>
+    /// in one tree; repeat coordinates 2 and up keep it apart from the feature (0) and group (1) streams.
+    /// </summary>
+    public static Xoshiro256StarStar StratifiedPermutation(ulong treeSeed, int covariate, int feature)
+    {
+        ArgumentOutOfRangeException.ThrowIfNegative(covariate);
+        return SeedSchedule.Generator(treeSeed, 2 + covariate, feature, SeedPurpose.Permutation);
+    }
 
     private static int InFamily(int member)
     {

@@ -52,4 +52,7 @@ public sealed record ScreenResult(
     /// outer folds; null without covariates, without the curve, or with more than two classes.
     /// </summary>
     public OmicsScreen.Screening.Covariates.AddedValue? AddedValue { get; init; }
+
+    /// <summary>Which shortlisted markers only track a covariate; null without covariates or shortlist, and for outcome kinds other than classes.</summary>
+    public OmicsScreen.Screening.Covariates.CovariateTracking? CovariateTracking { get; init; }
 }

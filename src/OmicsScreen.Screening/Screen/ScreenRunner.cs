@@ -109,6 +109,8 @@ public static class ScreenRunner
 
         // What the panel adds over the clinical covariates, in the curve's own outer folds.
         var addedValue = curve is null ? null : AddedValueEstimator.Estimate(context, work.CurveFolds, curve);
+        // Which shortlisted markers only track a covariate (class outcomes).
+        var tracking = CovariateTrackingAnalysis.Run(context, shortlisted);
 
         CohortResult? cohorts = null;
         if (panel.Cohort is { LevelCount: >= 2 })
@@ -131,6 +133,7 @@ public static class ScreenRunner
             FollowUpMarkers = singleMarkers.FollowUp,
             Kind = panel.Kind,
             AddedValue = addedValue,
+            CovariateTracking = tracking,
         };
     }
 

@@ -55,6 +55,12 @@ public class RandomStreamsTests
         Add("reference forest", ForestSeeds(RandomStreams.ReferenceForest(RunSeed)));
         Add("cohort forest", ForestSeeds(RandomStreams.CohortForest(RunSeed)));
         Add("locked panel forest", ForestSeeds(RandomStreams.LockedPanelForest(RunSeed)));
+        Add("tracking forest", ForestSeeds(RandomStreams.TrackingForest(RunSeed)));
+        var trackingForest = RandomStreams.TrackingForest(RunSeed);
+        for (int t = 0; t < Trees; t++)
+            for (int c = 0; c < 5; c++)
+                AddGenerators("stratified permutations", Enumerable.Range(0, Columns).Select(f =>
+                    RandomStreams.StratifiedPermutation(RandomStreams.PermutationImportanceTree(trackingForest, t), c, f)));
 
         AddGenerators("half-samples", Enumerable.Range(0, Repeats / 2).Select(p => RandomStreams.HalfSamples(RunSeed, p)));
         AddGenerators("outer folds", Enumerable.Range(0, FoldRepeats).Select(k => RandomStreams.OuterFolds(RunSeed, k)));
