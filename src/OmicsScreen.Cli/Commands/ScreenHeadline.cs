@@ -63,6 +63,10 @@ public sealed record ScreenHeadline
         /// <summary>Harrell's C of the marker against follow-up; absent for other kinds.</summary>
         [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)]
         public double? Concordance { get; init; }
+
+        /// <summary>The covariates the marker only tracks (covariate_association.tsv); absent without covariates.</summary>
+        [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)]
+        public IReadOnlyList<string>? Tracks { get; init; }
     }
 
     public static ScreenHeadline Of(LoadedPanel loaded, ScreenResult result, string folder)
@@ -94,6 +98,7 @@ public sealed record ScreenHeadline
             {
                 SpearmanRho = e.Measured?.Rho,
                 Concordance = e.FollowUp?.Concordance.Concordance,
+                Tracks = result.CovariateTracking?.TracksOf(e.Forest.FeatureIndex),
             }).ToList(),
             RecommendedPanelSize = result.PanelSize?.RecommendedSize,
             LockedPanelSize = result.LockedPanelSize,

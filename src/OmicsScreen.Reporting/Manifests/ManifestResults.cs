@@ -39,9 +39,16 @@ public sealed record ManifestResults
     [System.Text.Json.Serialization.JsonIgnore(Condition = System.Text.Json.Serialization.JsonIgnoreCondition.WhenWritingNull)]
     public ManifestAddedValue? AddedValue { get; init; }
 
+    /// <summary>Shortlisted markers that only track a covariate, each with the covariates it tracks; absent without covariates.</summary>
+    [System.Text.Json.Serialization.JsonIgnore(Condition = System.Text.Json.Serialization.JsonIgnoreCondition.WhenWritingNull)]
+    public IReadOnlyDictionary<string, IReadOnlyList<string>>? TrackingMarkers { get; init; }
+
     public static ManifestResults Of(ScreenResult result) => new()
     {
         AddedValue = result.AddedValue is { } added ? ManifestAddedValue.Of(added) : null,
+        TrackingMarkers = result.CovariateTracking is { } tracking
+            ? tracking.Markers.Where(m => m.Tracks.Count > 0).ToDictionary(m => m.Marker, m => m.Tracks, StringComparer.Ordinal)
+            : null,
         Shortlisted = result.Shortlist.Count,
         ShortlistRule = result.Settings.Options.Rule == Screening.Screen.ShortlistRule.QValue ? "q-value" : "decoy-bound",
         RecommendedPanelSize = result.PanelSize?.RecommendedSize,

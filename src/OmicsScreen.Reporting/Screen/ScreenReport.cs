@@ -32,6 +32,7 @@ public static class ScreenReport
         WriteShortlist(html, input.Result, input);
         WriteLockedPanel(html, input.Result, input);
         if (input.Result.AddedValue is { } added) AddedValueReportSection.Write(html, added);
+        if (input.Result.CovariateTracking is { } tracking) CovariateTrackingReportSection.Write(html, tracking);
         WriteFigures(html, input);
         if (input.Result.Cohorts is { } cohorts) CohortReportSection.Write(html, input.Result, cohorts);
         WriteReproducibility(html, input);
@@ -49,6 +50,8 @@ public static class ScreenReport
         if (result.PanelSize is { } curve) html.Paragraph(ScreenReportText.PanelSizeAnswer(curve, options));
         else html.Paragraph("The panel-size curve was not computed for this run (curve folds set to 0), so no panel size is recommended.");
         if (result.AddedValue is { } added) html.Paragraph(AddedValueReportSection.Headline(added));
+        if (result.CovariateTracking is { } tracking && tracking.Markers.Any(m => m.Tracks.Count > 0))
+            html.Paragraph(CovariateTrackingReportSection.Summary(tracking).Split(". ")[0] + ".");
         html.Paragraph(ScreenReportText.Confidence(result));
     }
 
