@@ -25,7 +25,8 @@ namespace OmicsScreen.Screening.Covariates;
 /// age-related part under the within-age permutation, so its conditional importance falls to
 /// that of the decoys; a marker with signal of its own loses it either way. The covariates are not
 /// predictors of this forest: they only define the strata.</para>
-/// <para>Flag: a marker "tracks" a covariate when its marginal importance is above the upper decile
+/// <para>Flag: a marker "tracks" a covariate when it is associated with it (BH q at most 0.10),
+/// its marginal importance is above the upper decile
 /// of the decoys' marginal importances and more than 1.645 standard errors (over trees) above 0,
 /// while its importance conditional on that covariate falls to the null: not above the upper
 /// decile of the decoys' importances conditional on it, or not 1.645 standard errors above 0. The
@@ -51,6 +52,14 @@ internal static class CovariateTrackingAnalysis
     /// covariate's strata has lost almost all of it to the covariate (see the remarks).
     /// </summary>
     public const double RetainedShare = 0.2;
+
+    /// <summary>
+    /// Benjamini-Hochberg level the marker's association with the covariate must reach: a marker
+    /// can only stand in for a covariate it is associated with. Without it, a weak marker whose
+    /// within-strata importance dipped under the decoys' by chance was flagged as tracking a
+    /// covariate unrelated to everything (the demo's age, rho -0.08).
+    /// </summary>
+    public const double AssociationLevel = 0.10;
 
     /// <summary>One-sided 5% normal critical value: an importance whose mean over trees is not this many standard errors above 0 is indistinguishable from none.</summary>
     public const double OneSidedCritical = 1.6448536269514722;
@@ -126,7 +135,8 @@ internal static class CovariateTrackingAnalysis
                 bool important = importance[0, m] > thresholds[0] && z[0, m] > OneSidedCritical;
                 bool fallsToNull = conditional[c] <= thresholds[1 + c] || z[1 + c, m] <= OneSidedCritical
                     || conditional[c] < RetainedShare * importance[0, m];
-                if (important && fallsToNull) tracks.Add(panel.Covariates[c].Name);
+                double q = associations[m * covariateCount + c].QValue;
+                if (important && fallsToNull && q <= AssociationLevel) tracks.Add(panel.Covariates[c].Name);
             }
             tracking[m] = new MarkerTracking(shortlisted[m], panel.Matrix.FeatureNames[shortlisted[m]], importance[0, m], conditional, tracks);
         }
