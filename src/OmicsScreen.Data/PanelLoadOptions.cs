@@ -31,6 +31,14 @@ public sealed record PanelLoadOptions
 
     public string? CohortColumn { get; init; }
 
+    /// <summary>
+    /// Clinical covariates (sample-sheet columns, or declared text columns of the matrix file): numeric
+    /// when every value parses as a number, categorical otherwise. A covariate with a missing value
+    /// stops the load (naming the column and the count) rather than dropping samples, so every
+    /// analysis keeps the same samples.
+    /// </summary>
+    public IReadOnlyList<string> CovariateColumns { get; init; } = [];
+
     public string? SubjectColumn { get; init; }
 
     /// <summary>The class scored as positive; defaults to the smallest class.</summary>

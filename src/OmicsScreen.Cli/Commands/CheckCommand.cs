@@ -19,7 +19,7 @@ public sealed class CheckCommand : Command, IHelpLayout
 
     public IReadOnlyList<HelpSection> HelpSections =>
     [
-        new("Input", [Input.SampleSheet, Input.Outcome, Input.OutcomeKind, Input.FollowUp, Input.Event, Input.PositiveClass, Input.Subject, Input.SampleIdColumn, Input.Annotations,
+        new("Input", [Input.SampleSheet, Input.Outcome, Input.OutcomeKind, Input.FollowUp, Input.Event, Input.PositiveClass, Input.Subject, Input.Covariates, Input.SampleIdColumn, Input.Annotations,
             Input.FeatureSheet, Input.DetectionLimit, Input.FeaturesInRows, Input.Long, Input.FeatureColumns, Input.ValueColumn,
             Input.BelowDetectionFlag, Input.QualityFlag, Input.DisplayName, Input.DropUnmatched, Input.FeatureBlock, Input.KeepFeatures]),
         new("Cohorts", [Input.Cohort]),
@@ -29,14 +29,15 @@ public sealed class CheckCommand : Command, IHelpLayout
     public IReadOnlyList<HelpExample> Examples =>
     [
         new("Check a matrix whose outcome is a text column of the same file", "omicsscreen check wdbc.csv --outcome diagnosis"),
-        new("Check a matrix with its sample sheet and cohort column", "omicsscreen check plasma.csv --samples sheet.tsv --outcome status --cohort centre"),
+        new("Check a matrix with its sample sheet, cohort column and clinical covariates",
+            "omicsscreen check plasma.csv --samples sheet.tsv --outcome status --cohort centre --covariates age,sex,bmi"),
         new("The findings as JSON, for a pipeline", "omicsscreen check plasma.csv --samples sheet.tsv --outcome status --json"),
     ];
 
     public CheckCommand(CliConsole console)
         : base("check", "Read a panel and report samples, features, classes, cohorts, missingness, below-detection cells and problems. Exit 0 when it can be screened.")
     {
-        Input.AddTo(this);
+        Input.AddTo(this, withCovariates: true);
         Options.Add(Json);
         SetAction(parse => CommandRunner.Run(console, () => CheckRun.Execute(console, Input.ToLoadOptions(parse), parse.GetValue(Json))));
     }

@@ -53,6 +53,13 @@ public sealed class PanelInputOptions
         HelpName = "COLUMN",
     };
 
+    public Option<string?> Covariates { get; } = new("--covariates")
+    {
+        Description = "Comma-separated sample-sheet columns holding clinical covariates (such as age,sex,bmi): numeric when every value "
+            + "is a number, categorical otherwise. The screen reports what the panel adds over them and which markers only track one.",
+        HelpName = "COLUMNS",
+    };
+
     public Option<string?> Subject { get; } = new("--subject")
     {
         Description = "Column naming each sample's subject, when replicates or repeat visits share one; they are resampled together.",
@@ -153,7 +160,8 @@ public sealed class PanelInputOptions
         Description = "Read only the features named in FILE (one name per line; # starts a comment), for example the candidates of every block's screen.",
     };
 
-    public void AddTo(Command command)
+    /// <param name="withCovariates">True for the verbs that use covariates (check, screen); the others do not offer --covariates.</param>
+    public void AddTo(Command command, bool withCovariates = false)
     {
         command.Arguments.Add(Panel);
         command.Options.Add(SampleSheet);
@@ -162,6 +170,7 @@ public sealed class PanelInputOptions
         command.Options.Add(FollowUp);
         command.Options.Add(Event);
         command.Options.Add(Cohort);
+        if (withCovariates) command.Options.Add(Covariates);
         command.Options.Add(Subject);
         command.Options.Add(PositiveClass);
         command.Options.Add(SampleIdColumn);
@@ -189,6 +198,7 @@ public sealed class PanelInputOptions
         FollowUpColumn = parse.GetValue(FollowUp),
         EventColumn = parse.GetValue(Event),
         CohortColumn = parse.GetValue(Cohort),
+        CovariateColumns = CovariatesOf(parse),
         SubjectColumn = parse.GetValue(Subject),
         PositiveClass = parse.GetValue(PositiveClass),
         SampleIdColumn = parse.GetValue(SampleIdColumn),
@@ -224,6 +234,36 @@ public sealed class PanelInputOptions
             return null;
         }
         return outcome ?? throw new CommandInputException("name the outcome: --outcome COLUMN (classes or a measured quantity), or --follow-up COLUMN and --event COLUMN (a time to an event).");
+    }
+
+    /// <summary>
+    /// The covariate columns of --covariates, in order. Each must be named once, and none may be a
+    /// column that already has a role (outcome, follow-up, event, cohort, subject): a covariate is
+    /// what the panel is compared against, so it cannot also be what is predicted or grouped by.
+    /// </summary>
+    private IReadOnlyList<string> CovariatesOf(ParseResult parse)
+    {
+        // Verbs without covariates never declare the option.
+        if (parse.GetResult(Covariates) is null || parse.GetValue(Covariates) is not { } text) return [];
+        var names = new List<string>();
+        foreach (var part in text.Split(','))
+        {
+            string name = part.Trim();
+            if (name.Length == 0)
+                throw new CommandInputException($"--covariates '{UntrustedText.Printable(text)}' has an empty column name; list the columns separated by commas, such as --covariates age,sex,bmi.");
+            if (names.Contains(name, StringComparer.Ordinal))
+                throw new CommandInputException($"--covariates names the column '{UntrustedText.Printable(name)}' twice; name each covariate once.");
+            names.Add(name);
+        }
+        var roles = new (string Option, string? Column)[]
+        {
+            ("--outcome", parse.GetValue(Outcome)), ("--follow-up", parse.GetValue(FollowUp)), ("--event", parse.GetValue(Event)),
+            ("--cohort", parse.GetValue(Cohort)), ("--subject", parse.GetValue(Subject)),
+        };
+        foreach (var (option, column) in roles)
+            if (column is not null && names.Contains(column, StringComparer.Ordinal))
+                throw new CommandInputException($"the column '{UntrustedText.Printable(column)}' is named both by {option} and by --covariates; a covariate is what the panel is compared against, so leave it out of one of them.");
+        return names;
     }
 
     /// <summary>The layout the options say; --features-in-rows and --long together are a usage error.</summary>

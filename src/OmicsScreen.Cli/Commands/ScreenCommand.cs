@@ -177,7 +177,7 @@ public sealed class ScreenCommand : Command, IHelpLayout
 
     public IReadOnlyList<HelpSection> HelpSections =>
     [
-        new("Input", [Input.SampleSheet, Input.Outcome, Input.OutcomeKind, Input.FollowUp, Input.Event, Input.PositiveClass, Input.Subject, Input.SampleIdColumn, Input.Annotations,
+        new("Input", [Input.SampleSheet, Input.Outcome, Input.OutcomeKind, Input.FollowUp, Input.Event, Input.PositiveClass, Input.Subject, Input.Covariates, Input.SampleIdColumn, Input.Annotations,
             Input.FeatureSheet, Input.DetectionLimit, Input.FeaturesInRows, Input.Long, Input.FeatureColumns, Input.ValueColumn,
             Input.BelowDetectionFlag, Input.QualityFlag, Input.DisplayName, Input.DropUnmatched, Input.FeatureBlock, Input.KeepFeatures]),
         new("Forest", [Trees, FeaturesPerSplit, MinLeaf, Balance]),
@@ -190,8 +190,8 @@ public sealed class ScreenCommand : Command, IHelpLayout
     public IReadOnlyList<HelpExample> Examples =>
     [
         new("Screen a matrix whose outcome is a text column of the same file", "omicsscreen screen wdbc.csv --outcome diagnosis --out reports/wdbc"),
-        new("Screen with a sample sheet and three recruitment centres, then check the cohorts",
-            "omicsscreen screen plasma.csv --samples sheet.tsv --outcome status --cohort centre --out reports/plasma"),
+        new("Screen with a sample sheet and three recruitment centres, check the cohorts, and measure what the panel adds over age, sex and body mass",
+            "omicsscreen screen plasma.csv --samples sheet.tsv --outcome status --cohort centre --covariates age,sex,bmi --out reports/plasma"),
         new("A stricter shortlist with more repeats, repeatable with its seed",
             "omicsscreen screen plasma.csv --samples sheet.tsv --outcome status --pairs 50 --min-frequency 0.8 --max-q 0.05 --seed 7"),
     ];
@@ -199,7 +199,7 @@ public sealed class ScreenCommand : Command, IHelpLayout
     public ScreenCommand(CliConsole console)
         : base("screen", "Screen a panel: repeated random forests on half-samples, a stability-ranked shortlist with error control, and the panel-size curve.")
     {
-        Input.AddTo(this);
+        Input.AddTo(this, withCovariates: true);
         foreach (var option in new Option[] { Out, Force, Resume, Part, Pairs, Trees, FeaturesPerSplit, MinLeaf, Balance, RepeatLevel, PerRepeat,
                      MinFrequency, MaxQ, Rule, Decoys, InteractionScan, OutcomePermutations, RedundancyRho, CurveFolds, CurveRepeats, CurveInnerPairs,
                      MaxPanelSize, Seed, Threads, ShowSampleIds, Quiet, Json })

@@ -48,6 +48,10 @@ public sealed record ScreenHeadline
 
     public required double LockedPanelEstimate { get; init; }
 
+    /// <summary>What the panel adds over the covariates of --covariates (as in the manifest's results); absent without them.</summary>
+    [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)]
+    public Reporting.Manifests.ManifestAddedValue? AddedValue { get; init; }
+
     /// <summary>One shortlisted marker, with the columns of shortlist.tsv a reader needs first; DisplayName is null when the inputs name none.</summary>
     public sealed record ShortlistedMarker(int Rank, string Feature, string? DisplayName, double SelectionFrequency, double MedianRank,
         double QValue, string Direction, double? Auc, int RedundancyGroup)
@@ -65,6 +69,9 @@ public sealed record ScreenHeadline
 
         /// <summary>The marker's named forest partners, strongest first (shortlist.tsv's forest_partners).</summary>
         public IReadOnlyList<string> ForestPartners { get; init; } = [];
+        /// <summary>The covariates the marker only tracks (covariate_association.tsv); absent without covariates.</summary>
+        [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)]
+        public IReadOnlyList<string>? Tracks { get; init; }
     }
 
     public static ScreenHeadline Of(LoadedPanel loaded, ScreenResult result, string folder)
@@ -98,6 +105,7 @@ public sealed record ScreenHeadline
                 Concordance = e.FollowUp?.Concordance.Concordance,
                 EffectShape = result.Effects.Of(e.Forest.FeatureIndex)?.Shape.Description ?? "",
                 ForestPartners = EffectTables.PartnerNames(result, e.Forest.FeatureIndex).ToArray(),
+                Tracks = result.CovariateTracking?.TracksOf(e.Forest.FeatureIndex),
             }).ToList(),
             RecommendedPanelSize = result.PanelSize?.RecommendedSize,
             LockedPanelSize = result.LockedPanelSize,
@@ -106,6 +114,7 @@ public sealed record ScreenHeadline
                 ? names.ToDictionary(p => p.Key, p => p.Value!.GetValue<string>(), StringComparer.Ordinal)
                 : new Dictionary<string, string>(StringComparer.Ordinal),
             LockedPanelEstimate = result.LockedPanelEstimate,
+            AddedValue = result.AddedValue is { } added ? Reporting.Manifests.ManifestAddedValue.Of(added) : null,
         };
     }
 

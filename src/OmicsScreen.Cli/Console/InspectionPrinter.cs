@@ -37,6 +37,10 @@ internal static class InspectionPrinter
         AddOutcomeFacts(facts, i, OutcomeSummary.Of(loaded.Panel));
         if (i.CohortColumn is not null)
             facts.Add("cohorts", $"{i.CohortColumn}: " + string.Join(", ", i.Cohorts.Select(c => $"{c.Name} {c.SampleCount}")));
+        foreach (var covariate in i.Covariates)
+            facts.Add("covariate", covariate.Kind == "numeric"
+                ? $"{covariate.Name}: numeric, min {Number(covariate.Minimum)}, median {Number(covariate.Median)}, max {Number(covariate.Maximum)}"
+                : $"{covariate.Name}: categorical, " + string.Join(", ", covariate.Levels.Select(l => $"{l.Name} {Count(l.SampleCount)}")));
         if (i.SubjectColumn is not null) facts.Add("subjects", $"{i.SubjectColumn}: {Count(i.SubjectCount)}");
         facts.Add("missing cells", Percent(i.MissingFraction));
         if (i.MostMissingFeatures.Count > 0)

@@ -134,7 +134,7 @@ internal static class OutcomeValues
         return events;
     }
 
-    private static bool TryNumber(string text, out double value) =>
+    internal static bool TryNumber(string text, out double value) =>
         double.TryParse(text.AsSpan().Trim(), NumberStyles.Float, CultureInfo.InvariantCulture, out value) && double.IsFinite(value);
 
     private static long? Line(SampleAttribute column, int sample) =>

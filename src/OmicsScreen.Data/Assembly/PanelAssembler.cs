@@ -55,12 +55,35 @@ internal sealed class PanelAssembler
             }
         }
 
-        return outcome switch
+        var panel = outcome switch
         {
             FollowUpOutcome followUp => new Panel(matrix, followUp, cohort, subject, extra),
             MeasuredOutcome measured => new Panel(matrix, measured, cohort, subject, extra),
             _ => new Panel(matrix, (ClassOutcome)outcome, cohort, subject, extra),
         };
+        return _options.CovariateColumns.Count == 0 ? panel : panel.WithCovariates(BuildCovariates(matrix, findings));
+    }
+
+    /// <summary>
+    /// The covariates named by the options, in their order. A covariate that is also a feature
+    /// column is refused: the panel would be compared with itself, and the covariate would be
+    /// screened as a marker.
+    /// </summary>
+    private Covariate[] BuildCovariates(FeatureMatrix matrix, List<InspectionFinding> findings)
+    {
+        var covariates = new Covariate[_options.CovariateColumns.Count];
+        for (int c = 0; c < covariates.Length; c++)
+        {
+            string name = _options.CovariateColumns[c];
+            foreach (var feature in _raw.Matrix.FeatureNames)
+                if (string.Equals(feature, name, StringComparison.Ordinal))
+                    throw PanelInputException.At(_raw.Source.Path, null, name,
+                        $"the covariate '{Display.Name(name)}' is a feature column of the matrix, so it would be screened as a marker and compared with itself.",
+                        "Move the column to the sample sheet (and out of the matrix), or leave it out of --covariates.");
+            var column = Require(name, "covariate", findings);
+            covariates[c] = CovariateValues.Read(column, matrix.SampleIds, IsTableRow(column), findings);
+        }
+        return covariates;
     }
 
     /// <summary>

@@ -48,6 +48,8 @@ public sealed record PanelInspection
     public IReadOnlyList<LevelCount> Cohorts { get; init; } = [];
     /// <summary>Samples per class and cohort, every combination listed (zeros included).</summary>
     public IReadOnlyList<ClassCohortCount> ClassesByCohort { get; init; } = [];
+    /// <summary>The covariates named by --covariates, in that order.</summary>
+    public IReadOnlyList<CovariateSummary> Covariates { get; init; } = [];
     public string? SubjectColumn { get; init; }
     public int SubjectCount { get; init; }
 

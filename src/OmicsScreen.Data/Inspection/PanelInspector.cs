@@ -63,6 +63,7 @@ internal static class PanelInspector
             CohortColumn = panel.Cohort?.ColumnName,
             Cohorts = panel.Cohort is { } cohort ? Levels(cohort) : [],
             ClassesByCohort = panel.Cohort is { } grouping && outcome is not null ? CrossTable(outcome, grouping) : [],
+            Covariates = panel.Covariates.Select(Summarise).ToArray(),
             SubjectColumn = panel.Subject?.ColumnName,
             SubjectCount = panel.Subject?.LevelCount ?? 0,
             MissingFraction = cellCount == 0 ? 0 : (double)scan.MissingCells / cellCount,
@@ -74,6 +75,26 @@ internal static class PanelInspector
             DroppedSamples = droppedSamples,
             Findings = findings.ToArray(),
         };
+    }
+
+    /// <summary>A covariate's range and median (median of the sorted values, mean of the middle two for an even count), or its levels' counts.</summary>
+    private static CovariateSummary Summarise(Covariate covariate)
+    {
+        if (covariate.IsCategorical)
+        {
+            var counts = new int[covariate.Levels.Count];
+            for (int i = 0; i < covariate.SampleCount; i++) counts[covariate.LevelOf(i)]++;
+            var levels = new LevelCount[counts.Length];
+            for (int l = 0; l < counts.Length; l++) levels[l] = new LevelCount(covariate.Levels[l], counts[l]);
+            return new CovariateSummary(covariate.Name, "categorical", double.NaN, double.NaN, double.NaN, levels);
+        }
+        var sorted = covariate.Values.ToArray();
+        Array.Sort(sorted);
+        int middle = sorted.Length / 2;
+        double median = sorted.Length == 0 ? double.NaN
+            : sorted.Length % 2 == 1 ? sorted[middle] : (sorted[middle - 1] + sorted[middle]) / 2;
+        return new CovariateSummary(covariate.Name, "numeric", sorted.Length == 0 ? double.NaN : sorted[0], median,
+            sorted.Length == 0 ? double.NaN : sorted[^1], []);
     }
 
     private sealed record FeatureScan(int[] MissingPerFeature, long MissingCells, long BelowDetectionCells,

@@ -124,6 +124,35 @@ public sealed class BinnedMatrix
     }
 
     /// <summary>
+    /// This matrix's columns followed by <paramref name="other"/>'s, codes shared: for example a
+    /// panel's markers beside clinical covariates binned on their own. The other matrix's source
+    /// features are numbered after this one's (<see cref="FeatureCount"/> + its own).
+    /// </summary>
+    public BinnedMatrix Beside(BinnedMatrix other)
+    {
+        ArgumentNullException.ThrowIfNull(other);
+        if (other.SampleCount != SampleCount) throw new ArgumentException("Both matrices must hold the same samples.", nameof(other));
+        int total = FeatureCount + other.FeatureCount;
+        var names = new string[total];
+        var codes = new CodeColumn[total];
+        var bins = new FeatureBins[total];
+        var sources = new int[total];
+        var copyFlags = new bool[total];
+        for (int f = 0; f < total; f++)
+        {
+            bool mine = f < FeatureCount;
+            var from = mine ? this : other;
+            int g = mine ? f : f - FeatureCount;
+            names[f] = from.FeatureNames[g];
+            codes[f] = from._codes[g];
+            bins[f] = from._bins[g];
+            sources[f] = mine ? _sourceFeatures[g] : FeatureCount + other._sourceFeatures[g];
+            copyFlags[f] = from._isPermutedCopy[g];
+        }
+        return new BinnedMatrix(names, SampleCount, codes, bins, sources, copyFlags);
+    }
+
+    /// <summary>
     /// This matrix followed by one permuted-copy column per listed feature: the feature's codes permuted
     /// over samples, which keeps its distribution and destroys any link to the outcome. Copy
     /// features give a null for importance (Kursa &amp; Rudnicki 2010, J Stat Softw 36(11); the

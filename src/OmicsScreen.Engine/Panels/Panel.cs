@@ -88,6 +88,18 @@ public sealed class Panel
     /// <summary>Other sample-sheet columns, as text, in sample order.</summary>
     public IReadOnlyDictionary<string, string[]> ExtraColumns { get; }
 
+    /// <summary>Clinical covariates named for the screen (age, sex, ...), in sample order; empty when none were named.</summary>
+    public IReadOnlyList<Covariate> Covariates { get; private init; } = [];
+
+    /// <summary>This panel with <paramref name="covariates"/> (one value per sample each) as its covariates.</summary>
+    public Panel WithCovariates(IReadOnlyList<Covariate> covariates)
+    {
+        foreach (var covariate in covariates)
+            if (covariate.SampleCount != SampleCount)
+                throw new ArgumentException("Every covariate must have one value per sample.", nameof(covariates));
+        return new Panel(Matrix, Kind, _classes, Measured, FollowUp, Cohort, Subject, ExtraColumns) { Covariates = covariates };
+    }
+
     public int SampleCount => Matrix.SampleCount;
     public int FeatureCount => Matrix.FeatureCount;
 
@@ -102,11 +114,21 @@ public sealed class Panel
         }
         return new Panel(Matrix.SelectSamples(samples), Kind, _classes?.SelectSamples(samples),
             Measured?.SelectSamples(samples), FollowUp?.SelectSamples(samples),
-            Cohort?.SelectSamples(samples), Subject?.SelectSamples(samples), extra);
+            Cohort?.SelectSamples(samples), Subject?.SelectSamples(samples), extra)
+        {
+            Covariates = SelectCovariates(samples),
+        };
+    }
+
+    private Covariate[] SelectCovariates(ReadOnlySpan<int> samples)
+    {
+        var picked = new Covariate[Covariates.Count];
+        for (int c = 0; c < picked.Length; c++) picked[c] = Covariates[c].SelectSamples(samples);
+        return picked;
     }
 
     public Panel SelectFeatures(ReadOnlySpan<int> features) =>
-        new(Matrix.SelectFeatures(features), Kind, _classes, Measured, FollowUp, Cohort, Subject, ExtraColumns);
+        new(Matrix.SelectFeatures(features), Kind, _classes, Measured, FollowUp, Cohort, Subject, ExtraColumns) { Covariates = Covariates };
 
     private static string Describe(OutcomeKind kind) => kind switch
     {

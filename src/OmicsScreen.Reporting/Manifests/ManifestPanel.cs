@@ -32,6 +32,10 @@ public sealed record ManifestPanel
     public string? PositiveClass { get; init; }
     public string? CohortColumn { get; init; }
     public string? SubjectColumn { get; init; }
+
+    /// <summary>The covariate columns of --covariates, in order; absent without them.</summary>
+    [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)]
+    public IReadOnlyList<string>? Covariates { get; init; }
     public required bool FeaturesInRows { get; init; }
     public required bool LongTable { get; init; }
 

@@ -38,9 +38,21 @@ public sealed record ManifestResults
     /// <summary>Each shortlisted marker's effect shape and forest partners (issue 19).</summary>
     public ManifestEffects? Effects { get; init; }
 
+    /// <summary>What the panel adds over the covariates of --covariates; absent without them.</summary>
+    [System.Text.Json.Serialization.JsonIgnore(Condition = System.Text.Json.Serialization.JsonIgnoreCondition.WhenWritingNull)]
+    public ManifestAddedValue? AddedValue { get; init; }
+
+    /// <summary>Shortlisted markers that only track a covariate, each with the covariates it tracks; absent without covariates.</summary>
+    [System.Text.Json.Serialization.JsonIgnore(Condition = System.Text.Json.Serialization.JsonIgnoreCondition.WhenWritingNull)]
+    public IReadOnlyDictionary<string, IReadOnlyList<string>>? TrackingMarkers { get; init; }
+
     public static ManifestResults Of(ScreenResult result) => new()
     {
         Effects = ManifestEffects.Of(result),
+        AddedValue = result.AddedValue is { } added ? ManifestAddedValue.Of(added) : null,
+        TrackingMarkers = result.CovariateTracking is { } tracking
+            ? tracking.Markers.Where(m => m.Tracks.Count > 0).ToDictionary(m => m.Marker, m => m.Tracks, StringComparer.Ordinal)
+            : null,
         Shortlisted = result.Shortlist.Count,
         ShortlistRule = result.Settings.Options.Rule == Screening.Screen.ShortlistRule.QValue ? "q-value" : "decoy-bound",
         RecommendedPanelSize = result.PanelSize?.RecommendedSize,

@@ -31,6 +31,8 @@ public static class ScreenReport
         WriteInputs(html, input);
         WriteShortlist(html, input.Result, input);
         WriteLockedPanel(html, input.Result, input);
+        if (input.Result.AddedValue is { } added) AddedValueReportSection.Write(html, added);
+        if (input.Result.CovariateTracking is { } tracking) CovariateTrackingReportSection.Write(html, tracking);
         WriteFigures(html, input);
         if (input.Result.Cohorts is { } cohorts) CohortReportSection.Write(html, input.Result, cohorts);
         WriteReproducibility(html, input);
@@ -47,6 +49,9 @@ public static class ScreenReport
         html.Paragraph(ScreenReportText.Answer(input.Panel, result));
         if (result.PanelSize is { } curve) html.Paragraph(ScreenReportText.PanelSizeAnswer(curve, options));
         else html.Paragraph("The panel-size curve was not computed for this run (curve folds set to 0), so no panel size is recommended.");
+        if (result.AddedValue is { } added) html.Paragraph(AddedValueReportSection.Headline(added));
+        if (result.CovariateTracking is { } tracking && tracking.Markers.Any(m => m.Tracks.Count > 0))
+            html.Paragraph(CovariateTrackingReportSection.Summary(tracking).Split(". ")[0] + ".");
         html.Paragraph(ScreenReportText.Confidence(result));
     }
 
@@ -63,6 +68,10 @@ public static class ScreenReport
         facts.Add(new("Samples", ReportNumber.Integer(panel.SampleCount)));
         facts.Add(new("Features", ReportNumber.Integer(panel.FeatureCount)));
         facts.AddRange(OutcomeKindReport.OutcomeFacts(panel));
+        if (panel.Covariates.Count > 0)
+            facts.Add(new("Covariates", string.Join("; ", panel.Covariates.Select(c => c.IsCategorical
+                ? c.Name + " (categorical: " + string.Join(", ", c.Levels) + ")"
+                : c.Name + " (numeric)"))));
         facts.Add(new("Cohorts (samples)", panel.Cohort is { } cohort ? cohort.ColumnName + ": " + LevelCounts(cohort) : "none given"));
         if (panel.Subject is { } subject)
             facts.Add(new("Subjects", subject.ColumnName + ": " + ReportNumber.Integer(subject.LevelCount) + " (replicates of a subject are never split)"));

@@ -23,6 +23,12 @@ public static class ScreenTables
             TsvColumn<ShortlistEntry>.Text("feature", e => e.Forest.Feature),
             TsvColumn<ShortlistEntry>.Integer("redundancy_group", e => e.RedundancyGroup),
             TsvColumn<ShortlistEntry>.Text("cohort_flag", e => result.Cohorts?.Marker(e.Forest.FeatureIndex) is { } m ? CohortTables.FlagText(m.Flag) : ""),
+        };
+        // With covariates (class outcomes): the covariates each marker only tracks, "" for none.
+        if (result.CovariateTracking is { } tracking)
+            columns.Add(TsvColumn<ShortlistEntry>.Text("tracks", e => string.Join(",", tracking.TracksOf(e.Forest.FeatureIndex))));
+        columns.AddRange(new[]
+        {
             TsvColumn<ShortlistEntry>.Number("selection_frequency", e => e.Forest.SelectionFrequency, Share),
             TsvColumn<ShortlistEntry>.Number("median_rank", e => e.Forest.MedianRank, NumberFormat.Fixed(1)),
             TsvColumn<ShortlistEntry>.Number("rank_q1", e => e.Forest.RankLowerQuartile, NumberFormat.Fixed(1)),
@@ -36,7 +42,7 @@ public static class ScreenTables
             TsvColumn<ShortlistEntry>.Number("group_permutation_importance", e => e.GroupPermutationImportance, Importance),
             TsvColumn<ShortlistEntry>.Number("p_value", e => e.Forest.PValue, Probability),
             TsvColumn<ShortlistEntry>.Number("q_value", e => e.Forest.QValue, Probability),
-        };
+        });
         columns.AddRange(result.Kind switch
         {
             OutcomeKind.Measured => MeasuredColumns(),

@@ -103,7 +103,8 @@ public sealed class ResultsFolder : IDisposable
         :
         [
             "shortlist.tsv", "features.tsv", "panel_size_curve.tsv", Reporting.Screen.EffectTables.FileName, "marker_statistics.tsv",
-            "marker_statistics_by_cohort.tsv", .. ScreenResultFiles.CohortTables, Locking.LockedPanelFile.DefaultFileName, ScreenResultFiles.Report,
+            "marker_statistics_by_cohort.tsv", .. ScreenResultFiles.CohortTables, Reporting.Screen.AddedValueTables.FileName,
+            Reporting.Screen.CovariateTrackingTables.FileName, Locking.LockedPanelFile.DefaultFileName, ScreenResultFiles.Report,
         ];
 
     private static void Check(string shown, string full, bool force, ResultsKind kind, IEnumerable<string?> inputPaths)

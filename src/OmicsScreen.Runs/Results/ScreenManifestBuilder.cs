@@ -46,6 +46,7 @@ public static class ScreenManifestBuilder
                 PositiveClass = classes ? panel.Outcome.ClassNames[panel.Outcome.PositiveClass] : null,
                 CohortColumn = panel.Cohort?.ColumnName,
                 SubjectColumn = panel.Subject?.ColumnName,
+                Covariates = panel.Covariates.Count > 0 ? panel.Covariates.Select(c => c.Name).ToArray() : null,
                 FeaturesInRows = panelOptions.Layout == PanelLayout.FeaturesInRows,
                 LongTable = panelOptions.Layout == PanelLayout.Long,
                 FeatureBlock = panelOptions.FeatureBlock?.ToString(),

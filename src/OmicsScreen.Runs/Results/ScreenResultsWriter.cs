@@ -40,6 +40,8 @@ public static class ScreenResultsWriter
         if (result.Univariate.PerCohort.Count > 0)
             folder.WriteText("marker_statistics_by_cohort.tsv", w => UnivariateTableWriter.WritePerCohort(w, result.Univariate));
         if (result.Cohorts is { } cohorts) CohortTableFiles.Write(folder, cohorts);
+        if (result.AddedValue is { } added) folder.WriteText(AddedValueTables.FileName, w => AddedValueTables.Write(w, added));
+        if (result.CovariateTracking is { } tracking) folder.WriteText(CovariateTrackingTables.FileName, w => CovariateTrackingTables.Write(w, tracking));
         // The shortlist (or its prefix the curve recommends), locked for scoring new cohorts with
         // `apply`, for every outcome kind; an empty shortlist locks nothing.
         LockedPanelWritten? locked = null;

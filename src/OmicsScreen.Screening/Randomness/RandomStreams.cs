@@ -14,20 +14,23 @@ namespace OmicsScreen.Screening.Randomness;
 /// <list type="bullet">
 /// <item>repeat coordinates 0 .. 2 x pairs - 1: the half-sample repeats' forests (and their permuted copies);</item>
 /// <item>repeat coordinates 1 &lt;&lt; 20 and up: forests that score a panel, grown at an inner
-/// screen's seed, clear of that inner screen's own repeats (it never has a million of them);</item>
+/// screen's seed, clear of that inner screen's own repeats (it never has a million of them); from
+/// (1 &lt;&lt; 20) + (1 &lt;&lt; 16) the forests that score a fold's clinical covariates;</item>
 /// <item>int.MaxValue: the reference forest on all samples and the outcome-permutation null's observed forest;
 /// int.MaxValue - 1: the forest predicting the cohort and the locked panel's forest;
 /// int.MaxValue - 2: the decoys (sources and permutations, once per run);
-/// int.MaxValue - 3: the interaction-partner scan's forest; int.MaxValue - 4: its stratum-permuted copies;</item>
+/// int.MaxValue - 3: the interaction-partner scan's forest; int.MaxValue - 4: its stratum-permuted copies;
+/// int.MaxValue - 5: the forest telling markers that track a covariate;</item>
 /// <item>purpose Resampling, index slots: 0 half-samples (repeat = pair), 1 outer folds (repeat =
-/// fold repeat), 2 decoy sources, 1000 + fold inner seeds of the curve's folds (repeat = fold
+/// fold repeat), 2 decoy sources, 3 the added value's bootstrap (repeat 0), 1000 + fold inner seeds of the curve's folds (repeat = fold
 /// repeat), 2000 + cohort and 3000 + cohort the seeds of each cohort's own screen and of the
 /// screen without it (so at most 1,000 folds and 1,000 cohorts, checked).</item>
 /// </list>
 /// Deliberate sharing (both forests see the same samples, so their comparison is paired):
 /// the clean and the decoy-carrying forest of one repeat (<see cref="ScreenRepeat"/>); the reference
 /// forest and the outcome-permutation null's observed forest (<see cref="ReferenceForest"/>); a curve
-/// fold's selection-aware and optimistic forests of one panel size (<see cref="PanelScoring"/>).
+/// fold's selection-aware and optimistic forests of one panel size (<see cref="PanelScoring"/>); a curve
+/// fold's covariates-alone and covariates-with-panel forests (<see cref="CovariateScoring"/>).
 /// Sharing kept for byte-identical results, not by design: the cohort forest and the locked panel's
 /// forest both use int.MaxValue - 1 at the run seed (<see cref="CohortForest"/>,
 /// <see cref="LockedPanelForest"/>); they answer different questions (the cohort from all features,
@@ -52,12 +55,14 @@ public static class RandomStreams
 
     /// <summary>Repeat coordinate of the interaction-partner scan's stratum-permuted copies.</summary>
     public const int PartnerCopyRepeat = int.MaxValue - 4;
+    /// <summary>Repeat coordinate of the forest that tells markers tracking a covariate (its trees and the permuted copies of its decoys).</summary>
+    public const int TrackingRepeat = int.MaxValue - 5;
 
     /// <summary>First repeat coordinate of the forests that score a panel at an inner screen's seed.</summary>
     public const int ScoringRepeatBase = 1 << 20;
 
     /// <summary>Index slots of the Resampling purpose.</summary>
-    private const int HalfSampleSlot = 0, OuterFoldSlot = 1, DecoySourceSlot = 2;
+    private const int HalfSampleSlot = 0, OuterFoldSlot = 1, DecoySourceSlot = 2, AddedValueBootstrapSlot = 3;
 
     /// <summary>Index slot offsets of the inner screens' seeds; each family holds fewer than <see cref="SlotFamilyWidth"/> members.</summary>
     private const int CurveFoldSlot = 1000, CohortScreenSlot = 2000, HeldOutScreenSlot = 3000;
@@ -79,6 +84,9 @@ public static class RandomStreams
     /// <summary>The forest predicting the cohort from every feature.</summary>
     public static ForestStreams CohortForest(ulong runSeed) => new(runSeed, CohortForestRepeat);
 
+    /// <summary>The forest on the shortlisted markers and their permuted copies that tells which markers only track a covariate.</summary>
+    public static ForestStreams TrackingForest(ulong runSeed) => new(runSeed, TrackingRepeat);
+
     /// <summary>The locked panel's forest on all discovery samples.</summary>
     public static ForestStreams LockedPanelForest(ulong runSeed) => new(runSeed, LockRepeat);
 
@@ -92,6 +100,19 @@ public static class RandomStreams
         ArgumentOutOfRangeException.ThrowIfNegative(sizeIndex);
         return new(innerSeed, ScoringRepeatBase + sizeIndex);
     }
+
+    /// <summary>
+    /// Offset, above <see cref="ScoringRepeatBase"/>, of the forests that score clinical
+    /// covariates in a curve fold; a curve never has this many panel sizes.
+    /// </summary>
+    public const int CovariateScoringOffset = 1 << 16;
+
+    /// <summary>
+    /// The forests scoring a curve fold's covariates alone and its covariates beside the fold's
+    /// locked panel (shared on purpose: the same bootstraps make the gain a paired comparison);
+    /// <paramref name="innerSeed"/> is the fold's <see cref="CurveFoldScreenSeed"/>.
+    /// </summary>
+    public static ForestStreams CovariateScoring(ulong innerSeed) => new(innerSeed, ScoringRepeatBase + CovariateScoringOffset);
 
     /// <summary>The forest scoring a held-out cohort with the other cohorts' panel; <paramref name="heldOutSeed"/> is <see cref="HeldOutScreenSeed"/>.</summary>
     public static ForestStreams HeldOutScoring(ulong heldOutSeed) => new(heldOutSeed, ScoringRepeatBase);
@@ -117,6 +138,10 @@ public static class RandomStreams
     /// <summary>The generator choosing which features get a decoy.</summary>
     public static Xoshiro256StarStar DecoySources(ulong runSeed) =>
         SeedSchedule.Generator(runSeed, DecoyRepeat, DecoySourceSlot, SeedPurpose.Resampling);
+
+    /// <summary>The generator resampling samples for the added value's paired bootstrap (measured and follow-up outcomes).</summary>
+    public static Xoshiro256StarStar AddedValueBootstrap(ulong runSeed) =>
+        SeedSchedule.Generator(runSeed, 0, AddedValueBootstrapSlot, SeedPurpose.Resampling);
 
     /// <summary>The seed every decoy's permutation derives from (once per run).</summary>
     public static ulong DecoyPermutationSeed(ulong runSeed) =>
@@ -161,6 +186,16 @@ public static class RandomStreams
     /// <summary>The generator permuting one redundancy group in one tree; repeat coordinate 1 keeps it apart from the feature streams.</summary>
     public static Xoshiro256StarStar GroupPermutation(ulong treeSeed, int group) =>
         SeedSchedule.Generator(treeSeed, 1, group, SeedPurpose.Permutation);
+
+    /// <summary>
+    /// The generator permuting one feature within the strata of covariate <paramref name="covariate"/>
+    /// in one tree; repeat coordinates 2 and up keep it apart from the feature (0) and group (1) streams.
+    /// </summary>
+    public static Xoshiro256StarStar StratifiedPermutation(ulong treeSeed, int covariate, int feature)
+    {
+        ArgumentOutOfRangeException.ThrowIfNegative(covariate);
+        return SeedSchedule.Generator(treeSeed, 2 + covariate, feature, SeedPurpose.Permutation);
+    }
 
     private static int InFamily(int member)
     {

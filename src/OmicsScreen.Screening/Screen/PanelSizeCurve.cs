@@ -36,4 +36,7 @@ public sealed record PanelSizeCurve(string Metric, IReadOnlyList<PanelSizePoint>
 
     /// <summary>Whether each of <see cref="LockedOutOfFoldScores"/> belongs to a sample of the positive class.</summary>
     public IReadOnlyList<bool> LockedOutOfFoldPositive { get; init; } = [];
+
+    /// <summary>Each outer fold's locked panel and its held-out score, in fold order (for the added value over covariates).</summary>
+    internal IReadOnlyList<FoldPanel> FoldPanels { get; init; } = [];
 }

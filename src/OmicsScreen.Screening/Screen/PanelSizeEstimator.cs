@@ -115,6 +115,7 @@ internal static class PanelSizeEstimator
         // pooled: the cross-validated ROC curve of the locked panel (two classes only).
         var outOfFoldScores = new List<double>();
         var outOfFoldPositive = new List<bool>();
+        var foldPanels = new FoldPanel[folds.Count];
         int withoutPanel = 0;
         double sizeSum = 0;
         for (int i = 0; i < folds.Count; i++)
@@ -130,6 +131,7 @@ internal static class PanelSizeEstimator
                 var chance = model.ChanceScore(fold.TrainingRows, fold.TestRows);
                 lockedScores[i] = chance.Score;
                 AddOutOfFold(chance, outOfFoldScores, outOfFoldPositive);
+                foldPanels[i] = new FoldPanel([], chance);
                 continue;
             }
             var otherMeans = new double[sizes.Length];
@@ -151,6 +153,7 @@ internal static class PanelSizeEstimator
                 locked = Score(context, panelFeatures, fold, RandomStreams.PanelScoring(InnerSeed(options, fold), sizes.Length));
             lockedScores[i] = locked.Score;
             AddOutOfFold(locked, outOfFoldScores, outOfFoldPositive);
+            foldPanels[i] = new FoldPanel(panelFeatures.ToArray(), locked);
         }
         var (lockedMean, lockedSd) = SampleMoments.Of(lockedScores);
         return new PanelSizeCurve(model.ScoreName, points, chosen >= 0 ? sizes[chosen] : sizes[^1],
@@ -163,6 +166,7 @@ internal static class PanelSizeEstimator
             MeanFoldPanelSize = sizeSum / folds.Count,
             LockedOutOfFoldScores = binary ? outOfFoldScores.ToArray() : [],
             LockedOutOfFoldPositive = binary ? outOfFoldPositive.ToArray() : [],
+            FoldPanels = foldPanels,
         };
     }
 

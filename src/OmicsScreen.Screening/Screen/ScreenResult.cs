@@ -49,4 +49,13 @@ public sealed record ScreenResult(
 
     /// <summary>The outcome kind screened.</summary>
     public OmicsScreen.Engine.Panels.OutcomeKind Kind { get; init; } = OmicsScreen.Engine.Panels.OutcomeKind.Classes;
+
+    /// <summary>
+    /// What the panel adds over the clinical covariates (--covariates), measured in the curve's
+    /// outer folds; null without covariates, without the curve, or with more than two classes.
+    /// </summary>
+    public OmicsScreen.Screening.Covariates.AddedValue? AddedValue { get; init; }
+
+    /// <summary>Which shortlisted markers only track a covariate; null without covariates or shortlist, and for outcome kinds other than classes.</summary>
+    public OmicsScreen.Screening.Covariates.CovariateTracking? CovariateTracking { get; init; }
 }

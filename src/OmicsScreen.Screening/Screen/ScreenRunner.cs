@@ -4,6 +4,7 @@ using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Screening.Cohorts;
 using OmicsScreen.Screening.Effects;
+using OmicsScreen.Screening.Covariates;
 using OmicsScreen.Screening.Importance;
 using OmicsScreen.Screening.Randomness;
 using OmicsScreen.Screening.Statistics;
@@ -111,6 +112,11 @@ public static class ScreenRunner
             Finish(ScreenStage.PanelSizeCurve);
         }
 
+        // What the panel adds over the clinical covariates, in the curve's own outer folds.
+        var addedValue = curve is null ? null : AddedValueEstimator.Estimate(context, work.CurveFolds, curve);
+        // Which shortlisted markers only track a covariate (class outcomes).
+        var tracking = CovariateTrackingAnalysis.Run(context, shortlisted);
+
         CohortResult? cohorts = null;
         if (panel.Cohort is { LevelCount: >= 2 })
         {
@@ -132,6 +138,8 @@ public static class ScreenRunner
             FollowUpMarkers = singleMarkers.FollowUp,
             Kind = panel.Kind,
             Effects = effects,
+            AddedValue = addedValue,
+            CovariateTracking = tracking,
         };
     }
 

@@ -17,7 +17,7 @@ public sealed class VocabularyTests
     /// <summary>Options of `screen` that say where data is or how the run behaves, not what it computes.</summary>
     private static readonly HashSet<string> NotSettings =
     [
-        "--samples", "--outcome", "--outcome-kind", "--follow-up", "--event", "--cohort", "--subject", "--positive-class", "--id-column", "--annotation", "--features-in-rows",
+        "--samples", "--outcome", "--outcome-kind", "--follow-up", "--event", "--cohort", "--covariates", "--subject", "--positive-class", "--id-column", "--annotation", "--features-in-rows",
         "--drop-unmatched", "--feature-block", "--keep-features", "--out", "--force", "--resume", "--part", "--show-sample-ids",
         "--quiet", "--memory-limit", "--json",
         "--feature-sheet", "--detection-limit", "--long", "--feature-columns", "--value-column", "--below-detection-flag", "--quality-flag", "--display-name",

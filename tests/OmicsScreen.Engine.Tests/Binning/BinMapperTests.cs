@@ -120,6 +120,21 @@ public class BinMapperTests
     }
 
     [Fact]
+    public void Placing_two_matrices_side_by_side_keeps_each_column_and_numbers_the_second_after_the_first()
+    {
+        var panel = SyntheticPanel.Generate(new SyntheticPanelSpec { SampleCount = 50, FeatureCount = 5 });
+        var binned = new BinMapper().Bin(panel.Matrix);
+        var left = binned.SelectFeatures([4, 1]);
+        var right = binned.SelectFeatures([2]);
+        var both = left.Beside(right);
+        Assert.Equal([binned.FeatureNames[4], binned.FeatureNames[1], binned.FeatureNames[2]], both.FeatureNames);
+        Assert.Equal(binned.Codes(2).ToArray(), both.Codes(2).ToArray());
+        Assert.Same(binned.Bins(1), both.Bins(1));
+        Assert.Equal([4, 1, 2 + 2], new[] { both.SourceFeature(0), both.SourceFeature(1), both.SourceFeature(2) });
+        Assert.Throws<ArgumentException>(() => left.Beside(new BinMapper().Bin(panel.Matrix.SelectSamples([0, 1, 2]))));
+    }
+
+    [Fact]
     public void Encoding_the_training_matrix_reproduces_its_codes()
     {
         var panel = SyntheticPanel.Generate(new SyntheticPanelSpec { SampleCount = 400, FeatureCount = 4, MissingFraction = 0.1 });

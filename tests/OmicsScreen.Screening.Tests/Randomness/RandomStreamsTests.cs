@@ -57,10 +57,17 @@ public class RandomStreamsTests
         Add("locked panel forest", ForestSeeds(RandomStreams.LockedPanelForest(RunSeed)));
         Add("partner forest", ForestSeeds(RandomStreams.PartnerForest(RunSeed)));
         AddGenerators("partner copies", Enumerable.Range(0, Columns * 10).Select(c => RandomStreams.PartnerCopy(RunSeed, c)));
+        Add("tracking forest", ForestSeeds(RandomStreams.TrackingForest(RunSeed)));
+        var trackingForest = RandomStreams.TrackingForest(RunSeed);
+        for (int t = 0; t < Trees; t++)
+            for (int c = 0; c < 5; c++)
+                AddGenerators("stratified permutations", Enumerable.Range(0, Columns).Select(f =>
+                    RandomStreams.StratifiedPermutation(RandomStreams.PermutationImportanceTree(trackingForest, t), c, f)));
 
         AddGenerators("half-samples", Enumerable.Range(0, Repeats / 2).Select(p => RandomStreams.HalfSamples(RunSeed, p)));
         AddGenerators("outer folds", Enumerable.Range(0, FoldRepeats).Select(k => RandomStreams.OuterFolds(RunSeed, k)));
         AddGenerators("decoy sources", [RandomStreams.DecoySources(RunSeed)]);
+        AddGenerators("added value bootstrap", [RandomStreams.AddedValueBootstrap(RunSeed)]);
         ulong decoySeed = RandomStreams.DecoyPermutationSeed(RunSeed);
         Add("decoy permutation seed", [decoySeed]);
         AddGenerators("decoy permutations", Enumerable.Range(0, Columns).Select(d => RandomStreams.DecoyPermutation(decoySeed, d)));
@@ -92,6 +99,8 @@ public class RandomStreamsTests
         }
         foreach (var (family, seed) in innerSeeds.Where(s => s.Family == "curve fold"))
             for (int s = 0; s <= Sizes; s++) Add("panel scoring forests", ForestSeeds(RandomStreams.PanelScoring(seed, s)).Take(2 * Trees));
+        foreach (var (family, seed) in innerSeeds.Where(s => s.Family == "curve fold"))
+            Add("covariate scoring forests", ForestSeeds(RandomStreams.CovariateScoring(seed)).Take(2 * Trees));
         foreach (var (family, seed) in innerSeeds.Where(s => s.Family == "held-out screen"))
             Add("held-out scoring forests", ForestSeeds(RandomStreams.HeldOutScoring(seed)).Take(2 * Trees));
         return slots;

@@ -1,0 +1,268 @@
+using OmicsScreen.Engine.Binning;
+using OmicsScreen.Engine.Forests;
+using OmicsScreen.Engine.Panels;
+using OmicsScreen.Engine.Randomness;
+using OmicsScreen.Screening.Randomness;
+using OmicsScreen.Screening.Screen;
+using OmicsScreen.Screening.Statistics;
+
+namespace OmicsScreen.Screening.Covariates;
+
+/// <summary>
+/// Finds the shortlisted markers that only track a clinical covariate (class outcomes).
+/// </summary>
+/// <remarks>
+/// <para>Association: each marker against each covariate, Spearman's rho for a numeric covariate
+/// and Kruskal-Wallis H with epsilon-squared for a categorical one, Benjamini-Hochberg over all
+/// pairs. Association alone does not say a marker is a proxy: a true marker may correlate with
+/// age and still carry its own signal.</para>
+/// <para>Conditional importance (Strobl, Boulesteix, Kneib, Augustin &amp; Zeileis 2008, BMC
+/// Bioinformatics 9:307): one forest on all samples with the markers and permuted copies of them
+/// (decoys: the same values, no link to outcome or covariates). For every tree and column, the
+/// out-of-bag rows' Brier score is measured again with the column permuted among all out-of-bag
+/// rows (marginal importance) and permuted only within the strata of one covariate (importance
+/// conditional on it). A marker whose association with the outcome runs through age keeps its
+/// age-related part under the within-age permutation, so its conditional importance falls to
+/// that of the decoys; a marker with signal of its own loses it either way. The covariates are not
+/// predictors of this forest: they only define the strata.</para>
+/// <para>Flag: a marker "tracks" a covariate when it is associated with it (BH q at most 0.10),
+/// its marginal importance is above the upper decile
+/// of the decoys' marginal importances and more than 1.645 standard errors (over trees) above 0,
+/// while its importance conditional on that covariate falls to the null: not above the upper
+/// decile of the decoys' importances conditional on it, or not 1.645 standard errors above 0. The
+/// second arm matters because a marker the forest splits on often has a noisier importance than
+/// decoys it rarely splits on: on the tests' age-proxy simulation the proxies' conditional
+/// importances scattered around 0 (-0.008 to +0.010, marginal 0.05-0.10) while the decoys' upper
+/// decile was 0.0025. The proxy the forest used most still kept 5-12% of its marginal importance
+/// (within-stratum age differences, 240 and 720 samples), significantly above 0, so a third arm
+/// counts a marker that keeps less than a fifth (<see cref="RetainedShare"/>) as fallen to the
+/// null; a marker with its own signal keeps about two thirds or more (within-stratum permutations
+/// leave some out-of-bag rows in place).</para>
+/// </remarks>
+internal static class CovariateTrackingAnalysis
+{
+    /// <summary>Decoys grown beside the markers: at least this many, and one per marker beyond that.</summary>
+    public const int MinimumDecoys = 20;
+
+    /// <summary>The decoys' importance quantile a marker must exceed.</summary>
+    public const double NullQuantile = 0.9;
+
+    /// <summary>
+    /// A marker keeping less than this share of its marginal importance once permuted within a
+    /// covariate's strata has lost almost all of it to the covariate (see the remarks).
+    /// </summary>
+    public const double RetainedShare = 0.2;
+
+    /// <summary>
+    /// Benjamini-Hochberg level the marker's association with the covariate must reach: a marker
+    /// can only stand in for a covariate it is associated with. Without it, a weak marker whose
+    /// within-strata importance dipped under the decoys' by chance was flagged as tracking a
+    /// covariate unrelated to everything (the demo's age, rho -0.08).
+    /// </summary>
+    public const double AssociationLevel = 0.10;
+
+    /// <summary>One-sided 5% normal critical value: an importance whose mean over trees is not this many standard errors above 0 is indistinguishable from none.</summary>
+    public const double OneSidedCritical = 1.6448536269514722;
+
+    /// <summary>Null without covariates or shortlisted markers, or for outcome kinds other than classes (see README).</summary>
+    public static CovariateTracking? Run(ScreenContext context, IReadOnlyList<int> shortlisted)
+    {
+        var panel = context.Panel;
+        if (panel.Covariates.Count == 0 || shortlisted.Count == 0 || panel.Kind != OutcomeKind.Classes) return null;
+        var associations = Associations(panel, shortlisted);
+
+        int markers = shortlisted.Count;
+        int decoys = Math.Max(MinimumDecoys, markers);
+        var decoySources = new int[decoys];
+        for (int d = 0; d < decoys; d++) decoySources[d] = d % markers;
+        var streams = RandomStreams.TrackingForest(context.Options.Seed);
+        var matrix = context.Matrix.SelectFeatures(shortlisted.ToArray()).WithPermutedCopies(decoySources, streams.Seed, streams.Repeat, context.ThreadCount);
+        var allRows = Enumerable.Range(0, panel.SampleCount).ToArray();
+        var forest = ForestTrainer.Train(matrix, panel.Outcome, context.Settings.ForestOptions(context.Subject, streams), allRows);
+
+        int covariateCount = panel.Covariates.Count;
+        var strata = new int[covariateCount][];
+        var strataCounts = new int[covariateCount];
+        for (int c = 0; c < covariateCount; c++) strata[c] = CovariateStrata.Of(panel.Covariates[c], out strataCounts[c]);
+        // importance[0, j] marginal, importance[1 + c, j] conditional on covariate c; Brier increase summed over trees.
+        var importance = new double[1 + covariateCount, matrix.FeatureCount];
+        var squares = new double[1 + covariateCount, matrix.FeatureCount];
+        var treeIncrease = new double[1 + covariateCount, matrix.FeatureCount];
+        var classes = panel.Outcome.SampleClasses.ToArray();
+        for (int t = 0; t < forest.TreeCount; t++)
+        {
+            context.Cancellation.ThrowIfCancellationRequested();
+            Array.Clear(treeIncrease);
+            TreeIncreases(forest, t, matrix, classes, strata, strataCounts, treeIncrease);
+            for (int k = 0; k <= covariateCount; k++)
+                for (int j = 0; j < matrix.FeatureCount; j++)
+                {
+                    importance[k, j] += treeIncrease[k, j];
+                    squares[k, j] += treeIncrease[k, j] * treeIncrease[k, j];
+                }
+        }
+        int trees = forest.TreeCount;
+        // Mean over trees and its standard error SD / sqrt(trees) (randomForest's importance and
+        // its standard error, Liaw & Wiener 2002, R News 2(3)): z = mean / SE.
+        var z = new double[1 + covariateCount, matrix.FeatureCount];
+        for (int k = 0; k <= covariateCount; k++)
+            for (int j = 0; j < matrix.FeatureCount; j++)
+            {
+                double mean = importance[k, j] / trees;
+                double variance = trees > 1 ? Math.Max(0, (squares[k, j] - trees * mean * mean) / (trees - 1)) : 0;
+                double se = Math.Sqrt(variance / trees);
+                importance[k, j] = mean;
+                z[k, j] = se > 0 ? mean / se : 0;
+            }
+
+        var thresholds = new double[1 + covariateCount];
+        var decoyValues = new double[decoys];
+        for (int k = 0; k <= covariateCount; k++)
+        {
+            for (int d = 0; d < decoys; d++) decoyValues[d] = importance[k, markers + d];
+            var sorted = decoyValues.ToArray();
+            Array.Sort(sorted);
+            thresholds[k] = Quantile.OfSorted(sorted, NullQuantile, QuantileDefinition.Linear);
+        }
+        var tracking = new MarkerTracking[markers];
+        for (int m = 0; m < markers; m++)
+        {
+            var conditional = new double[covariateCount];
+            var tracks = new List<string>();
+            for (int c = 0; c < covariateCount; c++)
+            {
+                conditional[c] = importance[1 + c, m];
+                bool important = importance[0, m] > thresholds[0] && z[0, m] > OneSidedCritical;
+                bool fallsToNull = conditional[c] <= thresholds[1 + c] || z[1 + c, m] <= OneSidedCritical
+                    || conditional[c] < RetainedShare * importance[0, m];
+                double q = associations[m * covariateCount + c].QValue;
+                if (important && fallsToNull && q <= AssociationLevel) tracks.Add(panel.Covariates[c].Name);
+            }
+            tracking[m] = new MarkerTracking(shortlisted[m], panel.Matrix.FeatureNames[shortlisted[m]], importance[0, m], conditional, tracks);
+        }
+        return new CovariateTracking(panel.Covariates.Select(c => c.Name).ToArray(), associations, tracking, thresholds[0],
+            thresholds[1..], decoys, CovariateStrata.NumericStrata(panel.SampleCount));
+    }
+
+    /// <summary>Every marker against every covariate, BH over all pairs; a cell not measured is left out.</summary>
+    internal static MarkerCovariateAssociation[] Associations(Panel panel, IReadOnlyList<int> shortlisted)
+    {
+        var pairs = new List<(int Feature, int Covariate, string Test, double Effect, double P)>();
+        foreach (int feature in shortlisted)
+        {
+            var values = new double[panel.SampleCount];
+            var column = panel.Matrix.Column(feature);
+            var states = panel.Matrix.States(feature);
+            for (int s = 0; s < values.Length; s++)
+                values[s] = !states.IsEmpty && states[s] == CellState.Missing ? double.NaN : column[s];
+            for (int c = 0; c < panel.Covariates.Count; c++)
+            {
+                var covariate = panel.Covariates[c];
+                if (covariate.IsCategorical)
+                {
+                    var levels = new int[panel.SampleCount];
+                    for (int s = 0; s < levels.Length; s++) levels[s] = covariate.LevelOf(s);
+                    var test = KruskalWallisTest.Test(values, levels, covariate.Levels.Count);
+                    pairs.Add((feature, c, "kruskal_wallis", test.EpsilonSquared, test.PValue));
+                }
+                else
+                {
+                    var test = SpearmanTest.Test(values, covariate.Values);
+                    pairs.Add((feature, c, "spearman", test.Rho, test.PValue));
+                }
+            }
+        }
+        // BH over the pairs with a p-value; a pair without one keeps q = NaN.
+        var defined = pairs.Where(p => !double.IsNaN(p.P)).Select(p => p.P).ToArray();
+        var q = BenjaminiHochberg.Adjust(defined);
+        var result = new MarkerCovariateAssociation[pairs.Count];
+        for (int i = 0, k = 0; i < pairs.Count; i++)
+        {
+            var p = pairs[i];
+            double qValue = double.IsNaN(p.P) ? double.NaN : q[k++];
+            result[i] = new MarkerCovariateAssociation(p.Feature, panel.Matrix.FeatureNames[p.Feature], panel.Covariates[p.Covariate].Name, p.Test, p.Effect, p.P, qValue);
+        }
+        return result;
+    }
+
+    /// <summary>
+    /// Adds tree t's Brier score increases to <paramref name="importance"/>: for each column it
+    /// splits on, its codes permuted among the out-of-bag rows (row 0) and within each covariate's
+    /// strata (row 1 + covariate). A column the tree does not split on cannot change a leaf and adds 0.
+    /// </summary>
+    private static void TreeIncreases(Forest forest, int t, BinnedMatrix matrix, int[] classes, int[][] strata, int[] strataCounts,
+        double[,] importance)
+    {
+        var tree = forest.Tree(t);
+        var rows = forest.OutOfBag(t).Rows.ToArray();
+        int n = rows.Length;
+        if (n == 0) return;
+        var baseBrier = new double[n];
+        double baseline = 0;
+        for (int i = 0; i < n; i++)
+        {
+            baseBrier[i] = RowBrier(tree, tree.LeafOf(matrix, rows[i]), classes[rows[i]]);
+            baseline += baseBrier[i];
+        }
+        ulong treeSeed = RandomStreams.PermutationImportanceTree(new ForestStreams(forest.Options.Seed, forest.Options.Repeat), forest.FirstTree + t);
+        var source = new int[n];
+        foreach (int feature in tree.SplitFeatures())
+        {
+            var codes = matrix.Codes(feature);
+            var marginal = RandomStreams.FeaturePermutation(treeSeed, feature);
+            for (int i = 0; i < n; i++) source[i] = i;
+            marginal.Shuffle(source.AsSpan());
+            importance[0, feature] += Increase(tree, matrix, rows, classes, feature, codes, source, baseline);
+            for (int c = 0; c < strata.Length; c++)
+            {
+                var generator = RandomStreams.StratifiedPermutation(treeSeed, c, feature);
+                WithinStrata(rows, strata[c], strataCounts[c], source, ref generator);
+                importance[1 + c, feature] += Increase(tree, matrix, rows, classes, feature, codes, source, baseline);
+            }
+        }
+    }
+
+    /// <summary>Mean Brier score increase of the out-of-bag rows when row i reads the feature's code of row source[i].</summary>
+    private static double Increase(Engine.Trees.DecisionTree tree, BinnedMatrix matrix, int[] rows, int[] classes, int feature,
+        ReadOnlySpan<byte> codes, int[] source, double baseline)
+    {
+        double brier = 0;
+        for (int i = 0; i < rows.Length; i++)
+        {
+            int leaf = tree.LeafOf(matrix, rows[i], feature, codes[rows[source[i]]]);
+            brier += RowBrier(tree, leaf, classes[rows[i]]);
+        }
+        return (brier - baseline) / rows.Length;
+    }
+
+    /// <summary>source[i] = a position of the same stratum as i, drawn as one permutation per stratum (positions in stratum order).</summary>
+    private static void WithinStrata(int[] rows, int[] strata, int strataCount, int[] source, ref Xoshiro256StarStar generator)
+    {
+        var members = new List<int>[strataCount];
+        for (int s = 0; s < strataCount; s++) members[s] = [];
+        for (int i = 0; i < rows.Length; i++) members[strata[rows[i]]].Add(i);
+        foreach (var group in members)
+        {
+            var shuffled = group.ToArray();
+            generator.Shuffle(shuffled.AsSpan());
+            for (int k = 0; k < group.Count; k++) source[group[k]] = shuffled[k];
+        }
+    }
+
+    /// <summary>Multi-class Brier score of a row at a leaf: sum over classes of (p_c - [y = c])^2 (Brier 1950).</summary>
+    private static double RowBrier(Engine.Trees.DecisionTree tree, int leaf, int outcomeClass)
+    {
+        int classCount = tree.ClassCount;
+        var weights = tree.ClassWeights.Slice(leaf * classCount, classCount);
+        double total = 0;
+        foreach (double w in weights) total += w;
+        double score = 0;
+        for (int c = 0; c < classCount; c++)
+        {
+            double p = total > 0 ? weights[c] / total : 1.0 / classCount;
+            double target = c == outcomeClass ? 1 : 0;
+            score += (p - target) * (p - target);
+        }
+        return score;
+    }
+}
