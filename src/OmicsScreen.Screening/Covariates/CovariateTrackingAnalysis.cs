@@ -2,6 +2,7 @@ using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Engine.Randomness;
+using OmicsScreen.Screening.Importance;
 using OmicsScreen.Screening.Randomness;
 using OmicsScreen.Screening.Screen;
 using OmicsScreen.Screening.Statistics;
@@ -88,12 +89,13 @@ internal static class CovariateTrackingAnalysis
         var importance = new double[1 + covariateCount, matrix.FeatureCount];
         var squares = new double[1 + covariateCount, matrix.FeatureCount];
         var treeIncrease = new double[1 + covariateCount, matrix.FeatureCount];
-        var classes = panel.Outcome.SampleClasses.ToArray();
+        var scorer = new OutOfBagTreeScorer(matrix, panel.Outcome.SampleClasses.ToArray());
+        var donors = Array.Empty<int>();
         for (int t = 0; t < forest.TreeCount; t++)
         {
             context.Cancellation.ThrowIfCancellationRequested();
             Array.Clear(treeIncrease);
-            TreeIncreases(forest, t, matrix, classes, strata, strataCounts, treeIncrease);
+            TreeIncreases(forest, t, scorer, strata, strataCounts, ref donors, treeIncrease);
             for (int k = 0; k <= covariateCount; k++)
                 for (int j = 0; j < matrix.FeatureCount; j++)
                 {
@@ -187,56 +189,35 @@ internal static class CovariateTrackingAnalysis
 
     /// <summary>
     /// Adds tree t's Brier score increases to <paramref name="importance"/>: for each column it
-    /// splits on, its codes permuted among the out-of-bag rows (row 0) and within each covariate's
-    /// strata (row 1 + covariate). A column the tree does not split on cannot change a leaf and adds 0.
+    /// splits on, its codes permuted among the out-of-bag rows (row 0, the permutation importance's
+    /// own permutation) and within each covariate's strata (row 1 + covariate). A column the tree
+    /// does not split on cannot change a leaf and adds 0.
     /// </summary>
-    private static void TreeIncreases(Forest forest, int t, BinnedMatrix matrix, int[] classes, int[][] strata, int[] strataCounts,
-        double[,] importance)
+    private static void TreeIncreases(Forest forest, int t, OutOfBagTreeScorer scorer, int[][] strata, int[] strataCounts,
+        ref int[] donors, double[,] importance)
     {
         var tree = forest.Tree(t);
-        var rows = forest.OutOfBag(t).Rows.ToArray();
-        int n = rows.Length;
-        if (n == 0) return;
-        var baseBrier = new double[n];
-        double baseline = 0;
-        for (int i = 0; i < n; i++)
-        {
-            baseBrier[i] = RowBrier(tree, tree.LeafOf(matrix, rows[i]), classes[rows[i]]);
-            baseline += baseBrier[i];
-        }
-        ulong treeSeed = RandomStreams.PermutationImportanceTree(new ForestStreams(forest.Options.Seed, forest.Options.Repeat), forest.FirstTree + t);
-        var source = new int[n];
+        var outOfBag = forest.OutOfBag(t);
+        if (outOfBag.Count == 0) return;
+        scorer.Begin(tree, outOfBag);
+        var rows = scorer.Rows;
+        if (donors.Length < rows.Length) donors = new int[rows.Length];
+        ulong treeSeed = OutOfBagTreeScorer.TreeSeed(forest, t);
         foreach (int feature in tree.SplitFeatures())
         {
-            var codes = matrix.Codes(feature);
-            var marginal = RandomStreams.FeaturePermutation(treeSeed, feature);
-            for (int i = 0; i < n; i++) source[i] = i;
-            marginal.Shuffle(source.AsSpan());
-            importance[0, feature] += Increase(tree, matrix, rows, classes, feature, codes, source, baseline);
+            var marginal = OutOfBagTreeScorer.FeatureGenerator(treeSeed, feature);
+            importance[0, feature] += scorer.ScoreFeature(feature, ref marginal).BrierIncrease;
             for (int c = 0; c < strata.Length; c++)
             {
                 var generator = RandomStreams.StratifiedPermutation(treeSeed, c, feature);
-                WithinStrata(rows, strata[c], strataCounts[c], source, ref generator);
-                importance[1 + c, feature] += Increase(tree, matrix, rows, classes, feature, codes, source, baseline);
+                WithinStrata(rows, strata[c], strataCounts[c], donors, ref generator);
+                importance[1 + c, feature] += scorer.BrierIncreaseWithDonors(feature, donors.AsSpan(0, rows.Length));
             }
         }
     }
 
-    /// <summary>Mean Brier score increase of the out-of-bag rows when row i reads the feature's code of row source[i].</summary>
-    private static double Increase(Engine.Trees.DecisionTree tree, BinnedMatrix matrix, int[] rows, int[] classes, int feature,
-        ReadOnlySpan<byte> codes, int[] source, double baseline)
-    {
-        double brier = 0;
-        for (int i = 0; i < rows.Length; i++)
-        {
-            int leaf = tree.LeafOf(matrix, rows[i], feature, codes[rows[source[i]]]);
-            brier += RowBrier(tree, leaf, classes[rows[i]]);
-        }
-        return (brier - baseline) / rows.Length;
-    }
-
     /// <summary>source[i] = a position of the same stratum as i, drawn as one permutation per stratum (positions in stratum order).</summary>
-    private static void WithinStrata(int[] rows, int[] strata, int strataCount, int[] source, ref Xoshiro256StarStar generator)
+    private static void WithinStrata(ReadOnlySpan<int> rows, int[] strata, int strataCount, int[] source, ref Xoshiro256StarStar generator)
     {
         var members = new List<int>[strataCount];
         for (int s = 0; s < strataCount; s++) members[s] = [];
@@ -247,22 +228,5 @@ internal static class CovariateTrackingAnalysis
             generator.Shuffle(shuffled.AsSpan());
             for (int k = 0; k < group.Count; k++) source[group[k]] = shuffled[k];
         }
-    }
-
-    /// <summary>Multi-class Brier score of a row at a leaf: sum over classes of (p_c - [y = c])^2 (Brier 1950).</summary>
-    private static double RowBrier(Engine.Trees.DecisionTree tree, int leaf, int outcomeClass)
-    {
-        int classCount = tree.ClassCount;
-        var weights = tree.ClassWeights.Slice(leaf * classCount, classCount);
-        double total = 0;
-        foreach (double w in weights) total += w;
-        double score = 0;
-        for (int c = 0; c < classCount; c++)
-        {
-            double p = total > 0 ? weights[c] / total : 1.0 / classCount;
-            double target = c == outcomeClass ? 1 : 0;
-            score += (p - target) * (p - target);
-        }
-        return score;
     }
 }

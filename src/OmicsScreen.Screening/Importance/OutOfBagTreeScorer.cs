@@ -72,6 +72,9 @@ internal sealed class OutOfBagTreeScorer
 
     public int RowCount => _rowCount;
 
+    /// <summary>The loaded tree's out-of-bag rows; donor positions index into them.</summary>
+    public ReadOnlySpan<int> Rows => _rows.AsSpan(0, _rowCount);
+
     /// <summary>Loads a tree and its out-of-bag rows and scores the unpermuted baseline.</summary>
     public void Begin(DecisionTree tree, TreeOutOfBag outOfBag)
     {
@@ -198,6 +201,32 @@ internal sealed class OutOfBagTreeScorer
             brierChange += RowBrier(leaf, _classes[row]) - _baseBrier[i];
         }
         return ((double)-correctChange / _rowCount, brierChange / _rowCount);
+    }
+
+    /// <summary>
+    /// Brier increase of the loaded tree when out-of-bag row i reads the feature's code of
+    /// out-of-bag row <paramref name="donors"/>[i] (positions in <see cref="Rows"/>), for a
+    /// permutation the caller draws, such as one within strata of a covariate (Strobl et al. 2008,
+    /// BMC Bioinformatics 9:307). Only rows whose path meets the feature are walked again, as in
+    /// <see cref="ScoreFeature"/>.
+    /// </summary>
+    public double BrierIncreaseWithDonors(int feature, ReadOnlySpan<int> donors)
+    {
+        var tree = _tree!;
+        if (_rowCount == 0) return 0;
+        int local = _localOfFeature[feature];
+        if (local < 0) return 0;
+        var codes = _matrix.Codes(feature);
+        double brierChange = 0;
+        for (int k = _visitStart[local], end = _visitStart[local + 1]; k < end; k++)
+        {
+            int i = _visitRows[k];
+            int row = _rows[i];
+            int leaf = tree.LeafOf(_matrix, row, feature, codes[_rows[donors[i]]]);
+            if (leaf == _baseLeaf[i]) continue;
+            brierChange += RowBrier(leaf, _classes[row]) - _baseBrier[i];
+        }
+        return brierChange / _rowCount;
     }
 
     /// <summary>The plain reference of <see cref="ScoreFeature"/>: every out-of-bag row walked again.</summary>

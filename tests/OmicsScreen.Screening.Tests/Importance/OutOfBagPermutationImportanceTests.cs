@@ -50,6 +50,34 @@ public class OutOfBagPermutationImportanceTests
     }
 
     [Fact]
+    public void A_caller_drawn_permutation_scores_as_the_same_permutation_drawn_by_the_scorer()
+    {
+        // The covariate-tracking analysis hands the scorer its own (within-strata) permutations;
+        // handed the very permutation ScoreFeature draws, the Brier increase must be the same
+        // (the Brier score of Brier 1950, the permutation of Breiman 2001).
+        var (matrix, outcome) = ImportanceTestPanels.Binned(300, 30, 4, 0.8, seed: 6);
+        var forest = ForestTrainer.Train(matrix, outcome, new ForestOptions { TreeCount = 20, Seed = 5, ThreadCount = 2 });
+        var scorer = new OutOfBagTreeScorer(matrix, outcome.SampleClasses.ToArray());
+        int nonzero = 0;
+        for (int t = 0; t < forest.TreeCount; t++)
+        {
+            scorer.Begin(forest.Tree(t), forest.OutOfBag(t));
+            ulong treeSeed = OutOfBagTreeScorer.TreeSeed(forest, t);
+            for (int f = 0; f < matrix.FeatureCount; f++)
+            {
+                var drawn = OutOfBagTreeScorer.FeatureGenerator(treeSeed, f);
+                var copy = OutOfBagTreeScorer.FeatureGenerator(treeSeed, f);
+                var donors = Enumerable.Range(0, scorer.RowCount).ToArray();
+                copy.Shuffle(donors.AsSpan());
+                double expected = scorer.ScoreFeature(f, ref drawn).BrierIncrease;
+                Assert.Equal(expected, scorer.BrierIncreaseWithDonors(f, donors), 12);
+                if (expected != 0) nonzero++;
+            }
+        }
+        Assert.True(nonzero > 50, $"only {nonzero} tree-feature pairs changed the Brier score; the comparison would be weak");
+    }
+
+    [Fact]
     public void Results_are_identical_with_one_and_two_threads()
     {
         var (matrix, outcome) = ImportanceTestPanels.Binned(120, 40, 4, 1.0, seed: 4);
