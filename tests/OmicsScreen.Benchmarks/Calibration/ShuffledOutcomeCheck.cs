@@ -85,7 +85,9 @@ public static class ShuffledOutcomeCheck
     private static PanelTrace Measure(OutcomeKind kind, int samples, int features, ulong seed, bool defaults, int threads)
     {
         var watch = Stopwatch.StartNew();
-        var panel = Shuffled(kind == OutcomeKind.Measured ? MeasuredPanel(samples, features, 80 + seed) : FollowUpPanel(samples, features, 80 + seed), seed);
+        var panel = OutcomeKindPanels.Shuffled(kind == OutcomeKind.Measured
+            ? OutcomeKindPanels.Measured(samples, features, 80 + seed, planted: true)
+            : OutcomeKindPanels.FollowUp(samples, features, 80 + seed, planted: true), seed);
         var options = defaults
             ? new ScreenOptions { Seed = seed, CurveFolds = 0, ThreadCount = threads }
             : new ScreenOptions { Seed = seed, HalfSamplePairs = 6, TreesPerForest = 150, CurveFolds = 0, ThreadCount = threads };
@@ -117,51 +119,6 @@ public static class ShuffledOutcomeCheck
             BenjaminiHochberg.RejectionSet(featureRankP, 0.10).Any(x => x),
             BenjaminiHochberg.RejectionSet(result.Features.Select(f => f.CombinedP).ToArray(), 0.10).Any(x => x),
             pValues, result.Features.Select(f => f.ForestP).ToArray(), featureRankP, watch.Elapsed.TotalSeconds);
-    }
-
-    /// <summary>OutcomeKindScreenTests.MeasuredPanel with planted markers, drawn the same way.</summary>
-    private static Panel MeasuredPanel(int samples, int features, ulong seed)
-    {
-        var (matrix, z, _) = StandardNormalFeatures.Draw(samples, features, seed, s => $"S{s:D3}");
-        var noise = SeedSchedule.Generator(seed, 1, 0, SeedPurpose.Sampling);
-        var y = new double[samples];
-        for (int s = 0; s < samples; s++) y[s] = 1.0 * z[0][s] + 0.8 * z[1][s] + (z[2][s] > 0.5 ? 1.2 : 0) + noise.NextGaussian();
-        return new Panel(matrix, new MeasuredOutcome("score", y));
-    }
-
-    /// <summary>OutcomeKindScreenTests.FollowUpPanel with planted markers, drawn the same way.</summary>
-    private static Panel FollowUpPanel(int samples, int features, ulong seed)
-    {
-        var (matrix, z, _) = StandardNormalFeatures.Draw(samples, features, seed, s => $"S{s:D3}");
-        var draws = SeedSchedule.Generator(seed, 2, 0, SeedPurpose.Sampling);
-        var times = new double[samples];
-        var events = new bool[samples];
-        for (int s = 0; s < samples; s++)
-        {
-            double logHazard = 0.8 * z[0][s] + 0.7 * z[1][s] + (z[2][s] > 0.5 ? 1.0 : 0);
-            double eventTime = -Math.Log(1 - draws.NextDouble()) / Math.Exp(logHazard);
-            double censorTime = -Math.Log(1 - draws.NextDouble()) / 0.5;
-            times[s] = Math.Min(eventTime, censorTime);
-            events[s] = eventTime <= censorTime;
-        }
-        return new Panel(matrix, new FollowUpOutcome("months", "relapse", times, events));
-    }
-
-    /// <summary>OutcomeKindScreenTests.Shuffled: the outcome moved to a random other sample.</summary>
-    private static Panel Shuffled(Panel panel, ulong seed)
-    {
-        int n = panel.SampleCount;
-        var order = Enumerable.Range(0, n).ToArray();
-        SeedSchedule.Generator(seed, 3, 0, SeedPurpose.Sampling).Shuffle(order.AsSpan());
-        if (panel.Kind == OutcomeKind.Measured)
-        {
-            var y = panel.Measured!.Values.ToArray();
-            return new Panel(panel.Matrix, new MeasuredOutcome("score", order.Select(i => y[i]).ToArray()));
-        }
-        var times = panel.FollowUp!.Times.ToArray();
-        var events = panel.FollowUp.Events.ToArray();
-        return new Panel(panel.Matrix, new FollowUpOutcome("months", "relapse",
-            order.Select(i => times[i]).ToArray(), order.Select(i => events[i]).ToArray()));
     }
 
     /// <summary>The rate with its 95% Wilson (1927) score interval.</summary>

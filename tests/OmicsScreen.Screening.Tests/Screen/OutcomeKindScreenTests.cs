@@ -22,49 +22,12 @@ public class OutcomeKindScreenTests
         CurveFolds = 0,
     };
 
-    /// <summary>
-    /// Log-normal-like features (location 5, SD 1); markers 0-2 planted, the rest noise. Measured:
-    /// y = 1.0 z0 + 0.8 z1 + 1.2 [z2 > 0.5] + e, e ~ N(0, 1). Follow-up: exponential event times with
-    /// log hazard 0.8 z0 + 0.7 z1 + 1.0 [z2 > 0.5] and independent exponential censoring (about a third
-    /// censored). z are the standardised feature values.
-    /// </summary>
-    private static (FeatureMatrix Matrix, double[][] Standardised) Features(int samples, int features, ulong seed)
-    {
-        var (matrix, z, _) = StandardNormalFeatures.Draw(samples, features, seed, s => $"S{s:D3}");
-        return (matrix, z);
-    }
-
-    private static Panel MeasuredPanel(int samples, int features, ulong seed, bool planted)
-    {
-        var (matrix, z) = Features(samples, features, seed);
-        var noise = SeedSchedule.Generator(seed, 1, 0, SeedPurpose.Sampling);
-        var y = new double[samples];
-        for (int s = 0; s < samples; s++)
-            y[s] = (planted ? 1.0 * z[0][s] + 0.8 * z[1][s] + (z[2][s] > 0.5 ? 1.2 : 0) : 0) + noise.NextGaussian();
-        return new Panel(matrix, new MeasuredOutcome("score", y));
-    }
-
-    private static Panel FollowUpPanel(int samples, int features, ulong seed, bool planted)
-    {
-        var (matrix, z) = Features(samples, features, seed);
-        var draws = SeedSchedule.Generator(seed, 2, 0, SeedPurpose.Sampling);
-        var times = new double[samples];
-        var events = new bool[samples];
-        for (int s = 0; s < samples; s++)
-        {
-            double logHazard = planted ? 0.8 * z[0][s] + 0.7 * z[1][s] + (z[2][s] > 0.5 ? 1.0 : 0) : 0;
-            double eventTime = -Math.Log(1 - draws.NextDouble()) / Math.Exp(logHazard);
-            double censorTime = -Math.Log(1 - draws.NextDouble()) / 0.5;
-            times[s] = Math.Min(eventTime, censorTime);
-            events[s] = eventTime <= censorTime;
-        }
-        return new Panel(matrix, new FollowUpOutcome("months", "relapse", times, events));
-    }
+    // Panels: TestSupport/OutcomeKindPanels (markers 0-2 planted, the rest noise).
 
     [Fact]
     public void A_measured_outcome_screen_shortlists_the_planted_markers_with_their_direction()
     {
-        var result = ScreenRunner.Run(MeasuredPanel(160, 80, 11, planted: true), Quick(3));
+        var result = ScreenRunner.Run(OutcomeKindPanels.Measured(160, 80, 11, planted: true), Quick(3));
         var shortlisted = result.Shortlist.Select(e => e.Forest.FeatureIndex).ToList();
         Assert.Contains(0, shortlisted);
         Assert.Contains(1, shortlisted);
@@ -98,7 +61,7 @@ public class OutcomeKindScreenTests
     [Fact]
     public void A_time_to_event_screen_shortlists_the_planted_hazard_markers_with_their_direction()
     {
-        var result = ScreenRunner.Run(FollowUpPanel(200, 80, 12, planted: true), Quick(4));
+        var result = ScreenRunner.Run(OutcomeKindPanels.FollowUp(200, 80, 12, planted: true), Quick(4));
         var shortlisted = result.Shortlist.Select(e => e.Forest.FeatureIndex).ToList();
         Assert.Contains(0, shortlisted);
         Assert.Contains(1, shortlisted);
@@ -120,7 +83,7 @@ public class OutcomeKindScreenTests
         int total = 0;
         for (ulong seed = 21; seed <= 23; seed++)
         {
-            var panel = kind == OutcomeKind.Measured ? MeasuredPanel(100, 80, seed, planted: false) : FollowUpPanel(100, 80, seed, planted: false);
+            var panel = kind == OutcomeKind.Measured ? OutcomeKindPanels.Measured(100, 80, seed, planted: false) : OutcomeKindPanels.FollowUp(100, 80, seed, planted: false);
             total += ScreenRunner.Run(panel, Quick(seed)).Shortlist.Count;
         }
         Assert.True(total <= 2, $"{total} markers shortlisted over three null panels");
@@ -144,8 +107,8 @@ public class OutcomeKindScreenTests
         var lists = new List<int>();
         for (ulong seed = 1; seed <= 10; seed++)
         {
-            var planted = kind == OutcomeKind.Measured ? MeasuredPanel(100, 60, 80 + seed, planted: true) : FollowUpPanel(100, 60, 80 + seed, planted: true);
-            var result = ScreenRunner.Run(Shuffled(planted, seed), Quick(seed));
+            var planted = kind == OutcomeKind.Measured ? OutcomeKindPanels.Measured(100, 60, 80 + seed, planted: true) : OutcomeKindPanels.FollowUp(100, 60, 80 + seed, planted: true);
+            var result = ScreenRunner.Run(OutcomeKindPanels.Shuffled(planted, seed), Quick(seed));
             lists.Add(result.Shortlist.Count);
             if (result.Shortlist.Count > 0) nonEmpty++;
         }
@@ -165,7 +128,7 @@ public class OutcomeKindScreenTests
         var listed = new List<ulong>();
         for (ulong seed = 1; seed <= 30; seed++)
         {
-            var result = ScreenRunner.Run(Shuffled(MeasuredPanel(100, 60, 80 + seed, planted: true), seed), Quick(seed));
+            var result = ScreenRunner.Run(OutcomeKindPanels.Shuffled(OutcomeKindPanels.Measured(100, 60, 80 + seed, planted: true), seed), Quick(seed));
             if (result.Shortlist.Count == 0) continue;
             nonEmpty++;
             listed.Add(seed);
@@ -173,31 +136,14 @@ public class OutcomeKindScreenTests
         Assert.True(nonEmpty <= 6, $"non-empty lists in {nonEmpty} of 30 shuffled measured panels (seeds {string.Join(", ", listed)})");
     }
 
-    /// <summary>The panel with its outcome (value, or time with its event) moved to a random other sample.</summary>
-    private static Panel Shuffled(Panel panel, ulong seed)
-    {
-        int n = panel.SampleCount;
-        var order = Enumerable.Range(0, n).ToArray();
-        SeedSchedule.Generator(seed, 3, 0, SeedPurpose.Sampling).Shuffle(order.AsSpan());
-        if (panel.Kind == OutcomeKind.Measured)
-        {
-            var y = panel.Measured!.Values.ToArray();
-            return new Panel(panel.Matrix, new MeasuredOutcome("score", order.Select(i => y[i]).ToArray()));
-        }
-        var times = panel.FollowUp!.Times.ToArray();
-        var events = panel.FollowUp.Events.ToArray();
-        return new Panel(panel.Matrix, new FollowUpOutcome("months", "relapse",
-            order.Select(i => times[i]).ToArray(), order.Select(i => events[i]).ToArray()));
-    }
-
     [Fact]
     public void The_panel_size_curve_is_in_r_squared_near_zero_on_a_null_and_clearly_positive_with_planted_markers()
     {
         var options = Quick(5) with { CurveFolds = 4, CurveInnerPairs = 3, CurveMaxPanelSize = 5, TreesPerForest = 100 };
-        var planted = ScreenRunner.Run(MeasuredPanel(160, 40, 31, planted: true), options).PanelSize!;
+        var planted = ScreenRunner.Run(OutcomeKindPanels.Measured(160, 40, 31, planted: true), options).PanelSize!;
         Assert.Equal("r_squared", planted.Metric);
         Assert.True(planted.Points.Max(p => p.SelectionAwareAuc) > 0.3, "planted: best selection-aware R² should be well above 0");
-        var nullCurve = ScreenRunner.Run(MeasuredPanel(100, 40, 32, planted: false), options).PanelSize!;
+        var nullCurve = ScreenRunner.Run(OutcomeKindPanels.Measured(100, 40, 32, planted: false), options).PanelSize!;
         // Held-out R² of a useless panel is at or below 0 (sklearn r2_score is negative when worse than the test mean).
         Assert.All(nullCurve.Points, p => Assert.True(p.SelectionAwareAuc < 0.1, $"size {p.PanelSize}: R² {p.SelectionAwareAuc:0.000}"));
     }
@@ -224,7 +170,7 @@ public class OutcomeKindScreenTests
         // must still score a panel of the locked list's length (the procedure whose panel is
         // locked), not chance. With folds capped at their own list (the class rule), 2 (measured)
         // and 4 (follow-up) of these 5 folds scored chance (measured on this panel before the change).
-        var panel = kind == OutcomeKind.Measured ? MeasuredPanel(60, 30, 71, planted: true) : FollowUpPanel(60, 30, 71, planted: true);
+        var panel = kind == OutcomeKind.Measured ? OutcomeKindPanels.Measured(60, 30, 71, planted: true) : OutcomeKindPanels.FollowUp(60, 30, 71, planted: true);
         var options = Quick(8) with { CurveFolds = 5, CurveInnerPairs = 1, CurveMaxPanelSize = 5, TreesPerForest = 80 };
         var result = ScreenRunner.Run(panel, options);
         Assert.NotEmpty(result.Shortlist);
@@ -237,7 +183,7 @@ public class OutcomeKindScreenTests
     public void The_time_to_event_curve_is_in_concordance()
     {
         var options = Quick(6) with { CurveFolds = 3, CurveInnerPairs = 2, CurveMaxPanelSize = 3, TreesPerForest = 80 };
-        var curve = ScreenRunner.Run(FollowUpPanel(150, 30, 41, planted: true), options).PanelSize!;
+        var curve = ScreenRunner.Run(OutcomeKindPanels.FollowUp(150, 30, 41, planted: true), options).PanelSize!;
         Assert.Equal("concordance", curve.Metric);
         Assert.True(curve.Points.Max(p => p.SelectionAwareAuc) > 0.6, string.Join("; ", curve.Points.Select(p => $"{p.PanelSize}: {p.SelectionAwareAuc:0.000} opt {p.OptimisticAuc:0.000}")));
         Assert.All(curve.Points, p => Assert.Equal(1 - p.SelectionAwareAuc, p.SelectionAwareError, 12));
@@ -248,7 +194,7 @@ public class OutcomeKindScreenTests
     [InlineData(OutcomeKind.TimeToEvent)]
     public void Measured_and_time_to_event_screens_are_identical_on_one_and_two_threads(OutcomeKind kind)
     {
-        var panel = kind == OutcomeKind.Measured ? MeasuredPanel(60, 30, 51, planted: true) : FollowUpPanel(60, 30, 52, planted: true);
+        var panel = kind == OutcomeKind.Measured ? OutcomeKindPanels.Measured(60, 30, 51, planted: true) : OutcomeKindPanels.FollowUp(60, 30, 52, planted: true);
         var options = Quick(7) with { HalfSamplePairs = 2, TreesPerForest = 40, CurveFolds = 3, CurveInnerPairs = 2, CurveMaxPanelSize = 3 };
         var one = ScreenRunner.Run(panel, options with { ThreadCount = 1 });
         var two = ScreenRunner.Run(panel, options with { ThreadCount = 2 });
@@ -273,7 +219,7 @@ public class OutcomeKindScreenTests
         Assert.Equal(new[] { 1, 0, 0, 1 }, followUp.SampleStrata.ToArray());
 
         // Every outer fold of a follow-up keeps its share of events within one of the average.
-        var panel = FollowUpPanel(90, 5, 61, planted: false);
+        var panel = OutcomeKindPanels.FollowUp(90, 5, 61, planted: false);
         int events = panel.FollowUp!.EventCount;
         var folds = StratifiedFolds.Draw(ResamplingStrata.Of(panel), null, Enumerable.Range(0, 90).ToArray(), 5, 1, 3);
         foreach (var fold in folds)
