@@ -105,18 +105,8 @@ public static class LockedPanelEvaluation
         if (observed.Length != scores.SampleCount) throw new ArgumentException("The outcome must have one value per scored sample.");
         int n = scores.SampleCount;
         var predicted = scores.Predictions;
-        double mean = 0;
-        foreach (double y in observed) mean += y;
-        mean /= n;
-        double residual = 0, total = 0;
-        for (int s = 0; s < n; s++)
-        {
-            residual += (observed[s] - predicted[s]) * (observed[s] - predicted[s]);
-            total += (observed[s] - mean) * (observed[s] - mean);
-        }
-        double rSquared = total > 0 ? 1 - residual / total : double.NaN;
-        double rmse = n > 0 ? Math.Sqrt(residual / n) : double.NaN;
-        return new LockedMeasuredPerformance(n, rSquared, rmse, CalibrationLine.Fit(predicted, observed),
+        var fit = SquaredErrorFit.Of(observed, predicted);
+        return new LockedMeasuredPerformance(n, fit.RSquared, fit.RootMeanSquaredError, CalibrationLine.Fit(predicted, observed),
             GroupByPrediction(predicted, observed), predicted.ToArray(), observed.ToArray());
     }
 

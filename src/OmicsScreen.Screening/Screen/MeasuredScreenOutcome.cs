@@ -118,20 +118,12 @@ internal sealed class MeasuredScreenOutcome(MeasuredOutcome outcome) : ScreenOut
     /// </summary>
     private PanelScore Scored(double[] predictions, ReadOnlySpan<int> testRows)
     {
-        double mean = 0;
-        foreach (int row in testRows) mean += _values[row];
-        mean /= testRows.Length;
-        double residual = 0, total = 0;
-        for (int i = 0; i < testRows.Length; i++)
+        var observed = new double[testRows.Length];
+        for (int i = 0; i < testRows.Length; i++) observed[i] = _values[testRows[i]];
+        var fit = SquaredErrorFit.Of(observed, predictions);
+        return new PanelScore(fit.RSquared, fit.MeanSquaredError, predictions, [])
         {
-            double y = _values[testRows[i]];
-            residual += (y - predictions[i]) * (y - predictions[i]);
-            total += (y - mean) * (y - mean);
-        }
-        double rSquared = total > 0 ? 1 - residual / total : double.NaN;
-        return new PanelScore(rSquared, residual / testRows.Length, predictions, [])
-        {
-            RootMeanSquaredError = Math.Sqrt(residual / testRows.Length),
+            RootMeanSquaredError = fit.RootMeanSquaredError,
         };
     }
 }
