@@ -34,8 +34,10 @@ public static class PanelLoader
         // The feature sheet comes first: its detection limits are applied as the readers build each column.
         var featureSheet = options.FeatureSheetPath is { } featurePath ? SampleSheetReader.Read(featurePath, "feature sheet", "feature") : null;
         if (featureSheet is not null) options = options with { FeatureLimits = FeatureSheetJoin.ReadLimits(featureSheet, options) };
-        // Hashing is independent of parsing, so it runs on another core meanwhile.
-        var matrixRecord = Task.Run(() => Record(options.MatrixPath), ct);
+        // Hashing is independent of parsing, so it runs on another core meanwhile, on a thread of its
+        // own: queued on the thread pool it could wait behind a host's pool work while this thread
+        // blocks on it at the end.
+        var matrixRecord = Task.Factory.StartNew(() => Record(options.MatrixPath), ct, TaskCreationOptions.LongRunning, TaskScheduler.Default);
         RawMatrix raw;
         try
         {
