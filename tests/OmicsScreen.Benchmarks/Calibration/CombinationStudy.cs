@@ -84,11 +84,13 @@ public static class CombinationStudy
         string tail = "bound";
         double level = 0.8;
         double? screenWeight = null;
+        bool traceLost = false;
         for (int i = 1; i < args.Count; i++)
         {
             if (args[i] == "--forest-weights" && i + 1 < args.Count)
                 weights = args[++i].Split(',').Select(w => double.Parse(w, CultureInfo.InvariantCulture)).ToArray();
             else if (args[i] == "--exponential-tail") tail = "exponential";
+            else if (args[i] == "--trace-lost") traceLost = true;
             else if (args[i] == "--tail" && i + 1 < args.Count) tail = args[++i];
             else if (args[i] == "--level" && i + 1 < args.Count) level = double.Parse(args[++i], CultureInfo.InvariantCulture);
             else if (args[i] == "--screen-forest-weight" && i + 1 < args.Count) screenWeight = double.Parse(args[++i], CultureInfo.InvariantCulture);
@@ -130,6 +132,7 @@ public static class CombinationStudy
                     if (features[f][2] == "1") found++;
                     else wrong++;
                 }
+                if (traceLost) TraceLost(output, name, features, featureCombined, decoyCombined, pValues, list);
                 string design = name[..name.LastIndexOf('-')];
                 var entry = perDesign.GetValueOrDefault(design);
                 perDesign[design] = (entry.Panels + 1, entry.Lists + (found + wrong > 0 ? 1 : 0), entry.True + found, entry.Baseline + baseline);
@@ -150,6 +153,29 @@ public static class CombinationStudy
                 + string.Join("; ", perDesign.Select(p => Invariant($"{p.Key} {p.Value.Lists}/{p.Value.Panels} lists, true {p.Value.True}/{p.Value.Baseline}"))));
         }
         return 0;
+    }
+
+    /// <summary>
+    /// Where each planted marker the baseline finds and this rule misses loses: its rank test's
+    /// p-value, the combination (and its factor over the rank test), the calibrated p-value (and its
+    /// factor over the combination), the tail's fitted value and the decoy count's p-value beside it,
+    /// the decoys at or above it, and the Benjamini-Hochberg threshold it had to meet to join the
+    /// list (0.10 (R + 1) / m with R the rule's list).
+    /// </summary>
+    private static void TraceLost(TextWriter output, string name, List<string[]> features, double[] featureCombined,
+        double[] decoyCombined, double[] pValues, bool[] list)
+    {
+        var fitted = Calibrate("fitted", 0, decoyCombined, featureCombined);
+        var counted = Calibrate("count", 0, decoyCombined, featureCombined);
+        int listed = list.Count(x => x);
+        for (int f = 0; f < features.Count; f++)
+        {
+            if (features[f][2] != "1" || features[f][3] != "1" || list[f]) continue;
+            double rankP = Number(features[f][5]);
+            int atOrAbove = decoyCombined.Count(p => p <= featureCombined[f]);
+            output.WriteLine(Invariant(
+                $"# lost {name} feature {features[f][1]}: rank p {rankP:G3}, forest p {Number(features[f][4]):G3}, combined {featureCombined[f]:G3} (x{featureCombined[f] / rankP:F2}), calibrated {pValues[f]:G3} (x{pValues[f] / featureCombined[f]:F2}), tail's fitted value {fitted[f]:G3}, count {counted[f]:G3}, decoys at or below its combination {atOrAbove}, BH threshold {0.10 * (listed + 1) / features.Count:G3}"));
+        }
     }
 
     private static string TailRuleText(string tail, double level) => tail switch
