@@ -19,7 +19,10 @@ namespace OmicsScreen.Benchmarks.Calibration;
 /// p-values beneath it. Prints the list rate beside the rates of simpler rules on the same p-values,
 /// and how uniform the null p-values are.
 /// Usage: calibration shuffled [--kind measured|follow-up] [--panels N] [--first-seed S]
-/// [--samples N] [--features N] [--defaults] [--threads T]
+/// [--samples N] [--features N] [--defaults] [--threads T] [--evidence DIR]
+/// With --evidence, each panel's evidence (every feature's and decoy's forest and rank-test p-value,
+/// all null) is saved as CombinationStudy's evidence files are, so `calibration weigh` can replay
+/// other calibration rules on the shuffled panels.
 /// </summary>
 public static class ShuffledOutcomeCheck
 {
@@ -34,6 +37,7 @@ public static class ShuffledOutcomeCheck
         var kind = OutcomeKind.Measured;
         int panels = 200, firstSeed = 1, samples = 100, features = 60, threads = 0;
         bool defaults = false;
+        string? evidence = null;
         for (int i = 0; i < args.Count; i++)
         {
             string Value() => i + 1 < args.Count ? args[++i] : throw new ArgumentException($"{args[i]} needs a value.");
@@ -47,6 +51,7 @@ public static class ShuffledOutcomeCheck
                 case "--features": features = Integer(); break;
                 case "--threads": threads = Integer(); break;
                 case "--defaults": defaults = true; break;
+                case "--evidence": evidence = Value(); break;
                 default: throw new ArgumentException($"Unknown option '{args[i]}' of the shuffled-outcome check.");
             }
         }
@@ -56,7 +61,7 @@ public static class ShuffledOutcomeCheck
         var watch = Stopwatch.StartNew();
         for (int seed = firstSeed; seed < firstSeed + panels; seed++)
         {
-            var trace = Measure(kind, samples, features, (ulong)seed, defaults, threads);
+            var trace = Measure(kind, samples, features, (ulong)seed, defaults, threads, evidence);
             traces.Add(trace);
             output.WriteLine(Invariant(
                 $"seed {seed}: list {trace.Listed}; smallest p {trace.SmallestP:G3} ({(trace.FromTail ? "tail" : "count")}, {trace.DecoysAtOrAbove} decoys at or above; forest p {trace.ForestP:G3}, rank p {trace.RankP:G3}, combined {trace.CombinedP:G3}); list by count {Yes(trace.ListByCount)}, by rank test alone {Yes(trace.ListByRankTest)}, uncalibrated {Yes(trace.ListUncalibrated)}; {trace.Seconds:F1} s"));
@@ -82,7 +87,7 @@ public static class ShuffledOutcomeCheck
         return 0;
     }
 
-    private static PanelTrace Measure(OutcomeKind kind, int samples, int features, ulong seed, bool defaults, int threads)
+    private static PanelTrace Measure(OutcomeKind kind, int samples, int features, ulong seed, bool defaults, int threads, string? evidence)
     {
         var watch = Stopwatch.StartNew();
         var panel = OutcomeKindPanels.Shuffled(kind == OutcomeKind.Measured
@@ -104,6 +109,19 @@ public static class ShuffledOutcomeCheck
         var check = DecoyNull.PValues(DecoyEvidence.Surprise(decoys.CombinedP), DecoyEvidence.Surprise(result.Features.Select(f => f.CombinedP).ToArray()));
         for (int f = 0; f < pValues.Length; f++)
             if (check[f] != pValues[f]) throw new InvalidOperationException($"seed {seed}: recomputed p-value of feature {f} differs ({check[f]} vs {pValues[f]}).");
+
+        if (evidence is not null)
+        {
+            Directory.CreateDirectory(evidence);
+            var decoyForestP = DecoyNull.DecoyPValues(decoys.Means);
+            var lines = new List<string> { "role\tindex\trelated\tbaseline\tforest_p\trank_p\tscreen_p" };
+            foreach (var f in result.Features)
+                lines.Add(Invariant($"feature\t{f.FeatureIndex}\t0\t0\t{f.ForestP:R}\t{f.RankTestP:R}\t{f.PValue:R}"));
+            for (int d = 0; d < decoyForestP.Length; d++)
+                lines.Add(Invariant($"decoy\t{d}\t0\t0\t{decoyForestP[d]:R}\t{decoyRankP[d]:R}\tNaN"));
+            string prefix = kind == OutcomeKind.Measured ? "shuffled-measured" : "shuffled-follow-up";
+            File.WriteAllLines(Path.Combine(evidence, Invariant($"{prefix}-{seed}.tsv")), lines);
+        }
 
         int smallest = 0;
         for (int f = 1; f < pValues.Length; f++) if (pValues[f] < pValues[smallest]) smallest = f;
