@@ -165,10 +165,18 @@ internal static class ScreenRun
                     e.Forest.SelectionFrequency.ToString("0.00", CultureInfo.InvariantCulture),
                     e.Forest.MedianRank.ToString("0.0", CultureInfo.InvariantCulture),
                     e.Forest.QValue.ToString("0.###", CultureInfo.InvariantCulture),
-                    ScreenTables.DirectionOf(e, result),
+                    EffectTables.DirectionWords(e, result),
                     ScreenTables.EffectOf(e).ToString("0.000", CultureInfo.InvariantCulture),
                     e.RedundancyGroup.ToString(CultureInfo.InvariantCulture));
             table.WriteTo(output);
+            if (result.CovariateTracking is { } tracking)
+            {
+                var tracked = result.Shortlist.Where(e => tracking.TracksOf(e.Forest.FeatureIndex).Count > 0).ToList();
+                output.WriteLine(tracked.Count == 0
+                    ? $"No shortlisted marker only tracks {UntrustedText.Printable(string.Join(", ", tracking.Covariates))}."
+                    : "Only track a covariate: " + string.Join("; ", tracked.Select(e => UntrustedText.Printable(labels.Label(e.Forest.FeatureIndex, e.Forest.Feature))
+                        + " tracks " + UntrustedText.Printable(string.Join(", ", tracking.TracksOf(e.Forest.FeatureIndex))))) + ".");
+            }
         }
         output.WriteLine();
         output.WriteLine("Error control:");

@@ -50,12 +50,20 @@ internal static class CovariateTrackingReportSection
               + string.Join("; ", tracked.Select(m => m.Marker + " tracks " + AddedValueReportSection.CovariateList(m.Tracks))) + ". "
               + "Their link to the outcome runs through the covariate: among samples of similar covariate values they predict nothing beyond it.";
         return verdict + " "
-            + "A marker tracks a covariate when it is associated with it (q at most 0.10) and its importance (out-of-bag permutation importance, Brier score increase, in a forest on the shortlist and as many permuted copies as decoys) "
+            + "A marker tracks a covariate when it is associated with it (q at most 0.10) and its importance (out-of-bag permutation importance, " + LossWords(tracking.Loss) + ", in a forest on the shortlist and as many permuted copies as decoys) "
             + "beats the decoys' but, when its values are permuted only among samples of similar covariate values (Strobl et al. 2008; a categorical covariate's levels, a numeric covariate cut at its quantiles into groups of about 8 samples), "
             + "falls to the decoys' level, to within 1.645 standard errors of 0, or below a fifth of its importance. "
             + "Association is Spearman's rho for a numeric covariate and Kruskal-Wallis epsilon-squared for a categorical one, with Benjamini-Hochberg q over all marker-covariate pairs; "
             + "an association alone does not make a marker a proxy.";
     }
+
+    /// <summary>The importance's loss in words, as the screen's permutation importance of the outcome kind measures it.</summary>
+    public static string LossWords(string loss) => loss switch
+    {
+        "squared_error_rise" => "rise in squared error",
+        "concordance_drop" => "drop in Harrell's C",
+        _ => "Brier score increase",
+    };
 
     private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
 }

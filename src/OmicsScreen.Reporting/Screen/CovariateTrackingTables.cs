@@ -6,7 +6,8 @@ namespace OmicsScreen.Reporting.Screen;
 /// <summary>
 /// covariate_association.tsv: one row per shortlisted marker and covariate with the association
 /// (Spearman's rho or Kruskal-Wallis epsilon-squared, p, BH q over all pairs), the marker's
-/// permutation importance marginal and conditional on the covariate, and whether it tracks it.
+/// permutation importance marginal and conditional on the covariate (in the outcome kind's loss,
+/// named in importance_loss), and whether it tracks it.
 /// </summary>
 public static class CovariateTrackingTables
 {
@@ -35,6 +36,7 @@ public static class CovariateTrackingTables
             TsvColumn<Row>.Number("conditional_importance", r => r.Marker.Conditional[r.Covariate], NumberFormat.Significant(4)),
             TsvColumn<Row>.Number("decoy_marginal_threshold", _ => tracking.MarginalThreshold, NumberFormat.Significant(4)),
             TsvColumn<Row>.Number("decoy_conditional_threshold", r => tracking.ConditionalThresholds[r.Covariate], NumberFormat.Significant(4)),
+            TsvColumn<Row>.Text("importance_loss", _ => tracking.Loss),
             TsvColumn<Row>.Text("tracks", r => r.Tracks ? "yes" : "no"),
         };
         return new TsvTableWriter<Row>(columns).Write(writer, rows);

@@ -11,6 +11,7 @@ internal static class ScreenReportTables
     public const string ShortlistStatisticsCaption = "Shortlisted markers: single-marker statistics";
     public const string LockedPanelCaption = "Markers of the locked panel";
     public const int FallbackFeatureCount = 10;
+    public const string TracksHeader = "Only tracks";
 
     /// <summary>
     /// The forest evidence of each shortlisted marker. The shortlist is split in two tables (this
@@ -21,30 +22,41 @@ internal static class ScreenReportTables
     {
         // Numeric headers do not wrap (the style sheet keeps figures on one line), so the wide
         // columns are text columns with wrapping headers.
-        var table = new HtmlTable(ShortlistCaption,
-        [
+        // With --covariates, the covariates each marker only tracks (shortlist.tsv's tracks; see
+        // "Markers that track a covariate"), beside the group so a proxy is seen before its figures.
+        var tracking = result.CovariateTracking;
+        var headers = new List<HtmlTableColumn>
+        {
             new("Rank", ColumnAlignment.Numeric),
             new(labels.HasDisplayNames ? "Marker (feature id)" : "Feature"),
             new("Group", ColumnAlignment.Numeric),
+        };
+        if (tracking is not null) headers.Add(new(TracksHeader));
+        headers.AddRange(
+        [
             new("Selection frequency"),
             new("Median rank [IQR]"),
             new("Corrected importance ± SD"),
             new("Permutation importance ± SD"),
             new("q-value", ColumnAlignment.Numeric),
-        ])
-        { FirstColumnIsRowHeader = false };
+        ]);
+        var table = new HtmlTable(ShortlistCaption, headers) { FirstColumnIsRowHeader = false };
         foreach (var entry in result.Shortlist)
         {
             var forest = entry.Forest;
-            table.AddRow(
+            var cells = new List<string>
+            {
                 ReportNumber.Integer(entry.Rank),
                 labels.Label(forest.FeatureIndex, forest.Feature),
                 ReportNumber.Integer(entry.RedundancyGroup),
-                ReportNumber.Fixed(forest.SelectionFrequency, 2),
-                MedianRank(forest),
-                ReportNumber.MeanSd(forest.CorrectedMean, forest.CorrectedSd, 2),
-                ReportNumber.MeanSd(forest.PermutationMean, forest.PermutationSd, 2),
-                ReportNumber.Significant(forest.QValue, 2));
+            };
+            if (tracking is not null) cells.Add(string.Join(", ", tracking.TracksOf(forest.FeatureIndex)));
+            cells.Add(ReportNumber.Fixed(forest.SelectionFrequency, 2));
+            cells.Add(MedianRank(forest));
+            cells.Add(ReportNumber.MeanSd(forest.CorrectedMean, forest.CorrectedSd, 2));
+            cells.Add(ReportNumber.MeanSd(forest.PermutationMean, forest.PermutationSd, 2));
+            cells.Add(ReportNumber.Significant(forest.QValue, 2));
+            table.AddRow([.. cells]);
         }
         return table;
     }

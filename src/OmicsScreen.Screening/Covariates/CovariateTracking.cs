@@ -13,6 +13,13 @@ public sealed record CovariateTracking(
     IReadOnlyList<string> Covariates, IReadOnlyList<MarkerCovariateAssociation> Associations, IReadOnlyList<MarkerTracking> Markers,
     double MarginalThreshold, IReadOnlyList<double> ConditionalThresholds, int Decoys, int StrataPerNumericCovariate)
 {
+    /// <summary>
+    /// The out-of-bag loss the importances are measured in, as the screen's permutation importance
+    /// of the outcome kind: "brier_increase" (classes), "squared_error_rise" (measured, squared
+    /// outcome units) or "concordance_drop" (follow-up, Harrell's C).
+    /// </summary>
+    public string Loss { get; init; } = "brier_increase";
+
     /// <summary>The covariates a feature tracks; empty when it tracks none or is not shortlisted.</summary>
     public IReadOnlyList<string> TracksOf(int feature)
     {

@@ -2,6 +2,8 @@ using OmicsScreen.Engine.Binning;
 using OmicsScreen.Engine.Forests;
 using OmicsScreen.Engine.Panels;
 using OmicsScreen.Engine.Randomness;
+using OmicsScreen.Engine.Regression;
+using OmicsScreen.Engine.Survival;
 using OmicsScreen.Screening.Importance;
 using OmicsScreen.Screening.Randomness;
 using OmicsScreen.Screening.Screen;
@@ -10,7 +12,7 @@ using OmicsScreen.Screening.Statistics;
 namespace OmicsScreen.Screening.Covariates;
 
 /// <summary>
-/// Finds the shortlisted markers that only track a clinical covariate (class outcomes).
+/// Finds the shortlisted markers that only track a clinical covariate (every outcome kind).
 /// </summary>
 /// <remarks>
 /// <para>Association: each marker against each covariate, Spearman's rho for a numeric covariate
@@ -19,10 +21,13 @@ namespace OmicsScreen.Screening.Covariates;
 /// age and still carry its own signal.</para>
 /// <para>Conditional importance (Strobl, Boulesteix, Kneib, Augustin &amp; Zeileis 2008, BMC
 /// Bioinformatics 9:307): one forest on all samples with the markers and permuted copies of them
-/// (decoys: the same values, no link to outcome or covariates). For every tree and column, the
-/// out-of-bag rows' Brier score is measured again with the column permuted among all out-of-bag
-/// rows (marginal importance) and permuted only within the strata of one covariate (importance
-/// conditional on it). A marker whose association with the outcome runs through age keeps its
+/// (decoys: the same values, no link to outcome or covariates), grown as the screen grows forests
+/// of the outcome kind. For every tree and column, the out-of-bag rows' loss is measured again with
+/// the column permuted among all out-of-bag rows (marginal importance) and permuted only within
+/// the strata of one covariate (importance conditional on it). The loss is the one the screen's
+/// permutation importance uses for the kind, read through its own scorer
+/// (<see cref="TrackingTreeLoss"/>): the Brier score for classes, the squared error for a measured
+/// outcome, Harrell's C of the tree's mortality for follow-up. A marker whose association with the outcome runs through age keeps its
 /// age-related part under the within-age permutation, so its conditional importance falls to
 /// that of the decoys; a marker with signal of its own loses it either way. The covariates are not
 /// predictors of this forest: they only define the strata.</para>
@@ -65,11 +70,11 @@ internal static class CovariateTrackingAnalysis
     /// <summary>One-sided 5% normal critical value: an importance whose mean over trees is not this many standard errors above 0 is indistinguishable from none.</summary>
     public const double OneSidedCritical = 1.6448536269514722;
 
-    /// <summary>Null without covariates or shortlisted markers, or for outcome kinds other than classes (see README).</summary>
+    /// <summary>Null without covariates or shortlisted markers.</summary>
     public static CovariateTracking? Run(ScreenContext context, IReadOnlyList<int> shortlisted)
     {
         var panel = context.Panel;
-        if (panel.Covariates.Count == 0 || shortlisted.Count == 0 || panel.Kind != OutcomeKind.Classes) return null;
+        if (panel.Covariates.Count == 0 || shortlisted.Count == 0) return null;
         var associations = Associations(panel, shortlisted);
 
         int markers = shortlisted.Count;
@@ -77,25 +82,23 @@ internal static class CovariateTrackingAnalysis
         var decoySources = new int[decoys];
         for (int d = 0; d < decoys; d++) decoySources[d] = d % markers;
         var streams = RandomStreams.TrackingForest(context.Options.Seed);
-        var matrix = context.Matrix.SelectFeatures(shortlisted.ToArray()).WithPermutedCopies(decoySources, streams.Seed, streams.Repeat, context.ThreadCount);
-        var allRows = Enumerable.Range(0, panel.SampleCount).ToArray();
-        var forest = ForestTrainer.Train(matrix, panel.Outcome, context.Settings.ForestOptions(context.Subject, streams), allRows);
+        BinnedMatrix matrix = context.Matrix.SelectFeatures(shortlisted.ToArray()).WithPermutedCopies(decoySources, streams.Seed, streams.Repeat, context.ThreadCount);
+        var loss = GrowForest(panel, matrix, context.Settings.ForestOptions(context.Subject, streams));
 
         int covariateCount = panel.Covariates.Count;
         var strata = new int[covariateCount][];
         var strataCounts = new int[covariateCount];
         for (int c = 0; c < covariateCount; c++) strata[c] = CovariateStrata.Of(panel.Covariates[c], out strataCounts[c]);
-        // importance[0, j] marginal, importance[1 + c, j] conditional on covariate c; Brier increase summed over trees.
+        // importance[0, j] marginal, importance[1 + c, j] conditional on covariate c; the loss increase summed over trees.
         var importance = new double[1 + covariateCount, matrix.FeatureCount];
         var squares = new double[1 + covariateCount, matrix.FeatureCount];
         var treeIncrease = new double[1 + covariateCount, matrix.FeatureCount];
-        var scorer = new OutOfBagTreeScorer(matrix, panel.Outcome.SampleClasses.ToArray());
         var donors = Array.Empty<int>();
-        for (int t = 0; t < forest.TreeCount; t++)
+        for (int t = 0; t < loss.TreeCount; t++)
         {
             context.Cancellation.ThrowIfCancellationRequested();
             Array.Clear(treeIncrease);
-            TreeIncreases(forest, t, scorer, strata, strataCounts, ref donors, treeIncrease);
+            TreeIncreases(loss, t, strata, strataCounts, ref donors, treeIncrease);
             for (int k = 0; k <= covariateCount; k++)
                 for (int j = 0; j < matrix.FeatureCount; j++)
                 {
@@ -103,7 +106,7 @@ internal static class CovariateTrackingAnalysis
                     squares[k, j] += treeIncrease[k, j] * treeIncrease[k, j];
                 }
         }
-        int trees = forest.TreeCount;
+        int trees = loss.TreeCount;
         // Mean over trees and its standard error SD / sqrt(trees) (randomForest's importance and
         // its standard error, Liaw & Wiener 2002, R News 2(3)): z = mean / SE.
         var z = new double[1 + covariateCount, matrix.FeatureCount];
@@ -143,7 +146,26 @@ internal static class CovariateTrackingAnalysis
             tracking[m] = new MarkerTracking(shortlisted[m], panel.Matrix.FeatureNames[shortlisted[m]], importance[0, m], conditional, tracks);
         }
         return new CovariateTracking(panel.Covariates.Select(c => c.Name).ToArray(), associations, tracking, thresholds[0],
-            thresholds[1..], decoys, CovariateStrata.NumericStrata(panel.SampleCount));
+            thresholds[1..], decoys, CovariateStrata.NumericStrata(panel.SampleCount)) { Loss = loss.LossName };
+    }
+
+    /// <summary>
+    /// The tracking forest on all samples, grown as the screen's forests of the outcome kind are
+    /// (class trees, regression trees, random survival trees), with its kind's permutation loss.
+    /// </summary>
+    private static TrackingTreeLoss GrowForest(Panel panel, BinnedMatrix matrix, ForestOptions options) => panel.Kind switch
+    {
+        OutcomeKind.Classes => new ClassTrackingLoss(ForestTrainer.Train(matrix, panel.Outcome, options, Enumerable.Range(0, panel.SampleCount).ToArray()),
+            matrix, panel.Outcome.SampleClasses.ToArray()),
+        OutcomeKind.Measured => MeasuredLoss(panel.Measured!, matrix, options),
+        OutcomeKind.TimeToEvent => new FollowUpTrackingLoss(SurvivalForestTrainer.Train(matrix, panel.FollowUp!.FollowUp, options), matrix),
+        _ => throw new ArgumentOutOfRangeException(nameof(panel), panel.Kind, "Unknown outcome kind."),
+    };
+
+    private static MeasuredTrackingLoss MeasuredLoss(MeasuredOutcome outcome, BinnedMatrix matrix, ForestOptions options)
+    {
+        var values = outcome.Values.ToArray();
+        return new MeasuredTrackingLoss(RegressionForestTrainer.Train(matrix, values, options), matrix, values);
     }
 
     /// <summary>Every marker against every covariate, BH over all pairs; a cell not measured is left out.</summary>
@@ -188,30 +210,25 @@ internal static class CovariateTrackingAnalysis
     }
 
     /// <summary>
-    /// Adds tree t's Brier score increases to <paramref name="importance"/>: for each column it
-    /// splits on, its codes permuted among the out-of-bag rows (row 0, the permutation importance's
-    /// own permutation) and within each covariate's strata (row 1 + covariate). A column the tree
-    /// does not split on cannot change a leaf and adds 0.
+    /// Adds tree t's loss increases to <paramref name="importance"/>: for each column it splits
+    /// on, its codes permuted among the out-of-bag rows (row 0, the permutation importance's own
+    /// permutation) and within each covariate's strata (row 1 + covariate). A column the tree does
+    /// not split on cannot change a leaf and adds 0.
     /// </summary>
-    private static void TreeIncreases(Forest forest, int t, OutOfBagTreeScorer scorer, int[][] strata, int[] strataCounts,
-        ref int[] donors, double[,] importance)
+    private static void TreeIncreases(TrackingTreeLoss loss, int t, int[][] strata, int[] strataCounts, ref int[] donors, double[,] importance)
     {
-        var tree = forest.Tree(t);
-        var outOfBag = forest.OutOfBag(t);
-        if (outOfBag.Count == 0) return;
-        scorer.Begin(tree, outOfBag);
-        var rows = scorer.Rows;
+        if (!loss.Begin(t)) return;
+        var rows = loss.Rows;
         if (donors.Length < rows.Length) donors = new int[rows.Length];
-        ulong treeSeed = OutOfBagTreeScorer.TreeSeed(forest, t);
-        foreach (int feature in tree.SplitFeatures())
+        ulong treeSeed = loss.TreeSeed;
+        foreach (int feature in loss.SplitFeatures)
         {
-            var marginal = OutOfBagTreeScorer.FeatureGenerator(treeSeed, feature);
-            importance[0, feature] += scorer.ScoreFeature(feature, ref marginal).BrierIncrease;
+            importance[0, feature] += loss.MarginalRise(feature);
             for (int c = 0; c < strata.Length; c++)
             {
                 var generator = RandomStreams.StratifiedPermutation(treeSeed, c, feature);
                 WithinStrata(rows, strata[c], strataCounts[c], donors, ref generator);
-                importance[1 + c, feature] += scorer.BrierIncreaseWithDonors(feature, donors.AsSpan(0, rows.Length));
+                importance[1 + c, feature] += loss.RiseWithDonors(feature, donors.AsSpan(0, rows.Length));
             }
         }
     }

@@ -1,8 +1,8 @@
 namespace OmicsScreen.Screening.Covariates;
 
 /// <summary>
-/// A shortlisted marker's out-of-bag permutation importance (Brier score increase) in the
-/// tracking forest: marginal, and conditional on each covariate (permuted only within the
+/// A shortlisted marker's out-of-bag permutation importance in the tracking forest (the
+/// outcome kind's loss, <see cref="CovariateTracking.Loss"/>): marginal, and conditional on each covariate (permuted only within the
 /// covariate's strata), with the covariates whose conditioning takes it down to the decoys' level.
 /// </summary>
 /// <param name="Conditional">Conditional importance per covariate, in the covariates' order.</param>

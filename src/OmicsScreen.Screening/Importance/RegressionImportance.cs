@@ -65,17 +65,28 @@ public static class RegressionImportance
         {
             int feature = used[k];
             PermutedCodes.Fill(matrix, feature, rows, treeSeed, codes);
-            double error = 0;
-            for (int i = 0; i < rows.Length; i++)
-            {
-                double residual = y[rows[i]] - tree.NodeMeans[tree.Topology.LeafOf(matrix, rows[i], feature, codes[i])];
-                error += residual * residual;
-            }
-            rises[k] = (error - baseError) / rows.Length;
+            rises[k] = ErrorRise(tree, matrix, y, rows, baseError, feature, codes);
         }
         // The per-tree summary is shared with class forests, whose first score is the accuracy drop;
         // here it carries the rise in squared error (the second, the Brier rise, is unused).
         return new TreePermutationScores(used, rises, rises);
+    }
+
+    /// <summary>
+    /// Rise in the tree's mean squared error over its out-of-bag rows when row i reads
+    /// <paramref name="codes"/>[i] for the feature instead of its own code; the permutation is the
+    /// caller's (the importance's own, or one within covariate strata for covariate tracking).
+    /// </summary>
+    internal static double ErrorRise(RegressionTree tree, BinnedMatrix matrix, double[] y, ReadOnlySpan<int> rows, double baseError,
+        int feature, ReadOnlySpan<byte> codes)
+    {
+        double error = 0;
+        for (int i = 0; i < rows.Length; i++)
+        {
+            double residual = y[rows[i]] - tree.NodeMeans[tree.Topology.LeafOf(matrix, rows[i], feature, codes[i])];
+            error += residual * residual;
+        }
+        return (error - baseError) / rows.Length;
     }
 }
 

@@ -68,13 +68,26 @@ public static class SurvivalImportance
         {
             int feature = features[k];
             PermutedCodes.Fill(matrix, feature, rows, treeSeed, codes);
-            for (int i = 0; i < rows.Length; i++) risk[i] = tree.Mortality[tree.Topology.LeafOf(matrix, rows[i], feature, codes[i])];
-            drops[k] = baseline.Concordance - HarrellConcordance.Estimate(time, events, risk).Concordance;
+            drops[k] = ConcordanceDrop(tree, matrix, rows, time, events, baseline.Concordance, feature, codes, risk);
         }
         return new TreePermutationScores(features, drops, drops);
     }
 
-    private static (double[] Time, bool[] Events) FollowUpOf(FollowUpTimes followUp, int[] rows)
+    /// <summary>
+    /// Drop in the tree's out-of-bag Harrell's C when row i reads <paramref name="codes"/>[i] for
+    /// the feature instead of its own code (<paramref name="time"/> and <paramref name="events"/>
+    /// are the rows' follow-up, <paramref name="risk"/> a buffer of one value per row); the
+    /// permutation is the caller's (the importance's own, or one within covariate strata for
+    /// covariate tracking).
+    /// </summary>
+    internal static double ConcordanceDrop(SurvivalTree tree, BinnedMatrix matrix, ReadOnlySpan<int> rows, double[] time, bool[] events,
+        double baseline, int feature, ReadOnlySpan<byte> codes, Span<double> risk)
+    {
+        for (int i = 0; i < rows.Length; i++) risk[i] = tree.Mortality[tree.Topology.LeafOf(matrix, rows[i], feature, codes[i])];
+        return baseline - HarrellConcordance.Estimate(time, events, risk).Concordance;
+    }
+
+    internal static (double[] Time, bool[] Events) FollowUpOf(FollowUpTimes followUp, int[] rows)
     {
         var time = new double[rows.Length];
         var events = new bool[rows.Length];

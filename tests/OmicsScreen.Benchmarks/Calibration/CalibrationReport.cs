@@ -110,6 +110,13 @@ public static class CalibrationReport
             var pairs = planted.Where(p => p.PairFound is not null).ToList();
             if (pairs.Count > 0) Goal(output, pairs.All(p => p.PairFound == true), "planted: interacting pair found (both members) in every panel",
                 Invariant($"{pairs.Count(p => p.PairFound == true)} of {pairs.Count}; baseline {pairs.Count(p => p.BaselinePairFound == true)} of {pairs.Count}"));
+            if (pairs.Count > 0)
+            {
+                // Partner rates (information, no goal): how often the planted pair is named as
+                // partners, and how often a shortlisted marker names a false partner.
+                int links = pairs.Sum(p => p.PartnerLinks), falseLinks = pairs.Sum(p => p.FalsePartnerLinks);
+                output.WriteLine(Invariant($"- (information) planted: forest partners on the interaction design: planted pair named in {pairs.Count(p => p.PairNamedAsPartners == true)} of {pairs.Count} panels ({pairs.Count(p => p.PairNamedAsPartners == true && p.PairFound == true)} of the {pairs.Count(p => p.PairFound == true)} with both shortlisted); a false partner named in {pairs.Count(p => p.FalsePartnerLinks > 0)} of {pairs.Count} panels ({falseLinks} of {links} partner links)"));
+            }
             var thresholds = planted.Where(p => p.ThresholdFound is not null).ToList();
             if (thresholds.Count > 0) Goal(output, thresholds.All(p => p.ThresholdFound == true), "planted: threshold marker found in every panel",
                 Invariant($"{thresholds.Count(p => p.ThresholdFound == true)} of {thresholds.Count}; baseline {thresholds.Count(p => p.BaselineThresholdFound == true)} of {thresholds.Count}"));

@@ -65,6 +65,15 @@ public sealed record PanelCalibration(
     /// <summary>Each related marker the baseline found and the screen missed, with its evidence; empty when none.</summary>
     public string MissedEntries { get; init; } = "";
 
+    /// <summary>The planted pair named as forest partners (either member names the other); null when the design has no pair.</summary>
+    public bool? PairNamedAsPartners { get; init; }
+
+    /// <summary>Partner links named between shortlisted markers (each marker's list, counted from each side).</summary>
+    public int PartnerLinks { get; init; }
+
+    /// <summary>Partner links that are not the planted pair (a marker naming any feature other than its planted partner).</summary>
+    public int FalsePartnerLinks { get; init; }
+
     /// <summary>|selection-aware estimate - fresh estimate|; NaN when either is missing.</summary>
     public double EstimateError => Math.Abs(SelectionAwareEstimate - FreshEstimate);
 

@@ -73,6 +73,23 @@ public static class PanelMeasurer
             }
         }
 
+        // Forest partners (issue 19, part 5): a link is a shortlisted marker naming another as its
+        // partner; only the planted pair's two links are true (the design plants no other interaction).
+        int partnerLinks = 0, falsePartnerLinks = 0;
+        bool pairNamed = false;
+        var plantedPair = model.InteractingPair;
+        foreach (var entry in result.Shortlist)
+        {
+            int marker = entry.Forest.FeatureIndex;
+            foreach (int partner in result.Effects.Of(marker)?.Partners ?? [])
+            {
+                partnerLinks++;
+                bool planted = plantedPair.Count == 2 && plantedPair.Contains(marker) && plantedPair.Contains(partner) && marker != partner;
+                if (planted) pairNamed = true;
+                else falsePartnerLinks++;
+            }
+        }
+
         int lockedSize = result.LockedPanelSize;
         double fresh = double.NaN;
         if (lockedSize > 0 && panel.Kind == OutcomeKind.Classes)
@@ -101,6 +118,9 @@ public static class PanelMeasurer
             MeanFoldPanelSize = result.PanelSize?.MeanFoldPanelSize ?? double.NaN,
             FalseEntries = FalseEntries(panel, truth, result),
             MissedEntries = MissedEntries(truth, baseline, shortlisted, result),
+            PairNamedAsPartners = plantedPair.Count > 0 ? pairNamed : null,
+            PartnerLinks = partnerLinks,
+            FalsePartnerLinks = falsePartnerLinks,
             SmallNullPValues = FormattableString.Invariant(
                 $"forest {smallShares[0, 0]}/{smallShares[0, 1]}, rank {smallShares[1, 0]}/{smallShares[1, 1]}, final {smallShares[2, 0]}/{smallShares[2, 1]} of {nullPValues.Count}"),
         };

@@ -1,0 +1,66 @@
+using OmicsScreen.Engine.Binning;
+using OmicsScreen.Engine.Forests;
+using OmicsScreen.Engine.Regression;
+using OmicsScreen.Screening.Importance;
+using OmicsScreen.Screening.Randomness;
+
+namespace OmicsScreen.Screening.Covariates;
+
+/// <summary>
+/// Measured outcomes: the rise in the tree's out-of-bag mean squared error, scored by
+/// <see cref="RegressionImportance.ErrorRise"/> on the permutation importance's own permutation
+/// (<see cref="PermutedCodes"/>) or on the caller's.
+/// </summary>
+internal sealed class MeasuredTrackingLoss(RegressionForest forest, BinnedMatrix matrix, double[] values) : TrackingTreeLoss
+{
+    private byte[] _codes = [];
+    private int[] _rows = [];
+    private int[] _splitFeatures = [];
+    private RegressionTree? _tree;
+    private double _baseError;
+    private ulong _treeSeed;
+
+    public override string LossName => "squared_error_rise";
+
+    public override BinnedMatrix Matrix => matrix;
+
+    public override int TreeCount => forest.TreeCount;
+
+    public override bool Begin(int tree)
+    {
+        var rows = forest.OutOfBagRows(tree);
+        if (rows.Length == 0) return false;
+        _rows = rows.ToArray();
+        _tree = forest.Tree(tree);
+        var baseline = forest.OutOfBagPredictions(tree);
+        // The baseline squared error summed over the rows, as the permutation importance sums it.
+        double baseError = 0;
+        for (int i = 0; i < _rows.Length; i++) baseError += (values[_rows[i]] - baseline[i]) * (values[_rows[i]] - baseline[i]);
+        _baseError = baseError;
+        _splitFeatures = _tree.Topology.SplitFeatures();
+        _treeSeed = RandomStreams.PermutationImportanceTree(new ForestStreams(forest.Options.Seed, forest.Options.Repeat), tree);
+        if (_codes.Length < _rows.Length) _codes = new byte[_rows.Length];
+        return true;
+    }
+
+    public override ReadOnlySpan<int> Rows => _rows;
+
+    public override int[] SplitFeatures => _splitFeatures;
+
+    public override ulong TreeSeed => _treeSeed;
+
+    public override double MarginalRise(int feature)
+    {
+        var codes = _codes.AsSpan(0, _rows.Length);
+        PermutedCodes.Fill(matrix, feature, _rows, _treeSeed, codes);
+        return RegressionImportance.ErrorRise(_tree!, matrix, values, _rows, _baseError, feature, codes);
+    }
+
+    public override double RiseWithDonors(int feature, ReadOnlySpan<int> donors)
+    {
+        var codes = _codes.AsSpan(0, _rows.Length);
+        var source = matrix.Codes(feature);
+        for (int i = 0; i < codes.Length; i++) codes[i] = source[_rows[donors[i]]];
+        return RegressionImportance.ErrorRise(_tree!, matrix, values, _rows, _baseError, feature, codes);
+    }
+}
