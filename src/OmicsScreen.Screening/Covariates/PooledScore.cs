@@ -1,5 +1,6 @@
 using OmicsScreen.Engine.Metrics;
 using OmicsScreen.Engine.Panels;
+using OmicsScreen.Screening.Statistics;
 using OmicsScreen.Screening.Statistics.Survival;
 
 namespace OmicsScreen.Screening.Covariates;
@@ -62,17 +63,9 @@ internal sealed class PooledScore
             }
             case OutcomeKind.Measured:
             {
-                double mean = 0;
-                for (int k = 0; k < n; k++) mean += _values[picks is null ? k : picks[k]];
-                mean /= n;
-                double residual = 0, total = 0;
-                for (int k = 0; k < n; k++)
-                {
-                    double y = _values[picks is null ? k : picks[k]];
-                    residual += (y - p[k]) * (y - p[k]);
-                    total += (y - mean) * (y - mean);
-                }
-                return total > 0 ? 1 - residual / total : double.NaN;
+                var y = new double[n];
+                for (int k = 0; k < n; k++) y[k] = _values[picks is null ? k : picks[k]];
+                return SquaredErrorFit.Of(y, p).RSquared;
             }
             default:
             {
