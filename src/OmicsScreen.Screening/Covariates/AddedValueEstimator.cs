@@ -19,10 +19,11 @@ namespace OmicsScreen.Screening.Covariates;
 /// <remarks>
 /// Pooling: each sample is a test sample once per fold repeat, so its predictions are averaged
 /// over the repeats and every sample enters the pooled score once (pooling the repeats' copies
-/// would count each sample several times and shrink the interval). Classes (two only): pooled AUC
+/// would count each sample several times and shrink the interval). Two classes: pooled AUC
 /// and the paired comparison of DeLong, DeLong &amp; Clarke-Pearson (1988, Biometrics 44(3)) of the
-/// covariates-and-panel scores against the covariates' scores. Measured outcomes (R², 1 - SSE/SST)
-/// and follow-up (Harrell's C) have no such closed form here: their interval is the percentile
+/// covariates-and-panel scores against the covariates' scores. More than two classes (accuracy, as
+/// the curve scores them: each sample's hits averaged over the repeats, then their mean), measured
+/// outcomes (R², 1 - SSE/SST) and follow-up (Harrell's C) have no such closed form here: their interval is the percentile
 /// interval of a paired bootstrap over samples (the same resampled samples score both models),
 /// 2,000 resamples from a fixed stream, and the p-value is twice the smaller share of
 /// bootstrap gains on either side of 0 (Efron &amp; Tibshirani 1993, An Introduction to the
@@ -41,12 +42,13 @@ internal static class AddedValueEstimator
     private const int BootstrapResamples = 2000;
     private const double Level = 0.95;
 
-    /// <summary>Null when the panel has no covariates, the curve has no folds, or the outcome has more than two classes.</summary>
+    /// <summary>Null when the panel has no covariates or the curve has no folds.</summary>
     public static AddedValue? Estimate(ScreenContext context, IReadOnlyList<OuterFold> folds, PanelSizeCurve curve)
     {
         var panel = context.Panel;
         if (panel.Covariates.Count == 0 || curve.FoldPanels.Count != folds.Count || folds.Count == 0) return null;
-        if (panel.Kind == OutcomeKind.Classes && panel.Outcome.ClassCount != 2) return null;
+        // More than two classes: the curve scores accuracy, so the samples' hits are pooled instead of a positive class's probability.
+        bool severalClasses = panel.Kind == OutcomeKind.Classes && panel.Outcome.ClassCount > 2;
 
         var covariates = new BinMapper().Bin(CovariateMatrix(panel), context.ThreadCount);
         var covariateColumns = Enumerable.Range(0, covariates.FeatureCount).ToArray();
@@ -77,9 +79,9 @@ internal static class AddedValueEstimator
             for (int t = 0; t < fold.TestRows.Length; t++)
             {
                 int row = fold.TestRows[t];
-                sums[0, row] += alone.Predictions[t];
-                sums[1, row] += foldPanel.Locked.Predictions[t];
-                sums[2, row] += both.Predictions[t];
+                sums[0, row] += severalClasses ? alone.Hits[t] : alone.Predictions[t];
+                sums[1, row] += severalClasses ? foldPanel.Locked.Hits[t] : foldPanel.Locked.Predictions[t];
+                sums[2, row] += severalClasses ? both.Hits[t] : both.Predictions[t];
                 counts[row]++;
             }
         }
@@ -97,7 +99,7 @@ internal static class AddedValueEstimator
         ConfidenceInterval interval;
         double p;
         string method;
-        if (panel.Kind == OutcomeKind.Classes)
+        if (panel.Kind == OutcomeKind.Classes && !severalClasses)
         {
             var comparison = DeLong.ComparePaired(predictions[2], predictions[0], pooled.IsPositive, Level);
             (interval, p, method) = (comparison.Interval, comparison.PValue, "delong");

@@ -7,12 +7,13 @@ namespace OmicsScreen.Screening.Covariates;
 
 /// <summary>
 /// The outcome kind's score of one prediction per scored sample: AUC of the probability of the
-/// positive class, R² = 1 - SSE/SST about the samples' own mean (as scikit-learn's r2_score), or
+/// positive class (two classes), accuracy of the hits averaged over fold repeats (more classes), R² = 1 - SSE/SST about the samples' own mean (as scikit-learn's r2_score), or
 /// Harrell's C of a risk score; optionally over a resample of the samples (positions, repeats allowed).
 /// </summary>
 internal sealed class PooledScore
 {
     private readonly OutcomeKind _kind;
+    private readonly bool _severalClasses;
     private readonly bool[] _isPositive = [];
     private readonly double[] _values = [];
     private readonly double[] _times = [];
@@ -21,6 +22,7 @@ internal sealed class PooledScore
     public PooledScore(Panel panel, int[] samples)
     {
         _kind = panel.Kind;
+        _severalClasses = panel.Kind == OutcomeKind.Classes && panel.Outcome.ClassCount > 2;
         switch (_kind)
         {
             case OutcomeKind.Classes:
@@ -55,6 +57,13 @@ internal sealed class PooledScore
         for (int k = 0; k < n; k++) p[k] = predictions[picks is null ? k : picks[k]];
         switch (_kind)
         {
+            case OutcomeKind.Classes when _severalClasses:
+            {
+                // The predictions are each sample's hits averaged over the fold repeats: their mean is the accuracy.
+                double hits = 0;
+                for (int k = 0; k < n; k++) hits += p[k];
+                return n > 0 ? hits / n : double.NaN;
+            }
             case OutcomeKind.Classes:
             {
                 var positive = new bool[n];

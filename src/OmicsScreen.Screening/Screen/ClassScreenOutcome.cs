@@ -80,16 +80,18 @@ internal sealed class ClassScreenOutcome(ClassOutcome outcome) : ScreenOutcome
         int wrong = 0;
         var probabilities = new double[testRows.Length];
         var positive = new bool[testRows.Length];
+        var hits = new double[testRows.Length];
         for (int i = 0; i < testRows.Length; i++)
         {
             int row = testRows[i];
             if (prediction.PredictedClasses[row] != classes[row]) wrong++;
+            else hits[i] = 1;
             probabilities[i] = prediction.Probability(row, outcome.PositiveClass);
             positive[i] = classes[row] == outcome.PositiveClass;
         }
         double error = (double)wrong / testRows.Length;
         double score = outcome.ClassCount == 2 ? MannWhitneyAuc.Compute(probabilities, positive) : 1 - error;
-        return new PanelScore(score, error, probabilities, positive);
+        return new PanelScore(score, error, probabilities, positive) { Hits = hits };
     }
 
     /// <summary>AUC 0.5 with every sample called alike, or the accuracy of always calling the training part's largest class.</summary>
@@ -105,8 +107,14 @@ internal sealed class ClassScreenOutcome(ClassOutcome outcome) : ScreenOutcome
         int largest = 0;
         for (int c = 1; c < counts.Length; c++) if (counts[c] > counts[largest]) largest = c;
         int right = 0;
-        foreach (int row in testRows) if (classes[row] == largest) right++;
+        var hits = new double[testRows.Length];
+        for (int i = 0; i < testRows.Length; i++)
+        {
+            if (classes[testRows[i]] != largest) continue;
+            right++;
+            hits[i] = 1;
+        }
         double accuracy = (double)right / testRows.Length;
-        return new PanelScore(outcome.ClassCount == 2 ? 0.5 : accuracy, 1 - accuracy, probabilities, positive);
+        return new PanelScore(outcome.ClassCount == 2 ? 0.5 : accuracy, 1 - accuracy, probabilities, positive) { Hits = hits };
     }
 }

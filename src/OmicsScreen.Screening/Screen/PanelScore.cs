@@ -11,4 +11,11 @@ internal sealed record PanelScore(double Score, double Error, double[] Predictio
 {
     /// <summary>Root mean squared error of the predictions on the test rows (measured outcome); NaN for other kinds.</summary>
     public double RootMeanSquaredError { get; init; } = double.NaN;
+
+    /// <summary>
+    /// Class outcomes: each test sample's 1 when the forest's majority vote (or the chance call)
+    /// names its class, else 0, in the order of the test rows; their mean is the accuracy. Empty
+    /// for other outcome kinds.
+    /// </summary>
+    public double[] Hits { get; init; } = [];
 }
