@@ -13,9 +13,8 @@ namespace OmicsScreen.Screening.Covariates;
 /// permutation (<see cref="PermutedCodes"/>) or on the caller's. As in the importance, a tree with
 /// fewer than two out-of-bag rows or no comparable pair adds 0.
 /// </summary>
-internal sealed class FollowUpTrackingLoss(SurvivalForest forest, BinnedMatrix matrix) : TrackingTreeLoss
+internal sealed class FollowUpTrackingLoss(SurvivalForest forest, BinnedMatrix matrix) : PermutedCodesTrackingLoss
 {
-    private byte[] _codes = [];
     private double[] _risk = [];
     private int[] _rows = [];
     private double[] _time = [];
@@ -43,11 +42,8 @@ internal sealed class FollowUpTrackingLoss(SurvivalForest forest, BinnedMatrix m
         _tree = forest.Tree(tree);
         _splitFeatures = _tree.Topology.SplitFeatures();
         _treeSeed = RandomStreams.PermutationImportanceTree(new ForestStreams(forest.Options.Seed, forest.Options.Repeat), tree);
-        if (_codes.Length < _rows.Length)
-        {
-            _codes = new byte[_rows.Length];
-            _risk = new double[_rows.Length];
-        }
+        EnsureCapacity(_rows.Length);
+        if (_risk.Length < _rows.Length) _risk = new double[_rows.Length];
         return true;
     }
 
@@ -57,23 +53,6 @@ internal sealed class FollowUpTrackingLoss(SurvivalForest forest, BinnedMatrix m
 
     public override ulong TreeSeed => _treeSeed;
 
-    public override double MarginalRise(int feature)
-    {
-        var codes = _codes.AsSpan(0, _rows.Length);
-        PermutedCodes.Fill(matrix, feature, _rows, _treeSeed, codes);
-        return Drop(feature, codes);
-    }
-
-    public override double RiseWithDonors(int feature, ReadOnlySpan<int> donors)
-    {
-        var codes = _codes.AsSpan(0, _rows.Length);
-        var source = matrix.Codes(feature);
-        for (int i = 0; i < codes.Length; i++) codes[i] = source[_rows[donors[i]]];
-        return Drop(feature, codes);
-    }
-
-    private double Drop(int feature, ReadOnlySpan<byte> codes)
-    {
-        return SurvivalImportance.ConcordanceDrop(_tree!, matrix, _rows, _time, _events, _baseline, feature, codes, _risk.AsSpan(0, _rows.Length));
-    }
+    protected override double RiseWith(int feature, ReadOnlySpan<byte> codes) =>
+        SurvivalImportance.ConcordanceDrop(_tree!, matrix, _rows, _time, _events, _baseline, feature, codes, _risk.AsSpan(0, _rows.Length));
 }

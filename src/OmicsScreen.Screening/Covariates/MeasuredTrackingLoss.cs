@@ -11,9 +11,8 @@ namespace OmicsScreen.Screening.Covariates;
 /// <see cref="RegressionImportance.ErrorRise"/> on the permutation importance's own permutation
 /// (<see cref="PermutedCodes"/>) or on the caller's.
 /// </summary>
-internal sealed class MeasuredTrackingLoss(RegressionForest forest, BinnedMatrix matrix, double[] values) : TrackingTreeLoss
+internal sealed class MeasuredTrackingLoss(RegressionForest forest, BinnedMatrix matrix, double[] values) : PermutedCodesTrackingLoss
 {
-    private byte[] _codes = [];
     private int[] _rows = [];
     private int[] _splitFeatures = [];
     private RegressionTree? _tree;
@@ -39,7 +38,7 @@ internal sealed class MeasuredTrackingLoss(RegressionForest forest, BinnedMatrix
         _baseError = baseError;
         _splitFeatures = _tree.Topology.SplitFeatures();
         _treeSeed = RandomStreams.PermutationImportanceTree(new ForestStreams(forest.Options.Seed, forest.Options.Repeat), tree);
-        if (_codes.Length < _rows.Length) _codes = new byte[_rows.Length];
+        EnsureCapacity(_rows.Length);
         return true;
     }
 
@@ -49,18 +48,6 @@ internal sealed class MeasuredTrackingLoss(RegressionForest forest, BinnedMatrix
 
     public override ulong TreeSeed => _treeSeed;
 
-    public override double MarginalRise(int feature)
-    {
-        var codes = _codes.AsSpan(0, _rows.Length);
-        PermutedCodes.Fill(matrix, feature, _rows, _treeSeed, codes);
-        return RegressionImportance.ErrorRise(_tree!, matrix, values, _rows, _baseError, feature, codes);
-    }
-
-    public override double RiseWithDonors(int feature, ReadOnlySpan<int> donors)
-    {
-        var codes = _codes.AsSpan(0, _rows.Length);
-        var source = matrix.Codes(feature);
-        for (int i = 0; i < codes.Length; i++) codes[i] = source[_rows[donors[i]]];
-        return RegressionImportance.ErrorRise(_tree!, matrix, values, _rows, _baseError, feature, codes);
-    }
+    protected override double RiseWith(int feature, ReadOnlySpan<byte> codes) =>
+        RegressionImportance.ErrorRise(_tree!, matrix, values, _rows, _baseError, feature, codes);
 }
