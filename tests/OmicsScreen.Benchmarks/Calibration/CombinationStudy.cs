@@ -259,35 +259,19 @@ public static class CombinationStudy
     /// exceedances' mean, bounded as GeneralizedParetoTailBound bounds the full fit (log survival
     /// plus 0.8416 jackknife standard errors from the leave-one-out means).
     /// </summary>
-    private static double[] ExponentialTailPValues(double[] decoyStatistics, double[] scored)
+    private static double[] ExponentialTailPValues(double[] decoyStatistics, double[] scored) =>
+        TailRegionPValues(decoyStatistics, scored, (exceedances, _, y) => ExponentialUpperSurvival(exceedances, y));
+
+    private static double ExponentialUpperSurvival(double[] exceedances, double y)
     {
-        var ascending = decoyStatistics.Where(v => !double.IsNaN(v)).Order().ToArray();
-        int decoyCount = ascending.Length;
-        int tailCount = Math.Min(DecoyNull.MaximumTailCount, decoyCount / 4);
-        double threshold = 0.5 * (ascending[decoyCount - tailCount] + ascending[decoyCount - tailCount - 1]);
-        var exceedances = ascending[(decoyCount - tailCount)..].Select(v => v - threshold).ToArray();
+        int tailCount = exceedances.Length;
         double total = exceedances.Sum();
-        var leaveOneOut = exceedances.Select(e => (total - e) / (tailCount - 1)).ToArray();
         double scale = total / tailCount;
-        var pValues = new double[scored.Length];
-        for (int i = 0; i < scored.Length; i++)
-        {
-            double value = scored[i];
-            int atOrAbove = ascending.Count(v => v >= value);
-            double monteCarlo = (1.0 + atOrAbove) / (1.0 + decoyCount);
-            if (atOrAbove >= DecoyNull.MinimumExceedances || value <= threshold)
-            {
-                pValues[i] = monteCarlo;
-                continue;
-            }
-            double y = value - threshold;
-            double mean = leaveOneOut.Average(s => -y / s);
-            double squares = leaveOneOut.Sum(s => (-y / s - mean) * (-y / s - mean));
-            double standardError = Math.Sqrt((tailCount - 1.0) / tailCount * squares);
-            double upper = Math.Min(1, Math.Exp(-y / scale + GeneralizedParetoTailBound.OneSidedZ * standardError));
-            pValues[i] = Math.Min(monteCarlo, (double)tailCount / (1 + decoyCount) * upper);
-        }
-        return pValues;
+        var leaveOneOut = exceedances.Select(e => (total - e) / (tailCount - 1)).ToArray();
+        double mean = leaveOneOut.Average(s => -y / s);
+        double squares = leaveOneOut.Sum(s => (-y / s - mean) * (-y / s - mean));
+        double standardError = Math.Sqrt((tailCount - 1.0) / tailCount * squares);
+        return Math.Min(1, Math.Exp(-y / scale + GeneralizedParetoTailBound.OneSidedZ * standardError));
     }
 
     /// <summary>ScreenAggregation.Combine with the forest's weight as given and the rest on the rank test (no interaction scan).</summary>
