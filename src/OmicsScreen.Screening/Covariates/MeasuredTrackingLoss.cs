@@ -31,11 +31,7 @@ internal sealed class MeasuredTrackingLoss(RegressionForest forest, BinnedMatrix
         if (rows.Length == 0) return false;
         _rows = rows.ToArray();
         _tree = forest.Tree(tree);
-        var baseline = forest.OutOfBagPredictions(tree);
-        // The baseline squared error summed over the rows, as the permutation importance sums it.
-        double baseError = 0;
-        for (int i = 0; i < _rows.Length; i++) baseError += (values[_rows[i]] - baseline[i]) * (values[_rows[i]] - baseline[i]);
-        _baseError = baseError;
+        _baseError = RegressionImportance.OutOfBagError(forest, tree, values, _rows);
         _splitFeatures = _tree.Topology.SplitFeatures();
         _treeSeed = RandomStreams.PermutationImportanceTree(new ForestStreams(forest.Options.Seed, forest.Options.Repeat), tree);
         EnsureCapacity(_rows.Length);

@@ -53,9 +53,7 @@ public static class RegressionImportance
         var rows = forest.OutOfBagRows(t);
         if (rows.Length == 0) return TreePermutationScores.Empty;
         var tree = forest.Tree(t);
-        var baseline = forest.OutOfBagPredictions(t);
-        double baseError = 0;
-        for (int i = 0; i < rows.Length; i++) baseError += (y[rows[i]] - baseline[i]) * (y[rows[i]] - baseline[i]);
+        double baseError = OutOfBagError(forest, t, y, rows);
         var used = tree.Topology.SplitFeatures();
         var rises = new double[used.Length];
         // Seeds as for class forests (the registry's permutation-importance streams): a function of
@@ -70,6 +68,15 @@ public static class RegressionImportance
         // The per-tree summary is shared with class forests, whose first score is the accuracy drop;
         // here it carries the rise in squared error (the second, the Brier rise, is unused).
         return new TreePermutationScores(used, rises, rises);
+    }
+
+    /// <summary>Tree t's squared error summed over its out-of-bag rows (<paramref name="rows"/>, the forest's own), unpermuted.</summary>
+    internal static double OutOfBagError(RegressionForest forest, int t, double[] y, ReadOnlySpan<int> rows)
+    {
+        var baseline = forest.OutOfBagPredictions(t);
+        double baseError = 0;
+        for (int i = 0; i < rows.Length; i++) baseError += (y[rows[i]] - baseline[i]) * (y[rows[i]] - baseline[i]);
+        return baseError;
     }
 
     /// <summary>
